@@ -1,0 +1,71 @@
+import path from 'node:path';
+import { z } from 'zod';
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  HOST: z.string().default('0.0.0.0'),
+  DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL; leave it unset for SQLite')
+    .optional(),
+  DATABASE_PATH: z.string().default(path.join('data', 'boothwright.sqlite')),
+  SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters').optional(),
+  TRUST_PROXY: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  UPLOAD_DIR: z.string().default(path.join('data', 'uploads')),
+  LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+});
+
+export type DatabaseConfig = { kind: 'sqlite'; path: string } | { kind: 'postgres'; url: string };
+
+export interface AppConfig {
+  env: 'development' | 'production' | 'test';
+  port: number;
+  host: string;
+  database: DatabaseConfig;
+  /** Unset means: use (or create) a random secret kept beside the data, see session-secret.ts. */
+  sessionSecret: string | undefined;
+  /** Cookies get `secure` when the app sits behind an HTTPS proxy. */
+  trustProxy: boolean;
+  logLevel: string;
+  uploadDir: string;
+  loginRateLimit: number;
+}
+
+export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `- ${i.path.join('.')}: ${i.message}`).join('\n');
+    throw new Error(`Configuration is not valid:\n${problems}`);
+  }
+  const env = parsed.data;
+  return {
+    env: env.NODE_ENV,
+    port: env.PORT,
+    host: env.HOST,
+    database: env.DATABASE_URL ? { kind: 'postgres', url: env.DATABASE_URL } : { kind: 'sqlite', path: env.DATABASE_PATH },
+    sessionSecret: env.SESSION_SECRET,
+    trustProxy: env.TRUST_PROXY,
+    logLevel: env.LOG_LEVEL,
+    uploadDir: env.UPLOAD_DIR,
+    loginRateLimit: env.LOGIN_RATE_LIMIT,
+  };
+}
+
+let cached: AppConfig | undefined;
+
+/** The one place that reads process.env; exits with a list of problems when it is wrong. */
+export function loadConfig(): AppConfig {
+  if (cached) return cached;
+  try {
+    cached = parseConfig(process.env);
+    return cached;
+  } catch (error) {
+    console.error((error as Error).message);
+    process.exit(1);
+  }
+}

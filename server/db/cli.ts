@@ -1,0 +1,45 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { loadConfig } from '../config/env';
+import { openDataSource } from './data-source';
+import { demoSignInLines, seedDemoShop } from './seed';
+
+async function generate(name: string | undefined): Promise<void> {
+  if (!name || !/^[a-z][a-z0-9-]*$/.test(name)) throw new Error('Usage: npm run db:migration:generate -- <kebab-case-name>');
+  const dataSource = await openDataSource(loadConfig().database, { migrate: true });
+  const sql = await dataSource.driver.createSchemaBuilder().log();
+  await dataSource.destroy();
+  if (sql.upQueries.length === 0) return console.log('The entities match the migrations; nothing to generate.');
+  const stamp = Date.now();
+  const className = name.replace(/(^|-)(\w)/g, (_m, _d, c: string) => c.toUpperCase()) + stamp;
+  const lines = (qs: { query: string }[]) => qs.map((q) => `    await queryRunner.query(${JSON.stringify(q.query)});`).join('\n');
+  const file = path.join('server/db/migrations', `${stamp}-${name}.ts`);
+  fs.writeFileSync(
+    file,
+    `import type { MigrationInterface, QueryRunner } from 'typeorm';\n\n// Generated for ${dataSource.options.type}; check it also suits the other database before committing.\nexport class ${className} implements MigrationInterface {\n  name = '${className}';\n\n  async up(queryRunner: QueryRunner): Promise<void> {\n${lines(sql.upQueries)}\n  }\n\n  async down(queryRunner: QueryRunner): Promise<void> {\n${lines(sql.downQueries.reverse())}\n  }\n}\n`,
+  );
+  console.log(`Wrote ${file}; add ${className} to server/db/migrations.ts.`);
+}
+
+async function run(command: string | undefined, arg: string | undefined): Promise<void> {
+  const config = loadConfig();
+  if (command === 'generate') return generate(arg);
+  const dataSource = await openDataSource(config.database, { migrate: true });
+  try {
+    if (command === 'migrate') {
+      console.log('Migrations are up to date.');
+    } else if (command === 'seed') {
+      const { seeded } = await seedDemoShop(dataSource);
+      console.log(seeded ? `Seeded the demo shop. Sign-ins:\n${demoSignInLines().join('\n')}` : 'The database already has users; the demo shop was not seeded.');
+    } else {
+      throw new Error(`Unknown command "${command}": use migrate, seed or generate`);
+    }
+  } finally {
+    await dataSource.destroy();
+  }
+}
+
+run(process.argv[2], process.argv[3]).catch((error: Error) => {
+  console.error(error.message);
+  process.exit(1);
+});

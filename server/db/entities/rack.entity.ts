@@ -1,0 +1,29 @@
+import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { RackLocation } from '../../../shared/schemas/rack';
+
+@Entity({ name: 'racks' })
+export class RackEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'varchar', length: 80 })
+  name: string;
+
+  @Column({ type: 'varchar', length: 20 })
+  location: RackLocation;
+
+  @Column({ type: 'integer' })
+  shelves: number;
+
+  @Column({ type: 'double precision' })
+  shelfAreaM2: number;
+
+  @Column({ type: 'double precision', nullable: true })
+  dryingTempC: number | null;
+
+  @Column({ type: 'varchar', length: 30 })
+  createdAt: string;
+
+  @Column({ type: 'varchar', length: 30 })
+  updatedAt: string;
+}

@@ -1,0 +1,34 @@
+import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { Role } from '../../../shared/permissions';
+import type { UnitSystem } from '../../../shared/schemas/common';
+
+@Entity({ name: 'users' })
+export class UserEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'varchar', length: 254, unique: true })
+  email: string;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  @Column({ type: 'varchar', length: 20 })
+  role: Role;
+
+  @Column({ type: 'varchar', length: 10, default: 'metric' })
+  units: UnitSystem;
+
+  @Column({ type: 'varchar', length: 255 })
+  passwordHash: string;
+
+  @Column({ type: 'boolean', default: false })
+  disabled: boolean;
+
+  /** ISO 8601 UTC instants, stored as text so SQLite and PostgreSQL sort and compare them alike. */
+  @Column({ type: 'varchar', length: 30 })
+  createdAt: string;
+
+  @Column({ type: 'varchar', length: 30 })
+  updatedAt: string;
+}

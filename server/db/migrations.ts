@@ -1,0 +1,4 @@
+import { Foundation1764651000000 } from './migrations/1764651000000-foundation';
+
+/** Every committed migration, oldest first. Add new ones at the end. */
+export const migrations = [Foundation1764651000000];

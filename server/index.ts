@@ -1,0 +1,44 @@
+import path from 'node:path';
+import pino from 'pino';
+import { createApp } from './app';
+import { loadConfig } from './config/env';
+import { resolveSessionSecret } from './config/session-secret';
+import { openDataSource } from './db/data-source';
+import { demoSignInLines, demoUsers } from './db/seed';
+import { UserEntity } from './db/entities/user.entity';
+
+async function main(): Promise<void> {
+  const config = loadConfig();
+  const logger = pino({ level: config.logLevel });
+  const dataSource = await openDataSource(config.database, { migrate: true });
+  // Several instances on PostgreSQL must share SESSION_SECRET; one machine can keep its own beside the data.
+  const dataDir = config.database.kind === 'sqlite' ? path.dirname(path.resolve(config.database.path)) : path.resolve('data');
+  const sessionSecret = resolveSessionSecret(config.sessionSecret, dataDir);
+  const app = createApp({ dataSource, config, sessionSecret, logger, clientDir: path.resolve('dist/client') });
+  const server = app.listen(config.port, config.host, () => {
+    void announce(config.port, dataSource);
+  });
+
+  const shutdown = (signal: string) => {
+    logger.info({ signal }, 'shutting down');
+    server.close(() => {
+      void dataSource.destroy().finally(() => process.exit(0));
+    });
+    // Open keep-alive connections must not hold the process past a few seconds.
+    setTimeout(() => process.exit(0), 5000).unref();
+    server.closeIdleConnections();
+  };
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+}
+
+async function announce(port: number, dataSource: Awaited<ReturnType<typeof openDataSource>>): Promise<void> {
+  console.log(`\nBoothwright is running on http://localhost:${port}`);
+  const demoStillThere = await dataSource.getRepository(UserEntity).existsBy({ email: demoUsers[0].email });
+  if (demoStillThere) console.log(`Demo sign-ins (role, e-mail, password):\n${demoSignInLines().join('\n')}\n`);
+}
+
+main().catch((error) => {
+  console.error('Boothwright could not start:', error);
+  process.exit(1);
+});

@@ -1,0 +1,46 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { FinishingInputError } from '../../shared/errors';
+import { AppError } from '../lib/app-error';
+
+function zodFields(error: ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.join('.') : '_';
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new AppError('not_found', `No API route ${req.method} ${req.originalUrl.split('?')[0]}`));
+};
+
+interface BodyParserError {
+  type?: string;
+  status?: number;
+}
+
+function toAppError(error: unknown): AppError | null {
+  if (error instanceof AppError) return error;
+  if (error instanceof ZodError) {
+    return new AppError('validation_failed', 'Some fields need attention', zodFields(error));
+  }
+  if (error instanceof FinishingInputError) {
+    return new AppError('validation_failed', error.message, { [error.field]: error.message });
+  }
+  const parserError = error as BodyParserError;
+  if (parserError?.type === 'entity.parse.failed') return new AppError('bad_request', 'The request body is not valid JSON');
+  if (parserError?.type === 'entity.too.large') return new AppError('payload_too_large', 'The request body is too large');
+  return null;
+}
+
+export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
+  const known = toAppError(error);
+  if (known) {
+    res.status(known.status).json({ error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) } });
+    return;
+  }
+  req.log?.error({ err: error }, 'unhandled error');
+  res.status(500).json({ error: { code: 'internal', message: `Something went wrong on our side (request ${String(req.id)})` } });
+};

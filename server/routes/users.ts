@@ -1,0 +1,25 @@
+import { Router } from 'express';
+import { idParamsSchema, pageQuerySchema } from '../../shared/schemas/common';
+import { createUserSchema, updateUserSchema } from '../../shared/schemas/user';
+import { actorOf } from '../lib/actor';
+import { requirePermission } from '../middleware/permissions';
+import type { UserService } from '../services/users';
+
+export function userRoutes(users: UserService): Router {
+  const router = Router();
+
+  router.get('/', requirePermission('users:read'), async (req, res) => {
+    res.json(await users.list(pageQuerySchema.parse(req.query)));
+  });
+
+  router.post('/', requirePermission('users:write'), async (req, res) => {
+    res.status(201).json({ user: await users.create(createUserSchema.parse(req.body), actorOf(req)) });
+  });
+
+  router.patch('/:id', requirePermission('users:write'), async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json({ user: await users.update(id, updateUserSchema.parse(req.body), actorOf(req)) });
+  });
+
+  return router;
+}

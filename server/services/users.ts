@@ -1,0 +1,74 @@
+import type { DataSource } from 'typeorm';
+import type { SessionUser } from '../../shared/schemas/auth';
+import type { List, PageQuery } from '../../shared/schemas/common';
+import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
+import { createUserSchema } from '../../shared/schemas/user';
+import { hashPassword } from '../auth/passwords';
+import { UserEntity } from '../db/entities/user.entity';
+import { AppError, notFound } from '../lib/app-error';
+import { systemClock, type Clock } from '../lib/clock';
+import { paginate } from '../lib/paginate';
+import { changedFields, recordAudit, type Actor } from './audit';
+
+export function toSessionUser(user: UserEntity): SessionUser {
+  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units };
+}
+
+export function toUserDto(user: UserEntity): User {
+  return { ...toSessionUser(user), disabled: user.disabled, createdAt: user.createdAt };
+}
+
+export function createUserService(dataSource: DataSource, clock: Clock = systemClock) {
+  const repo = () => dataSource.getRepository(UserEntity);
+
+  async function applyUpdate(id: number, patch: UpdateUserInput, actor: Actor, summary: string): Promise<UserEntity> {
+    const now = clock.now();
+    const { password, ...fields } = patch;
+    const passwordHash = password ? await hashPassword(password) : undefined;
+    return dataSource.transaction(async (manager) => {
+      const user = await manager.findOneBy(UserEntity, { id });
+      if (!user) throw notFound('User');
+      const changes = changedFields(user, fields);
+      if (passwordHash) changes.password = { from: '…', to: 'changed' };
+      Object.assign(user, fields, passwordHash ? { passwordHash } : {}, { updatedAt: now.toISOString() });
+      await manager.save(user);
+      await recordAudit(manager, actor, { action: 'update', entity: 'user', entityId: id, summary: `${summary} ${user.email}`, changes }, now);
+      return user;
+    });
+  }
+
+  return {
+    list(query: PageQuery): Promise<List<User>> {
+      return paginate(repo(), query, { order: { name: 'ASC', id: 'ASC' } }, toUserDto);
+    },
+
+    async create(input: CreateUserInput, actor: Actor): Promise<User> {
+      const { password, ...fields } = createUserSchema.parse(input);
+      const passwordHash = await hashPassword(password);
+      const now = clock.now();
+      return dataSource.transaction(async (manager) => {
+        if (await manager.existsBy(UserEntity, { email: fields.email })) {
+          throw new AppError('conflict', 'A user with this e-mail already exists', { email: 'Already in use' });
+        }
+        const user = manager.create(UserEntity, { ...fields, passwordHash, disabled: false, createdAt: now.toISOString(), updatedAt: now.toISOString() });
+        await manager.save(user);
+        await recordAudit(manager, actor, { action: 'create', entity: 'user', entityId: user.id, summary: `Added user ${user.email} as ${user.role}` }, now);
+        return toUserDto(user);
+      });
+    },
+
+    async update(id: number, patch: UpdateUserInput, actor: Actor): Promise<User> {
+      if (actor.id === id && (patch.disabled === true || (patch.role && patch.role !== 'admin'))) {
+        // An admin locking themselves out would leave the shop without anyone to undo it.
+        throw new AppError('conflict', 'You cannot disable yourself or take away your own admin role', { role: 'Ask another admin' });
+      }
+      return toUserDto(await applyUpdate(id, patch, actor, 'Changed user'));
+    },
+
+    async updateSelf(id: number, patch: UpdateMeInput, actor: Actor): Promise<SessionUser> {
+      return toSessionUser(await applyUpdate(id, patch, actor, 'Changed own preferences'));
+    },
+  };
+}
+
+export type UserService = ReturnType<typeof createUserService>;

@@ -1,0 +1,19 @@
+import 'express-session';
+import type { SessionUser } from '../shared/schemas/auth';
+
+declare module 'express-session' {
+  interface SessionData {
+    csrfToken?: string;
+  }
+}
+
+declare global {
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends SessionUser {}
+    interface Request {
+      /** Set when a booth's sensor posts with its bearer token instead of a session. */
+      sensorBooth?: number;
+    }
+  }
+}

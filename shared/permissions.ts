@@ -1,0 +1,40 @@
+export const roles = ['admin', 'lead', 'sprayer', 'assembler'] as const;
+export type Role = (typeof roles)[number];
+
+export const roleLabels: Record<Role, string> = {
+  admin: 'Owner / admin',
+  lead: 'Finishing lead',
+  sprayer: 'Sprayer',
+  assembler: 'Assembler',
+};
+
+export const permissions = [
+  'booths:read',
+  'booths:write',
+  'racks:read',
+  'racks:write',
+  'users:read',
+  'users:write',
+  'settings:read',
+  'settings:write',
+  'calculator:use',
+  'audit:read',
+] as const;
+export type Permission = (typeof permissions)[number];
+
+/** The one matrix: the server enforces it, the client hides what a role may not do. Deny by default. */
+const matrix: Record<Role, readonly Permission[]> = {
+  admin: permissions,
+  lead: ['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
+  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use'],
+  assembler: ['booths:read', 'racks:read', 'settings:read'],
+};
+
+export function can(role: Role | null | undefined, permission: Permission): boolean {
+  if (!role) return false;
+  return matrix[role]?.includes(permission) ?? false;
+}
+
+export function permissionsOf(role: Role): readonly Permission[] {
+  return matrix[role];
+}

@@ -1,0 +1,23 @@
+import { z } from 'zod';
+import { roles } from '../permissions';
+import { unitSystemSchema } from './common';
+
+export const roleSchema = z.enum(roles, { error: 'Choose a role' });
+
+export const loginSchema = z.object({
+  email: z.string().trim().toLowerCase().email('Enter an e-mail address'),
+  password: z.string().min(1, 'Enter your password').max(200),
+});
+export type LoginInput = z.infer<typeof loginSchema>;
+
+export const sessionUserSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  units: unitSystemSchema,
+});
+export type SessionUser = z.infer<typeof sessionUserSchema>;
+
+export const userResponseSchema = z.object({ user: sessionUserSchema });
+export const csrfResponseSchema = z.object({ token: z.string() });

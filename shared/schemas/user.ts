@@ -1,0 +1,42 @@
+import { z } from 'zod';
+import { roleSchema } from './auth';
+import { unitSystemSchema } from './common';
+
+export const userSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  units: unitSystemSchema,
+  disabled: z.boolean(),
+  createdAt: z.string(),
+});
+export type User = z.infer<typeof userSchema>;
+
+const passwordSchema = z.string().min(10, 'Use at least 10 characters').max(200);
+
+export const createUserSchema = z.object({
+  email: z.string().trim().toLowerCase().email('Enter an e-mail address'),
+  name: z.string().trim().min(1, 'Enter a name').max(120),
+  role: roleSchema,
+  units: unitSystemSchema.default('metric'),
+  password: passwordSchema,
+});
+export type CreateUserInput = z.input<typeof createUserSchema>;
+
+export const updateUserSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter a name').max(120),
+    role: roleSchema,
+    units: unitSystemSchema,
+    disabled: z.boolean(),
+    password: passwordSchema,
+  })
+  .partial();
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;
+
+/** What any signed-in user may change about themselves. */
+export const updateMeSchema = z
+  .object({ name: z.string().trim().min(1, 'Enter a name').max(120), units: unitSystemSchema })
+  .partial();
+export type UpdateMeInput = z.infer<typeof updateMeSchema>;
