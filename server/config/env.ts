@@ -6,9 +6,10 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
   HOST: z.string().default('0.0.0.0'),
   DATABASE_URL: z
-    .string()
+    .preprocess((v) => (v === '' ? undefined : v), z.string().optional())
+    .pipe(z.string()
     .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL; leave it unset for SQLite')
-    .optional(),
+    .optional()),
   DATABASE_PATH: z.string().default(path.join('data', 'boothwright.sqlite')),
   SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters').optional(),
   TRUST_PROXY: z

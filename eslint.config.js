@@ -1,0 +1,58 @@
+import js from '@eslint/js';
+import pluginQuery from '@tanstack/eslint-plugin-query';
+import reactHooks from 'eslint-plugin-react-hooks';
+import globals from 'globals';
+import tseslint from 'typescript-eslint';
+
+const processEnv = {
+  selector: "MemberExpression[object.name='process'][property.name='env']",
+  message: 'Read configuration through server/config/env.ts (loadConfig), not process.env.',
+};
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'data/**', 'node_modules/**', 'playwright-report/**', 'test-results/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+    },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    languageOptions: { globals: globals.browser },
+    plugins: { 'react-hooks': reactHooks, '@tanstack/query': pluginQuery },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      ...pluginQuery.configs.recommended.rules,
+      // We do not run the React Compiler; TanStack Table's hook is fine without memoisation.
+      'react-hooks/incompatible-library': 'off',
+      'no-restricted-imports': ['error', { patterns: [{ group: ['**/server/**', 'typeorm', 'express'], message: 'The client never imports server code.' }] }],
+    },
+  },
+  {
+    files: ['shared/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/server/**', '**/src/**', 'typeorm', 'express', 'react'], message: 'shared/ is used by both sides and imports neither.' }] },
+      ],
+    },
+  },
+  {
+    files: ['server/**/*.ts'],
+    languageOptions: { globals: globals.node },
+    rules: {
+      'no-restricted-imports': ['error', { patterns: [{ group: ['**/src/**'], message: 'The server never imports client code.' }] }],
+      'no-restricted-syntax': ['error', processEnv],
+    },
+  },
+  {
+    files: ['server/config/env.ts'],
+    rules: { 'no-restricted-syntax': 'off' },
+  },
+  {
+    files: ['tests/**/*.{ts,tsx,mjs}', 'bench/**/*.{ts,mjs}', '*.config.{ts,js}', 'scripts/**/*.{ts,mjs}'],
+    languageOptions: { globals: globals.node },
+  },
+);

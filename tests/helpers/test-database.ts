@@ -1,0 +1,44 @@
+import { randomBytes } from 'node:crypto';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import pg from 'pg';
+import type { DatabaseConfig } from '../../server/config/env';
+
+export interface TestDatabase {
+  config: DatabaseConfig;
+  drop(): Promise<void>;
+}
+
+/**
+ * A fresh, empty database for one test file: a SQLite file in a temp folder, or, when
+ * TEST_DATABASE_URL is set, a new PostgreSQL database made beside the one it names.
+ */
+export async function createTestDatabase(): Promise<TestDatabase> {
+  const pgUrl = process.env.TEST_DATABASE_URL;
+  if (pgUrl) return createPostgresDatabase(pgUrl);
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'boothwright-test-'));
+  return {
+    config: { kind: 'sqlite', path: path.join(dir, 'test.sqlite') },
+    drop: async () => fs.rmSync(dir, { recursive: true, force: true }),
+  };
+}
+
+async function createPostgresDatabase(adminUrl: string): Promise<TestDatabase> {
+  const name = `bw_test_${randomBytes(6).toString('hex')}`;
+  const admin = new pg.Client({ connectionString: adminUrl });
+  await admin.connect();
+  await admin.query(`CREATE DATABASE ${name}`);
+  await admin.end();
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  return {
+    config: { kind: 'postgres', url: url.toString() },
+    drop: async () => {
+      const client = new pg.Client({ connectionString: adminUrl });
+      await client.connect();
+      await client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+      await client.end();
+    },
+  };
+}

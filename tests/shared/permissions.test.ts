@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { can, permissions, roles } from '../../shared/permissions';
+
+// The matrix of DESIGN.md §2, written out row by row so a change to shared/permissions.ts must be deliberate.
+const expected: Record<string, string[]> = {
+  admin: [...permissions],
+  lead: ['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
+  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use'],
+  assembler: ['booths:read', 'racks:read', 'settings:read'],
+};
+
+describe('the permission matrix', () => {
+  it.each(roles)('grants %s exactly its row and denies everything else', (role) => {
+    for (const permission of permissions) {
+      expect(can(role, permission), `${role} → ${permission}`).toBe(expected[role].includes(permission));
+    }
+  });
+
+  it('denies everything to nobody and to an unknown role', () => {
+    expect(can(null, 'booths:read')).toBe(false);
+    expect(can(undefined, 'booths:read')).toBe(false);
+    expect(can('visitor' as never, 'booths:read')).toBe(false);
+  });
+
+  it('keeps users and shop settings to the admin', () => {
+    expect(roles.filter((role) => can(role, 'users:write'))).toEqual(['admin']);
+    expect(roles.filter((role) => can(role, 'settings:write'))).toEqual(['admin']);
+  });
+});
