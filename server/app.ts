@@ -5,24 +5,15 @@ import express, { type Express } from 'express';
 import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
-import { createBoothSchema, updateBoothSchema } from '../shared/schemas/booth';
-import { createRackSchema, updateRackSchema } from '../shared/schemas/rack';
+import { buildApiRouter } from './api';
 import { configurePassport } from './auth/passport';
 import type { AppConfig } from './config/env';
 import { systemClock, type Clock } from './lib/clock';
 import { requireCsrf } from './middleware/csrf';
-import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { errorHandler } from './middleware/error-handler';
 import { securityHeaders } from './middleware/security';
 import { sessionMiddleware } from './middleware/session';
 import { buildOpenApiDocument } from './openapi';
-import { authRoutes } from './routes/auth';
-import { masterDataRoutes } from './routes/master-data';
-import { auditRoutes, settingsRoutes } from './routes/settings';
-import { userRoutes } from './routes/users';
-import { createBoothService } from './services/booths';
-import { createRackService } from './services/racks';
-import { createSettingsService } from './services/settings';
-import { createUserService } from './services/users';
 
 export interface AppDeps {
   dataSource: DataSource;
@@ -52,15 +43,8 @@ export function createApp(deps: AppDeps): Express {
   });
 
   const auth = configurePassport(dataSource);
-  const users = createUserService(dataSource, clock);
   app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware(dataSource, deps.sessionSecret, config.trustProxy), auth.initialize(), auth.session(), requireCsrf);
-  app.use('/api/auth', authRoutes(auth, users, config.loginRateLimit));
-  app.use('/api/users', userRoutes(users));
-  app.use('/api/booths', masterDataRoutes({ resource: 'booth', read: 'booths:read', write: 'booths:write', createSchema: createBoothSchema, updateSchema: updateBoothSchema, service: createBoothService(dataSource, clock) }));
-  app.use('/api/racks', masterDataRoutes({ resource: 'rack', read: 'racks:read', write: 'racks:write', createSchema: createRackSchema, updateSchema: updateRackSchema, service: createRackService(dataSource, clock) }));
-  app.use('/api/settings', settingsRoutes(createSettingsService(dataSource, clock)));
-  app.use('/api/audit', auditRoutes(dataSource));
-  app.use('/api', apiNotFound);
+  app.use('/api', buildApiRouter(dataSource, config, clock, auth));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
   app.use(errorHandler);

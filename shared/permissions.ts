@@ -19,15 +19,35 @@ export const permissions = [
   'settings:write',
   'calculator:use',
   'audit:read',
+  'products:read',
+  'products:write',
+  'finish-systems:read',
+  'finish-systems:write',
+  'jobs:read',
+  'jobs:write',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
 /** The one matrix: the server enforces it, the client hides what a role may not do. Deny by default. */
 const matrix: Record<Role, readonly Permission[]> = {
   admin: permissions,
-  lead: ['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
-  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use'],
-  assembler: ['booths:read', 'racks:read', 'settings:read'],
+  lead: [
+    'booths:read',
+    'booths:write',
+    'racks:read',
+    'racks:write',
+    'settings:read',
+    'calculator:use',
+    'audit:read',
+    'products:read',
+    'products:write',
+    'finish-systems:read',
+    'finish-systems:write',
+    'jobs:read',
+    'jobs:write',
+  ],
+  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
+  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read'],
 };
 
 export function can(role: Role | null | undefined, permission: Permission): boolean {

@@ -29,7 +29,7 @@ async function run(command: string | undefined, arg: string | undefined): Promis
     if (command === 'migrate') {
       console.log('Migrations are up to date.');
     } else if (command === 'seed') {
-      const { seeded } = await seedDemoShop(dataSource);
+      const { seeded } = await seedDemoShop(dataSource, { uploadDir: config.uploadDir });
       console.log(seeded ? `Seeded the demo shop. Sign-ins:\n${demoSignInLines().join('\n')}` : 'The database already has users; the demo shop was not seeded.');
     } else {
       throw new Error(`Unknown command "${command}": use migrate, seed or generate`);

@@ -1,8 +1,29 @@
 import { AuditEntryEntity } from './entities/audit-entry.entity';
 import { BoothEntity } from './entities/booth.entity';
+import { FinishStepEntity } from './entities/finish-step.entity';
+import { FinishSystemEntity } from './entities/finish-system.entity';
+import { JobEntity } from './entities/job.entity';
+import { PartEntity } from './entities/part.entity';
+import { ProductLotEntity } from './entities/product-lot.entity';
+import { ProductEntity } from './entities/product.entity';
 import { RackEntity } from './entities/rack.entity';
 import { SessionEntity } from './entities/session.entity';
 import { ShopSettingsEntity } from './entities/shop-settings.entity';
+import { StoredFileEntity } from './entities/stored-file.entity';
 import { UserEntity } from './entities/user.entity';
 
-export const entities = [UserEntity, SessionEntity, BoothEntity, RackEntity, AuditEntryEntity, ShopSettingsEntity];
+export const entities = [
+  UserEntity,
+  SessionEntity,
+  BoothEntity,
+  RackEntity,
+  AuditEntryEntity,
+  ShopSettingsEntity,
+  StoredFileEntity,
+  ProductEntity,
+  ProductLotEntity,
+  FinishSystemEntity,
+  FinishStepEntity,
+  JobEntity,
+  PartEntity,
+];

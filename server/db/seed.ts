@@ -8,6 +8,7 @@ import { createRackService } from '../services/racks';
 import { createSettingsService } from '../services/settings';
 import { createUserService } from '../services/users';
 import { UserEntity } from './entities/user.entity';
+import { seedMasterData } from './seed-master-data';
 
 /** An invented shop. The password is printed at start and in the README; change it for real use. */
 export const demoPassword = 'finish-demo-2026';
@@ -33,7 +34,7 @@ const demoRacks: CreateRackInput[] = [
 ];
 
 /** Seeds the demo shop only into an empty database; existing data is never touched. */
-export async function seedDemoShop(dataSource: DataSource): Promise<{ seeded: boolean }> {
+export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string }): Promise<{ seeded: boolean }> {
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return { seeded: false };
   const users = createUserService(dataSource);
   for (const user of demoUsers) await users.create(user, systemActor);
@@ -42,6 +43,7 @@ export async function seedDemoShop(dataSource: DataSource): Promise<{ seeded: bo
   for (const booth of demoBooths) await booths.create(booth, systemActor);
   const racks = createRackService(dataSource);
   for (const rack of demoRacks) await racks.create(rack, systemActor);
+  await seedMasterData(dataSource, options.uploadDir, 'Europe/London');
   return { seeded: true };
 }
 

@@ -22,9 +22,9 @@ export interface TestContext {
 
 export async function startTestApp(options: { seed?: boolean; clock?: Clock; loginRateLimit?: number } = {}): Promise<TestContext> {
   const database = await createTestDatabase();
-  const config = { ...parseConfig({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: String(options.loginRateLimit ?? 50) }), database: database.config };
+  const config = { ...parseConfig({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: String(options.loginRateLimit ?? 50), UPLOAD_DIR: database.uploadDir }), database: database.config };
   const dataSource = await openDataSource(database.config, { migrate: true });
-  if (options.seed !== false) await seedDemoShop(dataSource);
+  if (options.seed !== false) await seedDemoShop(dataSource, { uploadDir: config.uploadDir });
   const build = () => createApp({ dataSource, config, sessionSecret: testSecret, clock: options.clock });
   return {
     app: build(),

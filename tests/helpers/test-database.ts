@@ -7,6 +7,8 @@ import type { DatabaseConfig } from '../../server/config/env';
 
 export interface TestDatabase {
   config: DatabaseConfig;
+  /** A fresh upload folder that goes with this database. */
+  uploadDir: string;
   drop(): Promise<void>;
 }
 
@@ -16,15 +18,17 @@ export interface TestDatabase {
  */
 export async function createTestDatabase(): Promise<TestDatabase> {
   const pgUrl = process.env.TEST_DATABASE_URL;
-  if (pgUrl) return createPostgresDatabase(pgUrl);
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'boothwright-test-'));
-  return {
-    config: { kind: 'sqlite', path: path.join(dir, 'test.sqlite') },
-    drop: async () => fs.rmSync(dir, { recursive: true, force: true }),
-  };
+  const uploadDir = path.join(dir, 'uploads');
+  const removeDir = async () => fs.rmSync(dir, { recursive: true, force: true });
+  if (pgUrl) {
+    const pgDatabase = await createPostgresDatabase(pgUrl);
+    return { ...pgDatabase, uploadDir, drop: async () => Promise.all([pgDatabase.drop(), removeDir()]).then(() => undefined) };
+  }
+  return { config: { kind: 'sqlite', path: path.join(dir, 'test.sqlite') }, uploadDir, drop: removeDir };
 }
 
-async function createPostgresDatabase(adminUrl: string): Promise<TestDatabase> {
+async function createPostgresDatabase(adminUrl: string): Promise<Omit<TestDatabase, 'uploadDir'>> {
   const name = `bw_test_${randomBytes(6).toString('hex')}`;
   const admin = new pg.Client({ connectionString: adminUrl });
   await admin.connect();

@@ -4,9 +4,14 @@ import { can, permissions, roles } from '../../shared/permissions';
 // The matrix of DESIGN.md §2, written out row by row so a change to shared/permissions.ts must be deliberate.
 const expected: Record<string, string[]> = {
   admin: [...permissions],
-  lead: ['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
-  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use'],
-  assembler: ['booths:read', 'racks:read', 'settings:read'],
+  lead: [
+    ...['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
+    ...['products:read', 'products:write', 'finish-systems:read', 'finish-systems:write', 'jobs:read', 'jobs:write'],
+  ],
+  // Sprayers read data sheets, finish systems and jobs but edit none of them.
+  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
+  // Assemblers read jobs (and the systems they name) to know what is coming.
+  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read'],
 };
 
 describe('the permission matrix', () => {

@@ -1,10 +1,5 @@
-import { Table, TableIndex, type MigrationInterface, type QueryRunner, type TableColumnOptions } from 'typeorm';
-
-// Written with TypeORM's Table API (not raw SQL) so the same migration runs on SQLite and PostgreSQL.
-const id: TableColumnOptions = { name: 'id', type: 'integer', isPrimary: true, isGenerated: true, generationStrategy: 'increment' };
-const instant = (name: string, isNullable = false): TableColumnOptions => ({ name, type: 'varchar', length: '30', isNullable });
-const text = (name: string, length: number, isNullable = false): TableColumnOptions => ({ name, type: 'varchar', length: String(length), isNullable });
-const real = (name: string, isNullable = false): TableColumnOptions => ({ name, type: 'double precision', isNullable });
+import { Table, TableIndex, type MigrationInterface, type QueryRunner } from 'typeorm';
+import { idColumn as id, instantColumn as instant, realColumn as real, textColumn as text } from './table-columns';
 
 export class Foundation1764651000000 implements MigrationInterface {
   name = 'Foundation1764651000000';

@@ -1,0 +1,65 @@
+import { randomUUID } from 'node:crypto';
+import fs from 'node:fs/promises';
+import path from 'node:path';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { FileRef } from '../../shared/schemas/product';
+import { StoredFileEntity } from '../db/entities/stored-file.entity';
+import { AppError, notFound } from '../lib/app-error';
+import { systemClock, type Clock } from '../lib/clock';
+
+export const maxUploadBytes = 20 * 1024 * 1024;
+
+export interface Upload {
+  originalname: string;
+  buffer: Buffer;
+  size: number;
+}
+
+/** A PDF starts with "%PDF-" (ISO 32000-1 §7.5.2); the file name and the browser's type are not trusted. */
+export function isPdf(buffer: Buffer): boolean {
+  return buffer.subarray(0, 5).toString('latin1') === '%PDF-';
+}
+
+// Keep the name people see readable, but never let it carry a path or control characters.
+export function cleanOriginalName(name: string): string {
+  const base = name.split(/[\\/]/).pop() ?? '';
+  const cleaned = base.replace(/[\u0000-\u001f\u007f"]/g, '').trim().slice(0, 200);
+  return cleaned && cleaned !== '.' && cleaned !== '..' ? cleaned : 'document.pdf';
+}
+
+export function toFileRef(file: StoredFileEntity): FileRef {
+  return { id: file.id, originalName: file.originalName, sizeBytes: file.sizeBytes, uploadedAt: file.uploadedAt };
+}
+
+export function createFileService(dataSource: DataSource, uploadDir: string, clock: Clock = systemClock) {
+  const root = path.resolve(uploadDir);
+
+  return {
+    /** Writes the bytes under a generated name and records them; call inside the caller's transaction. */
+    async storePdf(manager: EntityManager, upload: Upload | undefined, uploadedBy: number | null): Promise<StoredFileEntity> {
+      if (!upload) throw new AppError('validation_failed', 'Choose a PDF file to upload', { file: 'Choose a PDF file' });
+      if (!isPdf(upload.buffer)) throw new AppError('validation_failed', 'That file is not a PDF', { file: 'Only PDF files are accepted' });
+      const storedName = `${randomUUID()}.pdf`;
+      await fs.mkdir(root, { recursive: true });
+      await fs.writeFile(path.join(root, storedName), upload.buffer, { flag: 'wx' });
+      const file = manager.create(StoredFileEntity, {
+        originalName: cleanOriginalName(upload.originalname),
+        storedName,
+        mimeType: 'application/pdf',
+        sizeBytes: upload.size,
+        uploadedBy,
+        uploadedAt: clock.now().toISOString(),
+      });
+      return manager.save(file);
+    },
+
+    async locate(id: number): Promise<{ absolutePath: string; file: StoredFileEntity }> {
+      const file = await dataSource.getRepository(StoredFileEntity).findOneBy({ id });
+      if (!file) throw notFound('File');
+      const absolutePath = path.join(root, path.basename(file.storedName));
+      return { absolutePath, file };
+    },
+  };
+}
+
+export type FileService = ReturnType<typeof createFileService>;

@@ -1,0 +1,126 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { List } from '../../shared/schemas/common';
+import { createJobSchema, type CreateJobInput, type Job, type JobListQuery, type UpdateJobInput } from '../../shared/schemas/job';
+import { FinishSystemEntity } from '../db/entities/finish-system.entity';
+import { JobEntity } from '../db/entities/job.entity';
+import { AppError, notFound } from '../lib/app-error';
+import { systemClock, type Clock } from '../lib/clock';
+import { changedFields, recordAudit, type Actor } from './audit';
+
+/** States in which a part has had every coat of its system. */
+export const throughStates = ['drying', 'ready-to-handle', 'ready-to-pack', 'cured', 'collected'];
+
+interface JobRow {
+  id: number;
+  partCount: number;
+  partsThrough: number;
+  coatedAreaM2: number;
+  finishSystemName: string | null;
+}
+
+/** Part counts, progress and area for a page of jobs, grouped in the database. */
+async function jobFigures(manager: EntityManager, ids: number[]): Promise<Map<number, JobRow>> {
+  if (ids.length === 0) return new Map();
+  const rows = await manager
+    .createQueryBuilder(JobEntity, 'j')
+    .leftJoin('parts', 'p', 'p.job_id = j.id')
+    .leftJoin(FinishSystemEntity, 'fs', 'fs.id = j.finish_system_id')
+    .select('j.id', 'id')
+    .addSelect('fs.name', 'finishSystemName')
+    .addSelect('COUNT(p.id)', 'partCount')
+    .addSelect('COALESCE(SUM(p.coated_area_m2), 0)', 'coatedAreaM2')
+    .addSelect(`SUM(CASE WHEN p.state IN (${throughStates.map((s) => `'${s}'`).join(', ')}) THEN 1 ELSE 0 END)`, 'partsThrough')
+    .where('j.id IN (:...ids)', { ids })
+    .groupBy('j.id')
+    .addGroupBy('fs.name')
+    .getRawMany<Record<string, string | number | null>>();
+  return new Map(
+    rows.map((r) => [
+      Number(r.id),
+      { id: Number(r.id), partCount: Number(r.partCount), partsThrough: Number(r.partsThrough ?? 0), coatedAreaM2: Number(r.coatedAreaM2), finishSystemName: (r.finishSystemName as string | null) ?? null },
+    ]),
+  );
+}
+
+function toJobDto(job: JobEntity, figures: JobRow | undefined): Job {
+  return {
+    id: job.id,
+    customer: job.customer,
+    reference: job.reference,
+    dueDate: job.dueDate,
+    finishSystemId: job.finishSystemId,
+    finishSystemName: figures?.finishSystemName ?? null,
+    colour: job.colour,
+    sheen: job.sheen,
+    notes: job.notes,
+    state: job.state,
+    partCount: figures?.partCount ?? 0,
+    partsThrough: figures?.partsThrough ?? 0,
+    coatedAreaM2: Math.round((figures?.coatedAreaM2 ?? 0) * 1000) / 1000,
+    createdAt: job.createdAt,
+    updatedAt: job.updatedAt,
+  };
+}
+
+async function assertFinishSystem(manager: EntityManager, id: number | null | undefined): Promise<void> {
+  if (id && !(await manager.existsBy(FinishSystemEntity, { id }))) {
+    throw new AppError('validation_failed', 'That finish system does not exist', { finishSystemId: 'Choose a finish system' });
+  }
+}
+
+async function assertReferenceFree(manager: EntityManager, reference: string | undefined, exceptId?: number): Promise<void> {
+  if (!reference) return;
+  const existing = await manager.findOneBy(JobEntity, { reference });
+  if (existing && existing.id !== exceptId) throw new AppError('conflict', `Job reference ${reference} is already used`, { reference: 'Already used by another job' });
+}
+
+export function createJobService(dataSource: DataSource, clock: Clock = systemClock) {
+  async function getWith(manager: EntityManager, id: number): Promise<Job> {
+    const job = await manager.findOneBy(JobEntity, { id });
+    if (!job) throw notFound('Job');
+    return toJobDto(job, (await jobFigures(manager, [id])).get(id));
+  }
+
+  return {
+    async list(query: JobListQuery): Promise<List<Job>> {
+      const qb = dataSource.getRepository(JobEntity).createQueryBuilder('j');
+      if (query.q) qb.andWhere('(LOWER(j.customer) LIKE :q OR LOWER(j.reference) LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
+      if (query.state) qb.andWhere('j.state = :state', { state: query.state });
+      qb.orderBy('j.due_date', 'ASC').addOrderBy('j.id', 'ASC');
+      const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
+      const figures = await jobFigures(dataSource.manager, rows.map((r) => r.id));
+      return { items: rows.map((r) => toJobDto(r, figures.get(r.id))), total, page: query.page, pageSize: query.pageSize };
+    },
+
+    get: (id: number) => getWith(dataSource.manager, id),
+
+    async create(input: CreateJobInput, actor: Actor): Promise<Job> {
+      const fields = createJobSchema.parse(input);
+      const now = clock.now();
+      return dataSource.transaction(async (manager) => {
+        await assertFinishSystem(manager, fields.finishSystemId);
+        await assertReferenceFree(manager, fields.reference);
+        const job = await manager.save(manager.create(JobEntity, { ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        await recordAudit(manager, actor, { action: 'create', entity: 'job', entityId: job.id, summary: `Added job ${job.reference} for ${job.customer}` }, now);
+        return getWith(manager, job.id);
+      });
+    },
+
+    async update(id: number, patch: UpdateJobInput, actor: Actor): Promise<Job> {
+      const now = clock.now();
+      return dataSource.transaction(async (manager) => {
+        const job = await manager.findOneBy(JobEntity, { id });
+        if (!job) throw notFound('Job');
+        await assertFinishSystem(manager, patch.finishSystemId);
+        await assertReferenceFree(manager, patch.reference, id);
+        const changes = changedFields(job, patch);
+        Object.assign(job, patch, { updatedAt: now.toISOString() });
+        await manager.save(job);
+        await recordAudit(manager, actor, { action: 'update', entity: 'job', entityId: id, summary: `Changed job ${job.reference}`, changes }, now);
+        return getWith(manager, id);
+      });
+    },
+  };
+}
+
+export type JobService = ReturnType<typeof createJobService>;

@@ -1,0 +1,118 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { List } from '../../shared/schemas/common';
+import {
+  createProductSchema,
+  type CreateLotInput,
+  type CreateProductInput,
+  type Lot,
+  type Product,
+  type ProductListQuery,
+  type UpdateProductInput,
+} from '../../shared/schemas/product';
+import { calendarDateIn } from '../../shared/time';
+import { ProductLotEntity } from '../db/entities/product-lot.entity';
+import { ProductEntity } from '../db/entities/product.entity';
+import { StoredFileEntity } from '../db/entities/stored-file.entity';
+import { AppError, notFound } from '../lib/app-error';
+import { systemClock, type Clock } from '../lib/clock';
+import { changedFields, recordAudit, type Actor } from './audit';
+import { toFileRef, type FileService, type Upload } from './files';
+import { toLotDto, toProductDto } from './product-dto';
+import type { SettingsService } from './settings';
+
+export function createProductService(dataSource: DataSource, files: FileService, settings: SettingsService, clock: Clock = systemClock) {
+  async function today(): Promise<string> {
+    return calendarDateIn(clock.now(), (await settings.get()).timezone);
+  }
+
+  /** Lots and files for many products in two queries, not one per product. */
+  async function hydrate(manager: EntityManager, products: ProductEntity[]): Promise<Product[]> {
+    const ids = products.map((p) => p.id);
+    const fileIds = products.flatMap((p) => [p.tdsFileId, p.sdsFileId]).filter((id): id is number => id !== null);
+    const [lots, storedFiles, date] = await Promise.all([
+      ids.length ? manager.find(ProductLotEntity, { where: { productId: In(ids) }, order: { createdAt: 'DESC' } }) : [],
+      fileIds.length ? manager.findBy(StoredFileEntity, { id: In(fileIds) }) : [],
+      today(),
+    ]);
+    const fileById = new Map(storedFiles.map((f) => [f.id, toFileRef(f)]));
+    return products.map((p) => toProductDto(p, lots.filter((l) => l.productId === p.id), fileById, date));
+  }
+
+  async function findOrFail(manager: EntityManager, id: number): Promise<ProductEntity> {
+    const product = await manager.findOneBy(ProductEntity, { id });
+    if (!product) throw notFound('Product');
+    return product;
+  }
+
+  return {
+    async list(query: ProductListQuery): Promise<List<Product>> {
+      const qb = dataSource.getRepository(ProductEntity).createQueryBuilder('p');
+      if (query.q) qb.where('(LOWER(p.name) LIKE :q OR LOWER(p.maker_ref) LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
+      const sortColumn = { name: 'p.name', kind: 'p.kind', chemistry: 'p.chemistry', updatedAt: 'p.updated_at' }[query.sort];
+      qb.orderBy(sortColumn, query.dir === 'asc' ? 'ASC' : 'DESC').addOrderBy('p.id', 'ASC');
+      const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
+      return { items: await hydrate(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
+    },
+
+    async get(id: number): Promise<Product> {
+      const [product] = await hydrate(dataSource.manager, [await findOrFail(dataSource.manager, id)]);
+      return product;
+    },
+
+    async create(input: CreateProductInput, actor: Actor): Promise<Product> {
+      const fields = createProductSchema.parse(input);
+      const now = clock.now();
+      const id = await dataSource.transaction(async (manager) => {
+        const product = await manager.save(manager.create(ProductEntity, { ...fields, tdsFileId: null, sdsFileId: null, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        await recordAudit(manager, actor, { action: 'create', entity: 'product', entityId: product.id, summary: `Added data sheet ${product.name}` }, now);
+        return product.id;
+      });
+      return this.get(id);
+    },
+
+    async update(id: number, patch: UpdateProductInput, actor: Actor): Promise<Product> {
+      const now = clock.now();
+      await dataSource.transaction(async (manager) => {
+        const product = await findOrFail(manager, id);
+        // Checks that span fields (thinner range, colder-is-slower) must hold for the product as it will be.
+        createProductSchema.parse({ ...product, ...patch });
+        const changes = changedFields(product, patch as Partial<ProductEntity>);
+        Object.assign(product, patch, { updatedAt: now.toISOString() });
+        await manager.save(product);
+        await recordAudit(manager, actor, { action: 'update', entity: 'product', entityId: id, summary: `Changed data sheet ${product.name}`, changes }, now);
+      });
+      return this.get(id);
+    },
+
+    async addLot(productId: number, input: CreateLotInput & { expiresOn: string | null }, actor: Actor): Promise<Lot> {
+      const now = clock.now();
+      const lot = await dataSource.transaction(async (manager) => {
+        const product = await findOrFail(manager, productId);
+        if (await manager.existsBy(ProductLotEntity, { productId, lotNumber: input.lotNumber })) {
+          throw new AppError('conflict', `Lot ${input.lotNumber} is already recorded for ${product.name}`, { lotNumber: 'Already recorded' });
+        }
+        const saved = await manager.save(manager.create(ProductLotEntity, { productId, lotNumber: input.lotNumber, expiresOn: input.expiresOn, createdAt: now.toISOString() }));
+        await recordAudit(manager, actor, { action: 'create', entity: 'lot', entityId: saved.id, summary: `Added lot ${saved.lotNumber} of ${product.name}` }, now);
+        return saved;
+      });
+      return toLotDto(lot, await today());
+    },
+
+    async attachDocument(productId: number, kind: 'tds' | 'sds', upload: Upload | undefined, actor: Actor): Promise<Product> {
+      const now = clock.now();
+      await dataSource.transaction(async (manager) => {
+        const product = await findOrFail(manager, productId);
+        const file = await files.storePdf(manager, upload, actor.id);
+        if (kind === 'tds') product.tdsFileId = file.id;
+        else product.sdsFileId = file.id;
+        product.updatedAt = now.toISOString();
+        await manager.save(product);
+        const what = kind === 'tds' ? 'technical data sheet' : 'safety data sheet';
+        await recordAudit(manager, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
+      });
+      return this.get(productId);
+    },
+  };
+}
+
+export type ProductService = ReturnType<typeof createProductService>;

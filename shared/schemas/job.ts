@@ -1,0 +1,57 @@
+import { z } from 'zod';
+import { sprayMethodIds } from '../finishing/material';
+
+export const jobStates = ['open', 'in-finish', 'finished', 'cancelled'] as const;
+export const jobStateSchema = z.enum(jobStates, { error: 'Unknown job state' });
+export type JobState = z.infer<typeof jobStateSchema>;
+
+const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31' });
+
+export const jobFieldsSchema = z.object({
+  customer: z.string().trim().min(1, 'Enter the customer').max(120),
+  reference: z.string().trim().min(1, 'Enter the job reference').max(60),
+  dueDate: isoDate,
+  finishSystemId: z.number().int().positive().nullable(),
+  colour: z.string().trim().max(80),
+  sheen: z.string().trim().max(40),
+  notes: z.string().trim().max(4000),
+  state: jobStateSchema,
+});
+
+const f = jobFieldsSchema.shape;
+export const createJobSchema = jobFieldsSchema.extend({
+  finishSystemId: f.finishSystemId.default(null),
+  colour: f.colour.default(''),
+  sheen: f.sheen.default(''),
+  notes: f.notes.default(''),
+  state: f.state.default('open'),
+});
+export type CreateJobInput = z.input<typeof createJobSchema>;
+export const updateJobSchema = jobFieldsSchema.partial();
+export type UpdateJobInput = z.infer<typeof updateJobSchema>;
+
+export const jobSchema = jobFieldsSchema.extend({
+  id: z.number().int(),
+  finishSystemName: z.string().nullable(),
+  partCount: z.number().int(),
+  /** Parts whose last coat of the finish system is on: the job's progress. */
+  partsThrough: z.number().int(),
+  coatedAreaM2: z.number(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Job = z.infer<typeof jobSchema>;
+
+export const jobListQuerySchema = z.object({
+  q: z.string().trim().max(80).optional(),
+  state: jobStateSchema.optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+});
+export type JobListQuery = z.infer<typeof jobListQuerySchema>;
+
+export const estimateQuerySchema = z.object({
+  method: z.enum(sprayMethodIds, { error: 'Unknown spray method' }).default('hvlp'),
+  transferEfficiencyPct: z.coerce.number().min(1).max(100).optional(),
+});
+export type EstimateQuery = z.infer<typeof estimateQuerySchema>;

@@ -1,0 +1,70 @@
+import { z } from 'zod';
+
+export const partFaces = ['one', 'both'] as const;
+export const partFacesSchema = z.enum(partFaces, { error: 'Faces is one or both' });
+
+const mm = (what: string) => z.number({ error: `Enter the ${what} in mm` }).positive(`The ${what} must be more than 0`).max(10000, `The ${what} looks too big for mm`);
+
+export const partFieldsSchema = z.object({
+  label: z.string().trim().min(1, 'Enter a label').max(80),
+  kind: z.string().trim().max(40),
+  lengthMm: mm('length'),
+  widthMm: mm('width'),
+  thicknessMm: z.number({ error: 'Enter the thickness in mm' }).positive('The thickness must be more than 0').max(500, 'The thickness looks too big for mm'),
+  quantity: z.number().int('Whole pieces only').min(1, 'At least one piece').max(10000),
+  faces: partFacesSchema,
+  edges: z.boolean(),
+  rackId: z.number().int().positive().nullable(),
+  shelf: z.number().int().min(1, 'Shelves count from 1').nullable(),
+});
+
+const f = partFieldsSchema.shape;
+export const createPartSchema = partFieldsSchema.extend({
+  kind: f.kind.default(''),
+  quantity: f.quantity.default(1),
+  faces: f.faces.default('both'),
+  edges: f.edges.default(true),
+  rackId: f.rackId.default(null),
+  shelf: f.shelf.default(null),
+});
+export type CreatePartInput = z.input<typeof createPartSchema>;
+export const updatePartSchema = partFieldsSchema.partial();
+export type UpdatePartInput = z.infer<typeof updatePartSchema>;
+
+export const partSchema = partFieldsSchema.extend({
+  id: z.number().int(),
+  jobId: z.number().int(),
+  /** Area coated on one piece and on all of them (see shared/finishing/area.ts for the rule). */
+  pieceAreaM2: z.number(),
+  coatedAreaM2: z.number(),
+  tag: z.string(),
+  state: z.string(),
+  rackName: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Part = z.infer<typeof partSchema>;
+
+export const importRowErrorSchema = z.object({ row: z.number().int(), field: z.string(), message: z.string() });
+export type ImportRowError = z.infer<typeof importRowErrorSchema>;
+
+/** Maps our part fields to the CSV's own header names; omitted fields use our header names. */
+export const importMappingSchema = z.record(z.string(), z.string()).default({});
+
+export const importResultSchema = z.object({
+  saved: z.boolean(),
+  rowCount: z.number().int(),
+  preview: z.array(createPartSchema.extend({ row: z.number().int() }).partial()),
+  errors: z.array(importRowErrorSchema),
+  headers: z.array(z.string()),
+  items: z.array(partSchema),
+});
+export type ImportResult = z.infer<typeof importResultSchema>;
+
+export const csvTemplateHeaders = ['label', 'kind', 'lengthMm', 'widthMm', 'thicknessMm', 'quantity', 'faces', 'edges'] as const;
+
+/** A job's parts come in large pages: a kitchen is a few hundred parts, and the tag sheet prints them all. */
+export const partListQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(1000).default(500),
+});
