@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import type { DataSource, EntityTarget, FindOptionsOrder, ObjectLiteral } from 'typeorm';
 import type { z } from 'zod';
 import type { List, PageQuery } from '../../shared/schemas/common';
@@ -43,7 +44,7 @@ export function createCrudService<E extends Timestamped, D, C extends z.ZodType>
     async create(input: z.input<C>, actor: Actor): Promise<D> {
       const fields = options.createSchema.parse(input) as Partial<E>;
       const now = clock.now().toISOString();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const row = manager.create(entity, { ...fields, createdAt: now, updatedAt: now } as never) as E;
         await manager.save(row);
         await recordAudit(manager, actor, { action: 'create', entity: noun, entityId: row.id, summary: `Added ${noun} ${row.name}` }, clock.now());
@@ -53,7 +54,7 @@ export function createCrudService<E extends Timestamped, D, C extends z.ZodType>
 
     async update(id: number, patch: Partial<E>, actor: Actor): Promise<D> {
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const row = await manager.findOneBy(entity, { id } as never);
         if (!row) throw notFound(capitalise(noun));
         const changes = changedFields(row, patch);

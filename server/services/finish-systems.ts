@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import {
@@ -71,7 +72,7 @@ export function createFinishSystemService(dataSource: DataSource, clock: Clock =
     async create(input: CreateFinishSystemInput, actor: Actor): Promise<FinishSystem> {
       const { steps, ...fields } = createFinishSystemSchema.parse(input);
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const system = await manager.save(manager.create(FinishSystemEntity, { ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
         await writeSteps(manager, system.id, steps);
         await recordAudit(manager, actor, { action: 'create', entity: 'finish-system', entityId: system.id, summary: `Added finish system ${system.name}` }, now);
@@ -81,7 +82,7 @@ export function createFinishSystemService(dataSource: DataSource, clock: Clock =
 
     async update(id: number, patch: UpdateFinishSystemInput, actor: Actor): Promise<FinishSystem> {
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const system = await manager.findOneBy(FinishSystemEntity, { id });
         if (!system) throw notFound('Finish system');
         const { steps, ...fields } = patch;

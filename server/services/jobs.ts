@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
 import { createJobSchema, type CreateJobInput, type Job, type JobListQuery, type UpdateJobInput } from '../../shared/schemas/job';
@@ -97,7 +98,7 @@ export function createJobService(dataSource: DataSource, clock: Clock = systemCl
     async create(input: CreateJobInput, actor: Actor): Promise<Job> {
       const fields = createJobSchema.parse(input);
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         await assertFinishSystem(manager, fields.finishSystemId);
         await assertReferenceFree(manager, fields.reference);
         const job = await manager.save(manager.create(JobEntity, { ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
@@ -108,7 +109,7 @@ export function createJobService(dataSource: DataSource, clock: Clock = systemCl
 
     async update(id: number, patch: UpdateJobInput, actor: Actor): Promise<Job> {
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const job = await manager.findOneBy(JobEntity, { id });
         if (!job) throw notFound('Job');
         await assertFinishSystem(manager, patch.finishSystemId);

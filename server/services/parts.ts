@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import { randomBytes } from 'node:crypto';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import { coatedAreaM2, pieceAreaM2 } from '../../shared/finishing/area';
@@ -89,7 +90,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
     async create(jobId: number, input: CreatePartInput, actor: Actor): Promise<Part> {
       const fields = createPartSchema.parse(input);
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const job = await manager.findOneBy(JobEntity, { id: jobId });
         if (!job) throw notFound('Job');
         await assertRackPlace(manager, fields.rackId, fields.shelf);
@@ -103,7 +104,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
     async createMany(jobId: number, inputs: CreatePartInput[], actor: Actor, how = 'Added'): Promise<Part[]> {
       const rows = inputs.map((input) => createPartSchema.parse(input));
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const job = await manager.findOneBy(JobEntity, { id: jobId });
         if (!job) throw notFound('Job');
         for (const row of rows) await assertRackPlace(manager, row.rackId, row.shelf);
@@ -116,7 +117,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
 
     async update(id: number, patch: UpdatePartInput, actor: Actor): Promise<Part> {
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const part = await manager.findOneBy(PartEntity, { id });
         if (!part) throw notFound('Part');
         await assertRackPlace(manager, patch.rackId ?? part.rackId, patch.shelf ?? part.shelf);

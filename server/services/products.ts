@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
 import {
@@ -62,7 +63,7 @@ export function createProductService(dataSource: DataSource, files: FileService,
     async create(input: CreateProductInput, actor: Actor): Promise<Product> {
       const fields = createProductSchema.parse(input);
       const now = clock.now();
-      const id = await dataSource.transaction(async (manager) => {
+      const id = await inTransaction(dataSource, async (manager) => {
         const product = await manager.save(manager.create(ProductEntity, { ...fields, tdsFileId: null, sdsFileId: null, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
         await recordAudit(manager, actor, { action: 'create', entity: 'product', entityId: product.id, summary: `Added data sheet ${product.name}` }, now);
         return product.id;
@@ -72,7 +73,7 @@ export function createProductService(dataSource: DataSource, files: FileService,
 
     async update(id: number, patch: UpdateProductInput, actor: Actor): Promise<Product> {
       const now = clock.now();
-      await dataSource.transaction(async (manager) => {
+      await inTransaction(dataSource, async (manager) => {
         const product = await findOrFail(manager, id);
         // Checks that span fields (thinner range, colder-is-slower) must hold for the product as it will be.
         createProductSchema.parse({ ...product, ...patch });
@@ -86,7 +87,7 @@ export function createProductService(dataSource: DataSource, files: FileService,
 
     async addLot(productId: number, input: CreateLotInput & { expiresOn: string | null }, actor: Actor): Promise<Lot> {
       const now = clock.now();
-      const lot = await dataSource.transaction(async (manager) => {
+      const lot = await inTransaction(dataSource, async (manager) => {
         const product = await findOrFail(manager, productId);
         if (await manager.existsBy(ProductLotEntity, { productId, lotNumber: input.lotNumber })) {
           throw new AppError('conflict', `Lot ${input.lotNumber} is already recorded for ${product.name}`, { lotNumber: 'Already recorded' });
@@ -100,7 +101,7 @@ export function createProductService(dataSource: DataSource, files: FileService,
 
     async attachDocument(productId: number, kind: 'tds' | 'sds', upload: Upload | undefined, actor: Actor): Promise<Product> {
       const now = clock.now();
-      await dataSource.transaction(async (manager) => {
+      await inTransaction(dataSource, async (manager) => {
         const product = await findOrFail(manager, productId);
         const file = await files.storePdf(manager, upload, actor.id);
         if (kind === 'tds') product.tdsFileId = file.id;

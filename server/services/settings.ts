@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import type { DataSource } from 'typeorm';
 import type { ShopSettings } from '../../shared/schemas/settings';
 import { ShopSettingsEntity } from '../db/entities/shop-settings.entity';
@@ -29,7 +30,7 @@ export function createSettingsService(dataSource: DataSource, clock: Clock = sys
 
     async update(patch: Partial<ShopSettings>, actor: Actor): Promise<ShopSettings> {
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         const existing = await manager.findOneBy(ShopSettingsEntity, { id: 1 });
         const row = existing ?? manager.create(ShopSettingsEntity, { id: 1, ...defaultShopSettings });
         const changes = changedFields(row, patch);

@@ -1,3 +1,4 @@
+import { inTransaction } from '../db/transaction';
 import type { DataSource } from 'typeorm';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { List, PageQuery } from '../../shared/schemas/common';
@@ -25,7 +26,7 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
     const now = clock.now();
     const { password, ...fields } = patch;
     const passwordHash = password ? await hashPassword(password) : undefined;
-    return dataSource.transaction(async (manager) => {
+    return inTransaction(dataSource, async (manager) => {
       const user = await manager.findOneBy(UserEntity, { id });
       if (!user) throw notFound('User');
       const changes = changedFields(user, fields);
@@ -46,7 +47,7 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
       const { password, ...fields } = createUserSchema.parse(input);
       const passwordHash = await hashPassword(password);
       const now = clock.now();
-      return dataSource.transaction(async (manager) => {
+      return inTransaction(dataSource, async (manager) => {
         if (await manager.existsBy(UserEntity, { email: fields.email })) {
           throw new AppError('conflict', 'A user with this e-mail already exists', { email: 'Already in use' });
         }
