@@ -23,7 +23,11 @@ export function isPdf(buffer: Buffer): boolean {
 // Keep the name people see readable, but never let it carry a path or control characters.
 export function cleanOriginalName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? '';
-  const cleaned = base.replace(/[\u0000-\u001f\u007f"]/g, '').trim().slice(0, 200);
+  const cleaned = [...base]
+    .filter((c) => c.charCodeAt(0) >= 0x20 && c.charCodeAt(0) !== 0x7f && c !== '"')
+    .join('')
+    .trim()
+    .slice(0, 200);
   return cleaned && cleaned !== '.' && cleaned !== '..' ? cleaned : 'document.pdf';
 }
 

@@ -1,0 +1,129 @@
+import { FinishingInputError } from '../errors';
+import type { CoatInstants } from './coat-times';
+import { requireInstant } from './validate';
+
+export type FinishStep = { kind: 'coat'; productId: number; dryFilmUm: number } | { kind: 'abrade'; grit: string };
+
+/** One coat a part has received: which step of its finish system, and the instants it produced. */
+export type PartCoat = CoatInstants & { stepIndex: number; sprayedAt: Date };
+
+export const readinessStates = [
+  'waiting',
+  'in-finish',
+  'drying',
+  'ready-to-handle',
+  'ready-to-pack',
+  'cured',
+  'collected',
+] as const;
+export type ReadinessState = (typeof readinessStates)[number];
+
+export type ReadinessInput = {
+  steps: FinishStep[];
+  coats: PartCoat[];
+  /** When the part was denibbed or scuffed; only an abrade after the latest coat counts. */
+  abradedAt?: Date[];
+  collectedAt?: Date | null;
+  now: Date;
+};
+
+export type RecoatWindow = { opensAt: Date; closesAt: Date | null };
+
+export type PartReadiness = {
+  state: ReadinessState;
+  coatsDone: number;
+  coatsTotal: number;
+  nextStep: FinishStep | null;
+  /** Index of `nextStep` in the finish system; null when the step was inserted (a scuff after a missed window). */
+  nextStepIndex: number | null;
+  /** When the next coat may go on; null when there is none, or when the surface must be abraded first. */
+  nextWindow: RecoatWindow | null;
+  abradeRequired: boolean;
+  recoatWindowMissed: boolean;
+  handleAt: Date | null;
+  packAt: Date | null;
+  fullCureAt: Date | null;
+};
+
+/** Grit for scuffing a film whose recoat window has closed, giving the next coat a mechanical key (trade practice P320–P400). */
+export const missedWindowScuffGrit = 'P320';
+
+type NextMove = Pick<PartReadiness, 'nextStep' | 'nextStepIndex' | 'nextWindow' | 'abradeRequired' | 'recoatWindowMissed'>;
+
+/** Where a part stands in its finish system at `now`, from the coats it has had. */
+export function partReadiness(input: ReadinessInput): PartReadiness {
+  const { steps, coats, now } = input;
+  requireInstant('now', now, 'the time now');
+  checkCoats(steps, coats);
+  const coatSteps = steps.flatMap((step, index) => (step.kind === 'coat' ? [index] : []));
+  const doneSteps = new Set(coats.map((coat) => coat.stepIndex));
+  const last = latestCoat(coats);
+  const collected = input.collectedAt != null && input.collectedAt.getTime() <= now.getTime();
+  const shared = {
+    coatsDone: doneSteps.size,
+    coatsTotal: coatSteps.length,
+    handleAt: last?.handleAt ?? null,
+    packAt: last?.packAt ?? null,
+    fullCureAt: last?.fullCureAt ?? null,
+  };
+  if (!last) {
+    const first = steps[0] ?? null;
+    const move = { nextStep: first, nextStepIndex: first ? 0 : null, nextWindow: null, abradeRequired: first?.kind === 'abrade', recoatWindowMissed: false };
+    return { ...shared, ...move, state: collected ? 'collected' : 'waiting' };
+  }
+  const nextCoat = coatSteps.find((index) => index > last.stepIndex && !doneSteps.has(index));
+  if (nextCoat === undefined) {
+    const move = { nextStep: null, nextStepIndex: null, nextWindow: null, abradeRequired: false, recoatWindowMissed: false };
+    return { ...shared, ...move, state: collected ? 'collected' : dryingState(last, now) };
+  }
+  return { ...shared, ...betweenCoats(input, last, nextCoat), state: collected ? 'collected' : 'in-finish' };
+}
+
+function betweenCoats({ steps, abradedAt = [], now }: ReadinessInput, last: PartCoat, nextCoat: number): NextMove {
+  const missed = last.recoatClosesAt !== null && now.getTime() >= last.recoatClosesAt.getTime();
+  const abraded = abradedAt
+    .filter((at) => at.getTime() > last.sprayedAt.getTime() && at.getTime() <= now.getTime())
+    .sort((a, b) => a.getTime() - b.getTime())
+    .at(-1);
+  if (abraded) {
+    // A sanded surface gives the next coat a mechanical key, so no closing time applies any more.
+    const opensAt = abraded.getTime() > last.recoatOpensAt.getTime() ? abraded : last.recoatOpensAt;
+    return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: { opensAt, closesAt: null }, abradeRequired: false, recoatWindowMissed: missed };
+  }
+  const window = missed ? null : { opensAt: last.recoatOpensAt, closesAt: last.recoatClosesAt };
+  const plannedAbrade = steps.findIndex((step, index) => index > last.stepIndex && index < nextCoat && step.kind === 'abrade');
+  if (plannedAbrade >= 0) {
+    return { nextStep: steps[plannedAbrade], nextStepIndex: plannedAbrade, nextWindow: window, abradeRequired: true, recoatWindowMissed: missed };
+  }
+  if (missed) {
+    const scuff: FinishStep = { kind: 'abrade', grit: missedWindowScuffGrit };
+    return { nextStep: scuff, nextStepIndex: null, nextWindow: null, abradeRequired: true, recoatWindowMissed: true };
+  }
+  return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: window, abradeRequired: false, recoatWindowMissed: false };
+}
+
+function dryingState(last: PartCoat, now: Date): ReadinessState {
+  const t = now.getTime();
+  if (t < last.handleAt.getTime()) return 'drying';
+  if (t < last.packAt.getTime()) return 'ready-to-handle';
+  if (t < last.fullCureAt.getTime()) return 'ready-to-pack';
+  return 'cured';
+}
+
+/** The coat furthest along the finish system; a re-spray of the same step counts from its latest spraying. */
+function latestCoat(coats: PartCoat[]): PartCoat | undefined {
+  return coats.reduce<PartCoat | undefined>((latest, coat) => {
+    if (!latest || coat.stepIndex > latest.stepIndex) return coat;
+    if (coat.stepIndex === latest.stepIndex && coat.sprayedAt.getTime() > latest.sprayedAt.getTime()) return coat;
+    return latest;
+  }, undefined);
+}
+
+function checkCoats(steps: FinishStep[], coats: PartCoat[]): void {
+  coats.forEach((coat, i) => {
+    requireInstant(`coats.${i}.sprayedAt`, coat.sprayedAt, 'when the coat was sprayed');
+    if (steps[coat.stepIndex]?.kind !== 'coat') {
+      throw new FinishingInputError(`coats.${i}.stepIndex`, 'This coat does not match a coat step of the finish system');
+    }
+  });
+}

@@ -1,0 +1,107 @@
+import { useEffect, useRef, useState } from 'react';
+import { Link, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
+import { toast } from 'sonner';
+import { roleLabels } from '../../shared/permissions';
+import { useLogout } from '../features/auth/api/logout';
+import { errorMessage } from '../lib/error-messages';
+import { MainNav } from './main-nav';
+import { useSessionUser } from './session-user';
+import { Wordmark } from './wordmark';
+
+function UserBlock({ onSignOut, pending, tone }: { onSignOut: () => void; pending: boolean; tone: 'dark' | 'light' }) {
+  const user = useSessionUser();
+  const dark = tone === 'dark';
+  return (
+    <div className="flex items-center gap-3">
+      <p className="text-right leading-tight">
+        <span className="block font-semibold">{user.name}</span>
+        <span className={`block text-sm ${dark ? 'text-lacquer-100' : 'text-maple-700'}`}>{roleLabels[user.role]}</span>
+      </p>
+      <button
+        type="button"
+        onClick={onSignOut}
+        disabled={pending}
+        className={`min-h-touch rounded-panel border px-4 font-semibold ${dark ? 'border-lacquer-300 hover:bg-lacquer-700 focus-visible:outline-maple-100' : 'border-maple-400 bg-white hover:bg-maple-100'}`}
+      >
+        {pending ? 'Signing out…' : 'Sign out'}
+      </button>
+    </div>
+  );
+}
+
+export function AppLayout() {
+  const [menuOpen, setMenuOpen] = useState(false);
+  const user = useSessionUser();
+  const logout = useLogout();
+  const navigate = useNavigate();
+  const navigation = useNavigation();
+  const { pathname } = useLocation();
+  const mainRef = useRef<HTMLElement>(null);
+  const lastPath = useRef(pathname);
+
+  // After moving to another page, put focus at the start of the new content for keyboard and screen-reader users.
+  useEffect(() => {
+    if (lastPath.current === pathname) return;
+    lastPath.current = pathname;
+    mainRef.current?.focus();
+  }, [pathname]);
+
+  const signOut = async () => {
+    try {
+      await logout.mutateAsync();
+    } catch (error) {
+      toast.error(errorMessage(error));
+    }
+    navigate('/sign-in', { replace: true });
+  };
+
+  return (
+    <div className="min-h-dvh">
+      <a href="#main" className="sr-only z-50 rounded-panel bg-white px-4 py-3 font-semibold text-lacquer-900 focus:not-sr-only focus:fixed focus:top-2 focus:left-2">
+        Skip to main content
+      </a>
+      <header className="sticky top-0 z-30 bg-lacquer-800 text-white shadow">
+        <div className="flex min-h-16 items-center justify-between gap-3 px-4 lg:px-6">
+          <Link to="/" className="rounded-panel py-1 focus-visible:outline-maple-100">
+            <Wordmark />
+          </Link>
+          <div className="hidden lg:block">
+            <UserBlock onSignOut={signOut} pending={logout.isPending} tone="dark" />
+          </div>
+          <button
+            type="button"
+            className="min-h-touch min-w-touch rounded-panel border border-lacquer-300 px-4 font-semibold hover:bg-lacquer-700 focus-visible:outline-maple-100 lg:hidden"
+            aria-expanded={menuOpen}
+            aria-controls="main-nav"
+            onClick={() => setMenuOpen((open) => !open)}
+          >
+            {menuOpen ? 'Close menu' : 'Menu'}
+          </button>
+        </div>
+        {navigation.state !== 'idle' && (
+          <div role="status" className="h-1 w-full animate-pulse bg-lacquer-300">
+            <span className="sr-only">Loading page…</span>
+          </div>
+        )}
+      </header>
+      <div className="lg:flex lg:min-h-[calc(100dvh-4rem)]">
+        <div className="lg:w-60 lg:shrink-0 lg:border-r lg:border-maple-300 lg:bg-maple-100">
+          <nav
+            id="main-nav"
+            aria-label="Main"
+            className={`${menuOpen ? 'block' : 'hidden'} border-b border-maple-300 bg-maple-100 px-3 py-4 lg:sticky lg:top-16 lg:block lg:max-h-[calc(100dvh-4rem)] lg:overflow-y-auto lg:border-b-0`}
+            onKeyDown={(event) => event.key === 'Escape' && setMenuOpen(false)}
+          >
+            <MainNav role={user.role} onNavigate={() => setMenuOpen(false)} />
+            <div className="mt-6 border-t border-maple-300 pt-4 lg:hidden">
+              <UserBlock onSignOut={signOut} pending={logout.isPending} tone="light" />
+            </div>
+          </nav>
+        </div>
+        <main id="main" ref={mainRef} tabIndex={-1} className="min-w-0 flex-1 px-4 py-6 focus:outline-none sm:px-6 lg:px-8">
+          <Outlet />
+        </main>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,41 @@
+import { can, type Permission, type Role } from '../../shared/permissions';
+
+export interface NavItem {
+  to: string;
+  label: string;
+  permission?: Permission;
+  end?: boolean;
+}
+
+export interface NavGroup {
+  label: string;
+  items: NavItem[];
+}
+
+const groups: NavGroup[] = [
+  {
+    label: 'Workshop',
+    items: [
+      { to: '/', label: 'Today', end: true },
+      { to: '/booths', label: 'Booths', permission: 'booths:read' },
+      { to: '/racks', label: 'Racks', permission: 'racks:read' },
+      { to: '/calculator', label: 'Calculator', permission: 'calculator:use' },
+      { to: '/activity', label: 'Activity log', permission: 'audit:read' },
+    ],
+  },
+  {
+    label: 'Settings',
+    items: [
+      { to: '/settings/preferences', label: 'My preferences' },
+      { to: '/settings/shop', label: 'Shop', permission: 'settings:read' },
+      { to: '/settings/users', label: 'Users', permission: 'users:read' },
+    ],
+  },
+];
+
+/** The navigation a role may use; items it may not use are left out, not greyed. */
+export function navFor(role: Role): NavGroup[] {
+  return groups
+    .map((group) => ({ ...group, items: group.items.filter((item) => !item.permission || can(role, item.permission)) }))
+    .filter((group) => group.items.length > 0);
+}

@@ -1,0 +1,34 @@
+import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { useMe } from '../features/auth/api/get-me';
+import { SessionUserProvider } from './session-user';
+
+export function FullPageStatus({ children }: { children: string }) {
+  return (
+    <div className="grid min-h-dvh place-items-center p-6">
+      <p role="status" className="text-lg text-maple-700">
+        {children}
+      </p>
+    </div>
+  );
+}
+
+/** Routes inside need a signed-in user; otherwise off to sign in, remembering where they were going. */
+export function RequireAuth() {
+  const me = useMe();
+  const location = useLocation();
+
+  if (me.data === undefined) {
+    if (me.isError) throw me.error;
+    return <FullPageStatus>Checking your sign-in…</FullPageStatus>;
+  }
+  if (me.data === null) {
+    const next = `${location.pathname}${location.search}${location.hash}`;
+    const search = next === '/' ? '' : `?next=${encodeURIComponent(next)}`;
+    return <Navigate to={`/sign-in${search}`} replace />;
+  }
+  return (
+    <SessionUserProvider user={me.data}>
+      <Outlet />
+    </SessionUserProvider>
+  );
+}

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { UpdateBoothInput } from '../../../../shared/schemas/booth';
+import { apiClient } from '../../../lib/api-client';
+import { boothKeys } from './booth-keys';
+import { boothResponseSchema } from './get-booth';
+
+export async function updateBooth({ id, changes }: { id: number; changes: UpdateBoothInput }) {
+  const { booth } = await apiClient.patch(`/api/booths/${id}`, changes, boothResponseSchema);
+  return booth;
+}
+
+export function useUpdateBooth() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateBooth,
+    onSuccess: (booth) => {
+      queryClient.setQueryData(boothKeys.detail(booth.id), booth);
+      return queryClient.invalidateQueries({ queryKey: boothKeys.lists() });
+    },
+  });
+}

@@ -1,0 +1,57 @@
+import { useCallback, useState } from 'react';
+import type { Booth } from '../../../../shared/schemas/booth';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Pagination } from '../../../components/ui/pagination';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
+import { useBooths } from '../api/get-booths';
+import { BoothForm } from './booth-form';
+import { BoothsTable } from './booths-table';
+
+const pageSize = 50;
+type Editing = { booth?: Booth } | null;
+
+export function BoothsPage({ units, canWrite }: { units: UnitSystem; canWrite: boolean }) {
+  const [page, setPage] = useState(1);
+  const [editing, setEditing] = useState<Editing>(null);
+  const booths = useBooths({ page, pageSize });
+  const close = () => setEditing(null);
+  const edit = useCallback((booth: Booth) => setEditing({ booth }), []);
+
+  return (
+    <>
+      <PageHeader
+        title="Booths"
+        description="Each booth or spray room, its air and when it is open. Clearance time is how long the air takes to fall to 1 % after spraying stops."
+        actions={canWrite && <Button onClick={() => setEditing({})}>Add booth</Button>}
+      />
+      {booths.isPending ? (
+        <LoadingState what="booths" />
+      ) : booths.isError ? (
+        <ErrorState error={booths.error} what="the booths" onRetry={() => booths.refetch()} />
+      ) : booths.data.items.length === 0 ? (
+        <EmptyState title="No booths yet">
+          {canWrite ? 'Add the first booth to start planning spray sessions.' : 'The finishing lead or the owner adds booths.'}
+        </EmptyState>
+      ) : (
+        <>
+          <BoothsTable booths={booths.data.items} units={units} onEdit={canWrite ? edit : undefined} />
+          <Pagination page={page} pageSize={pageSize} total={booths.data.total} noun="booths" onPage={setPage} />
+        </>
+      )}
+      {canWrite && (
+        <Dialog
+          open={editing !== null}
+          onClose={close}
+          wide
+          title={editing?.booth ? `Edit ${editing.booth.name}` : 'Add a booth'}
+          description="Figures are entered in metric units, as they are stored."
+        >
+          <BoothForm booth={editing?.booth} onDone={close} />
+        </Dialog>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { UpdateRackInput } from '../../../../shared/schemas/rack';
+import { apiClient } from '../../../lib/api-client';
+import { rackResponseSchema } from './get-rack';
+import { rackKeys } from './rack-keys';
+
+export async function updateRack({ id, changes }: { id: number; changes: UpdateRackInput }) {
+  const { rack } = await apiClient.patch(`/api/racks/${id}`, changes, rackResponseSchema);
+  return rack;
+}
+
+export function useUpdateRack() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateRack,
+    onSuccess: (rack) => {
+      queryClient.setQueryData(rackKeys.detail(rack.id), rack);
+      return queryClient.invalidateQueries({ queryKey: rackKeys.lists() });
+    },
+  });
+}

@@ -1,0 +1,54 @@
+import { useCallback, useState } from 'react';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { Rack } from '../../../../shared/schemas/rack';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Pagination } from '../../../components/ui/pagination';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
+import { useRacks } from '../api/get-racks';
+import { RackForm } from './rack-form';
+import { RacksTable } from './racks-table';
+
+const pageSize = 50;
+type Editing = { rack?: Rack } | null;
+
+export function RacksPage({ units, canWrite }: { units: UnitSystem; canWrite: boolean }) {
+  const [page, setPage] = useState(1);
+  const [editing, setEditing] = useState<Editing>(null);
+  const racks = useRacks({ page, pageSize });
+  const close = () => setEditing(null);
+  const edit = useCallback((rack: Rack) => setEditing({ rack }), []);
+
+  return (
+    <>
+      <PageHeader
+        title="Racks"
+        description="Where parts dry between coats. Shelf space limits how many parts a spray session can take."
+        actions={canWrite && <Button onClick={() => setEditing({})}>Add rack</Button>}
+      />
+      {racks.isPending ? (
+        <LoadingState what="racks" />
+      ) : racks.isError ? (
+        <ErrorState error={racks.error} what="the racks" onRetry={() => racks.refetch()} />
+      ) : racks.data.items.length === 0 ? (
+        <EmptyState title="No racks yet">{canWrite ? 'Add the drying racks so parts have somewhere to go.' : 'The finishing lead or the owner adds racks.'}</EmptyState>
+      ) : (
+        <>
+          <RacksTable racks={racks.data.items} units={units} onEdit={canWrite ? edit : undefined} />
+          <Pagination page={page} pageSize={pageSize} total={racks.data.total} noun="racks" onPage={setPage} />
+        </>
+      )}
+      {canWrite && (
+        <Dialog
+          open={editing !== null}
+          onClose={close}
+          title={editing?.rack ? `Edit ${editing.rack.name}` : 'Add a rack'}
+          description="Figures are entered in metric units, as they are stored."
+        >
+          <RackForm rack={editing?.rack} onDone={close} />
+        </Dialog>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,7 @@
+import { useEffect } from 'react';
+
+export function usePageTitle(title: string) {
+  useEffect(() => {
+    document.title = title ? `${title} · Boothwright` : 'Boothwright';
+  }, [title]);
+}
