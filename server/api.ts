@@ -6,7 +6,17 @@ import { createFinishSystemSchema, updateFinishSystemSchema } from '../shared/sc
 import { createRackSchema, updateRackSchema } from '../shared/schemas/rack';
 import type { AppConfig } from './config/env';
 import type { Clock } from './lib/clock';
+import { requireCsrf } from './middleware/csrf';
 import { apiNotFound } from './middleware/error-handler';
+import { sensorAuth } from './middleware/sensor-auth';
+import { coatRoutes } from './routes/coats';
+import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './routes/live';
+import { spraySessionRoutes } from './routes/spray-sessions';
+import { createCoatService } from './services/coats';
+import type { EventBus } from './services/events';
+import { createReadingService } from './services/readings';
+import { createReadyService } from './services/ready';
+import { createSpraySessionService } from './services/spray-sessions';
 import { authRoutes } from './routes/auth';
 import { jobRoutes, partRoutes } from './routes/jobs';
 import { masterDataRoutes } from './routes/master-data';
@@ -26,8 +36,10 @@ import { createSettingsService } from './services/settings';
 import { createUserService } from './services/users';
 
 /** Every /api route behind sign-in and CSRF, wired to its service. */
-export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock: Clock, auth: passport.PassportStatic): Router {
+export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock: Clock, auth: passport.PassportStatic, events: EventBus): Router {
   const api = Router();
+  const readings = createReadingService(dataSource, events, clock);
+  api.use(sensorAuth(readings), requireCsrf);
   const users = createUserService(dataSource, clock);
   const settings = createSettingsService(dataSource, clock);
   const files = createFileService(dataSource, config.uploadDir, clock);
@@ -44,6 +56,12 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/finish-systems', masterDataRoutes({ resource: 'finishSystem', read: 'finish-systems:read', write: 'finish-systems:write', createSchema: createFinishSystemSchema, updateSchema: updateFinishSystemSchema, service: createFinishSystemService(dataSource, clock) }));
   api.use('/jobs', jobRoutes(createJobService(dataSource, clock), parts, createPartImportService(dataSource, parts), createEstimateService(dataSource)));
   api.use('/parts', partRoutes(parts));
+  api.use('/spray-sessions', spraySessionRoutes(createSpraySessionService(dataSource, settings, events, clock)));
+  api.use('/coats', coatRoutes(createCoatService(dataSource, settings, events, clock)));
+  api.use('/ready', readyRoutes(createReadyService(dataSource, clock)));
+  api.use('/readings', readingRoutes(readings));
+  api.use('/booths', sensorTokenRoutes(readings));
+  api.use('/events', eventRoutes(events));
   api.use(apiNotFound);
   return api;
 }

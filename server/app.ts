@@ -9,11 +9,11 @@ import { buildApiRouter } from './api';
 import { configurePassport } from './auth/passport';
 import type { AppConfig } from './config/env';
 import { systemClock, type Clock } from './lib/clock';
-import { requireCsrf } from './middleware/csrf';
 import { errorHandler } from './middleware/error-handler';
 import { securityHeaders } from './middleware/security';
 import { sessionMiddleware } from './middleware/session';
 import { buildOpenApiDocument } from './openapi';
+import { EventBus } from './services/events';
 
 export interface AppDeps {
   dataSource: DataSource;
@@ -21,6 +21,8 @@ export interface AppDeps {
   sessionSecret: string;
   clock?: Clock;
   logger?: Logger;
+  /** The change feed behind GET /api/events; tests pass their own to listen in. */
+  events?: EventBus;
   /** Folder of the built client; served with an SPA fallback when it exists. */
   clientDir?: string;
 }
@@ -43,8 +45,8 @@ export function createApp(deps: AppDeps): Express {
   });
 
   const auth = configurePassport(dataSource);
-  app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware(dataSource, deps.sessionSecret, config.trustProxy), auth.initialize(), auth.session(), requireCsrf);
-  app.use('/api', buildApiRouter(dataSource, config, clock, auth));
+  app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware(dataSource, deps.sessionSecret, config.trustProxy), auth.initialize(), auth.session());
+  app.use('/api', buildApiRouter(dataSource, config, clock, auth, deps.events ?? new EventBus()));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
   app.use(errorHandler);

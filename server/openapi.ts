@@ -7,6 +7,15 @@ import { listSchema } from '../shared/schemas/common';
 import { createRackSchema, rackSchema, updateRackSchema } from '../shared/schemas/rack';
 import { shopSettingsSchema, updateShopSettingsSchema } from '../shared/schemas/settings';
 import { createUserSchema, updateMeSchema, updateUserSchema, userSchema } from '../shared/schemas/user';
+import { auditEntrySchema } from '../shared/schemas/audit';
+import { coatSchema, correctCoatSchema, createCoatSchema } from '../shared/schemas/coat';
+import { createFinishSystemSchema, finishSystemSchema } from '../shared/schemas/finish-system';
+import { createJobSchema, jobSchema, updateJobSchema } from '../shared/schemas/job';
+import { createPartSchema, partSchema } from '../shared/schemas/part';
+import { createLotSchema, createProductSchema, lotSchema, productSchema, updateProductSchema } from '../shared/schemas/product';
+import { createReadingSchema, readingSchema } from '../shared/schemas/reading';
+import { readyPartSchema } from '../shared/schemas/ready';
+import { createSpraySessionSchema, spraySessionSchema, updateSpraySessionSchema } from '../shared/schemas/spray-session';
 
 interface Operation {
   method: 'get' | 'post' | 'patch';
@@ -40,6 +49,29 @@ const operations: Operation[] = [
   { method: 'patch', path: '/api/racks/{id}', summary: 'Change a rack', permission: 'racks:write', body: updateRackSchema, response: wrap('rack', rackSchema) },
   { method: 'get', path: '/api/settings', summary: 'Shop settings', permission: 'settings:read', response: wrap('settings', shopSettingsSchema) },
   { method: 'patch', path: '/api/settings', summary: 'Change shop settings', permission: 'settings:write', body: updateShopSettingsSchema, response: wrap('settings', shopSettingsSchema) },
+  { method: 'get', path: '/api/audit', summary: 'The audit trail, newest first', permission: 'audit:read', response: listSchema(auditEntrySchema) },
+  { method: 'get', path: '/api/products', summary: 'Search data sheets', permission: 'products:read', response: listSchema(productSchema) },
+  { method: 'post', path: '/api/products', summary: 'Add a data sheet', permission: 'products:write', body: createProductSchema, response: wrap('product', productSchema), status: 201 },
+  { method: 'get', path: '/api/products/{id}', summary: 'One data sheet', permission: 'products:read', response: wrap('product', productSchema) },
+  { method: 'patch', path: '/api/products/{id}', summary: 'Change a data sheet', permission: 'products:write', body: updateProductSchema, response: wrap('product', productSchema) },
+  { method: 'post', path: '/api/products/{id}/lots', summary: 'Record a lot', permission: 'products:write', body: createLotSchema, response: wrap('lot', lotSchema), status: 201 },
+  { method: 'get', path: '/api/finish-systems', summary: 'List finish systems', permission: 'finish-systems:read', response: listSchema(finishSystemSchema) },
+  { method: 'post', path: '/api/finish-systems', summary: 'Add a finish system', permission: 'finish-systems:write', body: createFinishSystemSchema, response: wrap('finishSystem', finishSystemSchema), status: 201 },
+  { method: 'get', path: '/api/jobs', summary: 'List jobs by due date', permission: 'jobs:read', response: listSchema(jobSchema) },
+  { method: 'post', path: '/api/jobs', summary: 'Add a job', permission: 'jobs:write', body: createJobSchema, response: wrap('job', jobSchema), status: 201 },
+  { method: 'get', path: '/api/jobs/{id}', summary: 'One job', permission: 'jobs:read', response: wrap('job', jobSchema) },
+  { method: 'patch', path: '/api/jobs/{id}', summary: 'Change a job', permission: 'jobs:write', body: updateJobSchema, response: wrap('job', jobSchema) },
+  { method: 'get', path: '/api/jobs/{id}/parts', summary: 'A job’s parts', permission: 'jobs:read', response: listSchema(partSchema) },
+  { method: 'post', path: '/api/jobs/{id}/parts', summary: 'Add a part', permission: 'jobs:write', body: createPartSchema, response: wrap('part', partSchema), status: 201 },
+  { method: 'get', path: '/api/spray-sessions', summary: 'Spray sessions overlapping from–to', permission: 'spray-sessions:read', response: listSchema(spraySessionSchema) },
+  { method: 'post', path: '/api/spray-sessions', summary: 'Book booth time (409 when it overlaps)', permission: 'spray-sessions:write', body: createSpraySessionSchema, response: wrap('spraySession', spraySessionSchema), status: 201 },
+  { method: 'patch', path: '/api/spray-sessions/{id}', summary: 'Move, resize or progress a session', permission: 'spray-sessions:run', body: updateSpraySessionSchema, response: wrap('spraySession', spraySessionSchema) },
+  { method: 'post', path: '/api/coats', summary: 'Record a coat', permission: 'coats:write', body: createCoatSchema, response: wrap('coat', coatSchema), status: 201 },
+  { method: 'get', path: '/api/coats', summary: 'The coat log', permission: 'coats:read', response: listSchema(coatSchema) },
+  { method: 'post', path: '/api/coats/{id}/corrections', summary: 'Correct a coat (a new version)', permission: 'coats:write', body: correctCoatSchema, response: wrap('coat', coatSchema), status: 201 },
+  { method: 'get', path: '/api/ready', summary: 'Part readiness', permission: 'ready:read', response: z.object({ items: z.array(readyPartSchema) }) },
+  { method: 'post', path: '/api/readings', summary: 'Record conditions (session or booth sensor bearer token)', permission: 'readings:write', body: createReadingSchema, response: wrap('reading', readingSchema), status: 201 },
+  { method: 'get', path: '/api/events', summary: 'Server-sent change events', permission: 'signed-in' },
 ];
 
 const jsonSchema = (schema: z.ZodType, io: 'input' | 'output') => z.toJSONSchema(schema, { io, unrepresentable: 'any' });

@@ -25,6 +25,14 @@ export const permissions = [
   'finish-systems:write',
   'jobs:read',
   'jobs:write',
+  'spray-sessions:read',
+  'spray-sessions:write',
+  'spray-sessions:run',
+  'coats:read',
+  'coats:write',
+  'ready:read',
+  'parts:collect',
+  'readings:write',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -45,9 +53,31 @@ const matrix: Record<Role, readonly Permission[]> = {
     'finish-systems:write',
     'jobs:read',
     'jobs:write',
+    'spray-sessions:read',
+    'spray-sessions:write',
+    'spray-sessions:run',
+    'coats:read',
+    'coats:write',
+    'ready:read',
+    'parts:collect',
+    'readings:write',
   ],
-  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
-  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read'],
+  sprayer: [
+    'booths:read',
+    'racks:read',
+    'settings:read',
+    'calculator:use',
+    'products:read',
+    'finish-systems:read',
+    'jobs:read',
+    'spray-sessions:read',
+    'spray-sessions:run',
+    'coats:read',
+    'coats:write',
+    'ready:read',
+    'readings:write',
+  ],
+  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
 };
 
 export function can(role: Role | null | undefined, permission: Permission): boolean {

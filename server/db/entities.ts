@@ -11,6 +11,11 @@ import { SessionEntity } from './entities/session.entity';
 import { ShopSettingsEntity } from './entities/shop-settings.entity';
 import { StoredFileEntity } from './entities/stored-file.entity';
 import { UserEntity } from './entities/user.entity';
+import { CoatPartEntity } from './entities/coat-part.entity';
+import { CoatEntity } from './entities/coat.entity';
+import { ReadingEntity } from './entities/reading.entity';
+import { SpraySessionItemEntity } from './entities/spray-session-item.entity';
+import { SpraySessionEntity } from './entities/spray-session.entity';
 
 export const entities = [
   UserEntity,
@@ -26,4 +31,9 @@ export const entities = [
   FinishStepEntity,
   JobEntity,
   PartEntity,
+  SpraySessionEntity,
+  SpraySessionItemEntity,
+  CoatEntity,
+  CoatPartEntity,
+  ReadingEntity,
 ];

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import type { CreateBoothInput } from '../../shared/schemas/booth';
+import { defaultOpeningHours, type CreateBoothInput } from '../../shared/schemas/booth';
 import type { CreateRackInput } from '../../shared/schemas/rack';
 import type { CreateUserInput } from '../../shared/schemas/user';
 import { systemActor } from '../services/audit';
@@ -22,9 +22,9 @@ export const demoUsers: CreateUserInput[] = [
 
 const demoBooths: CreateBoothInput[] = [
   // 6 m × 4 m × 3 m dry-filter cross-draft booth: 72 m³, about 0.5 m/s over a 4 m × 3 m face.
-  { name: 'Booth 1 (cross-draft)', kind: 'cross-draft', volumeM3: 72, extractionM3PerH: 21600, mixingFactorK: 3, openFaceAreaM2: 12, minFaceVelocityMps: 0.5, sprayRateM2PerH: 24 },
+  { name: 'Booth 1 (cross-draft)', kind: 'cross-draft', volumeM3: 72, extractionM3PerH: 21600, mixingFactorK: 3, openFaceAreaM2: 12, minFaceVelocityMps: 0.5, sprayRateM2PerH: 24, openingHours: defaultOpeningHours },
   // A converted bay with wall extraction: larger, slower to clear, so its clearance time matters.
-  { name: 'Back spray room', kind: 'spray-room', volumeM3: 150, extractionM3PerH: 9000, mixingFactorK: 5, minFaceVelocityMps: 0.4, sprayRateM2PerH: 14 },
+  { name: 'Back spray room', kind: 'spray-room', volumeM3: 150, extractionM3PerH: 9000, mixingFactorK: 5, minFaceVelocityMps: 0.4, sprayRateM2PerH: 14, openingHours: defaultOpeningHours },
 ];
 
 const demoRacks: CreateRackInput[] = [

@@ -85,5 +85,12 @@ export function partRoutes(parts: PartService): Router {
     const { id } = idParamsSchema.parse(req.params);
     res.json({ part: await parts.update(id, updatePartSchema.parse(req.body), actorOf(req)) });
   });
+  router.post('/:id/collect', requirePermission('parts:collect'), async (req, res) => {
+    res.json({ part: await parts.setCollected(idParamsSchema.parse(req.params).id, true, actorOf(req)) });
+  });
+  // Undo for a mis-tap on the ready board.
+  router.delete('/:id/collect', requirePermission('parts:collect'), async (req, res) => {
+    res.json({ part: await parts.setCollected(idParamsSchema.parse(req.params).id, false, actorOf(req)) });
+  });
   return router;
 }

@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import type { AuditEntry } from '../../shared/schemas/audit';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import { AuditEntryEntity } from '../db/entities/audit-entry.entity';
 import { paginate } from '../lib/paginate';
@@ -32,18 +33,8 @@ export async function recordAudit(manager: EntityManager, actor: Actor, input: A
   });
 }
 
-export interface AuditEntryDto {
-  id: number;
-  at: string;
-  userId: number | null;
-  userName: string;
-  action: string;
-  entity: string;
-  entityId: string | null;
-  summary: string;
-}
 
-export function listAudit(manager: EntityManager, query: PageQuery): Promise<List<AuditEntryDto>> {
+export function listAudit(manager: EntityManager, query: PageQuery): Promise<List<AuditEntry>> {
   return paginate(manager.getRepository(AuditEntryEntity), query, { order: { id: 'DESC' } }, (row) => ({
     id: row.id,
     at: row.at,

@@ -10,6 +10,7 @@ import { RackEntity } from '../db/entities/rack.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
+import { readinessOf } from './ready';
 
 // Unambiguous characters only: a tag may be typed in by hand when a camera cannot read it.
 const tagAlphabet = 'ABCDEFGHJKMNPQRSTUVWXYZ23456789';
@@ -112,6 +113,22 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
         await recordAudit(manager, actor, { action: 'create', entity: 'part', entityId: null, summary: `${how} ${stored.length} parts to job ${job.reference}` }, now);
         const names = await rackNamesFor(manager, stored);
         return stored.map((p) => toPartDto(p, names));
+      });
+    },
+
+    /** Taken off the rack by an assembler: frees the shelf, and says so in the trail. */
+    async setCollected(id: number, collected: boolean, actor: Actor): Promise<Part> {
+      const now = clock.now();
+      return inTransaction(dataSource, async (manager) => {
+        const part = await manager.findOneBy(PartEntity, { id });
+        if (!part) throw notFound('Part');
+        const rackName = part.rackId ? (await rackNamesFor(manager, [part])).get(part.rackId) : null;
+        Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null }, { updatedAt: now.toISOString() });
+        part.state = (await readinessOf(manager, [part], now)).get(part.id)!.state;
+        await manager.save(part);
+        const summary = collected ? `Collected part ${part.label}${rackName ? ` from ${rackName}` : ''}` : `Put part ${part.label} back as not collected`;
+        await recordAudit(manager, actor, { action: collected ? 'collect' : 'uncollect', entity: 'part', entityId: id, summary }, now);
+        return dto(manager, part);
       });
     },
 

@@ -19,6 +19,7 @@ export const openingSpanSchema = z
   .refine((span) => span.opens < span.closes, { message: 'Closing time must be after opening time', path: ['closes'] });
 export type OpeningSpan = z.infer<typeof openingSpanSchema>;
 
+/** What a new booth form suggests: a working week. */
 export const defaultOpeningHours: OpeningSpan[] = [1, 2, 3, 4, 5].map((weekday) => ({
   weekday,
   opens: '07:00',
@@ -47,7 +48,8 @@ export const createBoothSchema = boothFieldsSchema.extend({
   measuredClearanceMin: f.measuredClearanceMin.default(null),
   minFaceVelocityMps: f.minFaceVelocityMps.default(0.5),
   openFaceAreaM2: f.openFaceAreaM2.default(null),
-  openingHours: f.openingHours.default(defaultOpeningHours),
+  // No spans means no restriction: a booth is bookable at any hour until its hours are set.
+  openingHours: f.openingHours.default([]),
   sprayRateM2PerH: f.sprayRateM2PerH.default(20),
 });
 export type CreateBoothInput = z.input<typeof createBoothSchema>;

@@ -7,11 +7,16 @@ const expected: Record<string, string[]> = {
   lead: [
     ...['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
     ...['products:read', 'products:write', 'finish-systems:read', 'finish-systems:write', 'jobs:read', 'jobs:write'],
+    ...['spray-sessions:read', 'spray-sessions:write', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'parts:collect', 'readings:write'],
   ],
   // Sprayers read data sheets, finish systems and jobs but edit none of them.
-  sprayer: ['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
+  sprayer: [
+    ...['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
+    // Sprayers run the sessions they are given and log coats, but do not book the booth.
+    ...['spray-sessions:read', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'readings:write'],
+  ],
   // Assemblers read jobs (and the systems they name) to know what is coming.
-  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read'],
+  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
 };
 
 describe('the permission matrix', () => {

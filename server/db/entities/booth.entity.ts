@@ -36,6 +36,10 @@ export class BoothEntity {
   @Column({ type: 'double precision', default: 20 })
   sprayRateM2PerH: number;
 
+  /** SHA-256 of the booth sensor's bearer token; the token itself is shown once and never stored. */
+  @Column({ type: 'varchar', length: 64, nullable: true })
+  sensorTokenHash: string | null;
+
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;
 

@@ -52,6 +52,9 @@ export class PartEntity {
   @Column({ type: 'varchar', length: 20, default: 'waiting' })
   state: string;
 
+  @Column({ type: 'varchar', length: 30, nullable: true })
+  collectedAt: string | null;
+
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;
 

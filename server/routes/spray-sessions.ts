@@ -1,0 +1,40 @@
+import { Router } from 'express';
+import { can } from '../../shared/permissions';
+import { idParamsSchema } from '../../shared/schemas/common';
+import { createSpraySessionSchema, spraySessionQuerySchema, updateSpraySessionSchema } from '../../shared/schemas/spray-session';
+import { AppError } from '../lib/app-error';
+import { actorOf } from '../lib/actor';
+import { requirePermission } from '../middleware/permissions';
+import type { SpraySessionService } from '../services/spray-sessions';
+
+// What a sprayer may change on a session assigned to them: its progress, not its booking.
+const runnerFields = new Set(['state', 'notes']);
+
+export function spraySessionRoutes(sessions: SpraySessionService): Router {
+  const router = Router();
+
+  router.get('/', requirePermission('spray-sessions:read'), async (req, res) => {
+    res.json(await sessions.list(spraySessionQuerySchema.parse(req.query)));
+  });
+
+  router.post('/', requirePermission('spray-sessions:write'), async (req, res) => {
+    res.status(201).json({ spraySession: await sessions.create(createSpraySessionSchema.parse(req.body), actorOf(req)) });
+  });
+
+  router.get('/:id', requirePermission('spray-sessions:read'), async (req, res) => {
+    res.json({ spraySession: await sessions.get(idParamsSchema.parse(req.params).id) });
+  });
+
+  router.patch('/:id', requirePermission('spray-sessions:run'), async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    const patch = updateSpraySessionSchema.parse(req.body);
+    if (!can(req.user!.role, 'spray-sessions:write')) {
+      const session = await sessions.get(id);
+      const onlyProgress = Object.keys(patch).every((key) => runnerFields.has(key));
+      if (session.sprayerId !== req.user!.id || !onlyProgress) throw new AppError('forbidden', 'Sprayers may only move their own sessions through their steps; ask the finishing lead to rebook');
+    }
+    res.json({ spraySession: await sessions.update(id, patch, actorOf(req)) });
+  });
+
+  return router;
+}

@@ -1,0 +1,53 @@
+import { In, type EntityManager } from 'typeorm';
+import type { Coat } from '../../shared/schemas/coat';
+import { CoatPartEntity } from '../db/entities/coat-part.entity';
+import { CoatEntity } from '../db/entities/coat.entity';
+import { ProductEntity } from '../db/entities/product.entity';
+
+/** Coat DTOs for a page of coat rows: parts, product names and successors in three queries. */
+export async function toCoatDtos(manager: EntityManager, coats: CoatEntity[]): Promise<Coat[]> {
+  const ids = coats.map((c) => c.id);
+  if (ids.length === 0) return [];
+  const [links, products, successors] = await Promise.all([
+    manager.find(CoatPartEntity, { where: { coatId: In(ids) } }),
+    manager.find(ProductEntity, { where: { id: In([...new Set(coats.map((c) => c.productId))]) }, select: { id: true, name: true } }),
+    manager.find(CoatEntity, { where: { replacesId: In(ids) }, select: { id: true, replacesId: true } }),
+  ]);
+  const productName = new Map(products.map((p) => [p.id, p.name]));
+  const successor = new Map(successors.map((s) => [s.replacesId!, s.id]));
+  return coats.map((c) => ({
+    id: c.id,
+    spraySessionId: c.spraySessionId,
+    partIds: links.filter((l) => l.coatId === c.id).map((l) => l.partId).sort((a, b) => a - b),
+    productId: c.productId,
+    productName: productName.get(c.productId) ?? '',
+    lotId: c.lotId,
+    stepPosition: c.stepPosition,
+    sprayedAt: c.sprayedAt,
+    airTempC: c.airTempC,
+    relativeHumidityPct: c.relativeHumidityPct,
+    surfaceTempC: c.surfaceTempC,
+    dewPointC: Math.round(c.dewPointC * 100) / 100,
+    thinningPct: c.thinningPct,
+    wetFilmUm: c.wetFilmUm,
+    dryFilmUm: c.dryFilmUm === null ? null : Math.round(c.dryFilmUm * 10) / 10,
+    dryingTempC: c.dryingTempC,
+    dryingMethod: c.dryingMethod,
+    flashOffEndsAt: c.flashOffEndsAt,
+    recoatOpensAt: c.recoatOpensAt,
+    recoatClosesAt: c.recoatClosesAt,
+    touchDryAt: c.touchDryAt,
+    handleAt: c.handleAt,
+    packAt: c.packAt,
+    fullCureAt: c.fullCureAt,
+    warnings: c.warnings.map((w) => ({ code: w.code, message: w.message, acknowledgedReason: w.acknowledgedReason ?? null })),
+    notes: c.notes,
+    version: c.version,
+    replacesId: c.replacesId,
+    supersededById: successor.get(c.id) ?? null,
+    correctionReason: c.correctionReason,
+    recordedById: c.recordedById,
+    recordedByName: c.recordedByName,
+    recordedAt: c.recordedAt,
+  }));
+}

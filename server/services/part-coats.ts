@@ -1,0 +1,68 @@
+import { In, type EntityManager } from 'typeorm';
+import type { FinishStep, PartCoat } from '../../shared/finishing/readiness';
+import { CoatPartEntity } from '../db/entities/coat-part.entity';
+import { CoatEntity } from '../db/entities/coat.entity';
+import { FinishStepEntity } from '../db/entities/finish-step.entity';
+import { JobEntity } from '../db/entities/job.entity';
+import type { PartEntity } from '../db/entities/part.entity';
+
+/** Current coat versions (not yet corrected) that covered any of the parts, by part id. */
+export async function currentCoatsByPart(manager: EntityManager, partIds: number[]): Promise<Map<number, CoatEntity[]>> {
+  const byPart = new Map<number, CoatEntity[]>(partIds.map((id) => [id, []]));
+  if (partIds.length === 0) return byPart;
+  const links = await manager.find(CoatPartEntity, { where: { partId: In(partIds) } });
+  const coatIds = [...new Set(links.map((l) => l.coatId))];
+  if (coatIds.length === 0) return byPart;
+  const coats = await manager
+    .createQueryBuilder(CoatEntity, 'c')
+    .leftJoin(CoatEntity, 'n', 'n.replaces_id = c.id')
+    .where('c.id IN (:...coatIds)', { coatIds })
+    .andWhere('n.id IS NULL')
+    .getMany();
+  const byId = new Map(coats.map((c) => [c.id, c]));
+  for (const link of links) {
+    const coat = byId.get(link.coatId);
+    if (coat) byPart.get(link.partId)?.push(coat);
+  }
+  return byPart;
+}
+
+/** Each job's finish-system steps, in order, for the parts given. */
+export async function stepsByJob(manager: EntityManager, parts: PartEntity[]): Promise<Map<number, FinishStep[]>> {
+  const jobIds = [...new Set(parts.map((p) => p.jobId))];
+  const jobs = jobIds.length ? await manager.findBy(JobEntity, { id: In(jobIds) }) : [];
+  const systemIds = [...new Set(jobs.map((j) => j.finishSystemId).filter((id): id is number => id !== null))];
+  const steps = systemIds.length ? await manager.find(FinishStepEntity, { where: { finishSystemId: In(systemIds) }, order: { position: 'ASC' } }) : [];
+  return new Map(
+    jobs.map((job) => [
+      job.id,
+      steps
+        .filter((s) => s.finishSystemId === job.finishSystemId)
+        .map((s): FinishStep => (s.kind === 'coat' ? { kind: 'coat', productId: s.productId!, dryFilmUm: s.dryFilmUm! } : { kind: 'abrade', grit: s.grit ?? 'P320' })),
+    ]),
+  );
+}
+
+/** Coats as the readiness maths reads them; coats logged outside the finish system are left out. */
+export function toPartCoats(coats: CoatEntity[], steps: FinishStep[]): PartCoat[] {
+  return coats
+    .filter((c) => c.stepPosition !== null && steps[c.stepPosition]?.kind === 'coat')
+    .map((c) => ({
+      stepIndex: c.stepPosition!,
+      sprayedAt: new Date(c.sprayedAt),
+      flashOffEndsAt: new Date(c.flashOffEndsAt),
+      recoatOpensAt: new Date(c.recoatOpensAt),
+      recoatClosesAt: c.recoatClosesAt ? new Date(c.recoatClosesAt) : null,
+      touchDryAt: new Date(c.touchDryAt),
+      handleAt: new Date(c.handleAt),
+      packAt: new Date(c.packAt),
+      fullCureAt: new Date(c.fullCureAt),
+    }));
+}
+
+/** The first coat step of the system not yet done on the part, or null when all are done. */
+export function nextCoatStep(steps: FinishStep[], coats: CoatEntity[]): number | null {
+  const done = new Set(coats.map((c) => c.stepPosition));
+  const index = steps.findIndex((step, i) => step.kind === 'coat' && !done.has(i));
+  return index === -1 ? null : index;
+}

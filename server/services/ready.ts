@@ -1,0 +1,69 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import { partReadiness, type FinishStep, type PartReadiness } from '../../shared/finishing/readiness';
+import type { ReadyPart } from '../../shared/schemas/ready';
+import { JobEntity } from '../db/entities/job.entity';
+import { PartEntity } from '../db/entities/part.entity';
+import { RackEntity } from '../db/entities/rack.entity';
+import { systemClock, type Clock } from '../lib/clock';
+import { currentCoatsByPart, stepsByJob, toPartCoats } from './part-coats';
+
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+
+function describeStep(step: FinishStep | null): string | null {
+  if (!step) return null;
+  return step.kind === 'abrade' ? `Abrade ${step.grit}` : `Coat at ${step.dryFilmUm} µm dry`;
+}
+
+/** Readiness of each part at `now`, from its current coats and its job's finish system. */
+export async function readinessOf(manager: EntityManager, parts: PartEntity[], now: Date): Promise<Map<number, PartReadiness>> {
+  const [coats, steps] = await Promise.all([currentCoatsByPart(manager, parts.map((p) => p.id)), stepsByJob(manager, parts)]);
+  return new Map(
+    parts.map((part) => {
+      const system = steps.get(part.jobId) ?? [];
+      const collectedAt = part.collectedAt ? new Date(part.collectedAt) : null;
+      return [part.id, partReadiness({ steps: system, coats: toPartCoats(coats.get(part.id) ?? [], system), collectedAt, now })];
+    }),
+  );
+}
+
+export function createReadyService(dataSource: DataSource, clock: Clock = systemClock) {
+  return {
+    async list(query: { jobId?: number; rackId?: number; state?: string }): Promise<ReadyPart[]> {
+      const where = { ...(query.jobId ? { jobId: query.jobId } : {}), ...(query.rackId ? { rackId: query.rackId } : {}) };
+      const parts = await dataSource.getRepository(PartEntity).find({ where, order: { jobId: 'ASC', id: 'ASC' }, take: 5000 });
+      const manager = dataSource.manager;
+      const [readiness, jobs, racks] = await Promise.all([
+        readinessOf(manager, parts, clock.now()),
+        manager.findBy(JobEntity, { id: In([...new Set(parts.map((p) => p.jobId))]) }),
+        manager.findBy(RackEntity, { id: In([...new Set(parts.map((p) => p.rackId).filter((id): id is number => id !== null))]) }),
+      ]);
+      const jobById = new Map(jobs.map((j) => [j.id, j]));
+      const rackById = new Map(racks.map((r) => [r.id, r]));
+      const items = parts.map((part): ReadyPart => {
+        const r = readiness.get(part.id)!;
+        const rack = part.rackId ? rackById.get(part.rackId) : undefined;
+        return {
+          id: part.id,
+          label: part.label,
+          jobId: part.jobId,
+          jobReference: jobById.get(part.jobId)?.reference ?? '',
+          customer: jobById.get(part.jobId)?.customer ?? '',
+          state: r.state,
+          coatsDone: r.coatsDone,
+          coatsTotal: r.coatsTotal,
+          nextStep: describeStep(r.nextStep),
+          nextWindowOpensAt: iso(r.nextWindow?.opensAt),
+          nextWindowClosesAt: iso(r.nextWindow?.closesAt),
+          abradeRequired: r.abradeRequired,
+          handleAt: iso(r.handleAt),
+          packAt: iso(r.packAt),
+          fullCureAt: iso(r.fullCureAt),
+          rack: rack ? { id: rack.id, name: rack.name, shelf: part.shelf } : null,
+        };
+      });
+      return query.state ? items.filter((i) => i.state === query.state) : items;
+    },
+  };
+}
+
+export type ReadyService = ReturnType<typeof createReadyService>;

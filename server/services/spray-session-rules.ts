@@ -1,0 +1,56 @@
+import type { EntityManager } from 'typeorm';
+import { openingHoursProblem } from '../../shared/finishing/opening-hours';
+import { BoothEntity } from '../db/entities/booth.entity';
+import { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import { UserEntity } from '../db/entities/user.entity';
+import { AppError } from '../lib/app-error';
+
+export interface Slot {
+  id?: number;
+  boothId: number;
+  startAt: string;
+  endAt: string;
+  sprayerId: number | null;
+}
+
+const clock = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
+
+async function overlapping(manager: EntityManager, slot: Slot, column: 'booth_id' | 'sprayer_id', value: number): Promise<SpraySessionEntity | null> {
+  const qb = manager
+    .createQueryBuilder(SpraySessionEntity, 's')
+    .where(`s.${column} = :value`, { value })
+    .andWhere("s.state <> 'cancelled'")
+    .andWhere('s.start_at < :end AND s.end_at > :start', { start: slot.startAt, end: slot.endAt });
+  if (slot.id) qb.andWhere('s.id <> :id', { id: slot.id });
+  return qb.orderBy('s.start_at', 'ASC').getOne();
+}
+
+/** Never overridable: one booth, one session at a time; one sprayer, one booth at a time. */
+export async function assertNoClash(manager: EntityManager, slot: Slot, booth: BoothEntity, timeZone: string): Promise<void> {
+  if (manager.connection.options.type === 'postgres') {
+    // Serialise bookings of one booth across every app instance until this transaction ends.
+    await manager.query('SELECT pg_advisory_xact_lock(7301, $1)', [slot.boothId]);
+  }
+  const clash = await overlapping(manager, slot, 'booth_id', slot.boothId);
+  if (clash) {
+    throw new AppError('conflict', `${booth.name} is already booked ${clock(clash.startAt, timeZone)}–${clock(clash.endAt, timeZone)} (spray session ${clash.id})`, { start: 'Overlaps another spray session of this booth' });
+  }
+  if (slot.sprayerId === null) return;
+  const busy = await overlapping(manager, slot, 'sprayer_id', slot.sprayerId);
+  if (busy) {
+    const sprayer = await manager.findOneBy(UserEntity, { id: slot.sprayerId });
+    throw new AppError('conflict', `${sprayer?.name ?? 'The sprayer'} is already booked then (spray session ${busy.id}, ${clock(busy.startAt, timeZone)})`, { sprayerId: 'Already booked at that time' });
+  }
+}
+
+/** Outside opening hours needs a lead's recorded reason; without one the booking is refused in words. */
+export function assertOpen(slot: Slot, booth: BoothEntity, timeZone: string, overrideReason: string | null): void {
+  const problem = openingHoursProblem(new Date(slot.startAt), new Date(slot.endAt), booth.openingHours, timeZone);
+  if (problem && !overrideReason) throw new AppError('conflict', `${problem}. A lead may book it anyway with a reason.`, { start: problem });
+}
+
+export async function assertSprayer(manager: EntityManager, sprayerId: number | null | undefined): Promise<void> {
+  if (!sprayerId) return;
+  const user = await manager.findOneBy(UserEntity, { id: sprayerId });
+  if (!user || user.disabled) throw new AppError('validation_failed', 'That sprayer does not exist or is disabled', { sprayerId: 'Choose an active user' });
+}

@@ -1,0 +1,143 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { List } from '../../shared/schemas/common';
+import {
+  createSpraySessionSchema,
+  type CreateSpraySessionInput,
+  type SpraySession,
+  type SpraySessionQuery,
+  type UpdateSpraySessionInput,
+} from '../../shared/schemas/spray-session';
+import { BoothEntity } from '../db/entities/booth.entity';
+import { PartEntity } from '../db/entities/part.entity';
+import { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
+import { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import { UserEntity } from '../db/entities/user.entity';
+import { inTransaction } from '../db/transaction';
+import { AppError, notFound } from '../lib/app-error';
+import { systemClock, type Clock } from '../lib/clock';
+import { recordAudit, type Actor } from './audit';
+import type { EventBus } from './events';
+import type { SettingsService } from './settings';
+import { assertNoClash, assertOpen, assertSprayer } from './spray-session-rules';
+
+async function toDtos(manager: EntityManager, sessions: SpraySessionEntity[]): Promise<SpraySession[]> {
+  const ids = sessions.map((s) => s.id);
+  const boothIds = [...new Set(sessions.map((s) => s.boothId))];
+  const userIds = [...new Set(sessions.map((s) => s.sprayerId).filter((id): id is number => id !== null))];
+  const [items, booths, users] = await Promise.all([
+    ids.length ? manager.find(SpraySessionItemEntity, { where: { spraySessionId: In(ids) }, order: { id: 'ASC' } }) : [],
+    boothIds.length ? manager.find(BoothEntity, { where: { id: In(boothIds) }, select: { id: true, name: true } }) : [],
+    userIds.length ? manager.find(UserEntity, { where: { id: In(userIds) }, select: { id: true, name: true } }) : [],
+  ]);
+  const boothName = new Map(booths.map((b) => [b.id, b.name]));
+  const userName = new Map(users.map((u) => [u.id, u.name]));
+  return sessions.map((s) => ({
+    id: s.id,
+    boothId: s.boothId,
+    boothName: boothName.get(s.boothId) ?? '',
+    start: s.startAt,
+    end: s.endAt,
+    sprayerId: s.sprayerId,
+    sprayerName: s.sprayerId === null ? null : (userName.get(s.sprayerId) ?? null),
+    state: s.state,
+    notes: s.notes,
+    items: items.filter((i) => i.spraySessionId === s.id).map((i) => ({ partId: i.partId, stepPosition: i.stepPosition })),
+    overrideReason: s.overrideReason,
+    createdAt: s.createdAt,
+    updatedAt: s.updatedAt,
+  }));
+}
+
+async function writeItems(manager: EntityManager, sessionId: number, items: { partId: number; stepPosition: number | null }[]): Promise<void> {
+  const partIds = [...new Set(items.map((i) => i.partId))];
+  if (partIds.length && (await manager.countBy(PartEntity, { id: In(partIds) })) !== partIds.length) {
+    throw new AppError('validation_failed', 'A planned part does not exist', { items: 'Choose parts that exist' });
+  }
+  await manager.delete(SpraySessionItemEntity, { spraySessionId: sessionId });
+  if (items.length) await manager.insert(SpraySessionItemEntity, items.map((i) => ({ spraySessionId: sessionId, partId: i.partId, stepPosition: i.stepPosition })));
+}
+
+export function createSpraySessionService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
+  async function boothOrFail(manager: EntityManager, boothId: number): Promise<BoothEntity> {
+    const booth = await manager.findOneBy(BoothEntity, { id: boothId });
+    if (!booth) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
+    return booth;
+  }
+
+  async function getWith(manager: EntityManager, id: number): Promise<SpraySession> {
+    const session = await manager.findOneBy(SpraySessionEntity, { id });
+    if (!session) throw notFound('Spray session');
+    return (await toDtos(manager, [session]))[0];
+  }
+
+  return {
+    async list(query: SpraySessionQuery): Promise<List<SpraySession>> {
+      const qb = dataSource.getRepository(SpraySessionEntity).createQueryBuilder('s');
+      if (query.from) qb.andWhere('s.end_at > :from', { from: new Date(query.from).toISOString() });
+      if (query.to) qb.andWhere('s.start_at < :to', { to: new Date(query.to).toISOString() });
+      if (query.boothId) qb.andWhere('s.booth_id = :boothId', { boothId: query.boothId });
+      qb.orderBy('s.start_at', 'ASC').addOrderBy('s.id', 'ASC');
+      const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
+      return { items: await toDtos(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
+    },
+
+    get: (id: number) => getWith(dataSource.manager, id),
+
+    async create(input: CreateSpraySessionInput, actor: Actor): Promise<SpraySession> {
+      const fields = createSpraySessionSchema.parse(input);
+      const { timezone } = await settings.get();
+      const now = clock.now().toISOString();
+      const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
+      const created = await inTransaction(dataSource, async (manager) => {
+        const booth = await boothOrFail(manager, fields.boothId);
+        await assertSprayer(manager, fields.sprayerId);
+        assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
+        await assertNoClash(manager, slot, booth, timezone);
+        const session = await manager.save(
+          manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, createdAt: now, updatedAt: now }),
+        );
+        await writeItems(manager, session.id, fields.items);
+        const summary = `Booked ${booth.name} ${slot.startAt}–${slot.endAt}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;
+        await recordAudit(manager, actor, { action: 'create', entity: 'spray-session', entityId: session.id, summary }, new Date(now));
+        return getWith(manager, session.id);
+      });
+      events.publish({ type: 'spray-session.changed', id: created.id });
+      return created;
+    },
+
+    async update(id: number, patch: UpdateSpraySessionInput, actor: Actor): Promise<SpraySession> {
+      const { timezone } = await settings.get();
+      const now = clock.now().toISOString();
+      const updated = await inTransaction(dataSource, async (manager) => {
+        const session = await manager.findOneBy(SpraySessionEntity, { id });
+        if (!session) throw notFound('Spray session');
+        const slot = {
+          id,
+          boothId: patch.boothId ?? session.boothId,
+          startAt: patch.start ? new Date(patch.start).toISOString() : session.startAt,
+          endAt: patch.end ? new Date(patch.end).toISOString() : session.endAt,
+          sprayerId: patch.sprayerId === undefined ? session.sprayerId : patch.sprayerId,
+        };
+        if (Date.parse(slot.endAt) <= Date.parse(slot.startAt)) throw new AppError('validation_failed', 'The end must be after the start', { end: 'The end must be after the start' });
+        const booth = await boothOrFail(manager, slot.boothId);
+        const moved = slot.boothId !== session.boothId || slot.startAt !== session.startAt || slot.endAt !== session.endAt || slot.sprayerId !== session.sprayerId;
+        if (moved) {
+          await assertSprayer(manager, slot.sprayerId);
+          assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
+        }
+        if ((moved || patch.state === 'planned') && (patch.state ?? session.state) !== 'cancelled') await assertNoClash(manager, slot, booth, timezone);
+        Object.assign(session, { ...slot, state: patch.state ?? session.state, notes: patch.notes ?? session.notes, updatedAt: now });
+        if (patch.override) session.overrideReason = patch.override.reason;
+        await manager.save(session);
+        if (patch.items) await writeItems(manager, id, patch.items);
+        const summary = `Changed spray session ${id} on ${booth.name}${patch.state ? ` (now ${patch.state})` : ''}`;
+        await recordAudit(manager, actor, { action: 'update', entity: 'spray-session', entityId: id, summary, changes: { ...patch } }, new Date(now));
+        return getWith(manager, id);
+      });
+      events.publish({ type: 'spray-session.changed', id });
+      return updated;
+    },
+  };
+}
+
+export type SpraySessionService = ReturnType<typeof createSpraySessionService>;

@@ -1,0 +1,101 @@
+import { z } from 'zod';
+import { isoInstantSchema } from './common';
+
+export const acknowledgementSchema = z.object({
+  code: z.string().min(1).max(60),
+  reason: z.string().trim().min(3, 'Say why the coat went on anyway').max(500),
+});
+
+const coatFields = {
+  spraySessionId: z.number({ error: 'Choose the spray session' }).int().positive(),
+  partIds: z.array(z.number().int().positive()).min(1, 'Choose at least one part').max(2000),
+  productId: z.number({ error: 'Choose the product' }).int().positive(),
+  sprayedAt: isoInstantSchema,
+  airTempC: z.number({ error: 'Enter the air temperature' }).min(-20, 'Air temperature looks wrong').max(60, 'Air temperature looks wrong'),
+  relativeHumidityPct: z.number({ error: 'Enter the relative humidity' }).min(1, 'RH is between 1 and 100 %').max(100, 'RH cannot be over 100 %'),
+  surfaceTempC: z.number({ error: 'Enter the surface temperature' }).min(-20, 'Surface temperature looks wrong').max(80, 'Surface temperature looks wrong'),
+  thinningPct: z.number().min(0, 'Thinning cannot be negative').max(100),
+  wetFilmUm: z.number().positive('Wet film must be more than 0').max(2000).nullable(),
+  /** Which step of the parts' finish system this coat is; null lets the server take the next coat step. */
+  stepPosition: z.number().int().min(0).nullable(),
+  lotId: z.number().int().positive().nullable(),
+  /** Where the parts dry; null means the rack's temperature if heated, else the air temperature. */
+  dryingTempC: z.number().min(0).max(80).nullable(),
+  acknowledgements: z.array(acknowledgementSchema).max(20),
+  notes: z.string().trim().max(2000),
+  /** Lets a device resend a coat after a dropped connection without making a second record. */
+  idempotencyKey: z.string().min(8).max(80).nullable(),
+};
+
+export const createCoatSchema = z.object({
+  ...coatFields,
+  thinningPct: coatFields.thinningPct.default(0),
+  wetFilmUm: coatFields.wetFilmUm.default(null),
+  stepPosition: coatFields.stepPosition.default(null),
+  lotId: coatFields.lotId.default(null),
+  dryingTempC: coatFields.dryingTempC.default(null),
+  acknowledgements: coatFields.acknowledgements.default([]),
+  notes: coatFields.notes.default(''),
+  idempotencyKey: coatFields.idempotencyKey.default(null),
+});
+export type CreateCoatInput = z.input<typeof createCoatSchema>;
+
+/** A correction restates the coat as it should have been, with the reason; the old version stays. */
+export const correctCoatSchema = createCoatSchema
+  .omit({ spraySessionId: true, idempotencyKey: true })
+  .partial()
+  .extend({ reason: z.string().trim().min(3, 'Say what was wrong').max(500) });
+export type CorrectCoatInput = z.infer<typeof correctCoatSchema>;
+
+export const coatWarningSchema = z.object({ code: z.string(), message: z.string(), acknowledgedReason: z.string().nullable().optional() });
+
+export const coatSchema = z.object({
+  id: z.number().int(),
+  spraySessionId: z.number().int(),
+  partIds: z.array(z.number().int()),
+  productId: z.number().int(),
+  productName: z.string(),
+  lotId: z.number().int().nullable(),
+  stepPosition: z.number().int().nullable(),
+  sprayedAt: z.string(),
+  airTempC: z.number(),
+  relativeHumidityPct: z.number(),
+  surfaceTempC: z.number(),
+  dewPointC: z.number(),
+  thinningPct: z.number(),
+  wetFilmUm: z.number().nullable(),
+  dryFilmUm: z.number().nullable(),
+  dryingTempC: z.number(),
+  dryingMethod: z.string(),
+  flashOffEndsAt: z.string(),
+  recoatOpensAt: z.string(),
+  recoatClosesAt: z.string().nullable(),
+  touchDryAt: z.string(),
+  handleAt: z.string(),
+  packAt: z.string(),
+  fullCureAt: z.string(),
+  warnings: z.array(coatWarningSchema),
+  notes: z.string(),
+  version: z.number().int(),
+  replacesId: z.number().int().nullable(),
+  supersededById: z.number().int().nullable(),
+  correctionReason: z.string().nullable(),
+  recordedById: z.number().int().nullable(),
+  recordedByName: z.string(),
+  recordedAt: z.string(),
+});
+export type Coat = z.infer<typeof coatSchema>;
+
+export const coatQuerySchema = z.object({
+  spraySessionId: z.coerce.number().int().positive().optional(),
+  partId: z.coerce.number().int().positive().optional(),
+  jobId: z.coerce.number().int().positive().optional(),
+  productId: z.coerce.number().int().positive().optional(),
+  from: isoInstantSchema.optional(),
+  to: isoInstantSchema.optional(),
+  /** Current versions only unless asked for the whole history. */
+  history: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(500).default(50),
+});
+export type CoatQuery = z.infer<typeof coatQuerySchema>;

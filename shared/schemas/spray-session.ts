@@ -1,0 +1,80 @@
+import { z } from 'zod';
+import { isoInstantSchema } from './common';
+
+export const spraySessionStates = ['planned', 'checking', 'spraying', 'clearing', 'done', 'cancelled'] as const;
+export const spraySessionStateSchema = z.enum(spraySessionStates, { error: 'Unknown spray session state' });
+export type SpraySessionState = z.infer<typeof spraySessionStateSchema>;
+
+export const spraySessionStateLabels: Record<SpraySessionState, string> = {
+  planned: 'Planned',
+  checking: 'Pre-spray checks',
+  spraying: 'Spraying',
+  clearing: 'Clearing the air',
+  done: 'Done',
+  cancelled: 'Cancelled',
+};
+
+/** A part and the finish-system step (index) the session will spray on it. */
+export const sessionItemSchema = z.object({
+  partId: z.number().int().positive(),
+  stepPosition: z.number().int().min(0).nullable().default(null),
+});
+
+/** A lead may go ahead outside opening hours or past rack space, never over another booking. */
+export const overrideSchema = z.object({ reason: z.string().trim().min(3, 'Say why this booking goes ahead anyway').max(500) });
+
+const spraySessionFields = {
+  boothId: z.number({ error: 'Choose a booth' }).int().positive('Choose a booth'),
+  start: isoInstantSchema,
+  end: isoInstantSchema,
+  sprayerId: z.number().int().positive().nullable(),
+  notes: z.string().trim().max(2000),
+  items: z.array(sessionItemSchema).max(2000),
+  override: overrideSchema.nullable(),
+};
+
+const endAfterStart = (value: { start?: string; end?: string }) => !value.start || !value.end || Date.parse(value.end) > Date.parse(value.start);
+const endAfterStartIssue = { message: 'The end must be after the start', path: ['end'] };
+
+export const createSpraySessionSchema = z
+  .object({
+    ...spraySessionFields,
+    sprayerId: spraySessionFields.sprayerId.default(null),
+    notes: spraySessionFields.notes.default(''),
+    items: spraySessionFields.items.default([]),
+    override: spraySessionFields.override.default(null),
+  })
+  .refine(endAfterStart, endAfterStartIssue);
+export type CreateSpraySessionInput = z.input<typeof createSpraySessionSchema>;
+
+export const updateSpraySessionSchema = z
+  .object({ ...spraySessionFields, state: spraySessionStateSchema })
+  .partial()
+  .refine(endAfterStart, endAfterStartIssue);
+export type UpdateSpraySessionInput = z.infer<typeof updateSpraySessionSchema>;
+
+export const spraySessionQuerySchema = z.object({
+  from: isoInstantSchema.optional(),
+  to: isoInstantSchema.optional(),
+  boothId: z.coerce.number().int().positive().optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(1000).default(500),
+});
+export type SpraySessionQuery = z.infer<typeof spraySessionQuerySchema>;
+
+export const spraySessionSchema = z.object({
+  id: z.number().int(),
+  boothId: z.number().int(),
+  boothName: z.string(),
+  start: z.string(),
+  end: z.string(),
+  sprayerId: z.number().int().nullable(),
+  sprayerName: z.string().nullable(),
+  state: spraySessionStateSchema,
+  notes: z.string(),
+  items: z.array(z.object({ partId: z.number().int(), stepPosition: z.number().int().nullable() })),
+  overrideReason: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type SpraySession = z.infer<typeof spraySessionSchema>;

@@ -1,0 +1,137 @@
+import psychrolib from 'psychrolib';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
+
+let ctx: TestContext;
+let lead: SignedIn;
+let sprayer: SignedIn;
+let sessionId: number;
+let partIds: number[];
+let primerId: number;
+
+beforeAll(async () => {
+  psychrolib.SetUnitSystem(psychrolib.SI);
+  ctx = await startTestApp();
+  lead = await signIn(ctx.app, demo.lead);
+  sprayer = await signIn(ctx.app, demo.sprayer);
+  const booth = await lead.agent.post('/api/booths').set('x-csrf-token', lead.csrf).send({ name: 'Coat test booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 }).expect(201);
+  const session = await lead.agent
+    .post('/api/spray-sessions')
+    .set('x-csrf-token', lead.csrf)
+    .send({ boothId: booth.body.booth.id, start: '2027-03-01T09:00:00Z', end: '2027-03-01T12:00:00Z', sprayerId: 3 })
+    .expect(201);
+  sessionId = session.body.spraySession.id;
+  const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];
+  partIds = (await lead.agent.get(`/api/jobs/${job.id}/parts`)).body.items.slice(0, 2).map((p: { id: number }) => p.id);
+  primerId = (await lead.agent.get('/api/products?q=PU Primer')).body.items[0].id;
+});
+afterAll(async () => ctx.close());
+
+const coat = (overrides: object = {}) => ({
+  spraySessionId: sessionId,
+  partIds,
+  productId: primerId,
+  sprayedAt: '2027-03-01T09:15:00Z',
+  airTempC: 20,
+  relativeHumidityPct: 50,
+  surfaceTempC: 19,
+  thinningPct: 15,
+  wetFilmUm: 150,
+  ...overrides,
+});
+
+describe('POST /api/coats', () => {
+  it('records a coat with every computed time and its dry film', async () => {
+    const res = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat()).expect(201);
+    const c = res.body.coat;
+    // Dew point: PsychroLib (ASHRAE Handbook Fundamentals 2017 ch. 1) at 20 °C / 50 % RH; Magnus agrees within 0.05 °C.
+    expect(c.dewPointC).toBeCloseTo(psychrolib.GetTDewPointFromRelHum(20, 0.5), 1);
+    // DFT = WFT × VS / (100 + thinning %) (coatings makers' handy calculations): 150 × 45 / 115 = 58.7 µm.
+    expect(c.dryFilmUm).toBeCloseTo(58.7, 1);
+    // The demo primer's data sheet row at 20 °C: flash-off 10, recoat 120–1440 min, handle 180, pack 480, cure 168 h.
+    expect(c).toMatchObject({
+      stepPosition: 0,
+      dryingTempC: 20,
+      dryingMethod: 'exact-row',
+      flashOffEndsAt: '2027-03-01T09:25:00.000Z',
+      recoatOpensAt: '2027-03-01T11:15:00.000Z',
+      recoatClosesAt: '2027-03-02T09:15:00.000Z',
+      handleAt: '2027-03-01T12:15:00.000Z',
+      packAt: '2027-03-01T17:15:00.000Z',
+      fullCureAt: '2027-03-08T09:15:00.000Z',
+      partIds: [...partIds].sort((a, b) => a - b),
+      recordedByName: 'Mina Castell',
+      version: 1,
+    });
+    expect(c.warnings).toEqual([]);
+  });
+
+  it('records a coat made in poor conditions with its warnings and the reason given', async () => {
+    const res = await sprayer.agent
+      .post('/api/coats')
+      .set('x-csrf-token', sprayer.csrf)
+      .send(coat({ partIds: [partIds[0]], sprayedAt: '2027-03-01T11:30:00Z', relativeHumidityPct: 85, surfaceTempC: 18, acknowledgements: [{ code: 'relative-humidity', reason: 'Dehumidifier running, lead agreed' }] }))
+      .expect(201);
+    const codes = res.body.coat.warnings.map((w: { code: string }) => w.code);
+    expect(codes).toEqual(expect.arrayContaining(['relative-humidity', 'dew-point-margin']));
+    const humidity = res.body.coat.warnings.find((w: { code: string }) => w.code === 'relative-humidity');
+    expect(humidity.acknowledgedReason).toBe('Dehumidifier running, lead agreed');
+  });
+
+  it('returns the first record, not a second, when a device resends with the same idempotency key', async () => {
+    const body = coat({ partIds: [partIds[1]], sprayedAt: '2027-03-01T11:40:00Z', idempotencyKey: 'tablet-1-coat-0001' });
+    const first = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(body).expect(201);
+    const again = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(body).expect(200);
+    expect(again.body.coat.id).toBe(first.body.coat.id);
+    expect(again.body.replayed).toBe(true);
+  });
+
+  it('answers 400 naming the fields for impossible readings and unknown parts', async () => {
+    const res = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ relativeHumidityPct: 120, wetFilmUm: -5 })).expect(400);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['relativeHumidityPct', 'wetFilmUm']);
+    const unknown = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ partIds: [999999] })).expect(400);
+    expect(unknown.body.error.fields).toHaveProperty('partIds');
+  });
+
+  it('answers 403 to an assembler', async () => {
+    const assembler = await signIn(ctx.app, demo.assembler);
+    await assembler.agent.post('/api/coats').set('x-csrf-token', assembler.csrf).send(coat()).expect(403);
+  });
+});
+
+describe('corrections and the append-only record', () => {
+  it('makes a new version that points at the old one and keeps both', async () => {
+    const original = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ partIds: [partIds[0]], sprayedAt: '2027-03-01T11:50:00Z' })).expect(201);
+    const id = original.body.coat.id;
+    const fixed = await sprayer.agent.post(`/api/coats/${id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Wrong comb reading typed', wetFilmUm: 130 }).expect(201);
+    expect(fixed.body.coat).toMatchObject({ replacesId: id, version: 2, correctionReason: 'Wrong comb reading typed', wetFilmUm: 130 });
+    const old = await sprayer.agent.get(`/api/coats/${id}`).expect(200);
+    expect(old.body.coat).toMatchObject({ wetFilmUm: 150, supersededById: fixed.body.coat.id });
+    const current = await sprayer.agent.get(`/api/coats?spraySessionId=${sessionId}&pageSize=100`).expect(200);
+    const ids = current.body.items.map((c: { id: number }) => c.id);
+    expect(ids).toContain(fixed.body.coat.id);
+    expect(ids).not.toContain(id);
+    const history = await sprayer.agent.get(`/api/coats?spraySessionId=${sessionId}&history=true&pageSize=100`).expect(200);
+    expect(history.body.items.map((c: { id: number }) => c.id)).toContain(id);
+    await sprayer.agent.post(`/api/coats/${id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Again' }).expect(409);
+  });
+
+  it('refuses, in the database itself, to change or delete a coat record', async () => {
+    await expect(ctx.dataSource.query('UPDATE coats SET wet_film_um = 1')).rejects.toThrow(/append_only/);
+    await expect(ctx.dataSource.query('DELETE FROM coat_parts')).rejects.toThrow(/append_only/);
+    await expect(ctx.dataSource.query('DELETE FROM coats')).rejects.toThrow(/append_only/);
+  });
+});
+
+describe('GET /api/ready', () => {
+  it('shows each coated part’s state and when it can be handled', async () => {
+    const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];
+    const res = await lead.agent.get(`/api/ready?jobId=${job.id}`).expect(200);
+    const coated = res.body.items.find((p: { id: number }) => p.id === partIds[1]);
+    // This part had the primer, then (the idempotency test) a second coat taken as the next coat step.
+    expect(coated).toMatchObject({ jobId: job.id, state: 'in-finish', coatsDone: 2, coatsTotal: 3 });
+    expect(coated.handleAt).toMatch(/^2027-03-01T/);
+    const untouched = res.body.items.find((p: { id: number }) => !partIds.includes(p.id));
+    expect(untouched).toMatchObject({ state: 'waiting', handleAt: null, rack: null });
+  });
+});
