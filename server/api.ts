@@ -14,6 +14,7 @@ import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './ro
 import { spraySessionRoutes } from './routes/spray-sessions';
 import { createCoatService } from './services/coats';
 import type { EventBus } from './services/events';
+import { createMixService } from './services/mixes';
 import { createReadingService } from './services/readings';
 import { createReadyService } from './services/ready';
 import { createSpraySessionService } from './services/spray-sessions';
@@ -56,7 +57,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/finish-systems', masterDataRoutes({ resource: 'finishSystem', read: 'finish-systems:read', write: 'finish-systems:write', createSchema: createFinishSystemSchema, updateSchema: updateFinishSystemSchema, service: createFinishSystemService(dataSource, clock) }));
   api.use('/jobs', jobRoutes(createJobService(dataSource, clock), parts, createPartImportService(dataSource, parts), createEstimateService(dataSource)));
   api.use('/parts', partRoutes(parts));
-  api.use('/spray-sessions', spraySessionRoutes(createSpraySessionService(dataSource, settings, events, clock)));
+  api.use('/spray-sessions', spraySessionRoutes(createSpraySessionService(dataSource, settings, events, clock), createMixService(dataSource, clock)));
   api.use('/coats', coatRoutes(createCoatService(dataSource, settings, events, clock)));
   api.use('/ready', readyRoutes(createReadyService(dataSource, clock)));
   api.use('/readings', readingRoutes(readings));

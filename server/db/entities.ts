@@ -13,6 +13,7 @@ import { StoredFileEntity } from './entities/stored-file.entity';
 import { UserEntity } from './entities/user.entity';
 import { CoatPartEntity } from './entities/coat-part.entity';
 import { CoatEntity } from './entities/coat.entity';
+import { MixEntity } from './entities/mix.entity';
 import { ReadingEntity } from './entities/reading.entity';
 import { SpraySessionItemEntity } from './entities/spray-session-item.entity';
 import { SpraySessionEntity } from './entities/spray-session.entity';
@@ -36,4 +37,5 @@ export const entities = [
   CoatEntity,
   CoatPartEntity,
   ReadingEntity,
+  MixEntity,
 ];

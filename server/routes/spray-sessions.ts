@@ -5,13 +5,24 @@ import { createSpraySessionSchema, spraySessionQuerySchema, updateSpraySessionSc
 import { AppError } from '../lib/app-error';
 import { actorOf } from '../lib/actor';
 import { requirePermission } from '../middleware/permissions';
+import type { MixService } from '../services/mixes';
 import type { SpraySessionService } from '../services/spray-sessions';
+import { createMixSchema } from '../../shared/schemas/checklist';
 
 // What a sprayer may change on a session assigned to them: its progress, not its booking.
-const runnerFields = new Set(['state', 'notes']);
+const runnerFields = new Set(['state', 'notes', 'checklist']);
 
-export function spraySessionRoutes(sessions: SpraySessionService): Router {
+export function spraySessionRoutes(sessions: SpraySessionService, mixes: MixService): Router {
   const router = Router();
+
+  router.get('/:id/mixes', requirePermission('spray-sessions:read'), async (req, res) => {
+    res.json({ items: await mixes.list(idParamsSchema.parse(req.params).id) });
+  });
+
+  router.post('/:id/mixes', requirePermission('coats:write'), async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.status(201).json({ mix: await mixes.create(id, createMixSchema.parse(req.body), actorOf(req)) });
+  });
 
   router.get('/', requirePermission('spray-sessions:read'), async (req, res) => {
     res.json(await sessions.list(spraySessionQuerySchema.parse(req.query)));
@@ -33,7 +44,8 @@ export function spraySessionRoutes(sessions: SpraySessionService): Router {
       const onlyProgress = Object.keys(patch).every((key) => runnerFields.has(key));
       if (session.sprayerId !== req.user!.id || !onlyProgress) throw new AppError('forbidden', 'Sprayers may only move their own sessions through their steps; ask the finishing lead to rebook');
     }
-    res.json({ spraySession: await sessions.update(id, patch, actorOf(req)) });
+    const actor = { ...actorOf(req), mayOverride: can(req.user!.role, 'spray-sessions:write') };
+    res.json({ spraySession: await sessions.update(id, patch, actor) });
   });
 
   return router;

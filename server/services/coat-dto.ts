@@ -22,6 +22,7 @@ export async function toCoatDtos(manager: EntityManager, coats: CoatEntity[]): P
     productId: c.productId,
     productName: productName.get(c.productId) ?? '',
     lotId: c.lotId,
+    mixId: c.mixId,
     stepPosition: c.stepPosition,
     sprayedAt: c.sprayedAt,
     airTempC: c.airTempC,

@@ -1,7 +1,8 @@
 import { In, type EntityManager } from 'typeorm';
-import { computeCoatRecord, type CoatRecord } from '../../shared/finishing/coat-record';
+import { computeCoatRecord, type CoatRecord, type CoatWarning } from '../../shared/finishing/coat-record';
 import type { CreateCoatInput } from '../../shared/schemas/coat';
 import { calendarDateIn } from '../../shared/time';
+import { MixEntity } from '../db/entities/mix.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { ProductLotEntity } from '../db/entities/product-lot.entity';
 import { ProductEntity } from '../db/entities/product.entity';
@@ -42,6 +43,17 @@ async function lotExpired(manager: EntityManager, fields: CoatFields, timeZone: 
   return lot.expiresOn !== null && lot.expiresOn < calendarDateIn(new Date(fields.sprayedAt), timeZone);
 }
 
+/** A coat from a pot still standing, or past its pot life, is recorded with a stop to acknowledge. */
+async function mixWarnings(manager: EntityManager, fields: CoatFields): Promise<CoatWarning[]> {
+  if (fields.mixId === null) return [];
+  const mix = await manager.findOneBy(MixEntity, { id: fields.mixId });
+  if (!mix || mix.productId !== fields.productId) throw new AppError('validation_failed', 'That mix is not a mix of this product', { mixId: 'Choose a mix of the product sprayed' });
+  const sprayedAt = new Date(fields.sprayedAt).toISOString();
+  if (mix.potLifeEndsAt && sprayedAt > mix.potLifeEndsAt) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot was past its pot life when this coat went on.' }];
+  if (sprayedAt < mix.inductionEndsAt) return [{ code: 'induction-not-over', verdict: 'caution', message: 'The pot had not finished its induction (stand) time.' }];
+  return [];
+}
+
 /** Works out the step, the target film, the previous window and every computed value of a coat. */
 export async function prepareCoat(manager: EntityManager, fields: CoatFields, timeZone: string): Promise<{ record: CoatRecord; stepPosition: number | null; dryingTempC: number }> {
   const { product, parts } = await loadReferences(manager, fields);
@@ -69,6 +81,7 @@ export async function prepareCoat(manager: EntityManager, fields: CoatFields, ti
     previousWindow: latest ? { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt ? new Date(latest.recoatClosesAt) : null } : null,
     timeZone,
   });
+  record.warnings.push(...(await mixWarnings(manager, fields)));
   if (step?.kind === 'coat' && step.productId !== fields.productId) {
     record.warnings.push({ code: 'product-not-in-step', verdict: 'caution', message: 'This product is not the one the finish system names for this step.' });
   }

@@ -46,6 +46,7 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
         spraySessionId: fields.spraySessionId,
         productId: fields.productId,
         lotId: fields.lotId,
+        mixId: fields.mixId,
         stepPosition,
         sprayedAt: iso(new Date(fields.sprayedAt)),
         airTempC: fields.airTempC,

@@ -19,6 +19,7 @@ import { recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
 import type { SettingsService } from './settings';
 import { assertNoClash, assertOpen, assertSprayer } from './spray-session-rules';
+import { changeState, recordChecklist, type SessionActor } from './spray-session-progress';
 
 async function toDtos(manager: EntityManager, sessions: SpraySessionEntity[]): Promise<SpraySession[]> {
   const ids = sessions.map((s) => s.id);
@@ -43,6 +44,8 @@ async function toDtos(manager: EntityManager, sessions: SpraySessionEntity[]): P
     notes: s.notes,
     items: items.filter((i) => i.spraySessionId === s.id).map((i) => ({ partId: i.partId, stepPosition: i.stepPosition })),
     overrideReason: s.overrideReason,
+    checklist: s.checklist,
+    clearingStartedAt: s.clearingStartedAt,
     createdAt: s.createdAt,
     updatedAt: s.updatedAt,
   }));
@@ -105,7 +108,7 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
       return created;
     },
 
-    async update(id: number, patch: UpdateSpraySessionInput, actor: Actor): Promise<SpraySession> {
+    async update(id: number, patch: UpdateSpraySessionInput, actor: SessionActor): Promise<SpraySession> {
       const { timezone } = await settings.get();
       const now = clock.now().toISOString();
       const updated = await inTransaction(dataSource, async (manager) => {
@@ -126,8 +129,10 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
           assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
         }
         if ((moved || patch.state === 'planned') && (patch.state ?? session.state) !== 'cancelled') await assertNoClash(manager, slot, booth, timezone);
-        Object.assign(session, { ...slot, state: patch.state ?? session.state, notes: patch.notes ?? session.notes, updatedAt: now });
+        Object.assign(session, { ...slot, notes: patch.notes ?? session.notes, updatedAt: now });
         if (patch.override) session.overrideReason = patch.override.reason;
+        if (patch.checklist) session.checklist = await recordChecklist(manager, session, booth, patch.checklist, actor);
+        if (patch.state && patch.state !== session.state) changeState(session, patch.state, now);
         await manager.save(session);
         if (patch.items) await writeItems(manager, id, patch.items);
         const summary = `Changed spray session ${id} on ${booth.name}${patch.state ? ` (now ${patch.state})` : ''}`;

@@ -19,6 +19,7 @@ const coatFields = {
   /** Which step of the parts' finish system this coat is; null lets the server take the next coat step. */
   stepPosition: z.number().int().min(0).nullable(),
   lotId: z.number().int().positive().nullable(),
+  mixId: z.number().int().positive().nullable(),
   /** Where the parts dry; null means the rack's temperature if heated, else the air temperature. */
   dryingTempC: z.number().min(0).max(80).nullable(),
   acknowledgements: z.array(acknowledgementSchema).max(20),
@@ -33,6 +34,7 @@ export const createCoatSchema = z.object({
   wetFilmUm: coatFields.wetFilmUm.default(null),
   stepPosition: coatFields.stepPosition.default(null),
   lotId: coatFields.lotId.default(null),
+  mixId: coatFields.mixId.default(null),
   dryingTempC: coatFields.dryingTempC.default(null),
   acknowledgements: coatFields.acknowledgements.default([]),
   notes: coatFields.notes.default(''),
@@ -56,6 +58,7 @@ export const coatSchema = z.object({
   productId: z.number().int(),
   productName: z.string(),
   lotId: z.number().int().nullable(),
+  mixId: z.number().int().nullable(),
   stepPosition: z.number().int().nullable(),
   sprayedAt: z.string(),
   airTempC: z.number(),

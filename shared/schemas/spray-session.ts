@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { checklistResultSchema, checklistSchema } from './checklist';
 import { isoInstantSchema } from './common';
 
 export const spraySessionStates = ['planned', 'checking', 'spraying', 'clearing', 'done', 'cancelled'] as const;
@@ -48,7 +49,7 @@ export const createSpraySessionSchema = z
 export type CreateSpraySessionInput = z.input<typeof createSpraySessionSchema>;
 
 export const updateSpraySessionSchema = z
-  .object({ ...spraySessionFields, state: spraySessionStateSchema })
+  .object({ ...spraySessionFields, state: spraySessionStateSchema, checklist: checklistSchema })
   .partial()
   .refine(endAfterStart, endAfterStartIssue);
 export type UpdateSpraySessionInput = z.infer<typeof updateSpraySessionSchema>;
@@ -74,6 +75,9 @@ export const spraySessionSchema = z.object({
   notes: z.string(),
   items: z.array(z.object({ partId: z.number().int(), stepPosition: z.number().int().nullable() })),
   overrideReason: z.string().nullable(),
+  checklist: checklistResultSchema.nullable(),
+  /** When spraying stopped and the air started to clear; the clearance countdown runs from here. */
+  clearingStartedAt: z.string().nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

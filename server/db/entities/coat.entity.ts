@@ -29,6 +29,9 @@ export class CoatEntity {
   @Column({ type: 'integer', nullable: true })
   stepPosition: number | null;
 
+  @Column({ type: 'integer', nullable: true })
+  mixId: number | null;
+
   @Index()
   @Column({ type: 'varchar', length: 30 })
   sprayedAt: string;

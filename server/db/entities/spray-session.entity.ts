@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import type { ChecklistResult } from '../../../shared/schemas/checklist';
 import type { SpraySessionState } from '../../../shared/schemas/spray-session';
 
 /** A booked slot of one booth. Overlaps are refused by the service and, as a last line, by a trigger. */
@@ -29,10 +30,13 @@ export class SpraySessionEntity {
   notes: string;
 
   @Column({ type: 'simple-json', nullable: true })
-  checklist: Record<string, unknown> | null;
+  checklist: ChecklistResult | null;
 
   @Column({ type: 'text', nullable: true })
   overrideReason: string | null;
+
+  @Column({ type: 'varchar', length: 30, nullable: true })
+  clearingStartedAt: string | null;
 
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;
