@@ -1,4 +1,4 @@
-import { Table, TableColumn, TableForeignKey, type MigrationInterface, type QueryRunner } from 'typeorm';
+import { Table, TableForeignKey, type MigrationInterface, type QueryRunner } from 'typeorm';
 import { idColumn, instantColumn, intColumn, realColumn, textColumn } from './table-columns';
 
 export class MixesAndChecklists1764680000000 implements MigrationInterface {
@@ -31,8 +31,9 @@ export class MixesAndChecklists1764680000000 implements MigrationInterface {
         indices: [{ name: 'IDX_mixes_session', columnNames: ['spray_session_id'] }],
       }),
     );
-    await queryRunner.addColumn('spray_sessions', new TableColumn(instantColumn('clearing_started_at', true)));
-    await queryRunner.addColumn('coats', new TableColumn(intColumn('mix_id', true)));
+    // Plain ALTER TABLE: TypeORM's addColumn rebuilds a SQLite table, which would drop its guard triggers.
+    await queryRunner.query('ALTER TABLE spray_sessions ADD COLUMN clearing_started_at varchar(30)');
+    await queryRunner.query('ALTER TABLE coats ADD COLUMN mix_id integer');
     if (queryRunner.connection.options.type === 'postgres') {
       await queryRunner.createForeignKey('coats', new TableForeignKey({ columnNames: ['mix_id'], referencedTableName: 'mixes', referencedColumnNames: ['id'] }));
       await queryRunner.query('CREATE TRIGGER mixes_append_only BEFORE UPDATE OR DELETE ON mixes FOR EACH ROW EXECUTE FUNCTION boothwright_append_only()');
