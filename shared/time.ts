@@ -16,17 +16,19 @@ export interface WallClock {
 }
 
 /** What a wall clock and calendar in `timeZone` show at `instant` (DST included, via the platform's zone data). */
+// Building a formatter is far slower than using one; the planner reads the wall clock thousands of times.
+const wallClockFormats = new Map<string, Intl.DateTimeFormat>();
+function wallClockFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = wallClockFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-GB', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit', weekday: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+    wallClockFormats.set(timeZone, format);
+  }
+  return format;
+}
+
 export function wallClockIn(instant: Date, timeZone: string): WallClock {
-  const parts = new Intl.DateTimeFormat('en-GB', {
-    timeZone,
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    weekday: 'short',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).formatToParts(instant);
+  const parts = wallClockFormat(timeZone).formatToParts(instant);
   const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? '';
   return { date: `${part('year')}-${part('month')}-${part('day')}`, isoWeekday: weekdayNumbers[part('weekday')], time: `${part('hour')}:${part('minute')}` };
 }

@@ -60,6 +60,24 @@ async function writeItems(manager: EntityManager, sessionId: number, items: { pa
   if (items.length) await manager.insert(SpraySessionItemEntity, items.map((i) => ({ spraySessionId: sessionId, partId: i.partId, stepPosition: i.stepPosition })));
 }
 
+type SessionFields = ReturnType<typeof createSpraySessionSchema.parse>;
+
+async function insertSession(manager: EntityManager, fields: SessionFields, actor: Actor, timezone: string, now: string): Promise<SpraySessionEntity> {
+  const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
+  const booth = await manager.findOneBy(BoothEntity, { id: fields.boothId });
+  if (!booth) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
+  await assertSprayer(manager, fields.sprayerId);
+  assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
+  await assertNoClash(manager, slot, booth, timezone);
+  const session = await manager.save(
+    manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
+  );
+  await writeItems(manager, session.id, fields.items);
+  const summary = `Booked ${booth.name} ${slot.startAt}–${slot.endAt}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;
+  await recordAudit(manager, actor, { action: 'create', entity: 'spray-session', entityId: session.id, summary }, new Date(now));
+  return session;
+}
+
 export function createSpraySessionService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
   async function boothOrFail(manager: EntityManager, boothId: number): Promise<BoothEntity> {
     const booth = await manager.findOneBy(BoothEntity, { id: boothId });
@@ -89,22 +107,21 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
     async create(input: CreateSpraySessionInput, actor: Actor): Promise<SpraySession> {
       const fields = createSpraySessionSchema.parse(input);
       const { timezone } = await settings.get();
-      const now = clock.now().toISOString();
-      const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
-      const created = await inTransaction(dataSource, async (manager) => {
-        const booth = await boothOrFail(manager, fields.boothId);
-        await assertSprayer(manager, fields.sprayerId);
-        assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
-        await assertNoClash(manager, slot, booth, timezone);
-        const session = await manager.save(
-          manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, createdAt: now, updatedAt: now }),
-        );
-        await writeItems(manager, session.id, fields.items);
-        const summary = `Booked ${booth.name} ${slot.startAt}–${slot.endAt}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;
-        await recordAudit(manager, actor, { action: 'create', entity: 'spray-session', entityId: session.id, summary }, new Date(now));
-        return getWith(manager, session.id);
-      });
+      const created = await inTransaction(dataSource, async (manager) => getWith(manager, (await insertSession(manager, fields, actor, timezone, clock.now().toISOString())).id));
       events.publish({ type: 'spray-session.changed', id: created.id });
+      return created;
+    },
+
+    /** Books every session of an accepted plan, or none of them. */
+    async createAll(inputs: CreateSpraySessionInput[], actor: Actor): Promise<SpraySession[]> {
+      const all = inputs.map((input) => createSpraySessionSchema.parse(input));
+      const { timezone } = await settings.get();
+      const created = await inTransaction(dataSource, async (manager) => {
+        const sessions: SpraySessionEntity[] = [];
+        for (const fields of all) sessions.push(await insertSession(manager, fields, actor, timezone, clock.now().toISOString()));
+        return toDtos(manager, sessions);
+      });
+      for (const session of created) events.publish({ type: 'spray-session.changed', id: session.id });
       return created;
     },
 
