@@ -11,6 +11,8 @@ import { apiNotFound } from './middleware/error-handler';
 import { sensorAuth } from './middleware/sensor-auth';
 import { coatRoutes } from './routes/coats';
 import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './routes/live';
+import type { NotificationRuntime } from './mail/notifications-runtime';
+import { notificationRoutes } from './routes/notifications';
 import { plannerRoutes } from './routes/planner';
 import { spraySessionRoutes } from './routes/spray-sessions';
 import { createCoatService } from './services/coats';
@@ -39,7 +41,7 @@ import { createSettingsService } from './services/settings';
 import { createUserService } from './services/users';
 
 /** Every /api route behind sign-in and CSRF, wired to its service. */
-export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock: Clock, auth: passport.PassportStatic, events: EventBus): Router {
+export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock: Clock, auth: passport.PassportStatic, events: EventBus, notifications?: NotificationRuntime): Router {
   const api = Router();
   const readings = createReadingService(dataSource, events, clock);
   api.use(sensorAuth(readings), requireCsrf);
@@ -67,6 +69,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/readings', readingRoutes(readings));
   api.use('/booths', sensorTokenRoutes(readings));
   api.use('/events', eventRoutes(events));
+  api.use(notificationRoutes(notifications));
   api.use(apiNotFound);
   return api;
 }

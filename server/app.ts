@@ -14,6 +14,7 @@ import { securityHeaders } from './middleware/security';
 import { sessionMiddleware } from './middleware/session';
 import { buildOpenApiDocument } from './openapi';
 import { EventBus } from './services/events';
+import type { NotificationRuntime } from './mail/notifications-runtime';
 
 export interface AppDeps {
   dataSource: DataSource;
@@ -23,6 +24,8 @@ export interface AppDeps {
   logger?: Logger;
   /** The change feed behind GET /api/events; tests pass their own to listen in. */
   events?: EventBus;
+  /** E-mail and its scheduler; started by the process entry, or by a test that wants them. */
+  notifications?: NotificationRuntime;
   /** Folder of the built client; served with an SPA fallback when it exists. */
   clientDir?: string;
 }
@@ -46,7 +49,7 @@ export function createApp(deps: AppDeps): Express {
 
   const auth = configurePassport(dataSource);
   app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware(dataSource, deps.sessionSecret, config.trustProxy), auth.initialize(), auth.session());
-  app.use('/api', buildApiRouter(dataSource, config, clock, auth, deps.events ?? new EventBus()));
+  app.use('/api', buildApiRouter(dataSource, config, clock, auth, deps.events ?? new EventBus(), deps.notifications));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
   app.use(errorHandler);

@@ -1,6 +1,7 @@
 import path from 'node:path';
 import pino from 'pino';
 import { createApp } from './app';
+import { startNotifications } from './mail/notifications-runtime';
 import { loadConfig } from './config/env';
 import { resolveSessionSecret } from './config/session-secret';
 import { openDataSource } from './db/data-source';
@@ -14,7 +15,8 @@ async function main(): Promise<void> {
   // Several instances on PostgreSQL must share SESSION_SECRET; one machine can keep its own beside the data.
   const dataDir = config.database.kind === 'sqlite' ? path.dirname(path.resolve(config.database.path)) : path.resolve('data');
   const sessionSecret = resolveSessionSecret(config.sessionSecret, dataDir);
-  const app = createApp({ dataSource, config, sessionSecret, logger, clientDir: path.resolve('dist/client') });
+  const notifications = await startNotifications(dataSource, config, logger, { schedule: true });
+  const app = createApp({ dataSource, config, sessionSecret, logger, notifications, clientDir: path.resolve('dist/client') });
   const server = app.listen(config.port, config.host, () => {
     void announce(config.port, dataSource);
   });
@@ -22,7 +24,10 @@ async function main(): Promise<void> {
   const shutdown = (signal: string) => {
     logger.info({ signal }, 'shutting down');
     server.close(() => {
-      void dataSource.destroy().finally(() => process.exit(0));
+      void notifications
+        .stop()
+        .then(() => dataSource.destroy())
+        .finally(() => process.exit(0));
     });
     // Open keep-alive connections must not hold the process past a few seconds.
     setTimeout(() => process.exit(0), 5000).unref();

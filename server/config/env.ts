@@ -19,6 +19,10 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   UPLOAD_DIR: z.string().default(path.join('data', 'uploads')),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  SMTP_URL: z.preprocess((v) => (v === '' ? undefined : v), z.string().regex(/^smtps?:\/\//, 'SMTP_URL must start with smtp:// or smtps://').optional()),
+  MAIL_FROM: z.string().default('Boothwright <boothwright@localhost>'),
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  RECOAT_WARNING_HOURS: z.coerce.number().min(0.25).max(48).default(2),
 });
 
 export type DatabaseConfig = { kind: 'sqlite'; path: string } | { kind: 'postgres'; url: string };
@@ -35,6 +39,11 @@ export interface AppConfig {
   logLevel: string;
   uploadDir: string;
   loginRateLimit: number;
+  /** Unset: the app starts its own fake SMTP server on FAKE_SMTP_PORT (0 = any free port). */
+  smtpUrl: string | undefined;
+  mailFrom: string;
+  fakeSmtpPort: number;
+  recoatWarningHours: number;
 }
 
 export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
@@ -54,6 +63,10 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     logLevel: env.LOG_LEVEL,
     uploadDir: env.UPLOAD_DIR,
     loginRateLimit: env.LOGIN_RATE_LIMIT,
+    smtpUrl: env.SMTP_URL,
+    mailFrom: env.MAIL_FROM,
+    fakeSmtpPort: env.FAKE_SMTP_PORT,
+    recoatWarningHours: env.RECOAT_WARNING_HOURS,
   };
 }
 

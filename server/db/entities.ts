@@ -14,6 +14,7 @@ import { UserEntity } from './entities/user.entity';
 import { CoatPartEntity } from './entities/coat-part.entity';
 import { CoatEntity } from './entities/coat.entity';
 import { MixEntity } from './entities/mix.entity';
+import { NotificationEntity } from './entities/notification.entity';
 import { ReadingEntity } from './entities/reading.entity';
 import { SpraySessionItemEntity } from './entities/spray-session-item.entity';
 import { SpraySessionEntity } from './entities/spray-session.entity';
@@ -38,4 +39,5 @@ export const entities = [
   CoatPartEntity,
   ReadingEntity,
   MixEntity,
+  NotificationEntity,
 ];

@@ -1,6 +1,7 @@
 import { inTransaction } from '../db/transaction';
 import type { DataSource } from 'typeorm';
 import type { SessionUser } from '../../shared/schemas/auth';
+import { defaultNotifyPrefs } from '../../shared/schemas/notification';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
 import { createUserSchema } from '../../shared/schemas/user';
@@ -12,7 +13,7 @@ import { paginate } from '../lib/paginate';
 import { changedFields, recordAudit, type Actor } from './audit';
 
 export function toSessionUser(user: UserEntity): SessionUser {
-  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, notify: user.notify ?? defaultNotifyPrefs(user.role) };
 }
 
 export function toUserDto(user: UserEntity): User {

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { roles } from '../permissions';
 import { unitSystemSchema } from './common';
+import { notifyPrefsSchema } from './notification';
 
 export const roleSchema = z.enum(roles, { error: 'Choose a role' });
 
@@ -16,6 +17,7 @@ export const sessionUserSchema = z.object({
   name: z.string(),
   role: roleSchema,
   units: unitSystemSchema,
+  notify: notifyPrefsSchema.optional(),
 });
 export type SessionUser = z.infer<typeof sessionUserSchema>;
 

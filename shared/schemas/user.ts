@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { roleSchema } from './auth';
 import { unitSystemSchema } from './common';
+import { notifyPrefsSchema } from './notification';
 
 export const userSchema = z.object({
   id: z.number().int(),
@@ -37,6 +38,6 @@ export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
 /** What any signed-in user may change about themselves. */
 export const updateMeSchema = z
-  .object({ name: z.string().trim().min(1, 'Enter a name').max(120), units: unitSystemSchema })
+  .object({ name: z.string().trim().min(1, 'Enter a name').max(120), units: unitSystemSchema, notify: notifyPrefsSchema })
   .partial();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;

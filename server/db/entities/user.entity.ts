@@ -1,6 +1,7 @@
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import type { Role } from '../../../shared/permissions';
 import type { UnitSystem } from '../../../shared/schemas/common';
+import type { NotifyPrefs } from '../../../shared/schemas/notification';
 
 @Entity({ name: 'users' })
 export class UserEntity {
@@ -24,6 +25,10 @@ export class UserEntity {
 
   @Column({ type: 'boolean', default: false })
   disabled: boolean;
+
+  /** What the user is e-mailed about; null means their role's defaults. */
+  @Column({ type: 'simple-json', nullable: true })
+  notify: NotifyPrefs | null;
 
   /** ISO 8601 UTC instants, stored as text so SQLite and PostgreSQL sort and compare them alike. */
   @Column({ type: 'varchar', length: 30 })

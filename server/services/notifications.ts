@@ -1,0 +1,58 @@
+import { IsNull, type DataSource } from 'typeorm';
+import type { Notification } from '../../shared/schemas/notification';
+import { NotificationEntity } from '../db/entities/notification.entity';
+import { UserEntity } from '../db/entities/user.entity';
+import type { Mailer } from '../mail/mailer';
+import { notificationRules, type DueNotification } from './notification-rules';
+import type { SettingsService } from './settings';
+
+export interface NotificationOptions {
+  recoatWarningHours: number;
+}
+
+/**
+ * Each tick decides what is due from the data itself (so a notification that fell due while
+ * the server was down is found on the next tick), records it once under its dedupe key, then
+ * sends every recorded one not yet sent.
+ */
+export function createNotificationService(dataSource: DataSource, settings: SettingsService, mailer: Mailer, options: NotificationOptions) {
+  async function record(due: DueNotification[]): Promise<void> {
+    if (due.length === 0) return;
+    // ON CONFLICT DO NOTHING on the unique key: deciding twice records once.
+    await dataSource.createQueryBuilder().insert().into(NotificationEntity).values(due.map((d) => ({ ...d, sentAt: null, lastError: null }))).orIgnore().execute();
+  }
+
+  async function sendOwed(): Promise<number> {
+    const owed = await dataSource.getRepository(NotificationEntity).find({ where: { sentAt: IsNull() }, order: { id: 'ASC' }, take: 100 });
+    const users = new Map((await dataSource.getRepository(UserEntity).find()).map((u) => [u.id, u]));
+    let sent = 0;
+    for (const n of owed) {
+      const user = users.get(n.userId);
+      try {
+        if (user && !user.disabled) await mailer.send({ to: `${user.name} <${user.email}>`, subject: n.subject, text: n.body });
+        await dataSource.getRepository(NotificationEntity).update({ id: n.id }, { sentAt: new Date().toISOString(), lastError: null });
+        sent++;
+      } catch (error) {
+        await dataSource.getRepository(NotificationEntity).update({ id: n.id }, { lastError: (error as Error).message.slice(0, 500) });
+      }
+    }
+    return sent;
+  }
+
+  return {
+    async tick(now: Date): Promise<{ sent: number }> {
+      const shop = await settings.get();
+      const users = await dataSource.getRepository(UserEntity).find();
+      const ctx = { manager: dataSource.manager, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users };
+      for (const rule of notificationRules) await record(await rule(ctx));
+      return { sent: await sendOwed() };
+    },
+
+    async recentFor(userId: number): Promise<Notification[]> {
+      const rows = await dataSource.getRepository(NotificationEntity).find({ where: { userId }, order: { id: 'DESC' }, take: 50 });
+      return rows.map(({ id, kind, subject, body, dueAt, sentAt }) => ({ id, kind, subject, body, dueAt, sentAt }));
+    },
+  };
+}
+
+export type NotificationService = ReturnType<typeof createNotificationService>;
