@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { loadConfig } from '../config/env';
+import { backupSqlite, restoreSqlite } from './backup';
 import { openDataSource } from './data-source';
 import { demoSignInLines, seedDemoShop } from './seed';
 
@@ -21,9 +22,27 @@ async function generate(name: string | undefined): Promise<void> {
   console.log(`Wrote ${file}; add ${className} to server/db/migrations.ts.`);
 }
 
+function sqlitePath(): string {
+  const { database } = loadConfig();
+  if (database.kind !== 'sqlite') throw new Error('Backups here are for the SQLite file; for PostgreSQL use pg_dump and pg_restore.');
+  return database.path;
+}
+
+async function backup(): Promise<void> {
+  console.log(`Backed up to ${await backupSqlite(sqlitePath(), path.join(path.dirname(path.resolve(sqlitePath())), 'backups'))}`);
+}
+
+function restore(file: string | undefined): void {
+  if (!file) throw new Error('Usage: npm run restore -- <backup file>   (stop the server first)');
+  restoreSqlite(file, sqlitePath());
+  console.log(`Restored ${file} to ${sqlitePath()}. Start the server again.`);
+}
+
 async function run(command: string | undefined, arg: string | undefined): Promise<void> {
   const config = loadConfig();
   if (command === 'generate') return generate(arg);
+  if (command === 'backup') return backup();
+  if (command === 'restore') return restore(arg);
   const dataSource = await openDataSource(config.database, { migrate: true });
   try {
     if (command === 'migrate') {

@@ -11,9 +11,9 @@ export const partFieldsSchema = z.object({
   lengthMm: mm('length'),
   widthMm: mm('width'),
   thicknessMm: z.number({ error: 'Enter the thickness in mm' }).positive('The thickness must be more than 0').max(500, 'The thickness looks too big for mm'),
-  quantity: z.number().int('Whole pieces only').min(1, 'At least one piece').max(10000),
+  quantity: z.number({ error: 'Enter the quantity as a whole number' }).int('Whole pieces only').min(1, 'At least one piece').max(10000),
   faces: partFacesSchema,
-  edges: z.boolean(),
+  edges: z.boolean({ error: 'Say whether the edges are coated: yes or no' }),
   rackId: z.number().int().positive().nullable(),
   shelf: z.number().int().min(1, 'Shelves count from 1').nullable(),
 });
@@ -54,7 +54,8 @@ export const importMappingSchema = z.record(z.string(), z.string()).default({});
 export const importResultSchema = z.object({
   saved: z.boolean(),
   rowCount: z.number().int(),
-  preview: z.array(createPartSchema.extend({ row: z.number().int() }).partial()),
+  /** Rows as read: a bad row comes back as the file had it, so the person can see what to fix. */
+  preview: z.array(z.object({ row: z.number().int() }).catchall(z.unknown())),
   errors: z.array(importRowErrorSchema),
   headers: z.array(z.string()),
   items: z.array(partSchema),

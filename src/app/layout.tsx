@@ -57,10 +57,10 @@ export function AppLayout() {
 
   return (
     <div className="min-h-dvh">
-      <a href="#main" className="sr-only z-50 rounded-panel bg-white px-4 py-3 font-semibold text-lacquer-900 focus:not-sr-only focus:fixed focus:top-2 focus:left-2">
+      <a href="#main" className="sr-only z-50 print:hidden rounded-panel bg-white px-4 py-3 font-semibold text-lacquer-900 focus:not-sr-only focus:fixed focus:top-2 focus:left-2">
         Skip to main content
       </a>
-      <header className="sticky top-0 z-30 bg-lacquer-800 text-white shadow">
+      <header className="sticky top-0 z-30 bg-lacquer-800 text-white shadow print:hidden">
         <div className="flex min-h-16 items-center justify-between gap-3 px-4 lg:px-6">
           <Link to="/" className="rounded-panel py-1 focus-visible:outline-maple-100">
             <Wordmark />
@@ -84,8 +84,8 @@ export function AppLayout() {
           </div>
         )}
       </header>
-      <div className="lg:flex lg:min-h-[calc(100dvh-4rem)]">
-        <div className="lg:w-60 lg:shrink-0 lg:border-r lg:border-maple-300 lg:bg-maple-100">
+      <div className="lg:flex lg:min-h-[calc(100dvh-4rem)] print:block">
+        <div className="lg:w-60 lg:shrink-0 lg:border-r lg:border-maple-300 lg:bg-maple-100 print:hidden">
           <nav
             id="main-nav"
             aria-label="Main"
@@ -98,7 +98,7 @@ export function AppLayout() {
             </div>
           </nav>
         </div>
-        <main id="main" ref={mainRef} tabIndex={-1} className="min-w-0 flex-1 px-4 py-6 focus:outline-none sm:px-6 lg:px-8">
+        <main id="main" ref={mainRef} tabIndex={-1} className="min-w-0 flex-1 px-4 py-6 focus:outline-none sm:px-6 lg:px-8 print:p-0">
           <Outlet />
         </main>
       </div>

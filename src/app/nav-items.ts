@@ -17,8 +17,15 @@ const groups: NavGroup[] = [
     label: 'Workshop',
     items: [
       { to: '/', label: 'Today', end: true },
+      { to: '/planner', label: 'Booth planner', permission: 'spray-sessions:read' },
+      { to: '/spray-sessions', label: 'Spray sessions', permission: 'spray-sessions:read' },
+      { to: '/coat-log', label: 'Coat log', permission: 'coats:read' },
+      { to: '/ready', label: 'Ready board', permission: 'ready:read' },
+      { to: '/jobs', label: 'Jobs', permission: 'jobs:read' },
       { to: '/booths', label: 'Booths', permission: 'booths:read' },
       { to: '/racks', label: 'Racks', permission: 'racks:read' },
+      { to: '/data-sheets', label: 'Data sheets', permission: 'products:read' },
+      { to: '/finish-systems', label: 'Finish systems', permission: 'finish-systems:read' },
       { to: '/calculator', label: 'Calculator', permission: 'calculator:use' },
       { to: '/activity', label: 'Activity log', permission: 'audit:read' },
     ],
@@ -29,6 +36,7 @@ const groups: NavGroup[] = [
       { to: '/settings/preferences', label: 'My preferences' },
       { to: '/settings/shop', label: 'Shop', permission: 'settings:read' },
       { to: '/settings/users', label: 'Users', permission: 'users:read' },
+      { to: '/settings/mailbox', label: 'Mailbox', permission: 'users:read' },
     ],
   },
 ];

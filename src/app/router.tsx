@@ -3,6 +3,7 @@ import { AppLayout } from './layout';
 import { RequireAuth } from './require-auth';
 import { RouteError } from './route-error';
 import { NotFoundRoute } from './routes/not-found-route';
+import { ReadyWallError } from './routes/ready-wall-error';
 import { TodayRoute } from './routes/today-route';
 
 const errorElement = <RouteError />;
@@ -12,8 +13,22 @@ const appRoutes: RouteObject[] = [
   { index: true, element: <TodayRoute />, errorElement },
   { path: 'booths', errorElement, lazy: () => import('./routes/booths-route').then((m) => ({ Component: m.BoothsRoute })) },
   { path: 'racks', errorElement, lazy: () => import('./routes/racks-route').then((m) => ({ Component: m.RacksRoute })) },
+  { path: 'planner', errorElement, lazy: () => import('./routes/planner-route').then((m) => ({ Component: m.PlannerRoute })) },
+  { path: 'spray-sessions', errorElement, lazy: () => import('./routes/spray-sessions-route').then((m) => ({ Component: m.SpraySessionsRoute })) },
+  { path: 'spray-sessions/:id', errorElement, lazy: () => import('./routes/spray-session-route').then((m) => ({ Component: m.SpraySessionRoute })) },
+  { path: 'coat-log', errorElement, lazy: () => import('./routes/coat-log-route').then((m) => ({ Component: m.CoatLogRoute })) },
   { path: 'calculator', errorElement, lazy: () => import('./routes/calculator-route').then((m) => ({ Component: m.CalculatorRoute })) },
   { path: 'activity', errorElement, lazy: () => import('./routes/activity-route').then((m) => ({ Component: m.ActivityRoute })) },
+  { path: 'data-sheets', errorElement, lazy: () => import('./routes/data-sheets-route').then((m) => ({ Component: m.DataSheetsRoute })) },
+  { path: 'data-sheets/new', errorElement, lazy: () => import('./routes/new-product-route').then((m) => ({ Component: m.NewProductRoute })) },
+  { path: 'data-sheets/:id', errorElement, lazy: () => import('./routes/product-route').then((m) => ({ Component: m.ProductRoute })) },
+  { path: 'finish-systems', errorElement, lazy: () => import('./routes/finish-systems-route').then((m) => ({ Component: m.FinishSystemsRoute })) },
+  { path: 'jobs', errorElement, lazy: () => import('./routes/jobs-route').then((m) => ({ Component: m.JobsRoute })) },
+  { path: 'jobs/:id', errorElement, lazy: () => import('./routes/job-route').then((m) => ({ Component: m.JobRoute })) },
+  { path: 'jobs/:id/import', errorElement, lazy: () => import('./routes/job-import-route').then((m) => ({ Component: m.JobImportRoute })) },
+  { path: 'jobs/:id/tags', errorElement, lazy: () => import('./routes/job-tags-route').then((m) => ({ Component: m.JobTagsRoute })) },
+  { path: 'parts/:id', errorElement, lazy: () => import('./routes/part-route').then((m) => ({ Component: m.PartRoute })) },
+  { path: 'ready', errorElement, lazy: () => import('./routes/ready-route').then((m) => ({ Component: m.ReadyRoute })) },
   {
     path: 'settings',
     errorElement,
@@ -22,6 +37,7 @@ const appRoutes: RouteObject[] = [
       { path: 'preferences', errorElement, lazy: () => import('./routes/preferences-route').then((m) => ({ Component: m.PreferencesRoute })) },
       { path: 'shop', errorElement, lazy: () => import('./routes/shop-settings-route').then((m) => ({ Component: m.ShopSettingsRoute })) },
       { path: 'users', errorElement, lazy: () => import('./routes/users-route').then((m) => ({ Component: m.UsersRoute })) },
+      { path: 'mailbox', errorElement, lazy: () => import('./routes/mailbox-route').then((m) => ({ Component: m.MailboxRoute })) },
     ],
   },
   { path: '*', element: <NotFoundRoute />, errorElement },
@@ -39,6 +55,12 @@ export const routes: RouteObject[] = [
         errorElement,
         // A pathless child so a page's error shows inside the shell, with the navigation still there.
         children: [{ errorElement, children: appRoutes }],
+      },
+      // The wall screen sits outside the shell (no navigation) and recovers from its own errors.
+      {
+        path: 'ready/wall',
+        errorElement: <ReadyWallError />,
+        lazy: () => import('./routes/ready-wall-route').then((m) => ({ Component: m.ReadyWallRoute })),
       },
     ],
   },

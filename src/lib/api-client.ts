@@ -107,14 +107,16 @@ async function parseBody<S extends z.ZodType>(response: Response, schema: S): Pr
 
 async function send(method: Method, path: string, options: RequestOptions, retried = false): Promise<Response> {
   const headers: Record<string, string> = { accept: 'application/json' };
-  if (options.body !== undefined) headers['content-type'] = 'application/json';
+  // FormData goes as it is, so the browser writes the multipart content-type with its boundary.
+  const isForm = options.body instanceof FormData;
+  if (options.body !== undefined && !isForm) headers['content-type'] = 'application/json';
   if (method !== 'GET') headers['x-csrf-token'] = await getCsrfToken();
 
   const response = await safeFetch(buildUrl(path, options.query), {
     method,
     headers,
     credentials: 'same-origin',
-    body: options.body === undefined ? undefined : JSON.stringify(options.body),
+    body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
     signal: options.signal,
   });
   if (response.ok) return response;
@@ -142,4 +144,6 @@ export const apiClient = {
   get: <S extends z.ZodType>(path: string, schema: S, options?: Omit<RequestOptions, 'body'>) => apiRequest('GET', path, schema, options),
   post: <S extends z.ZodType>(path: string, body: unknown, schema: S) => apiRequest('POST', path, schema, { body }),
   patch: <S extends z.ZodType>(path: string, body: unknown, schema: S) => apiRequest('PATCH', path, schema, { body }),
+  /** Multipart upload (files); same CSRF, credentials and error handling as the JSON calls. */
+  postForm: <S extends z.ZodType>(path: string, formData: FormData, schema: S) => apiRequest('POST', path, schema, { body: formData }),
 };

@@ -12,12 +12,19 @@ export const roleIntro: Record<Role, string> = {
   admin: 'Run the shop: people, booths, racks and settings.',
   lead: 'Set up the booths and racks the plan will run on.',
   sprayer: 'Look up the booths and racks, and work out the numbers before you spray.',
-  assembler: 'Look up the racks and booths. The ready board you will use most is still to come.',
+  assembler: 'See which parts you can pick up and when the rest will be ready, and mark them collected.',
 };
 
 export const readyCards: ReadyCard[] = [
+  { to: '/planner', title: 'Booth planner', text: 'A week and day calendar of spray sessions per booth: book, move and check the safety cautions.', permission: 'spray-sessions:read' },
+  { to: '/spray-sessions', title: 'Spray sessions', text: 'Your sessions today and this week: pre-spray checks, cautions, mixes with pot-life countdowns, coat entry and the clearance countdown.', permission: 'spray-sessions:read' },
+  { to: '/coat-log', title: 'Coat log', text: 'Every coat with its film, conditions, warnings and who sprayed it; corrections and CSV export.', permission: 'coats:read' },
+  { to: '/ready', title: 'Ready board', text: 'Parts by job or rack, with live countdowns to handle, pack and full cure; mark parts collected.', permission: 'ready:read' },
+  { to: '/jobs', title: 'Jobs and parts', text: 'Jobs and their parts, cut-list import, printable rack tags and material estimates.', permission: 'jobs:read' },
   { to: '/booths', title: 'Booths', text: 'Clearance times, face velocity, spray rate and opening hours.', permission: 'booths:read', count: 'booths' },
   { to: '/racks', title: 'Racks', text: 'Shelves, drying space and which racks are heated.', permission: 'racks:read', count: 'racks' },
+  { to: '/data-sheets', title: 'Data sheets', text: 'Products with their drying times at any temperature, lots in stock and the TDS and SDS PDFs.', permission: 'products:read' },
+  { to: '/finish-systems', title: 'Finish systems', text: 'The coats and denibs a part goes through, with litres per m² and the shortest time through.', permission: 'finish-systems:read' },
   { to: '/calculator', title: 'Calculator', text: 'Conditions, film, mix and clearance sums, worked out in your units.', permission: 'calculator:use' },
   { to: '/settings/users', title: 'Users', text: 'Add people, set their role, reset a password, disable a sign-in.', permission: 'users:write' },
   { to: '/activity', title: 'Activity log', text: 'Who changed what, and when.', permission: 'audit:read' },
@@ -32,11 +39,5 @@ interface NotYet {
 }
 
 export const notBuiltYet: NotYet[] = [
-  { title: 'Booth planner', text: 'A week and day calendar of spray sessions per booth.', roles: ['admin', 'lead', 'sprayer'] },
-  { title: 'Spray sessions', text: 'Pre-spray checklist, safety cautions, mixes with pot-life countdowns, coat entry.', roles: ['admin', 'lead', 'sprayer'] },
-  { title: 'Coat log', text: 'The record of every coat, with conditions and who sprayed it.', roles: ['admin', 'lead', 'sprayer'] },
-  { title: 'Ready board', text: 'Parts by job, with countdowns to handle, pack and full cure.', roles: ['admin', 'lead', 'sprayer', 'assembler'] },
-  { title: 'Jobs and parts', text: 'Jobs, cut-list import and rack tags.', roles: ['admin', 'lead', 'assembler'] },
-  { title: 'Data sheets', text: 'Products, drying times, lots and safety sheets.', roles: ['admin', 'lead', 'sprayer'] },
   { title: 'Reports', text: 'Booth use, area sprayed, conditions and solvent used.', roles: ['admin', 'lead'] },
 ];

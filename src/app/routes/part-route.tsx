@@ -1,0 +1,57 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { can } from '../../../shared/permissions';
+import { jobQueryOptions } from '../../features/jobs/api/get-job';
+import { useRefreshJob } from '../../features/jobs/api/refresh-job';
+import { usePart } from '../../features/parts/api/get-part';
+import { PartPage } from '../../features/parts/components/part-page';
+import { useRacks } from '../../features/racks/api/get-racks';
+import { ErrorState, LoadingState } from '../../components/ui/states';
+import { usePageTitle } from '../../lib/use-page-title';
+import { RequirePermission } from '../require-permission';
+import { useSessionUser } from '../session-user';
+import { useIdParam } from './id-param';
+import { NotFoundRoute } from './not-found-route';
+
+function JobLine({ jobId }: { jobId: number }) {
+  const job = useQuery(jobQueryOptions(jobId));
+  const name = job.data ? `Job ${job.data.reference}` : 'Its job';
+  return (
+    <p>
+      <Link to={`/jobs/${jobId}`} className="inline-flex min-h-touch items-center font-semibold text-lacquer-800 underline underline-offset-4">
+        {name}
+      </Link>
+      {job.data && <span>, {job.data.customer}{job.data.finishSystemName ? ` · ${job.data.finishSystemName}` : ''}</span>}
+    </p>
+  );
+}
+
+function PartView({ partId }: { partId: number }) {
+  const user = useSessionUser();
+  const part = usePart(partId);
+  const racks = useRacks({ page: 1, pageSize: 200 });
+  const refreshJob = useRefreshJob(part.data?.jobId ?? 0);
+  usePageTitle(part.data ? `Part ${part.data.label}` : 'Part');
+  if (part.isPending) return <LoadingState what="the part" />;
+  if (part.isError) return <ErrorState error={part.error} what="the part" onRetry={() => part.refetch()} />;
+  return (
+    <PartPage
+      part={part.data}
+      units={user.units}
+      canWrite={can(user.role, 'jobs:write')}
+      racks={racks.data?.items}
+      job={<JobLine jobId={part.data.jobId} />}
+      onSaved={refreshJob}
+    />
+  );
+}
+
+export function PartRoute() {
+  const partId = useIdParam();
+  if (partId === null) return <NotFoundRoute />;
+  return (
+    <RequirePermission permission="jobs:read">
+      <PartView partId={partId} />
+    </RequirePermission>
+  );
+}

@@ -1,0 +1,27 @@
+import { can } from '../../../shared/permissions';
+import { ErrorState, LoadingState } from '../../components/ui/states';
+import { useShopSettings } from '../../features/settings/api/get-settings';
+import { PlannerPage } from '../../features/planner/components/planner-page';
+import { usePageTitle } from '../../lib/use-page-title';
+import { RequirePermission } from '../require-permission';
+import { useSessionUser } from '../session-user';
+
+/** The planner needs the shop's clock and planning minutes before it can draw a single slot. */
+function PlannerWithSettings() {
+  const user = useSessionUser();
+  const settings = useShopSettings();
+  if (settings.isPending) return <LoadingState what="the shop settings" />;
+  if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;
+  const { timezone, setupMin, cleanDownMin } = settings.data;
+  const viewer = { id: user.id, name: user.name, canWrite: can(user.role, 'spray-sessions:write'), canReadProducts: can(user.role, 'products:read') };
+  return <PlannerPage settings={{ timezone, setupMin, cleanDownMin }} viewer={viewer} canListUsers={can(user.role, 'users:read')} />;
+}
+
+export function PlannerRoute() {
+  usePageTitle('Booth planner');
+  return (
+    <RequirePermission permission="spray-sessions:read">
+      <PlannerWithSettings />
+    </RequirePermission>
+  );
+}

@@ -1,0 +1,23 @@
+import { can } from '../../../shared/permissions';
+import { LoadingState } from '../../components/ui/states';
+import { ReadyBoardPage } from '../../features/ready-board/components/ready-board-page';
+import { usePageTitle } from '../../lib/use-page-title';
+import { RequirePermission } from '../require-permission';
+import { useSessionUser } from '../session-user';
+import { useShopTimeZone } from '../use-shop-time-zone';
+
+function ReadyBoardWithClock() {
+  const user = useSessionUser();
+  const timeZone = useShopTimeZone();
+  if (!timeZone) return <LoadingState what="the ready board" />;
+  return <ReadyBoardPage timeZone={timeZone} canCollect={can(user.role, 'parts:collect')} />;
+}
+
+export function ReadyRoute() {
+  usePageTitle('Ready board');
+  return (
+    <RequirePermission permission="ready:read">
+      <ReadyBoardWithClock />
+    </RequirePermission>
+  );
+}

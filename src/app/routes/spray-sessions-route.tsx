@@ -1,0 +1,24 @@
+import { can } from '../../../shared/permissions';
+import { ErrorState, LoadingState } from '../../components/ui/states';
+import { useShopSettings } from '../../features/settings/api/get-settings';
+import { MySessionsPage } from '../../features/spray-session/components/my-sessions-page';
+import { usePageTitle } from '../../lib/use-page-title';
+import { RequirePermission } from '../require-permission';
+import { useSessionUser } from '../session-user';
+
+function SessionsWithSettings() {
+  const user = useSessionUser();
+  const settings = useShopSettings();
+  if (settings.isPending) return <LoadingState what="the shop settings" />;
+  if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;
+  return <MySessionsPage viewerId={user.id} seesAll={can(user.role, 'spray-sessions:write')} timeZone={settings.data.timezone} />;
+}
+
+export function SpraySessionsRoute() {
+  usePageTitle('Spray sessions');
+  return (
+    <RequirePermission permission="spray-sessions:read">
+      <SessionsWithSettings />
+    </RequirePermission>
+  );
+}

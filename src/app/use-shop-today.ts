@@ -1,0 +1,9 @@
+import { calendarDateIn } from '../../shared/time';
+import { useShopSettings } from '../features/settings/api/get-settings';
+
+/** Today's date where the shop is (due dates are the shop's days, not the device's). */
+export function useShopToday(): string {
+  const settings = useShopSettings();
+  const timeZone = settings.data?.timezone ?? Intl.DateTimeFormat().resolvedOptions().timeZone;
+  return calendarDateIn(new Date(), timeZone);
+}

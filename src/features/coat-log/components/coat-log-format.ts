@@ -1,0 +1,33 @@
+import { TZDate } from '@date-fns/tz';
+import type { Coat } from '../../../../shared/schemas/coat';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import { formatQuantity } from '../../../../shared/units';
+
+/** The instant a shop day (YYYY-MM-DD) starts, on the shop's clock; `plusDays` 1 gives the end of that day. */
+export function shopDayStart(date: string, timeZone: string, plusDays = 0): string | undefined {
+  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(date);
+  if (!match) return undefined;
+  return new TZDate(Number(match[1]), Number(match[2]) - 1, Number(match[3]) + plusDays, timeZone).toISOString();
+}
+
+export const partsWords = (coat: Coat) => (coat.partIds.length === 1 ? '1 part' : `${coat.partIds.length} parts`);
+
+export const stepWords = (coat: Coat) => (coat.stepPosition === null ? '—' : `Step ${coat.stepPosition + 1}`);
+
+export function filmWords(coat: Coat, units: UnitSystem): string {
+  const film = (um: number | null) => (um === null ? '—' : formatQuantity(um, 'filmThickness', units));
+  return `${film(coat.wetFilmUm)} wet → ${film(coat.dryFilmUm)} dry`;
+}
+
+export function conditionWords(coat: Coat, units: UnitSystem): string {
+  const temp = (c: number) => formatQuantity(c, 'temperature', units);
+  return `Air ${temp(coat.airTempC)}, RH ${coat.relativeHumidityPct} %, surface ${temp(coat.surfaceTempC)}`;
+}
+
+export function warningWords(coat: Coat): string[] {
+  return coat.warnings.map((w) => (w.acknowledgedReason ? `${w.message} Reason: ${w.acknowledgedReason}` : w.message));
+}
+
+export function versionWords(coat: Coat): string {
+  return coat.replacesId === null ? `v${coat.version}` : `v${coat.version}, corrects #${coat.replacesId}`;
+}

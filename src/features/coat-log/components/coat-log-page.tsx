@@ -1,0 +1,83 @@
+import { useState } from 'react';
+import { toast } from 'sonner';
+import type { Coat } from '../../../../shared/schemas/coat';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Pagination } from '../../../components/ui/pagination';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
+import { errorMessage } from '../../../lib/error-messages';
+import type { CoatLogQuery } from '../api/coat-log-keys';
+import { getAllCoats, useCoats } from '../api/get-coats';
+import { coatsToCsv, downloadCsv } from './coat-csv';
+import { CoatLogFilters, type CoatLogFilterValues } from './coat-log-filters';
+import { shopDayStart } from './coat-log-format';
+import { CoatLogTable } from './coat-log-table';
+import { CorrectionForm } from './correction-form';
+
+const pageSize = 25;
+
+function toQuery(filters: CoatLogFilterValues, timeZone: string): Omit<CoatLogQuery, 'page' | 'pageSize'> {
+  return { jobId: filters.jobId, productId: filters.productId, from: shopDayStart(filters.from, timeZone), to: shopDayStart(filters.to, timeZone, 1), history: filters.history };
+}
+
+interface CoatLogPageProps {
+  filters: CoatLogFilterValues;
+  page: number;
+  onChange: (filters: CoatLogFilterValues, page: number) => void;
+  canCorrect: boolean;
+  units: UnitSystem;
+  timeZone: string;
+}
+
+/** Every coat with its conditions, film and warnings; filters live in the address so a view can be shared. */
+export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZone }: CoatLogPageProps) {
+  const query = toQuery(filters, timeZone);
+  const coats = useCoats({ ...query, page, pageSize });
+  const [correcting, setCorrecting] = useState<Coat | null>(null);
+  const [exporting, setExporting] = useState(false);
+
+  const exportCsv = async () => {
+    setExporting(true);
+    try {
+      const all = await getAllCoats(query);
+      downloadCsv(coatsToCsv(all, timeZone), `coat-log-${new Date().toISOString().slice(0, 10)}.csv`);
+      toast.success(`${all.length} coat records exported.`);
+    } catch (error) {
+      toast.error(errorMessage(error));
+    } finally {
+      setExporting(false);
+    }
+  };
+
+  return (
+    <>
+      <PageHeader
+        title="Coat log"
+        description="The record of every coat: product, film, conditions, warnings and who sprayed it. Corrections add a new version; nothing is deleted."
+        actions={
+          <Button variant="secondary" onClick={exportCsv} pending={exporting} pendingText="Exporting…" disabled={!coats.data || coats.data.total === 0}>
+            Export CSV
+          </Button>
+        }
+      />
+      <CoatLogFilters value={filters} onChange={(next) => onChange(next, 1)} />
+      {coats.isPending ? (
+        <LoadingState what="the coat log" />
+      ) : coats.isError ? (
+        <ErrorState error={coats.error} what="the coat log" onRetry={() => coats.refetch()} />
+      ) : coats.data.items.length === 0 ? (
+        <EmptyState title="No coats match">Coats appear here as sprayers record them in their spray sessions. Try wider filters.</EmptyState>
+      ) : (
+        <>
+          <CoatLogTable coats={coats.data.items} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+          <Pagination page={page} pageSize={pageSize} total={coats.data.total} noun={filters.history ? 'coat versions' : 'coats'} onPage={(next) => onChange(filters, next)} />
+        </>
+      )}
+      <Dialog open={correcting !== null} onClose={() => setCorrecting(null)} wide title={`Correct coat ${correcting?.id ?? ''}`} description="Change what was recorded wrongly. Figures are entered in metric units, as they are stored.">
+        {correcting && <CorrectionForm coat={correcting} onDone={() => setCorrecting(null)} />}
+      </Dialog>
+    </>
+  );
+}

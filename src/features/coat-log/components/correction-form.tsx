@@ -1,0 +1,77 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { toast } from 'sonner';
+import type { z } from 'zod';
+import { correctCoatSchema, type Coat } from '../../../../shared/schemas/coat';
+import { Button } from '../../../components/ui/button';
+import { asNumber, asNumberOrNull, FieldShell, FormAlert, InputField, inputClasses } from '../../../components/ui/field';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useCorrectCoat } from '../api/correct-coat';
+
+type CorrectionInput = z.input<typeof correctCoatSchema>;
+type Correction = z.output<typeof correctCoatSchema>;
+const editable = ['wetFilmUm', 'thinningPct', 'airTempC', 'relativeHumidityPct', 'surfaceTempC', 'notes'] as const;
+const fieldNames = [...editable, 'reason'];
+
+/**
+ * The whole coat as it should have been, not just the changed fields: the server's correction
+ * schema fills any field left out with its create default (thinning 0, no step, no lot), so a
+ * partial correction would quietly wipe them. Drying temperature goes as null so the server works
+ * it out again from the racks or the corrected air temperature, as it did the first time.
+ */
+function restated(coat: Coat, values: Correction): Correction {
+  // The reasons given for the first version's stops carry over; a correction does not erase them.
+  const acknowledgements = coat.warnings.flatMap((w) => (w.acknowledgedReason ? [{ code: w.code, reason: w.acknowledgedReason }] : []));
+  const { partIds, productId, sprayedAt, stepPosition, lotId, mixId } = coat;
+  // Only the boxes on the form: the parsed values carry the schema's defaults for everything else.
+  const edited = Object.fromEntries(editable.map((key) => [key, values[key]]));
+  return { partIds, productId, sprayedAt, stepPosition, lotId, mixId, dryingTempC: null, acknowledgements, ...edited, reason: values.reason };
+}
+
+export function CorrectionForm({ coat, onDone }: { coat: Coat; onDone: () => void }) {
+  const correct = useCorrectCoat();
+  const [formError, setFormError] = useState<string | null>(null);
+  const { register, handleSubmit, setError, formState } = useForm<CorrectionInput, unknown, Correction>({
+    resolver: zodResolver(correctCoatSchema),
+    defaultValues: { reason: '', ...Object.fromEntries(editable.map((key) => [key, coat[key]])) },
+  });
+  const { errors } = formState;
+  const number = { type: 'text', inputMode: 'decimal' } as const;
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      const corrected = await correct.mutateAsync({ id: coat.id, correction: restated(coat, values) });
+      toast.success(`Coat ${coat.id} is corrected by record ${corrected.id}. The first version stays in the history.`);
+      onDone();
+    } catch (error) {
+      setFormError(applyServerErrors(error, setError, fieldNames));
+    }
+  });
+
+  return (
+    <form noValidate onSubmit={onSubmit} className="space-y-4">
+      <FormAlert message={formError} />
+      <FieldShell label="Reason for the correction" hint="Required. Kept with the new version for anyone checking the record later." error={errors.reason?.message}>
+        {(control) => <textarea {...control} rows={2} className={inputClasses} {...register('reason')} />}
+      </FieldShell>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <InputField {...number} label="Wet film" unit="µm" hint="Empty if not measured." error={errors.wetFilmUm?.message} registration={register('wetFilmUm', { setValueAs: asNumberOrNull })} />
+        <InputField {...number} label="Thinning" unit="%" error={errors.thinningPct?.message} registration={register('thinningPct', { setValueAs: asNumber })} />
+        <InputField {...number} label="Air temperature" unit="°C" error={errors.airTempC?.message} registration={register('airTempC', { setValueAs: asNumber })} />
+        <InputField {...number} label="Relative humidity" unit="%" error={errors.relativeHumidityPct?.message} registration={register('relativeHumidityPct', { setValueAs: asNumber })} />
+        <InputField {...number} label="Surface temperature" unit="°C" error={errors.surfaceTempC?.message} registration={register('surfaceTempC', { setValueAs: asNumber })} />
+      </div>
+      <FieldShell label="Notes">{(control) => <textarea {...control} rows={2} className={inputClasses} {...register('notes')} />}</FieldShell>
+      <div className="flex flex-wrap justify-end gap-3">
+        <Button variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+        <Button type="submit" pending={correct.isPending} pendingText="Saving…">
+          Save correction
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,21 @@
+export interface SessionRange {
+  from: string;
+  to: string;
+  boothId?: number;
+}
+
+/** Keys for what the planner reads, broad to narrow; its own so it never reads another feature's cache shape. */
+export const plannerKeys = {
+  all: ['planner'] as const,
+  sessions: () => [...plannerKeys.all, 'spray-sessions'] as const,
+  sessionList: (range: SessionRange) => [...plannerKeys.sessions(), 'list', range] as const,
+  session: (id: number) => [...plannerKeys.sessions(), 'detail', id] as const,
+  booths: () => [...plannerKeys.all, 'booths'] as const,
+  jobs: () => [...plannerKeys.all, 'jobs'] as const,
+  job: (id: number) => [...plannerKeys.jobs(), id] as const,
+  jobParts: (jobId: number) => [...plannerKeys.job(jobId), 'parts'] as const,
+  part: (id: number) => [...plannerKeys.all, 'part', id] as const,
+  finishSystems: () => [...plannerKeys.all, 'finish-systems'] as const,
+  products: () => [...plannerKeys.all, 'products'] as const,
+  sprayers: () => [...plannerKeys.all, 'sprayers'] as const,
+};

@@ -1,0 +1,105 @@
+import type { BusinessHoursInput, DateSelectArg, EventClickArg, EventDropArg, EventInput } from '@fullcalendar/core';
+import enGbLocale from '@fullcalendar/core/locales/en-gb';
+import interactionPlugin, { type EventResizeDoneArg } from '@fullcalendar/interaction';
+import FullCalendar from '@fullcalendar/react';
+import timeGridPlugin from '@fullcalendar/timegrid';
+import { useEffect, useRef, type CSSProperties } from 'react';
+import type { PlannerView } from '../utils/calendar-range';
+import { shopTimeZonePlugin } from '../utils/shop-zone-plugin';
+import { SessionEventContent } from './session-event-content';
+
+export type SessionMoveArg = EventDropArg | EventResizeDoneArg;
+
+export interface CalendarHandlers {
+  onSelectRange: (start: Date, end: Date) => void;
+  onOpenSession: (id: number) => void;
+  onMove: (arg: SessionMoveArg) => void;
+  /** True while a drag or resize is under way, so polling does not swap the events mid-gesture. */
+  onInteracting: (busy: boolean) => void;
+}
+
+interface BoothCalendarProps extends CalendarHandlers {
+  view: PlannerView;
+  day: string;
+  timeZone: string;
+  events: EventInput[];
+  businessHours: BusinessHoursInput;
+  canWrite: boolean;
+  label: string;
+}
+
+const plugins = [timeGridPlugin, interactionPlugin, shopTimeZonePlugin];
+const clock = { hour: '2-digit', minute: '2-digit', hour12: false } as const;
+
+// FullCalendar styles itself from these variables; ours are the maple and lacquer tokens.
+const calendarTheme = {
+  '--fc-border-color': '#e6dccb',
+  '--fc-page-bg-color': '#ffffff',
+  '--fc-non-business-color': 'rgba(149, 128, 92, 0.28)',
+  '--fc-today-bg-color': 'rgba(42, 127, 105, 0.07)',
+  '--fc-now-indicator-color': '#b4232a',
+  '--fc-highlight-color': 'rgba(42, 127, 105, 0.28)',
+} as CSSProperties;
+
+/** One time grid; the planner shows one per booth on the day view, or one for the week. */
+export function BoothCalendar({ view, day, timeZone, events, businessHours, canWrite, label, ...handlers }: BoothCalendarProps) {
+  const calendarRef = useRef<FullCalendar>(null);
+  const viewName = view === 'week' ? 'timeGridWeek' : 'timeGridDay';
+
+  // initialView and initialDate only count on mount; later changes go through the calendar's API.
+  useEffect(() => {
+    calendarRef.current?.getApi().changeView(viewName, day);
+  }, [viewName, day]);
+
+  const select = (arg: DateSelectArg) => {
+    arg.view.calendar.unselect();
+    handlers.onSelectRange(arg.start, arg.end);
+  };
+  const click = (arg: EventClickArg) => {
+    arg.jsEvent.preventDefault();
+    handlers.onOpenSession(Number(arg.event.id));
+  };
+
+  return (
+    <div role="region" aria-label={label} style={calendarTheme} className="min-w-0 rounded-panel border border-maple-300 bg-white p-1 text-sm [&_.fc-timegrid-slot]:h-6!">
+      <FullCalendar
+        ref={calendarRef}
+        plugins={plugins}
+        locale={enGbLocale}
+        timeZone={timeZone}
+        initialView={viewName}
+        initialDate={day}
+        headerToolbar={false}
+        firstDay={1}
+        allDaySlot={false}
+        slotDuration="00:15:00"
+        snapDuration="00:15:00"
+        slotLabelInterval="01:00"
+        scrollTime="06:30:00"
+        scrollTimeReset={false}
+        slotLabelFormat={clock}
+        eventTimeFormat={clock}
+        dayHeaderFormat={{ weekday: 'short', day: 'numeric', month: 'short' }}
+        height={640}
+        expandRows={false}
+        nowIndicator
+        businessHours={businessHours}
+        events={events}
+        eventInteractive
+        selectable={canWrite}
+        selectMirror={canWrite}
+        editable={canWrite}
+        eventDurationEditable={canWrite}
+        select={select}
+        eventClick={click}
+        eventDrop={handlers.onMove}
+        eventResize={handlers.onMove}
+        eventDragStart={() => handlers.onInteracting(true)}
+        eventDragStop={() => handlers.onInteracting(false)}
+        eventResizeStart={() => handlers.onInteracting(true)}
+        eventResizeStop={() => handlers.onInteracting(false)}
+        eventContent={(arg) => <SessionEventContent arg={arg} />}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,99 @@
+import { useState } from 'react';
+import { calendarDateIn } from '../../../../shared/time';
+import { Button } from '../../../components/ui/button';
+import { PageHeader } from '../../../components/ui/page-header';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
+import { usePlannerBooths } from '../api/get-planner-booths';
+import { useSprayers } from '../api/get-sprayers';
+import type { PlannerSession } from '../api/get-spray-sessions';
+import { useCancelSession } from '../hooks/use-cancel-session';
+import { shopWallToInstant } from '../utils/shop-wall-clock';
+import type { BookingTarget, PlanningSettings } from './booking-form';
+import { PlannerCalendar } from './planner-calendar';
+import { PlannerDialogs, type Viewer } from './planner-dialogs';
+
+interface PlannerPageProps {
+  settings: PlanningSettings;
+  viewer: Viewer;
+  canListUsers: boolean;
+}
+
+/** The booth planner: a week or day of spray sessions per booth, booked and moved by the lead. */
+export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps) {
+  const timeZone = settings.timezone;
+  const [day, setDay] = useState(() => calendarDateIn(new Date(), timeZone));
+  const [booking, setBooking] = useState<BookingTarget | null>(null);
+  const [opened, setOpened] = useState<PlannerSession | undefined>(undefined);
+  const booths = usePlannerBooths();
+  const sprayers = useSprayers(viewer.canWrite && canListUsers);
+  const cancelSession = useCancelSession(timeZone);
+
+  const bookBlank = () => {
+    const start = shopWallToInstant(day, '08:00', timeZone).toISOString();
+    const end = shopWallToInstant(day, '09:00', timeZone).toISOString();
+    setBooking({ kind: 'new', start, end, boothId: null });
+  };
+  const booked = (saved: PlannerSession | null) => {
+    setBooking(null);
+    // Show where the new booking landed, so the lead sees it on the calendar.
+    if (saved) setDay(calendarDateIn(new Date(saved.start), timeZone));
+  };
+
+  const header = (
+    <PageHeader
+      title="Booth planner"
+      description={
+        viewer.canWrite
+          ? 'Drag across free time to book a booth, drag a session to move it, or pull its lower edge to change its length.'
+          : 'Who is in which booth, and when. The finishing lead books and moves sessions.'
+      }
+      actions={viewer.canWrite && booths.data && booths.data.items.length > 0 && <Button onClick={bookBlank}>Book a session</Button>}
+    />
+  );
+  if (booths.isPending || booths.isError || booths.data.items.length === 0) {
+    return (
+      <>
+        {header}
+        {booths.isPending ? (
+          <LoadingState what="the booths" />
+        ) : booths.isError ? (
+          <ErrorState error={booths.error} what="the booths" onRetry={() => booths.refetch()} />
+        ) : (
+          <EmptyState title="No booths yet">Booths are added under Booths; then sessions can be booked here.</EmptyState>
+        )}
+      </>
+    );
+  }
+  return (
+    <>
+      {header}
+      <PlannerCalendar
+        settings={settings}
+        booths={booths.data.items}
+        canWrite={viewer.canWrite}
+        day={day}
+        onDay={setDay}
+        onBook={(start, end, boothId) => setBooking({ kind: 'new', start, end, boothId })}
+        onOpen={setOpened}
+      />
+      <PlannerDialogs
+        viewer={viewer}
+        settings={settings}
+        booths={booths.data.items}
+        sprayers={sprayers.data}
+        booking={booking}
+        opened={opened}
+        onBooked={booked}
+        onCloseSummary={() => setOpened(undefined)}
+        onChangeBooking={(session) => {
+          setOpened(undefined);
+          setBooking({ kind: 'edit', session });
+        }}
+        onCancelSession={(session) => {
+          setOpened(undefined);
+          void cancelSession(session);
+        }}
+      />
+    </>
+  );
+}

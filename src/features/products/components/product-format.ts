@@ -1,0 +1,36 @@
+import type { FileRef, ProductKind } from '../../../../shared/schemas/product';
+
+export const productKindLabels: Record<ProductKind, string> = {
+  primer: 'Primer',
+  sealer: 'Sealer',
+  undercoat: 'Undercoat',
+  topcoat: 'Topcoat',
+  stain: 'Stain',
+  clear: 'Clear',
+};
+
+/** "1 : 0" reads as nonsense to a sprayer; a one-component product says so instead. */
+export function mixRatioWords(baseParts: number, hardenerParts: number): string {
+  if (hardenerParts === 0) return 'One component, no hardener';
+  return `${baseParts} : ${hardenerParts} by volume (base : hardener)`;
+}
+
+export function thinningWords(minPct: number, maxPct: number): string {
+  if (maxPct === 0) return 'Not thinned';
+  if (minPct === maxPct) return `${minPct} %`;
+  return `${minPct}–${maxPct} %`;
+}
+
+export function fileSizeWords(bytes: number): string {
+  if (bytes < 1024) return `${bytes} bytes`;
+  if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024)} KB`;
+  return `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+}
+
+/** The download address; the server sends the file back under its original name. */
+export const fileHref = (file: FileRef) => `/api/files/${file.id}`;
+
+export const documentTitles = {
+  tds: { short: 'TDS', long: 'technical data sheet' },
+  sds: { short: 'SDS', long: 'safety data sheet' },
+} as const;

@@ -1,0 +1,48 @@
+import { compareForBoard, type BoardPart } from './readiness';
+
+export type GroupBy = 'job' | 'rack';
+
+export interface BoardGroup {
+  key: string;
+  title: string;
+  subtitle: string;
+  parts: BoardPart[];
+}
+
+const byName = new Intl.Collator('en-GB', { numeric: true });
+
+function collect(parts: readonly BoardPart[], keyOf: (part: BoardPart) => string, make: (part: BoardPart) => Omit<BoardGroup, 'parts'>): BoardGroup[] {
+  const groups = new Map<string, BoardGroup>();
+  for (const part of parts) {
+    const key = keyOf(part);
+    const group = groups.get(key) ?? { ...make(part), parts: [] };
+    group.parts.push(part);
+    groups.set(key, group);
+  }
+  return [...groups.values()].map((group) => ({ ...group, parts: group.parts.sort(compareForBoard) }));
+}
+
+export function groupByJob(parts: readonly BoardPart[]): BoardGroup[] {
+  return collect(
+    parts,
+    (part) => `job-${part.jobId}`,
+    (part) => ({ key: `job-${part.jobId}`, title: part.jobReference, subtitle: part.customer }),
+  ).sort((a, b) => byName.compare(a.title, b.title));
+}
+
+/** Racks by name; parts on no rack come last, as they are somewhere the board cannot say. */
+export function groupByRack(parts: readonly BoardPart[]): BoardGroup[] {
+  const groups = collect(
+    parts,
+    (part) => (part.rack ? `rack-${part.rack.id}` : 'rack-none'),
+    (part) => (part.rack ? { key: `rack-${part.rack.id}`, title: part.rack.name, subtitle: 'Rack' } : { key: 'rack-none', title: 'Not on a rack', subtitle: 'No rack or shelf recorded' }),
+  );
+  return groups.sort((a, b) => (a.key === 'rack-none' ? 1 : b.key === 'rack-none' ? -1 : byName.compare(a.title, b.title)));
+}
+
+/** Where to find a part, in the words the other grouping does not already give. */
+export function placeWords(part: BoardPart, groupBy: GroupBy): string {
+  if (groupBy === 'rack') return `${part.jobReference} · ${part.customer}${part.rack?.shelf != null ? ` · shelf ${part.rack.shelf}` : ''}`;
+  if (!part.rack) return 'Not on a rack';
+  return part.rack.shelf != null ? `${part.rack.name}, shelf ${part.rack.shelf}` : part.rack.name;
+}

@@ -1,0 +1,47 @@
+import { useId, useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import type { BoardGroup, GroupBy } from './board-groups';
+import { countStates, countWords, type BoardPart } from './readiness';
+import { ReadyPartCard } from './ready-part-card';
+
+// A job can have eighty parts; the first dozen in board order hold what can be picked up soonest.
+const firstShown = 12;
+
+interface ReadyGroupProps {
+  group: BoardGroup;
+  groupBy: GroupBy;
+  now: Date;
+  timeZone: string;
+  onCollect?: (part: BoardPart) => void;
+  collectingId: number | null;
+}
+
+export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectingId }: ReadyGroupProps) {
+  const [showAll, setShowAll] = useState(false);
+  const headingId = useId();
+  const listId = useId();
+  const shown = showAll ? group.parts : group.parts.slice(0, firstShown);
+  const hidden = group.parts.length - shown.length;
+  return (
+    <section aria-labelledby={headingId} className="rounded-panel border border-maple-300 bg-maple-50 p-3 sm:p-4">
+      <div className="mb-3 flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
+        <h2 id={headingId} className="text-xl font-bold text-lacquer-900">
+          {group.title} <span className="font-medium text-maple-700">· {group.subtitle}</span>
+        </h2>
+        <p className="text-sm font-medium text-maple-800">
+          {group.parts.length} {group.parts.length === 1 ? 'part' : 'parts'}: {countWords(countStates(group.parts)).join(', ')}
+        </p>
+      </div>
+      <ul id={listId} className="grid gap-3 md:grid-cols-2 2xl:grid-cols-3">
+        {shown.map((part) => (
+          <ReadyPartCard key={part.id} part={part} now={now} timeZone={timeZone} groupBy={groupBy} onCollect={onCollect} collecting={collectingId === part.id} />
+        ))}
+      </ul>
+      {(hidden > 0 || showAll) && group.parts.length > firstShown && (
+        <Button variant="quiet" className="mt-2" aria-controls={listId} aria-expanded={showAll} onClick={() => setShowAll((all) => !all)}>
+          {showAll ? 'Show fewer parts' : `Show all ${group.parts.length} parts (${hidden} more)`}
+        </Button>
+      )}
+    </section>
+  );
+}

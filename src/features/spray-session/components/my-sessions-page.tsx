@@ -1,0 +1,88 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { calendarDateIn } from '../../../../shared/time';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import { PageHeader } from '../../../components/ui/page-header';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
+import { formatShopDate } from '../../../lib/shop-time';
+import { useSpraySessions } from '../api/get-spray-sessions';
+import { sessionSpan } from '../utils/session-format';
+import { SessionStateBadge } from './session-header';
+
+const hourMs = 3_600_000;
+
+/** From a day back (so all of today is in, whatever the zone) to a week ahead; fixed once per visit so the key stays put. */
+function rangeFromNow() {
+  const now = Date.now();
+  return { from: new Date(now - 24 * hourMs).toISOString(), to: new Date(now + 8 * 24 * hourMs).toISOString() };
+}
+
+interface MySessionsPageProps {
+  viewerId: number;
+  /** A lead sees every booth's sessions; a sprayer sees the ones assigned to them. */
+  seesAll: boolean;
+  timeZone: string;
+}
+
+function SessionRow({ session, timeZone }: { session: SpraySession; timeZone: string }) {
+  const parts = new Set(session.items.map((i) => i.partId)).size;
+  return (
+    <li>
+      <Link
+        to={`/spray-sessions/${session.id}`}
+        className="flex min-h-16 flex-wrap items-center justify-between gap-3 rounded-panel border-2 border-maple-300 bg-white p-4 hover:border-lacquer-600 hover:bg-lacquer-50"
+      >
+        <span>
+          <span className="block text-lg font-bold text-lacquer-900 underline-offset-4">{session.boothName}</span>
+          <span className="block text-maple-800">
+            {sessionSpan(session, timeZone)} · {parts === 1 ? '1 part' : `${parts} parts`} · {session.sprayerName ?? 'no sprayer yet'}
+          </span>
+        </span>
+        <SessionStateBadge state={session.state} />
+      </Link>
+    </li>
+  );
+}
+
+export function MySessionsPage({ viewerId, seesAll, timeZone }: MySessionsPageProps) {
+  const [range] = useState(rangeFromNow);
+  const sessions = useSpraySessions(range);
+  const today = calendarDateIn(new Date(), timeZone);
+  const mine = (sessions.data?.items ?? []).filter((s) => (seesAll || s.sprayerId === viewerId) && calendarDateIn(new Date(s.end), timeZone) >= today);
+  // A session still running from yesterday counts as today's.
+  const dayOf = (s: SpraySession) => [calendarDateIn(new Date(s.start), timeZone), today].sort()[1];
+  const days = [...new Set(mine.map(dayOf))].sort();
+
+  return (
+    <>
+      <PageHeader
+        title={seesAll ? 'Spray sessions' : 'My spray sessions'}
+        description={seesAll ? 'Every booth’s sessions today and in the week ahead.' : 'The sessions you are booked to spray, today and in the week ahead. Open one to do its checks and record its coats.'}
+      />
+      {sessions.isPending ? (
+        <LoadingState what="the sessions" />
+      ) : sessions.isError ? (
+        <ErrorState error={sessions.error} what="the sessions" onRetry={() => sessions.refetch()} />
+      ) : mine.length === 0 ? (
+        <EmptyState title="No sessions booked">{seesAll ? 'Book sessions in the booth planner.' : 'Nothing is booked for you this week. The finishing lead books sessions in the booth planner.'}</EmptyState>
+      ) : (
+        <div className="space-y-6">
+          {days.map((day) => (
+            <section key={day} aria-labelledby={`day-${day}`}>
+              <h2 id={`day-${day}`} className="mb-2 text-xl font-semibold">
+                {day === today ? 'Today' : formatShopDate(new Date(`${day}T12:00:00Z`), 'UTC')}
+              </h2>
+              <ul className="space-y-2">
+                {mine
+                  .filter((s) => dayOf(s) === day)
+                  .map((session) => (
+                    <SessionRow key={session.id} session={session} timeZone={timeZone} />
+                  ))}
+              </ul>
+            </section>
+          ))}
+        </div>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,86 @@
+import type { Booth } from '../../../../shared/schemas/booth';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import type { useSessionCoats } from '../api/get-session-coats';
+import type { usePendingCoats } from '../hooks/use-pending-coats';
+import type { SessionPlan } from '../hooks/use-session-plan';
+import { ChecklistSection } from './checklist-section';
+import { ClearancePanel } from './clearance-panel';
+import { CoatEntrySection } from './coat-entry-section';
+import { MixesSection } from './mixes-section';
+import { RecordedChecklist } from './recorded-checklist';
+import { SessionCoats } from './session-coats';
+import { StopSpraying } from './stop-spraying';
+
+interface SessionStageProps {
+  session: SpraySession;
+  booth: Booth;
+  plan: SessionPlan;
+  coats: ReturnType<typeof useSessionCoats>;
+  pendingCoats: ReturnType<typeof usePendingCoats>;
+  roles: { canRun: boolean; canRecord: boolean; canOverride: boolean };
+  units: UnitSystem;
+  timeZone: string;
+}
+
+/** What the session page shows at each step of the session: checks, spraying, clearing, done. */
+export function SessionStage({ session, booth, plan, coats, pendingCoats, roles, units, timeZone }: SessionStageProps) {
+  const { state } = session;
+  const labels = new Map(plan.parts.map((part) => [part.id, part.label]));
+  const mixProducts = plan.sprayed.length ? plan.sprayed : [...plan.products.values()];
+  const coatsList = (
+    <SessionCoats
+      coats={coats}
+      pending={pendingCoats.pending}
+      onResend={() => void pendingCoats.resend()}
+      onDiscard={pendingCoats.discard}
+      partLabel={(id) => labels.get(id) ?? `Part ${id}`}
+      ready={plan.ready}
+      units={units}
+      timeZone={timeZone}
+    />
+  );
+  const mixes = (
+    <MixesSection
+      sessionId={session.id}
+      products={mixProducts}
+      allProducts={plan.products}
+      canRecord={roles.canRecord && (state === 'planned' || state === 'checking' || state === 'spraying')}
+      airTempC={session.checklist?.airTempC ?? null}
+      units={units}
+      timeZone={timeZone}
+    />
+  );
+
+  if (state === 'cancelled') return <p className="rounded-panel border-2 border-verdict-stop bg-white p-4 text-lg font-semibold">This session was cancelled. Nothing can be recorded on it.</p>;
+  if (state === 'planned' || state === 'checking') {
+    return (
+      <>
+        <ChecklistSection session={session} booth={booth} plan={plan} canRun={roles.canRun} canOverride={roles.canOverride} units={units} timeZone={timeZone} />
+        {mixes}
+      </>
+    );
+  }
+  if (state === 'spraying') {
+    return (
+      <>
+        {session.checklist && <RecordedChecklist checklist={session.checklist} timeZone={timeZone} />}
+        {roles.canRecord && <CoatEntrySection session={session} plan={plan} sessionCoats={coats.data?.items ?? []} queue={pendingCoats.add} units={units} timeZone={timeZone} />}
+        {coatsList}
+        {mixes}
+        {roles.canRun && <StopSpraying sessionId={session.id} booth={booth} />}
+      </>
+    );
+  }
+  return (
+    <>
+      {state === 'clearing' ? (
+        <ClearancePanel session={session} booth={booth} canRun={roles.canRun} timeZone={timeZone} />
+      ) : (
+        <p className="rounded-panel border-2 border-verdict-go bg-white p-4 text-lg font-semibold">This session is done. Its coats are below and in the coat log.</p>
+      )}
+      {coatsList}
+      {mixes}
+    </>
+  );
+}

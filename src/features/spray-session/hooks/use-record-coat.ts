@@ -1,0 +1,27 @@
+import type { Coat, CreateCoatInput } from '../../../../shared/schemas/coat';
+import { isApiError } from '../../../lib/api-client';
+import { useCreateCoat } from '../api/create-coat';
+import type { PendingCoat } from './use-pending-coats';
+
+export type RecordOutcome = { kind: 'saved'; coat: Coat } | { kind: 'queued' } | { kind: 'failed'; error: unknown };
+
+/**
+ * Sends a coat; when the booth has no connection the coat is queued on the tablet with the same
+ * idempotency key, so the resend and any answer that was lost on the way make one record.
+ */
+export function useRecordCoat(sessionId: number, queue: (body: PendingCoat['body'], label: string) => void) {
+  const createCoat = useCreateCoat(sessionId);
+  const record = async (body: Required<Omit<CreateCoatInput, 'idempotencyKey'>> & { idempotencyKey: string }, label: string): Promise<RecordOutcome> => {
+    try {
+      const { coat } = await createCoat.mutateAsync(body);
+      return { kind: 'saved', coat };
+    } catch (error) {
+      if (isApiError(error) && error.code === 'network') {
+        queue(body, label);
+        return { kind: 'queued' };
+      }
+      return { kind: 'failed', error };
+    }
+  };
+  return { record, pending: createCoat.isPending };
+}

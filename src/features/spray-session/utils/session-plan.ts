@@ -1,0 +1,54 @@
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { FinishStep, FinishSystem } from '../../../../shared/schemas/finish-system';
+import type { Part } from '../../../../shared/schemas/part';
+import type { Product } from '../../../../shared/schemas/product';
+import type { ReadyPart } from '../../../../shared/schemas/ready';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import { formatQuantity } from '../../../../shared/units';
+
+export type CoatStep = Extract<FinishStep, { kind: 'coat' }>;
+
+export const coatStepsOf = (system: FinishSystem | undefined): CoatStep[] =>
+  (system?.steps ?? []).filter((step): step is CoatStep => step.kind === 'coat');
+
+/**
+ * The ready list gives how many coat steps a part has had, not which; coats go on in order,
+ * so the next one is the first coat step past that count.
+ */
+export function nextCoatPosition(system: FinishSystem | undefined, ready: ReadyPart | undefined): number | null {
+  return coatStepsOf(system)[ready?.coatsDone ?? 0]?.position ?? null;
+}
+
+export function stepWords(step: FinishStep, units: UnitSystem): string {
+  const number = `Step ${step.position + 1}`;
+  if (step.kind === 'abrade') return `${number}: abrade ${step.grit}`;
+  return `${number}: ${step.productName}, ${formatQuantity(step.dryFilmUm, 'filmThickness', units)} dry`;
+}
+
+export interface FinishWork {
+  systemByJob: Map<number, FinishSystem>;
+  products: Map<number, Product>;
+  ready: Map<number, ReadyPart>;
+}
+
+/** The step each planned part is to get: the one the lead planned, else its next coat step. */
+export function plannedSteps(session: SpraySession, parts: Part[], work: FinishWork): Map<number, number | null> {
+  const steps = new Map<number, number | null>();
+  for (const item of session.items) {
+    const part = parts.find((p) => p.id === item.partId);
+    if (!part) continue;
+    steps.set(part.id, item.stepPosition ?? nextCoatPosition(work.systemByJob.get(part.jobId), work.ready.get(part.id)));
+  }
+  return steps;
+}
+
+/** The products the session sprays, from the planned steps; what the cautions and checklist are judged on. */
+export function plannedProducts(parts: Part[], steps: Map<number, number | null>, work: FinishWork): Product[] {
+  const ids = new Set<number>();
+  for (const part of parts) {
+    const position = steps.get(part.id);
+    const step = work.systemByJob.get(part.jobId)?.steps.find((s) => s.position === position);
+    if (step?.kind === 'coat') ids.add(step.productId);
+  }
+  return [...ids].flatMap((id) => work.products.get(id) ?? []);
+}

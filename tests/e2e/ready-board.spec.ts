@@ -1,0 +1,191 @@
+import { expect, request, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
+import { demo, demoPassword, mainNav, signIn, type DemoRole } from './helpers';
+
+const shopZone = 'Europe/London';
+const shopClock = (iso: string) => new Intl.DateTimeFormat('en-GB', { timeZone: shopZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
+
+interface Api {
+  context: APIRequestContext;
+  get: <T>(path: string) => Promise<T>;
+  post: <T>(path: string, body: object) => Promise<T>;
+}
+
+/** Someone else's API session (the lead plans, the sprayer logs coats) while the assembler watches the board. */
+async function apiAs(role: DemoRole, baseURL: string): Promise<Api> {
+  const context = await request.newContext({ baseURL });
+  const token = async () => (await (await context.get('/api/auth/csrf')).json()).token as string;
+  const login = await context.post('/api/auth/login', { headers: { 'x-csrf-token': await token() }, data: { email: demo[role].email, password: demoPassword } });
+  expect(login.ok()).toBe(true);
+  const csrf = await token();
+  const get = async <T,>(path: string): Promise<T> => {
+    const res = await context.get(path);
+    expect(res.ok(), `GET ${path}`).toBe(true);
+    return (await res.json()) as T;
+  };
+  const post = async <T,>(path: string, body: object): Promise<T> => {
+    const res = await context.post(path, { headers: { 'x-csrf-token': csrf }, data: body });
+    expect(res.ok(), `POST ${path}: ${await res.text()}`).toBe(true);
+    return (await res.json()) as T;
+  };
+  return { context, get, post };
+}
+
+/** A ten-minute slot of the back spray room far ahead, different on every run, so reruns never clash. */
+function freeSlot(): { start: string; end: string } {
+  const slot = Math.floor(Date.now() / 1000) % 2_000_000;
+  const start = Date.UTC(2040, 0, 1) + slot * 10 * 60_000;
+  return { start: new Date(start).toISOString(), end: new Date(start + 10 * 60_000).toISOString() };
+}
+
+let lead: Api;
+let sprayer: Api;
+interface Job {
+  id: number;
+  reference: string;
+  finishSystemId: number;
+}
+interface Coat {
+  handleAt: string;
+}
+interface ReadyItem {
+  id: number;
+  state: string;
+  rack: unknown;
+}
+type Step = { kind: 'coat'; productId: number } | { kind: 'abrade' };
+
+let job: Job;
+let coatProducts: number[];
+let sessionId: number;
+const stamp = Date.now();
+
+async function newPart(label: string, shelf: number): Promise<{ id: number; label: string }> {
+  const { part } = await lead.post<{ part: { id: number; label: string } }>(`/api/jobs/${job.id}/parts`, { label, lengthMm: 715, widthMm: 496, thicknessMm: 18, rackId: 1, shelf });
+  return part;
+}
+
+function logCoat(partId: number, coat: number, sprayedAt: Date) {
+  const body = { spraySessionId: sessionId, partIds: [partId], productId: coatProducts[coat], sprayedAt: sprayedAt.toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
+  return sprayer.post<{ coat: Coat }>('/api/coats', body);
+}
+
+function card(page: Page, label: string): Locator {
+  return page.getByRole('listitem', { name: new RegExp(`^${label}, `) });
+}
+
+test.describe('ready board', () => {
+  test.describe.configure({ mode: 'serial', timeout: 60_000 });
+
+  test.beforeAll(async ({ baseURL }) => {
+    lead = await apiAs('lead', baseURL!);
+    sprayer = await apiAs('sprayer', baseURL!);
+    job = (await lead.get<{ items: Job[] }>('/api/jobs?q=LJ-26-105')).items[0];
+    const systems = await lead.get<{ items: { id: number; steps: Step[] }[] }>('/api/finish-systems');
+    const steps = systems.items.find((s) => s.id === job.finishSystemId)?.steps ?? [];
+    coatProducts = steps.flatMap((step) => (step.kind === 'coat' ? [step.productId] : []));
+    expect(coatProducts).toHaveLength(3);
+    const { spraySession } = await lead.post<{ spraySession: { id: number } }>('/api/spray-sessions', { boothId: 2, ...freeSlot(), sprayerId: 3, items: [], override: { reason: 'Browser test of the ready board' } });
+    sessionId = spraySession.id;
+  });
+
+  test.afterAll(async () => {
+    await lead?.context.dispose();
+    await sprayer?.context.dispose();
+  });
+
+  test('a coat logged elsewhere shows on the assembler’s board within seconds, without reloading', async ({ page }) => {
+    const part = await newPart(`Live door ${stamp}`, 3);
+    await signIn(page, 'assembler', '/');
+    await mainNav(page).getByRole('link', { name: 'Ready board' }).click();
+    await expect(page.getByRole('heading', { name: 'Ready board', level: 1 })).toBeVisible();
+    await page.getByLabel('Job').selectOption({ label: `${job.reference} · Ardent Bathrooms` });
+    await expect(page).toHaveURL(new RegExp(`/ready\\?job=${job.id}$`));
+    await expect(page.getByRole('heading', { name: new RegExp(`^${job.reference}`), level: 2 })).toBeVisible();
+
+    const door = card(page, part.label);
+    await expect(door).toContainText('Waiting for finish');
+    await expect(door).toContainText('No coats yet (3 to go)');
+    await expect(door).toContainText('Rack A (drying room), shelf 3');
+    await expect(page.getByText(/^Live: changes show as they happen/)).toBeVisible();
+    // A marker on the window: if the page reloaded, it would be gone.
+    await page.evaluate(() => Object.assign(window, { boardNotReloaded: true }));
+
+    await logCoat(part.id, 0, new Date(Date.now() - 60_000));
+    await expect(door).toContainText('Coat 1 of 3', { timeout: 4_000 });
+    await expect(door).toContainText('In finish');
+    await expect(door).toContainText('Denib P320 needed');
+    await expect(door).toContainText(/Next coat from \d\d:\d\d \(in .+\)|Recoat window open until/);
+    await expect(door).toContainText(/Handle in \d/);
+    expect(await page.evaluate(() => (window as unknown as { boardNotReloaded?: boolean }).boardNotReloaded)).toBe(true);
+    await page.screenshot({ path: '/tmp/shots/ready-board-1280.png', fullPage: true });
+
+    await page.getByRole('button', { name: 'By rack' }).click();
+    await expect(page.getByRole('button', { name: 'By rack' })).toHaveAttribute('aria-pressed', 'true');
+    await expect(page.getByRole('heading', { name: /^Rack A \(drying room\)/, level: 2 })).toBeVisible();
+    await expect(card(page, part.label)).toContainText(`${job.reference} · Ardent Bathrooms · shelf 3`);
+  });
+
+  test('a part turns ready to handle at its time on the client, and is collected, then put back with Undo', async ({ page }) => {
+    const part = await newPart(`Pick-up door ${stamp}`, 4);
+    const now = Date.now();
+    await logCoat(part.id, 0, new Date(now - 3 * 3_600_000));
+    await logCoat(part.id, 1, new Date(now - 2 * 3_600_000));
+    const { coat } = await logCoat(part.id, 2, new Date(now - 60_000));
+    // The browser's clock is faked from here, so the board can be moved past the handle time; the server's is not.
+    await page.clock.install();
+    await signIn(page, 'assembler', `/ready?job=${job.id}`);
+    const door = card(page, part.label);
+    await expect(door).toContainText('Coat 3 of 3');
+    await expect(door).toContainText('Drying');
+    await expect(door).toContainText(/Handle in \d/);
+    await expect(door.getByRole('button', { name: /Mark collected/ })).toHaveCount(0);
+
+    await page.clock.fastForward(Date.parse(coat.handleAt) - Date.now() + 30_000);
+    await expect(door).toContainText(`Ready to handle since ${shopClock(coat.handleAt)}`);
+    await expect(door).toContainText(/Pack in \d/);
+    await expect(page.getByRole('status').filter({ hasText: 'On the board:' })).toHaveCount(1);
+
+    await door.getByRole('button', { name: `Mark collected: ${part.label}` }).click();
+    const toast = page.getByText(`${part.label} (${job.reference}) marked collected.`);
+    await expect(toast).toBeVisible();
+    await expect(page.getByText('Its place on Rack A (drying room) is free again.')).toBeVisible();
+    await expect(door).toHaveCount(0);
+    const collected = (await lead.get<{ items: ReadyItem[] }>(`/api/ready?jobId=${job.id}`)).items.find((p) => p.id === part.id)!;
+    expect(collected.state).toBe('collected');
+    expect(collected.rack).toBeNull();
+
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect(page.getByText(`${part.label} is back on the board as not collected.`)).toBeVisible();
+    await expect(door).toContainText(`Ready to handle since ${shopClock(coat.handleAt)}`);
+    await expect(door).toContainText('Not on a rack');
+    const back = (await lead.get<{ items: ReadyItem[] }>(`/api/ready?jobId=${job.id}`)).items.find((p) => p.id === part.id)!;
+    expect(back.state).not.toBe('collected');
+  });
+
+  test('a sprayer reads the board without collect buttons, and an empty filter says so and can be cleared', async ({ page }) => {
+    await signIn(page, 'sprayer', `/ready?job=${job.id}&state=collected`);
+    await expect(page.getByText('No parts match these filters')).toBeVisible();
+    await page.getByRole('button', { name: 'Clear filters' }).click();
+    await expect(page).toHaveURL(/\/ready$/);
+    await expect(page.getByRole('heading', { name: new RegExp(`^${job.reference}`), level: 2 })).toBeVisible();
+    // A sprayer may read the board but not mark parts collected.
+    await expect(page.getByRole('button', { name: /Mark collected/ })).toHaveCount(0);
+  });
+
+  test('the wall screen shows each job in large type, without the app’s navigation', async ({ page }) => {
+    await page.setViewportSize({ width: 1920, height: 1080 });
+    await signIn(page, 'assembler', '/');
+    await page.goto('/ready/wall');
+    await expect(page.getByRole('heading', { name: 'Ready board', level: 1 })).toBeVisible();
+    await expect(page.getByRole('navigation', { name: 'Main' })).toHaveCount(0);
+    const jobHeading = page.getByRole('heading', { name: job.reference, level: 2 });
+    await expect(jobHeading).toBeVisible();
+    const size = await jobHeading.evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
+    expect(size).toBeGreaterThanOrEqual(36);
+    const jobCard = page.getByRole('region', { name: job.reference });
+    await expect(jobCard).toContainText(/In finish\s*\d+/);
+    await expect(page.getByRole('heading', { name: 'Next ready to handle', level: 2 })).toBeVisible();
+    await expect(page.getByText(/^Live: changes show as they happen/)).toBeVisible();
+    await page.screenshot({ path: '/tmp/shots/ready-wall-1920.png' });
+  });
+});
