@@ -14,6 +14,7 @@ import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './ro
 import type { NotificationRuntime } from './mail/notifications-runtime';
 import { notificationRoutes } from './routes/notifications';
 import { plannerRoutes } from './routes/planner';
+import { sessionCautionRoutes } from './routes/session-cautions';
 import { spraySessionRoutes } from './routes/spray-sessions';
 import { createCoatService } from './services/coats';
 import type { EventBus } from './services/events';
@@ -62,6 +63,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/jobs', jobRoutes(createJobService(dataSource, clock), parts, createPartImportService(dataSource, parts), createEstimateService(dataSource)));
   api.use('/parts', partRoutes(parts));
   const spraySessions = createSpraySessionService(dataSource, settings, events, clock);
+  api.use(sessionCautionRoutes(dataSource));
   api.use('/spray-sessions', spraySessionRoutes(spraySessions, createMixService(dataSource, clock)));
   api.use('/planner', plannerRoutes(createPlannerService(dataSource, settings, clock), spraySessions));
   api.use('/coats', coatRoutes(createCoatService(dataSource, settings, events, clock)));

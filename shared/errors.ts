@@ -8,6 +8,8 @@ export const errorCodes = [
   'csrf_invalid',
   'not_found',
   'conflict',
+  /** A 409 a lead may override with a reason (resend with override: { reason }). */
+  'outside_opening_hours',
   'too_many_requests',
   'payload_too_large',
   'internal',

@@ -8,6 +8,7 @@ const statusOf: Record<ErrorCode, number> = {
   csrf_invalid: 403,
   not_found: 404,
   conflict: 409,
+  outside_opening_hours: 409,
   payload_too_large: 413,
   too_many_requests: 429,
   internal: 500,

@@ -3,6 +3,7 @@ import { openingHoursProblem } from '../../shared/finishing/opening-hours';
 import { BoothEntity } from '../db/entities/booth.entity';
 import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { UserEntity } from '../db/entities/user.entity';
+import { calendarDateIn } from '../../shared/time';
 import { AppError } from '../lib/app-error';
 
 export interface Slot {
@@ -14,6 +15,13 @@ export interface Slot {
 }
 
 const clock = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
+const timeOnly = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
+
+/** "Tue 6 Jul, 09:00–09:55", or both dates when the span crosses midnight. */
+function span(startIso: string, endIso: string, timeZone: string): string {
+  const sameDay = calendarDateIn(new Date(startIso), timeZone) === calendarDateIn(new Date(endIso), timeZone);
+  return `${clock(startIso, timeZone)}–${sameDay ? timeOnly(endIso, timeZone) : clock(endIso, timeZone)}`;
+}
 
 async function overlapping(manager: EntityManager, slot: Slot, column: 'booth_id' | 'sprayer_id', value: number): Promise<SpraySessionEntity | null> {
   const qb = manager
@@ -33,7 +41,7 @@ export async function assertNoClash(manager: EntityManager, slot: Slot, booth: B
   }
   const clash = await overlapping(manager, slot, 'booth_id', slot.boothId);
   if (clash) {
-    throw new AppError('conflict', `${booth.name} is already booked ${clock(clash.startAt, timeZone)}–${clock(clash.endAt, timeZone)} (spray session ${clash.id})`, { start: 'Overlaps another spray session of this booth' });
+    throw new AppError('conflict', `${booth.name} is already booked ${span(clash.startAt, clash.endAt, timeZone)} (spray session ${clash.id})`, { start: 'Overlaps another spray session of this booth' });
   }
   if (slot.sprayerId === null) return;
   const busy = await overlapping(manager, slot, 'sprayer_id', slot.sprayerId);
@@ -46,7 +54,9 @@ export async function assertNoClash(manager: EntityManager, slot: Slot, booth: B
 /** Outside opening hours needs a lead's recorded reason; without one the booking is refused in words. */
 export function assertOpen(slot: Slot, booth: BoothEntity, timeZone: string, overrideReason: string | null): void {
   const problem = openingHoursProblem(new Date(slot.startAt), new Date(slot.endAt), booth.openingHours, timeZone);
-  if (problem && !overrideReason) throw new AppError('conflict', `${problem}. A lead may book it anyway with a reason.`, { start: problem });
+  if (problem && !overrideReason) {
+    throw new AppError('outside_opening_hours', `${problem}. A lead may book it anyway with a reason.`, { start: problem, 'override.reason': 'Give a reason to book outside opening hours' });
+  }
 }
 
 export async function assertSprayer(manager: EntityManager, sprayerId: number | null | undefined): Promise<void> {

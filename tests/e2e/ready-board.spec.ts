@@ -145,7 +145,7 @@ test.describe('ready board', () => {
     await expect(door).toContainText(/Pack in \d/);
     await expect(page.getByRole('status').filter({ hasText: 'On the board:' })).toHaveCount(1);
 
-    await door.getByRole('button', { name: `Mark collected: ${part.label}` }).click();
+    await door.getByRole('button', { name: `Mark collected for ${part.label}` }).click();
     const toast = page.getByText(`${part.label} (${job.reference}) marked collected.`);
     await expect(toast).toBeVisible();
     await expect(page.getByText('Its place on Rack A (drying room) is free again.')).toBeVisible();
@@ -170,6 +170,14 @@ test.describe('ready board', () => {
     await expect(page.getByRole('heading', { name: new RegExp(`^${job.reference}`), level: 2 })).toBeVisible();
     // A sprayer may read the board but not mark parts collected.
     await expect(page.getByRole('button', { name: /Mark collected/ })).toHaveCount(0);
+
+    // Every job on one page: big jobs show their first parts and a button for the rest.
+    await expect(page.getByRole('button', { name: /^Show all 80 parts \(68 more\)$/ })).toBeVisible();
+    for (const [width, height] of [[1024, 768], [390, 844]]) {
+      await page.setViewportSize({ width, height });
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
+      await page.screenshot({ path: `/tmp/shots/ready-board-${width}.png` });
+    }
   });
 
   test('the wall screen shows each job in large type, without the app’s navigation', async ({ page }) => {
@@ -187,5 +195,7 @@ test.describe('ready board', () => {
     await expect(page.getByRole('heading', { name: 'Next ready to handle', level: 2 })).toBeVisible();
     await expect(page.getByText(/^Live: changes show as they happen/)).toBeVisible();
     await page.screenshot({ path: '/tmp/shots/ready-wall-1920.png' });
+    await page.setViewportSize({ width: 1024, height: 768 });
+    await page.screenshot({ path: '/tmp/shots/ready-wall-1024.png' });
   });
 });

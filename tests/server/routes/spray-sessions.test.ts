@@ -20,7 +20,9 @@ describe('POST /api/spray-sessions', () => {
     const first = await book(lead, { boothId, start: '2027-03-01T09:00:00Z', end: '2027-03-01T10:00:00Z' }).expect(201);
     expect(first.body.spraySession).toMatchObject({ boothId, state: 'planned', start: '2027-03-01T09:00:00.000Z', sprayerId: null });
     const clash = await book(lead, { boothId, start: '2027-03-01T09:30:00+00:00', end: '2027-03-01T11:00:00+00:00' }).expect(409);
-    expect(clash.body.error.message).toContain(`spray session ${first.body.spraySession.id}`);
+    expect(clash.body.error.code).toBe('conflict');
+    // Europe/London in March is GMT: the clash reads "Mon 1 Mar, 09:00–10:00 (spray session N)".
+    expect(clash.body.error.message).toContain(`Mon 1 Mar, 09:00–10:00 (spray session ${first.body.spraySession.id})`);
     // Touching ends do not overlap.
     await book(lead, { boothId, start: '2027-03-01T10:00:00Z', end: '2027-03-01T10:30:00Z' }).expect(201);
   });
@@ -35,6 +37,7 @@ describe('POST /api/spray-sessions', () => {
     // Demo booth 1 opens Monday to Friday, 07:00–17:00 in Europe/London; 2027-03-06 is a Saturday.
     const saturday = { boothId: 1, start: '2027-03-06T09:00:00Z', end: '2027-03-06T10:00:00Z' };
     const refused = await book(lead, saturday).expect(409);
+    expect(refused.body.error).toMatchObject({ code: 'outside_opening_hours' });
     expect(refused.body.error.message).toMatch(/closed on Saturdays/);
     const overridden = await book(lead, { ...saturday, override: { reason: 'Rush job for Ardent, agreed with the owner' } }).expect(201);
     expect(overridden.body.spraySession.overrideReason).toMatch(/Rush job/);
@@ -68,6 +71,25 @@ describe('POST /api/spray-sessions', () => {
     const id = mine.body.spraySession.id;
     await sprayer.agent.patch(`/api/spray-sessions/${id}`).set('x-csrf-token', sprayer.csrf).send({ state: 'checking' }).expect(200);
     await sprayer.agent.patch(`/api/spray-sessions/${id}`).set('x-csrf-token', sprayer.csrf).send({ start: '2027-03-05T08:00:00Z' }).expect(403);
+  });
+});
+
+describe('cautions and sprayers', () => {
+  it('works out a session’s cautions on the server, for any role, ending with the SDS line', async () => {
+    const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];
+    const partId = (await lead.agent.get(`/api/jobs/${job.id}/parts`)).body.items[0].id;
+    const session = await book(lead, { boothId, start: '2027-03-08T09:00:00Z', end: '2027-03-08T10:00:00Z', items: [{ partId, stepPosition: null }] }).expect(201);
+    const assembler = await signIn(ctx.app, demo.assembler);
+    const res = await assembler.agent.get(`/api/spray-sessions/${session.body.spraySession.id}/cautions`).expect(200);
+    expect(res.body.products.map((p: { name: string }) => p.name)).toEqual(['Kestrel 2K PU Primer White']);
+    expect(res.body.cautions[0].code).toBe('respirator-air-fed');
+    expect(res.body.cautions.at(-1).code).toBe('defer');
+  });
+
+  it('lists who can be given a session without exposing the user admin list', async () => {
+    const res = await lead.agent.get('/api/sprayers').expect(200);
+    expect(res.body.items).toEqual(expect.arrayContaining([{ id: 3, name: 'Mina Castell', role: 'sprayer' }]));
+    expect(res.body.items.every((u: { role: string }) => ['sprayer', 'lead'].includes(u.role))).toBe(true);
   });
 });
 

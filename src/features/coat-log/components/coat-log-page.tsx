@@ -13,6 +13,7 @@ import { getAllCoats, useCoats } from '../api/get-coats';
 import { coatsToCsv, downloadCsv } from './coat-csv';
 import { CoatLogFilters, type CoatLogFilterValues } from './coat-log-filters';
 import { shopDayStart } from './coat-log-format';
+import { CoatLogCards } from './coat-log-cards';
 import { CoatLogTable } from './coat-log-table';
 import { CorrectionForm } from './correction-form';
 
@@ -71,7 +72,13 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
         <EmptyState title="No coats match">Coats appear here as sprayers record them in their spray sessions. Try wider filters.</EmptyState>
       ) : (
         <>
-          <CoatLogTable coats={coats.data.items} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+          {/* Eleven columns need a wide screen; below that each coat is a card. Only one of the two is ever displayed. */}
+          <div className="hidden xl:block">
+            <CoatLogTable coats={coats.data.items} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+          </div>
+          <div className="xl:hidden">
+            <CoatLogCards coats={coats.data.items} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+          </div>
           <Pagination page={page} pageSize={pageSize} total={coats.data.total} noun={filters.history ? 'coat versions' : 'coats'} onPage={(next) => onChange(filters, next)} />
         </>
       )}

@@ -7,19 +7,17 @@ export function MailboxMessageItem({ message, timeZone }: { message: MailboxMess
   return (
     <li>
       <details className="group">
-        <summary className="flex min-h-touch cursor-pointer list-none flex-wrap items-center gap-x-4 gap-y-1 px-4 py-3 hover:bg-maple-50">
-          <span aria-hidden="true" className="text-maple-700 group-open:rotate-90">
+        <summary className="flex min-h-touch cursor-pointer list-none items-start gap-3 px-4 py-3 hover:bg-maple-50">
+          <span aria-hidden="true" className="mt-0.5 text-maple-700 group-open:rotate-90">
             ▸
           </span>
-          <span className="w-44 shrink-0 text-sm text-maple-700">
-            <span className="sr-only">Received </span>
-            {received}
+          <span className="min-w-0 flex-1">
+            <span className="block font-medium break-words">{message.subject || '(no subject)'}</span>
+            <span className="mt-0.5 flex flex-wrap gap-x-5 text-sm text-maple-700">
+              <span>Received {received}</span>
+              <span className="break-all">To {message.to}</span>
+            </span>
           </span>
-          <span className="w-56 shrink-0 truncate text-sm">
-            <span className="text-maple-700">To </span>
-            {message.to}
-          </span>
-          <span className="min-w-0 flex-1 font-medium break-words">{message.subject || '(no subject)'}</span>
         </summary>
         <div className="border-t border-maple-200 bg-maple-50 px-4 py-3">
           <p className="mb-2 text-sm text-maple-700">From {message.from}</p>

@@ -28,7 +28,14 @@ interface PlannerBoardProps extends Omit<CalendarHandlers, 'onSelectRange'> {
 export function PlannerBoard({ view, day, title, timeZone, booths, sessions, canWrite, onSelectRange, ...handlers }: PlannerBoardProps) {
   const events = useMemo(() => sessions.map((session) => toCalendarEvent(session, canWrite)), [sessions, canWrite]);
   // One stable list per booth, so a re-render does not hand the calendars new arrays to re-read.
-  const eventsByBooth = useMemo(() => Map.groupBy(events, (event) => (event.extendedProps?.session as PlannerSession).boothId), [events]);
+  const eventsByBooth = useMemo(() => {
+    const byBooth = new Map<number, EventInput[]>();
+    for (const event of events) {
+      const { boothId } = event.extendedProps?.session as PlannerSession;
+      byBooth.set(boothId, [...(byBooth.get(boothId) ?? []), event]);
+    }
+    return byBooth;
+  }, [events]);
   const common = { view, day, timeZone, canWrite, ...handlers };
 
   if (view === 'week' || booths.length < 2) {

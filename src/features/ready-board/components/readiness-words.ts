@@ -39,6 +39,8 @@ function milestone(iso: string | null, label: { before: string; since: string },
 }
 
 const handle = { before: 'Handle', since: 'Ready to handle' };
+// Between coats a part can be moved once touch-dry enough to handle, but it is not finished.
+const handleBetweenCoats = { before: 'Handle', since: 'Can be moved since' };
 const pack = { before: 'Pack', since: 'Ready to pack' };
 const cure = { before: 'Full cure', since: 'Fully cured' };
 
@@ -61,7 +63,7 @@ export function partLines(part: BoardPart, now: Date, timeZone: string): { headl
     case 'waiting':
       return { headline: 'Not sprayed yet', details: part.nextStep ? [`First: ${part.nextStep.toLowerCase()}`] : [] };
     case 'in-finish':
-      return { headline: 'Between coats', details: present([...nextCoatLines(part, now, timeZone), at(part.handleAt, handle)]) };
+      return { headline: 'Between coats', details: present([...nextCoatLines(part, now, timeZone), at(part.handleAt, handleBetweenCoats)]) };
     case 'drying':
       return { headline: at(part.handleAt, handle) ?? 'Drying', details: present([at(part.packAt, pack), at(part.fullCureAt, cure)]) };
     case 'ready-to-handle':

@@ -36,7 +36,7 @@ function BoardBody({ items, filters, onFilters, now, timeZone, canCollect }: Boa
     <div className="space-y-5">
       <ReadyAnnouncer counts={countStates(shown)} />
       {groups.map((group) => (
-        <ReadyGroup key={group.key} group={group} groupBy={filters.group} now={now} timeZone={timeZone} onCollect={onCollect} collectingId={pendingId} />
+        <ReadyGroup key={group.key} group={group} groupBy={filters.group} now={now} timeZone={timeZone} onCollect={onCollect} collectingId={pendingId} collapsible={groups.length > 1} />
       ))}
     </div>
   );

@@ -21,7 +21,7 @@ function GroupToggle({ value, onChange }: { value: GroupBy; onChange: (group: Gr
       type="button"
       aria-pressed={value === group}
       onClick={() => onChange(group)}
-      className={`min-h-touch flex-1 px-4 font-semibold ${value === group ? 'bg-lacquer-700 text-white' : 'bg-white text-maple-900 hover:bg-maple-100'}`}
+      className={`min-h-touch flex-1 whitespace-nowrap px-4 font-semibold ${value === group ? 'bg-lacquer-700 text-white' : 'bg-white text-maple-900 hover:bg-maple-100'}`}
     >
       {label}
     </button>
@@ -51,7 +51,7 @@ export function ReadyFilters({ filters, jobs, racks, onChange }: ReadyFiltersPro
     </div>
   );
   return (
-    <div role="search" aria-label="Ready board filters" className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[2fr_1.5fr_1.5fr_auto] lg:items-end">
+    <div role="search" aria-label="Ready board filters" className="grid gap-3 sm:grid-cols-2 sm:items-end xl:grid-cols-[2fr_1.5fr_1.5fr_auto]">
       {select(ids.job, 'Job', filters.jobId, (v) => onChange({ ...filters, jobId: idOrUndefined(v) }), [['', 'All jobs'], ...jobs.map((j): [string, string] => [String(j.id), `${j.reference} · ${j.customer}`])])}
       {select(ids.rack, 'Rack', filters.rackId, (v) => onChange({ ...filters, rackId: idOrUndefined(v) }), [['', 'All racks'], ...racks.map((r): [string, string] => [String(r.id), r.name])])}
       {select(ids.state, 'State', filters.state, (v) => onChange({ ...filters, state: v as StateFilter }), [

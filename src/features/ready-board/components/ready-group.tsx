@@ -14,13 +14,15 @@ interface ReadyGroupProps {
   timeZone: string;
   onCollect?: (part: BoardPart) => void;
   collectingId: number | null;
+  /** Only when several groups share the page; one group on its own shows every part. */
+  collapsible: boolean;
 }
 
-export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectingId }: ReadyGroupProps) {
+export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectingId, collapsible }: ReadyGroupProps) {
   const [showAll, setShowAll] = useState(false);
   const headingId = useId();
   const listId = useId();
-  const shown = showAll ? group.parts : group.parts.slice(0, firstShown);
+  const shown = showAll || !collapsible ? group.parts : group.parts.slice(0, firstShown);
   const hidden = group.parts.length - shown.length;
   return (
     <section aria-labelledby={headingId} className="rounded-panel border border-maple-300 bg-maple-50 p-3 sm:p-4">
@@ -37,7 +39,7 @@ export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectin
           <ReadyPartCard key={part.id} part={part} now={now} timeZone={timeZone} groupBy={groupBy} onCollect={onCollect} collecting={collectingId === part.id} />
         ))}
       </ul>
-      {(hidden > 0 || showAll) && group.parts.length > firstShown && (
+      {collapsible && group.parts.length > firstShown && (
         <Button variant="quiet" className="mt-2" aria-controls={listId} aria-expanded={showAll} onClick={() => setShowAll((all) => !all)}>
           {showAll ? 'Show fewer parts' : `Show all ${group.parts.length} parts (${hidden} more)`}
         </Button>

@@ -37,7 +37,7 @@ export function ReadyPartCard({ part, now, timeZone, groupBy, onCollect, collect
       </div>
       {onCollect && canPickUp && (
         <Button variant="secondary" className="self-start" pending={collecting} pendingText="Marking…" onClick={() => onCollect(part)}>
-          Mark collected<span className="sr-only">: {part.label}</span>
+          Mark collected<span className="sr-only"> for {part.label}</span>
         </Button>
       )}
     </li>

@@ -13,7 +13,7 @@ const tones: Record<ReadinessState, string> = {
 
 /** The state in words; the colour only echoes it, and a tick marks what can be picked up. */
 export function ReadyStateBadge({ state, large = false }: { state: ReadinessState; large?: boolean }) {
-  const size = large ? 'border-2 px-3 py-1 text-xl' : 'border px-2 py-0.5 text-sm';
+  const size = large ? 'border-[3px] px-4 py-1 text-2xl xl:text-3xl' : 'border px-2 py-0.5 text-sm';
   return (
     <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded-full bg-white font-semibold ${size} ${tones[state]}`}>
       {pickUpStates.has(state) && <span aria-hidden="true">✓</span>}

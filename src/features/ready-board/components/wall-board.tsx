@@ -24,7 +24,7 @@ function WallJobs({ summary }: { summary: WallSummary }) {
           Nothing in finish right now. Jobs show here once their first coat is logged.
         </p>
       ) : (
-        <div className="grid gap-5 md:grid-cols-2 2xl:grid-cols-3">
+        <div className="grid gap-5 sm:grid-cols-[repeat(auto-fill,minmax(24rem,1fr))]">
           {summary.activeJobs.slice(0, maxJobCards).map((job) => (
             <WallJobCard key={job.jobId} job={job} />
           ))}

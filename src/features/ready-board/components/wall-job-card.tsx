@@ -11,11 +11,11 @@ export function WallJobCard({ job }: { job: WallJob }) {
         {job.reference}
       </h2>
       <p className="mb-4 truncate text-2xl font-medium text-maple-800">{job.customer}</p>
-      <ul className="space-y-2">
+      <ul className="space-y-3">
         {states.map((state) => (
-          <li key={state} className="flex items-center justify-between gap-3 text-2xl">
+          <li key={state} className="flex items-center justify-between gap-4">
             <ReadyStateBadge state={state} large />
-            <span className="font-bold tabular-nums text-maple-900">
+            <span className="text-4xl font-bold tabular-nums text-maple-900 xl:text-5xl">
               {job.counts[state]}
               <span className="sr-only"> {stateLabels[state].toLowerCase()}</span>
             </span>

@@ -40,9 +40,9 @@ export function CautionsPanel({ products, booth, gaps, pending }: CautionsPanelP
           <p className="mt-3 border-t border-maple-300 pt-3 text-maple-900">{deferToSdsLine}</p>
         </>
       ) : (
-        <ul className="mt-3 space-y-3">
+        <ul className="mt-3 grid gap-3 md:grid-cols-2 xl:grid-cols-1">
           {cautionsFor(products, booth).map((caution) => (
-            <li key={caution.code} className={caution.code === 'defer' ? 'border-t border-maple-300 pt-3' : ''}>
+            <li key={caution.code} className={caution.code === 'defer' ? 'border-t border-maple-300 pt-3 md:col-span-2 xl:col-span-1' : ''}>
               <p className="text-lg font-semibold text-maple-900">{caution.title}</p>
               <p className="text-maple-900">{caution.message}</p>
             </li>

@@ -96,11 +96,11 @@ export function ChecklistForm({ session, booth, products, reading, units, timeZo
       <ChecklistVerdict evaluation={live.evaluation} missing={live.missing} dew={live.dew} units={units} />
       {canOverride && live.evaluation?.verdict === 'stop' && <OverrideReasonField register={form.register} error={formState.errors.overrideReason?.message} />}
       <div className="flex flex-wrap items-start gap-3">
-        <Button variant="secondary" className="min-h-14" onClick={save(false)} pending={update.isPending} pendingText="Saving…">
+        <Button variant="secondary" className="min-h-16 px-6 text-lg" onClick={save(false)} pending={update.isPending} pendingText="Saving…">
           Record checks
         </Button>
         <div>
-          <Button className="min-h-14 px-6 text-lg" onClick={save(true)} disabled={blocked !== null} pending={update.isPending} pendingText="Starting…" aria-describedby={blocked ? blockedId : undefined}>
+          <Button className="min-h-16 px-8 text-xl" onClick={save(true)} disabled={blocked !== null} pending={update.isPending} pendingText="Starting…" aria-describedby={blocked ? blockedId : undefined}>
             Start spraying
           </Button>
           {blocked && (

@@ -25,7 +25,7 @@ function NextWindow({ part, timeZone, now }: { part: ReadyPart; timeZone: string
   return (
     <p>
       <span className="font-semibold">Next on {part.label}:</span> {part.nextStep}
-      {part.abradeRequired ? ' (abrade before the next coat)' : ''}; {window}.
+      {part.abradeRequired && !part.nextStep.startsWith('Abrade') ? ' (abrade first: the window was missed)' : ''}; {window}.
     </p>
   );
 }

@@ -19,8 +19,9 @@ export function Countdown({ label, until, now, overText, large = false }: Countd
   const over = left <= 0;
   return (
     <span className="inline-flex flex-wrap items-baseline gap-x-2">
-      <span aria-hidden="true" className={`font-mono font-bold tabular-nums ${large ? 'text-5xl sm:text-6xl' : 'text-lg'}`}>
+      <span aria-hidden="true" className={`font-bold tabular-nums ${large ? 'text-5xl sm:text-6xl' : 'text-lg'}`}>
         {over ? '0:00' : remainingWords(left)}
+        <span className="font-sans text-base font-semibold"> left</span>
       </span>
       <span aria-live="polite" className="sr-only">
         {over ? `${label}: ${overText}` : `${label}: ${remainingMinutesWords(left)} left`}

@@ -9,6 +9,8 @@ import { verdictBorder, VerdictBadge } from './verdict-badge';
 
 interface PotState {
   verdict: Verdict;
+  /** The badge's word. */
+  short: string;
   words: string;
   until: string | null;
   label: string;
@@ -18,16 +20,16 @@ interface PotState {
 export function potState(mix: Mix, now: Date, timeZone: string): PotState {
   const t = now.getTime();
   if (t < Date.parse(mix.inductionEndsAt)) {
-    return { verdict: 'caution', words: `Standing (induction): use from ${shopWhen(mix.inductionEndsAt, timeZone, now)}`, until: mix.inductionEndsAt, label: 'Induction' };
+    return { verdict: 'caution', short: 'Standing', words: `Standing (induction): use from ${shopWhen(mix.inductionEndsAt, timeZone, now)}`, until: mix.inductionEndsAt, label: 'Induction' };
   }
-  if (!mix.potLifeEndsAt) return { verdict: 'go', words: 'Usable: the data sheet gives no pot life', until: null, label: 'Pot life' };
+  if (!mix.potLifeEndsAt) return { verdict: 'go', short: 'Usable', words: 'Usable: the data sheet gives no pot life', until: null, label: 'Pot life' };
   if (t >= Date.parse(mix.potLifeEndsAt)) {
-    return { verdict: 'stop', words: `Pot life over at ${shopWhen(mix.potLifeEndsAt, timeZone, now)}: do not spray this pot`, until: null, label: 'Pot life' };
+    return { verdict: 'stop', short: 'Pot life over', words: `Pot life over at ${shopWhen(mix.potLifeEndsAt, timeZone, now)}: do not spray this pot`, until: null, label: 'Pot life' };
   }
   if (mix.potLifeWarningAt && t >= Date.parse(mix.potLifeWarningAt)) {
-    return { verdict: 'caution', words: `Use soon: pot life ends ${shopWhen(mix.potLifeEndsAt, timeZone, now)}`, until: mix.potLifeEndsAt, label: 'Pot life' };
+    return { verdict: 'caution', short: 'Use soon', words: `Use soon: pot life ends ${shopWhen(mix.potLifeEndsAt, timeZone, now)}`, until: mix.potLifeEndsAt, label: 'Pot life' };
   }
-  return { verdict: 'go', words: `Usable until ${shopWhen(mix.potLifeEndsAt, timeZone, now)}`, until: mix.potLifeEndsAt, label: 'Pot life' };
+  return { verdict: 'go', short: 'Usable', words: `Usable until ${shopWhen(mix.potLifeEndsAt, timeZone, now)}`, until: mix.potLifeEndsAt, label: 'Pot life' };
 }
 
 interface MixCardProps {
@@ -46,7 +48,7 @@ export function MixCard({ mix, product, now, timeZone, units }: MixCardProps) {
     <article aria-label={`Mix ${mix.id}: ${mix.productName}`} className={`rounded-panel border-2 bg-white p-4 ${verdictBorder[state.verdict]}`}>
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h4 className="text-lg font-bold">{mix.productName}</h4>
-        <VerdictBadge verdict={state.verdict} />
+        <VerdictBadge verdict={state.verdict} label={state.short} />
       </div>
       <p className="text-maple-700">
         Mixed {shopWhen(mix.mixedAt, timeZone, now)} by {mix.recordedByName} at {formatQuantity(mix.tempC, 'temperature', units)}

@@ -48,7 +48,10 @@ export function MySessionsPage({ viewerId, seesAll, timeZone }: MySessionsPagePr
   const [range] = useState(rangeFromNow);
   const sessions = useSpraySessions(range);
   const today = calendarDateIn(new Date(), timeZone);
-  const mine = (sessions.data?.items ?? []).filter((s) => (seesAll || s.sprayerId === viewerId) && calendarDateIn(new Date(s.end), timeZone) >= today);
+  const relevant = (sessions.data?.items ?? []).filter((s) => (seesAll || s.sprayerId === viewerId) && calendarDateIn(new Date(s.end), timeZone) >= today);
+  // Cancelled bookings would bury the ones to run; they are counted, not listed.
+  const mine = relevant.filter((s) => s.state !== 'cancelled');
+  const cancelled = relevant.length - mine.length;
   // A session still running from yesterday counts as today's.
   const dayOf = (s: SpraySession) => [calendarDateIn(new Date(s.start), timeZone), today].sort()[1];
   const days = [...new Set(mine.map(dayOf))].sort();
@@ -67,6 +70,7 @@ export function MySessionsPage({ viewerId, seesAll, timeZone }: MySessionsPagePr
         <EmptyState title="No sessions booked">{seesAll ? 'Book sessions in the booth planner.' : 'Nothing is booked for you this week. The finishing lead books sessions in the booth planner.'}</EmptyState>
       ) : (
         <div className="space-y-6">
+          {cancelled > 0 && <p className="text-maple-700">{cancelled === 1 ? '1 cancelled session is' : `${cancelled} cancelled sessions are`} not shown.</p>}
           {days.map((day) => (
             <section key={day} aria-labelledby={`day-${day}`}>
               <h2 id={`day-${day}`} className="mb-2 text-xl font-semibold">

@@ -28,6 +28,7 @@ function LoadedSession({ session, viewer, units, timeZone }: PageProps & { sessi
   const plan = useSessionPlan(session);
   const coats = useSessionCoats(session.id);
   const pendingCoats = usePendingCoats(session.id);
+  const cautionsFirst = session.state === 'planned' || session.state === 'checking';
   const partCount = new Set(session.items.map((item) => item.partId)).size;
   const mayRun = can(viewer.role, 'spray-sessions:write') || (can(viewer.role, 'spray-sessions:run') && session.sprayerId === viewer.id);
   const roles = { canRun: mayRun, canRecord: mayRun && can(viewer.role, 'coats:write'), canOverride: can(viewer.role, 'spray-sessions:write') };
@@ -46,10 +47,11 @@ function LoadedSession({ session, viewer, units, timeZone }: PageProps & { sessi
         <ErrorState error={booth.error} what="the booth" onRetry={() => booth.refetch()} />
       ) : (
         <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_22rem] xl:items-start">
-          <aside className="xl:sticky xl:top-20 xl:order-2">
+          {/* Read before the checks; once spraying, the gloved hand needs the coat form first and the cautions follow it. */}
+          <aside className={`xl:sticky xl:top-20 xl:order-2 ${cautionsFirst ? 'order-1' : 'order-2'}`}>
             <CautionsPanel products={plan.sprayed} booth={booth.data} gaps={plan.gaps} pending={plan.pending} />
           </aside>
-          <div className="min-w-0 space-y-6 xl:order-1">
+          <div className={`min-w-0 space-y-6 xl:order-1 ${cautionsFirst ? 'order-2' : 'order-1'}`}>
             <SessionStage session={session} booth={booth.data} plan={plan} coats={coats} pendingCoats={pendingCoats} roles={roles} units={units} timeZone={timeZone} />
           </div>
         </div>
