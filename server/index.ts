@@ -16,7 +16,7 @@ async function main(): Promise<void> {
   const dataDir = config.database.kind === 'sqlite' ? path.dirname(path.resolve(config.database.path)) : path.resolve('data');
   const sessionSecret = resolveSessionSecret(config.sessionSecret, dataDir);
   const notifications = await startNotifications(dataSource, config, logger, { schedule: true });
-  const app = createApp({ dataSource, config, sessionSecret, logger, notifications, clientDir: path.resolve('dist/client') });
+  const app = createApp({ dataSource, config, sessionSecret, logger, notifications, clientDir: path.resolve(config.clientDir) });
   const server = app.listen(config.port, config.host, () => {
     void announce(config.port, dataSource);
   });

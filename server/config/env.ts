@@ -23,6 +23,7 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Boothwright <boothwright@localhost>'),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   RECOAT_WARNING_HOURS: z.coerce.number().min(0.25).max(48).default(2),
+  CLIENT_DIR: z.string().default(path.join('dist', 'client')),
 });
 
 export type DatabaseConfig = { kind: 'sqlite'; path: string } | { kind: 'postgres'; url: string };
@@ -44,6 +45,8 @@ export interface AppConfig {
   mailFrom: string;
   fakeSmtpPort: number;
   recoatWarningHours: number;
+  /** The built client to serve. */
+  clientDir: string;
 }
 
 export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
@@ -67,6 +70,7 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     mailFrom: env.MAIL_FROM,
     fakeSmtpPort: env.FAKE_SMTP_PORT,
     recoatWarningHours: env.RECOAT_WARNING_HOURS,
+    clientDir: env.CLIENT_DIR,
   };
 }
 

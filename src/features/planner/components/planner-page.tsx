@@ -9,6 +9,7 @@ import type { PlannerSession } from '../api/get-spray-sessions';
 import { useCancelSession } from '../hooks/use-cancel-session';
 import { shopWallToInstant } from '../utils/shop-wall-clock';
 import type { BookingTarget, PlanningSettings } from './booking-form';
+import { AutoPlanDialog } from './auto-plan-dialog';
 import { PlannerCalendar } from './planner-calendar';
 import { PlannerDialogs, type Viewer } from './planner-dialogs';
 
@@ -24,6 +25,7 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
   const [day, setDay] = useState(() => calendarDateIn(new Date(), timeZone));
   const [booking, setBooking] = useState<BookingTarget | null>(null);
   const [opened, setOpened] = useState<PlannerSession | undefined>(undefined);
+  const [autoPlanning, setAutoPlanning] = useState(false);
   const booths = usePlannerBooths();
   const sprayers = useSprayers(viewer.canWrite && canListUsers);
   const cancelSession = useCancelSession(timeZone);
@@ -47,7 +49,18 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
           ? 'Drag across free time to book a booth, drag a session to move it, or pull its lower edge to change its length.'
           : 'Who is in which booth, and when. The finishing lead books and moves sessions.'
       }
-      actions={viewer.canWrite && booths.data && booths.data.items.length > 0 && <Button onClick={bookBlank}>Book a session</Button>}
+      actions={
+        viewer.canWrite &&
+        booths.data &&
+        booths.data.items.length > 0 && (
+          <div className="flex flex-wrap gap-2">
+            <Button variant="secondary" onClick={() => setAutoPlanning(true)}>
+              Auto-plan jobs
+            </Button>
+            <Button onClick={bookBlank}>Book a session</Button>
+          </div>
+        )
+      }
     />
   );
   if (booths.isPending || booths.isError || booths.data.items.length === 0) {
@@ -75,6 +88,12 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
         onDay={setDay}
         onBook={(start, end, boothId) => setBooking({ kind: 'new', start, end, boothId })}
         onOpen={setOpened}
+      />
+      <AutoPlanDialog
+        open={autoPlanning}
+        onClose={() => setAutoPlanning(false)}
+        timeZone={timeZone}
+        boothNames={new Map(booths.data.items.map((b) => [b.id, b.name]))}
       />
       <PlannerDialogs
         viewer={viewer}

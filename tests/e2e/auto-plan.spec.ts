@@ -1,0 +1,27 @@
+import { expect, test } from '@playwright/test';
+import { signIn } from './helpers';
+
+test('a lead auto-plans a job’s coats and books them all at once', async ({ page }) => {
+  test.slow();
+  await signIn(page, 'lead', '/planner');
+  await page.getByRole('button', { name: 'Auto-plan jobs' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Auto-plan jobs' });
+  await dialog.getByRole('checkbox', { name: /LJ-26-105/ }).check();
+  await dialog.getByRole('button', { name: 'Propose a plan' }).click();
+  // The demo vanity doors' system: 2K PU primer, denib, two topcoats — three coats to book.
+  const sessions = dialog.getByRole('table', { name: 'Proposed spray sessions' });
+  await expect(sessions.getByRole('row')).toHaveCount(4);
+  await expect(sessions).toContainText('Step 1: Kestrel 2K PU Primer White');
+  await expect(sessions).toContainText('Step 3: Kestrel 2K PU Topcoat Satin');
+  await expect(dialog.getByRole('list', { name: 'Jobs in the proposal' })).toContainText('LJ-26-105');
+  await page.screenshot({ path: '/tmp/shots/planner-auto-plan.png', fullPage: true });
+  await dialog.getByRole('button', { name: 'Book all 3 sessions' }).click();
+  await expect(page.getByText('Booked 3 spray sessions')).toBeVisible();
+  await expect(dialog).toBeHidden();
+});
+
+test('a sprayer has no auto-plan button', async ({ page }) => {
+  await signIn(page, 'sprayer', '/planner');
+  await expect(page.getByRole('heading', { name: 'Booth planner' })).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Auto-plan jobs' })).toHaveCount(0);
+});
