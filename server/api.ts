@@ -49,7 +49,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   const users = createUserService(dataSource, clock);
   const settings = createSettingsService(dataSource, clock);
   const files = createFileService(dataSource, config.uploadDir, clock);
-  const parts = createPartService(dataSource, clock);
+  const parts = createPartService(dataSource, clock, events);
 
   api.use('/auth', authRoutes(auth, users, config.loginRateLimit));
   api.use('/users', userRoutes(users));

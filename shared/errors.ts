@@ -10,6 +10,8 @@ export const errorCodes = [
   'conflict',
   /** A 409 a lead may override with a reason (resend with override: { reason }). */
   'outside_opening_hours',
+  /** Also overridable by a lead: the racks would be full before the parts can be handled. */
+  'rack_space',
   'too_many_requests',
   'payload_too_large',
   'internal',

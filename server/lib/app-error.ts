@@ -9,6 +9,7 @@ const statusOf: Record<ErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   outside_opening_hours: 409,
+  rack_space: 409,
   payload_too_large: 413,
   too_many_requests: 429,
   internal: 500,

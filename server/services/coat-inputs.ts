@@ -1,7 +1,9 @@
 import { In, type EntityManager } from 'typeorm';
 import { computeCoatRecord, type CoatRecord, type CoatWarning } from '../../shared/finishing/coat-record';
+import type { FinishStep } from '../../shared/finishing/readiness';
 import type { CreateCoatInput } from '../../shared/schemas/coat';
 import { calendarDateIn } from '../../shared/time';
+import type { CoatEntity } from '../db/entities/coat.entity';
 import { MixEntity } from '../db/entities/mix.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { ProductLotEntity } from '../db/entities/product-lot.entity';
@@ -54,6 +56,12 @@ async function mixWarnings(manager: EntityManager, fields: CoatFields): Promise<
   return [];
 }
 
+/** A denib planned between the last coat and this one gives a mechanical key: then only the opening counts. */
+function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: number | null) {
+  const abraded = latest.stepPosition !== null && stepPosition !== null && system.slice(latest.stepPosition + 1, stepPosition).some((s) => s.kind === 'abrade');
+  return { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt && !abraded ? new Date(latest.recoatClosesAt) : null };
+}
+
 /** Works out the step, the target film, the previous window and every computed value of a coat. */
 export async function prepareCoat(manager: EntityManager, fields: CoatFields, timeZone: string): Promise<{ record: CoatRecord; stepPosition: number | null; dryingTempC: number }> {
   const { product, parts } = await loadReferences(manager, fields);
@@ -78,7 +86,7 @@ export async function prepareCoat(manager: EntityManager, fields: CoatFields, ti
     wetFilmUm: fields.wetFilmUm,
     targetDryFilmUm: step?.kind === 'coat' ? step.dryFilmUm : null,
     lotExpired: await lotExpired(manager, fields, timeZone),
-    previousWindow: latest ? { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt ? new Date(latest.recoatClosesAt) : null } : null,
+    previousWindow: latest ? previousWindow(latest, system, stepPosition) : null,
     timeZone,
   });
   record.warnings.push(...(await mixWarnings(manager, fields)));

@@ -10,6 +10,7 @@ import { RackEntity } from '../db/entities/rack.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
+import type { EventBus } from './events';
 import { readinessOf } from './ready';
 
 // Unambiguous characters only: a tag may be typed in by hand when a camera cannot read it.
@@ -63,7 +64,13 @@ function newPartEntity(manager: EntityManager, jobId: number, fields: ReturnType
   return manager.create(PartEntity, { ...fields, jobId, coatedAreaM2: coatedAreaM2(fields), tag: newTag(), state: 'waiting', createdAt: now, updatedAt: now });
 }
 
-export function createPartService(dataSource: DataSource, clock: Clock = systemClock) {
+export function createPartService(dataSource: DataSource, clock: Clock = systemClock, events?: EventBus) {
+  // After the transaction commits, so a board that refetches sees the change.
+  const published = (part: Part): Part => {
+    events?.publish({ type: 'part.changed', id: part.id });
+    return part;
+  };
+
   async function dto(manager: EntityManager, part: PartEntity): Promise<Part> {
     return toPartDto(part, await rackNamesFor(manager, [part]));
   }
@@ -129,7 +136,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
         const summary = collected ? `Collected part ${part.label}${rackName ? ` from ${rackName}` : ''}` : `Put part ${part.label} back as not collected`;
         await recordAudit(manager, actor, { action: collected ? 'collect' : 'uncollect', entity: 'part', entityId: id, summary }, now);
         return dto(manager, part);
-      });
+      }).then(published);
     },
 
     async update(id: number, patch: UpdatePartInput, actor: Actor): Promise<Part> {
@@ -144,7 +151,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
         await manager.save(part);
         await recordAudit(manager, actor, { action: 'update', entity: 'part', entityId: id, summary: `Changed part ${part.label}`, changes }, now);
         return dto(manager, part);
-      });
+      }).then(published);
     },
   };
 }

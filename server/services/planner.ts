@@ -1,9 +1,7 @@
-import { In, IsNull, MoreThan, Not, type DataSource, type EntityManager } from 'typeorm';
+import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
 import { autoPlan, type Plan, type PlanJob, type PlanStep } from '../../shared/finishing/auto-plan';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import { BoothEntity } from '../db/entities/booth.entity';
-import { CoatEntity } from '../db/entities/coat.entity';
-import { CoatPartEntity } from '../db/entities/coat-part.entity';
 import { JobEntity } from '../db/entities/job.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { ProductEntity } from '../db/entities/product.entity';
@@ -11,9 +9,9 @@ import { RackEntity } from '../db/entities/rack.entity';
 import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { systemClock, type Clock } from '../lib/clock';
 import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
+import { currentRackLoad, footprintM2 } from './rack-space';
 import type { SettingsService } from './settings';
 
-const footprintM2 = (p: PartEntity) => (p.lengthMm * p.widthMm * p.quantity) / 1e6;
 
 /** One job's remaining steps, planned from its least advanced part (the whole batch moves together). */
 async function planJobInput(manager: EntityManager, job: JobEntity, system: FinishStep[], products: Map<number, ProductEntity>): Promise<PlanJob | null> {
@@ -40,19 +38,6 @@ async function planJobInput(manager: EntityManager, job: JobEntity, system: Fini
     remaining,
     lastWindow: latest ? { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt ? new Date(latest.recoatClosesAt) : null } : null,
   };
-}
-
-/** Shelf space taken now by parts still drying towards handling. */
-async function currentRackLoad(manager: EntityManager, now: Date) {
-  const drying = await manager.find(CoatEntity, { where: { handleAt: MoreThan(now.toISOString()) } });
-  if (drying.length === 0) return [];
-  const links = await manager.find(CoatPartEntity, { where: { coatId: In(drying.map((c) => c.id)) } });
-  const parts = await manager.findBy(PartEntity, { id: In([...new Set(links.map((l) => l.partId))]) });
-  return drying.map((coat) => ({
-    from: now,
-    until: new Date(coat.handleAt),
-    areaM2: links.filter((l) => l.coatId === coat.id).reduce((sum, l) => sum + footprintM2(parts.find((p) => p.id === l.partId)!), 0),
-  }));
 }
 
 export function createPlannerService(dataSource: DataSource, settings: SettingsService, clock: Clock = systemClock) {

@@ -18,6 +18,7 @@ import { systemClock, type Clock } from '../lib/clock';
 import { recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
 import type { SettingsService } from './settings';
+import { assertRackSpace } from './rack-space';
 import { assertNoClash, assertOpen, assertSprayer } from './spray-session-rules';
 import { changeState, recordChecklist, type SessionActor } from './spray-session-progress';
 
@@ -69,6 +70,7 @@ async function insertSession(manager: EntityManager, fields: SessionFields, acto
   await assertSprayer(manager, fields.sprayerId);
   assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
   await assertNoClash(manager, slot, booth, timezone);
+  await assertRackSpace(manager, fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
   const session = await manager.save(
     manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
   );

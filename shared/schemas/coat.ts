@@ -42,8 +42,12 @@ export const createCoatSchema = z.object({
 });
 export type CreateCoatInput = z.input<typeof createCoatSchema>;
 
-/** A correction restates the coat as it should have been, with the reason; the old version stays. */
-export const correctCoatSchema = createCoatSchema
+/**
+ * A correction names only what changes, with the reason; the old version stays. Built from the
+ * fields without their defaults, so a field the correction leaves out keeps its old value.
+ */
+export const correctCoatSchema = z
+  .object(coatFields)
   .omit({ spraySessionId: true, idempotencyKey: true })
   .partial()
   .extend({ reason: z.string().trim().min(3, 'Say what was wrong').max(500) });

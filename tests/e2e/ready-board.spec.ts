@@ -115,7 +115,7 @@ test.describe('ready board', () => {
     await expect(door).toContainText('In finish');
     await expect(door).toContainText('Denib P320 needed');
     await expect(door).toContainText(/Next coat from \d\d:\d\d \(in .+\)|Recoat window open until/);
-    await expect(door).toContainText(/Handle in \d/);
+    await expect(door).toContainText(/Handle in \d+ (h|min)/);
     expect(await page.evaluate(() => (window as unknown as { boardNotReloaded?: boolean }).boardNotReloaded)).toBe(true);
     await page.screenshot({ path: '/tmp/shots/ready-board-1280.png', fullPage: true });
 
@@ -143,12 +143,17 @@ test.describe('ready board', () => {
     await page.clock.fastForward(Date.parse(coat.handleAt) - Date.now() + 30_000);
     await expect(door).toContainText(`Ready to handle since ${shopClock(coat.handleAt)}`);
     await expect(door).toContainText(/Pack in \d/);
+    // The door from the first test is between coats: past its handle time it may be moved, not picked up.
+    const between = card(page, `Live door ${stamp}`);
+    await expect(between).toContainText(/Can be moved since \d\d:\d\d/);
+    await expect(between.getByRole('button', { name: /Mark collected/ })).toHaveCount(0);
     await expect(page.getByRole('status').filter({ hasText: 'On the board:' })).toHaveCount(1);
 
     await door.getByRole('button', { name: `Mark collected for ${part.label}` }).click();
     const toast = page.getByText(`${part.label} (${job.reference}) marked collected.`);
     await expect(toast).toBeVisible();
     await expect(page.getByText('Its place on Rack A (drying room) is free again.')).toBeVisible();
+    await page.screenshot({ path: '/tmp/shots/ready-collected-toast.png' });
     await expect(door).toHaveCount(0);
     const collected = (await lead.get<{ items: ReadyItem[] }>(`/api/ready?jobId=${job.id}`)).items.find((p) => p.id === part.id)!;
     expect(collected.state).toBe('collected');
@@ -173,11 +178,26 @@ test.describe('ready board', () => {
 
     // Every job on one page: big jobs show their first parts and a button for the rest.
     await expect(page.getByRole('button', { name: /^Show all 80 parts \(68 more\)$/ })).toBeVisible();
+    // The job with parts in finish comes before jobs that are only waiting.
+    const jobHeadings = await page.getByRole('heading', { level: 2 }).allTextContents();
+    expect(jobHeadings.findIndex((h) => h.startsWith(job.reference))).toBeLessThan(jobHeadings.findIndex((h) => h.startsWith('LJ-26-101')));
     for (const [width, height] of [[1024, 768], [390, 844]]) {
       await page.setViewportSize({ width, height });
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
       await page.screenshot({ path: `/tmp/shots/ready-board-${width}.png` });
     }
+  });
+
+  test('with the live stream down, the board says it is reconnecting and still picks up a coat by polling', async ({ page }) => {
+    const part = await newPart(`Polled door ${stamp}`, 5);
+    // The browser cannot open the change stream, as when a proxy in between drops it.
+    await page.route('**/api/events', (route) => route.abort());
+    await signIn(page, 'assembler', `/ready?job=${job.id}`);
+    await expect(page.getByText(/Reconnecting… live changes paused, so the board refreshes every 15 s/)).toBeVisible();
+    const door = card(page, part.label);
+    await expect(door).toContainText('No coats yet (3 to go)');
+    await logCoat(part.id, 0, new Date(Date.now() - 60_000));
+    await expect(door).toContainText('Coat 1 of 3', { timeout: 20_000 });
   });
 
   test('the wall screen shows each job in large type, without the app’s navigation', async ({ page }) => {

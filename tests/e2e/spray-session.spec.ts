@@ -36,7 +36,7 @@ async function leadApi(baseURL: string): Promise<Api> {
 }
 
 /** A fresh door on the demo vanity job (2K PU primer first) in a session booked now for Mina, the demo sprayer. */
-async function bookSession(api: Api): Promise<{ sessionId: number; partLabel: string }> {
+async function bookSession(api: Api): Promise<{ sessionId: number; partLabel: string; partTag: string }> {
   const now = Date.now();
   const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
   const partLabel = `E2E door ${now}`;
@@ -53,7 +53,7 @@ async function bookSession(api: Api): Promise<{ sessionId: number; partLabel: st
     items: [{ partId: part.id, stepPosition: 0 }],
     override: { reason: 'Browser test: booked whatever the hour' },
   });
-  return { sessionId: spraySession.id, partLabel };
+  return { sessionId: spraySession.id, partLabel, partTag: part.tag };
 }
 
 /** A number box by its label; the − and + buttons beside it name the field too. */
@@ -72,7 +72,7 @@ test.describe('spray session', () => {
   test('a sprayer checks, mixes, records coats on and off line, stops spraying, and corrects a coat in the log', async ({ page, context, baseURL }) => {
     test.setTimeout(120_000);
     const api = await leadApi(baseURL!);
-    const { sessionId, partLabel } = await bookSession(api);
+    const { sessionId, partLabel, partTag } = await bookSession(api);
 
     await signIn(page, 'sprayer', `/spray-sessions/${sessionId}`);
     await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
@@ -113,6 +113,15 @@ test.describe('spray session', () => {
     const coatForm = page.getByRole('region', { name: 'Record a coat' });
     await expect(coatForm.getByRole('button', { name: `Remove ${partLabel}` })).toBeVisible();
     await expect(coatForm.getByLabel('Step')).toHaveValue('0');
+    // A typed tag code: an unknown one is refused in words, the door's own is found (and not added twice).
+    await coatForm.getByRole('button', { name: 'Scan or type a tag' }).click();
+    await coatForm.getByRole('textbox', { name: 'Tag code' }).fill('zzzz 2222');
+    await coatForm.getByRole('button', { name: 'Add part' }).click();
+    await expect(coatForm.getByText('No part has the tag ZZZZ2222. Check the code and try again.')).toBeVisible();
+    await coatForm.getByRole('textbox', { name: 'Tag code' }).fill(partTag.toLowerCase());
+    await coatForm.getByRole('textbox', { name: 'Tag code' }).press('Enter');
+    await expect(coatForm.getByText(`${partLabel} (tag ${partTag}) is added.`)).toBeVisible();
+    await expect(coatForm.getByRole('list', { name: 'Chosen parts' }).getByRole('listitem')).toHaveCount(1);
     await box(coatForm, 'Wet film reading').fill('140');
     // 140 µm wet × 45 % solids / (100 + 10 % thinner) = 57 µm dry, within 20 % of the 60 µm target.
     await expect(coatForm.getByText(/Dry film\s*57 µm\s*against a target of 60 µm/)).toBeVisible();
@@ -152,7 +161,7 @@ test.describe('spray session', () => {
 
     // The coat log: both coats; a correction with its reason keeps the first version in the history.
     await page.goto('/coat-log');
-    await expect(page.getByRole('row', { name: `Coat ${first.id}` })).toContainText('140 µm wet → 57 µm dry');
+    await expect(page.getByRole('row', { name: `Coat ${first.id}` })).toContainText(/140 µm wet\s*57 µm dry/);
     await expect(page.getByRole('row', { name: `Coat ${sent.items[0].id}` })).toContainText('Reason: Second pass on the edges while the first is wet');
     await page.getByRole('button', { name: `Correct coat ${first.id}` }).click();
     const dialog = page.getByRole('dialog', { name: `Correct coat ${first.id}` });
@@ -173,7 +182,25 @@ test.describe('spray session', () => {
     const correction = history.find((c) => c.replacesId === first.id)!;
     await expect(replaced).toContainText(`Corrected by #${correction.id}`);
     await expect(page.getByRole('row', { name: `Coat ${correction.id}` })).toContainText('Why: Comb was read on the edge, not the face');
-    await expect(page.getByRole('row', { name: `Coat ${correction.id}` })).toContainText('130 µm wet → 53 µm dry');
+    await expect(page.getByRole('row', { name: `Coat ${correction.id}` })).toContainText(/130 µm wet\s*53 µm dry/);
+    await api.context.dispose();
+  });
+
+  test('a finishing lead may start over a stop only with a reason, which is recorded with the checks', async ({ page, baseURL }) => {
+    const api = await leadApi(baseURL!);
+    const { sessionId } = await bookSession(api);
+    await signIn(page, 'lead', `/spray-sessions/${sessionId}`);
+    await fillChecklist(page, /Air-fed hood or visor/);
+    await box(page, 'Relative humidity').fill('90');
+    await expect(page.getByText('Stop: do not spray')).toBeVisible();
+    await expect(page.getByText(/Humidity 90 % is above this product's maximum of 80 %/)).toBeVisible();
+    const start = page.getByRole('button', { name: 'Start spraying' });
+    await expect(start).toBeDisabled();
+    await page.getByLabel('Lead’s reason to spray despite the stop').fill('Dehumidifier running; sealer coat only');
+    await expect(start).toBeEnabled();
+    await start.click();
+    await expect(page.getByText('Lead’s override: Dehumidifier running; sealer coat only')).toBeVisible();
+    await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
     await api.context.dispose();
   });
 });

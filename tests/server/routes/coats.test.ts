@@ -135,3 +135,15 @@ describe('GET /api/ready', () => {
     expect(untouched).toMatchObject({ state: 'waiting', handleAt: null, rack: null });
   });
 });
+
+describe('a correction that names one field', () => {
+  it('keeps every other field of the coat as it was', async () => {
+    const original = await sprayer.agent
+      .post('/api/coats')
+      .set('x-csrf-token', sprayer.csrf)
+      .send(coat({ partIds: [partIds[0]], sprayedAt: '2027-03-01T11:55:00Z', thinningPct: 12, stepPosition: 2 }))
+      .expect(201);
+    const fixed = await sprayer.agent.post(`/api/coats/${original.body.coat.id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Comb misread', wetFilmUm: 140 }).expect(201);
+    expect(fixed.body.coat).toMatchObject({ wetFilmUm: 140, thinningPct: 12, stepPosition: 2 });
+  });
+});

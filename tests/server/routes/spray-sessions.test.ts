@@ -116,3 +116,17 @@ describe('GET and PATCH /api/spray-sessions', () => {
     await expect(insert).rejects.toThrow(/booth_overlap/);
   });
 });
+
+describe('rack space', () => {
+  it('refuses to book more parts than the racks can hold unless a lead gives a reason', async () => {
+    // Demo racks hold 20 × 1.2 + 20 × 1.2 + 10 × 0.8 = 56 m² of shelf; one job of huge panels needs more.
+    const job = await lead.agent.post('/api/jobs').set('x-csrf-token', lead.csrf).send({ customer: 'Big Co', reference: 'RACK-1', dueDate: '2027-06-01' }).expect(201);
+    const part = await lead.agent.post(`/api/jobs/${job.body.job.id}/parts`).set('x-csrf-token', lead.csrf).send({ label: 'Huge panel', lengthMm: 2400, widthMm: 1200, thicknessMm: 18, quantity: 20 }).expect(201);
+    const body = { boothId, start: '2027-05-03T12:00:00Z', end: '2027-05-03T13:00:00Z', items: [{ partId: part.body.part.id, stepPosition: null }] };
+    const refused = await book(lead, body).expect(409);
+    // 20 × 2.4 m × 1.2 m = 57.6 m² lying flat.
+    expect(refused.body.error).toMatchObject({ code: 'rack_space' });
+    expect(refused.body.error.message).toContain('57.6 m²');
+    await book(lead, { ...body, override: { reason: 'Panels go on edge in the store' } }).expect(201);
+  });
+});

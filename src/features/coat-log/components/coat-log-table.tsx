@@ -12,12 +12,12 @@ interface CoatLogTableProps {
   onCorrect?: (coat: Coat) => void;
 }
 
-const headings = ['When (shop time)', 'Parts', 'Product', 'Step', 'Film', 'Conditions', 'Dew point', 'Warnings', 'Who', 'Version', ''];
+const headings = ['When (shop time)', 'Product, step, parts', 'Film', 'Conditions', 'Warnings', 'Who, version'];
 
 function Warnings({ coat }: { coat: Coat }) {
   if (coat.warnings.length === 0) return <span className="text-maple-700">None</span>;
   return (
-    <ul className="min-w-56 space-y-1">
+    <ul className="min-w-44 space-y-1">
       {coat.warnings.map((w) => (
         <li key={w.code}>
           <span aria-hidden="true">⚠ </span>
@@ -47,9 +47,9 @@ export function CoatLogTable({ coats, units, timeZone, onCorrect }: CoatLogTable
         <caption className="sr-only">Coat records, newest first</caption>
         <thead className="bg-maple-100">
           <tr>
-            {headings.map((h, i) => (
-              <th key={h || i} scope="col" className="whitespace-nowrap border-b border-maple-300 px-3 py-2 text-sm font-semibold text-maple-800">
-                {h || <span className="sr-only">Actions</span>}
+            {headings.map((h) => (
+              <th key={h} scope="col" className="whitespace-nowrap border-b border-maple-300 px-3 py-2 text-sm font-semibold text-maple-800">
+                {h}
               </th>
             ))}
           </tr>
@@ -57,29 +57,44 @@ export function CoatLogTable({ coats, units, timeZone, onCorrect }: CoatLogTable
         <tbody>
           {coats.map((coat) => {
             const replaced = coat.supersededById !== null;
+            const struck = replaced ? 'line-through' : '';
             return (
               <tr key={coat.id} aria-label={`Coat ${coat.id}${replaced ? ', replaced' : ''}`} className={`border-b border-maple-200 align-top last:border-b-0 ${replaced ? 'bg-maple-100 text-maple-700' : 'even:bg-maple-50'}`}>
-                <th scope="row" className={`whitespace-nowrap px-3 py-2 font-semibold ${replaced ? 'line-through' : ''}`}>
-                  #{coat.id} · {formatShopDateTime(coat.sprayedAt, timeZone)}
+                <th scope="row" className={`px-3 py-2 font-semibold ${struck}`}>
+                  #{coat.id}
+                  <span className="block whitespace-nowrap font-normal">{formatShopDateTime(coat.sprayedAt, timeZone)}</span>
                 </th>
-                <td className={`whitespace-nowrap px-3 py-2 ${replaced ? 'line-through' : ''}`}>{partsWords(coat)}</td>
-                <td className={`min-w-40 px-3 py-2 ${replaced ? 'line-through' : ''}`}>{coat.productName}</td>
-                <td className={`whitespace-nowrap px-3 py-2 ${replaced ? 'line-through' : ''}`}>{stepWords(coat)}</td>
-                <td className={`whitespace-nowrap px-3 py-2 ${replaced ? 'line-through' : ''}`}>{filmWords(coat, units)}</td>
-                <td className={`min-w-48 px-3 py-2 ${replaced ? 'line-through' : ''}`}>{conditionWords(coat, units)}</td>
-                <td className={`whitespace-nowrap px-3 py-2 ${replaced ? 'line-through' : ''}`}>{formatQuantity(coat.dewPointC, 'temperature', units)}</td>
-                <td className={`px-3 py-2 ${replaced ? 'line-through' : ''}`}>
+                <td className={`min-w-40 px-3 py-2 ${struck}`}>
+                  {coat.productName}
+                  <span className="block text-sm">
+                    {stepWords(coat)} · {partsWords(coat)}
+                  </span>
+                </td>
+                <td className={`px-3 py-2 ${struck}`}>
+                  {filmWords(coat, units)
+                    .split(' → ')
+                    .map((part) => (
+                      <span key={part} className="block whitespace-nowrap">
+                        {part}
+                      </span>
+                    ))}
+                </td>
+                <td className={`min-w-44 px-3 py-2 ${struck}`}>
+                  {conditionWords(coat, units)}
+                  <span className="block text-sm">Dew point {formatQuantity(coat.dewPointC, 'temperature', units)}</span>
+                </td>
+                <td className={`px-3 py-2 ${struck}`}>
                   <Warnings coat={coat} />
                 </td>
-                <td className="whitespace-nowrap px-3 py-2">{coat.recordedByName}</td>
                 <td className="px-3 py-2">
+                  <span className="block">{coat.recordedByName}</span>
                   <Version coat={coat} />
-                </td>
-                <td className="px-3 py-2">
                   {onCorrect && !replaced && (
-                    <Button variant="secondary" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>
-                      Correct
-                    </Button>
+                    <div className="mt-2">
+                      <Button variant="secondary" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>
+                        Correct
+                      </Button>
+                    </div>
                   )}
                 </td>
               </tr>

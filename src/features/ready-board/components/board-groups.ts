@@ -1,4 +1,4 @@
-import { compareForBoard, type BoardPart } from './readiness';
+import { boardOrder, compareForBoard, type BoardPart } from './readiness';
 
 export type GroupBy = 'job' | 'rack';
 
@@ -22,12 +22,16 @@ function collect(parts: readonly BoardPart[], keyOf: (part: BoardPart) => string
   return [...groups.values()].map((group) => ({ ...group, parts: group.parts.sort(compareForBoard) }));
 }
 
+/** Parts are sorted within the group, so its first part is its most pressing. */
+const urgency = (group: BoardGroup) => boardOrder.indexOf(group.parts[0].shownState);
+
+/** Jobs with parts to pick up first, then those closest to it; by reference among equals. */
 export function groupByJob(parts: readonly BoardPart[]): BoardGroup[] {
   return collect(
     parts,
     (part) => `job-${part.jobId}`,
     (part) => ({ key: `job-${part.jobId}`, title: part.jobReference, subtitle: part.customer }),
-  ).sort((a, b) => byName.compare(a.title, b.title));
+  ).sort((a, b) => urgency(a) - urgency(b) || byName.compare(a.title, b.title));
 }
 
 /** Racks by name; parts on no rack come last, as they are somewhere the board cannot say. */
@@ -35,7 +39,7 @@ export function groupByRack(parts: readonly BoardPart[]): BoardGroup[] {
   const groups = collect(
     parts,
     (part) => (part.rack ? `rack-${part.rack.id}` : 'rack-none'),
-    (part) => (part.rack ? { key: `rack-${part.rack.id}`, title: part.rack.name, subtitle: 'Rack' } : { key: 'rack-none', title: 'Not on a rack', subtitle: 'No rack or shelf recorded' }),
+    (part) => (part.rack ? { key: `rack-${part.rack.id}`, title: part.rack.name, subtitle: '' } : { key: 'rack-none', title: 'Not on a rack', subtitle: 'No rack or shelf recorded' }),
   );
   return groups.sort((a, b) => (a.key === 'rack-none' ? 1 : b.key === 'rack-none' ? -1 : byName.compare(a.title, b.title)));
 }

@@ -40,7 +40,7 @@ function milestone(iso: string | null, label: { before: string; since: string },
 
 const handle = { before: 'Handle', since: 'Ready to handle' };
 // Between coats a part can be moved once touch-dry enough to handle, but it is not finished.
-const handleBetweenCoats = { before: 'Handle', since: 'Can be moved since' };
+const handleBetweenCoats = { before: 'Handle', since: 'Can be moved' };
 const pack = { before: 'Pack', since: 'Ready to pack' };
 const cure = { before: 'Full cure', since: 'Fully cured' };
 

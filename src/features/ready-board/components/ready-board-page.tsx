@@ -79,7 +79,7 @@ export function ReadyBoardPage({ timeZone, canCollect }: { timeZone: string; can
     <>
       <PageHeader
         title="Ready board"
-        description="Every part by job: its coats so far, the next recoat window, and when it can be handled, packed and is fully cured."
+        description="Every part, by job or by rack: its coats so far, the next recoat window, and when it can be handled, packed and is fully cured."
         actions={
           <Link to="/ready/wall" className={buttonClasses('secondary')}>
             Wall screen

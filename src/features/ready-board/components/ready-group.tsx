@@ -28,7 +28,7 @@ export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectin
     <section aria-labelledby={headingId} className="rounded-panel border border-maple-300 bg-maple-50 p-3 sm:p-4">
       <div className="mb-3 flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
         <h2 id={headingId} className="text-xl font-bold text-lacquer-900">
-          {group.title} <span className="font-medium text-maple-700">· {group.subtitle}</span>
+          {group.title} {group.subtitle && <span className="font-medium text-maple-700">· {group.subtitle}</span>}
         </h2>
         <p className="text-sm font-medium text-maple-800">
           {group.parts.length} {group.parts.length === 1 ? 'part' : 'parts'}: {countWords(countStates(group.parts)).join(', ')}

@@ -4,6 +4,7 @@ import { formatQuantity } from '../../../../shared/units';
 import { verdictBorder, VerdictBadge } from './verdict-badge';
 
 export const checklistVerdictWords = { go: 'Go: fit to spray', caution: 'Caution: spray with care', stop: 'Stop: do not spray' } as const;
+const spokenVerdict = { go: 'Verdict now go, fit to spray.', caution: 'Verdict now caution, spray with care.', stop: 'Verdict now stop, do not spray.' } as const;
 
 interface ChecklistVerdictProps {
   evaluation: ChecklistEvaluation | null;
@@ -15,10 +16,14 @@ interface ChecklistVerdictProps {
 /** The live verdict as the checks are filled in, each problem in words. */
 export function ChecklistVerdict({ evaluation, missing, dew, units }: ChecklistVerdictProps) {
   return (
-    <section aria-labelledby="verdict-heading" aria-live="polite" className={`rounded-panel border-4 bg-white p-4 ${evaluation ? verdictBorder[evaluation.verdict] : 'border-maple-400'}`}>
+    <section aria-labelledby="verdict-heading" className={`rounded-panel border-4 bg-white p-4 ${evaluation ? verdictBorder[evaluation.verdict] : 'border-maple-400'}`}>
       <h3 id="verdict-heading" className="sr-only">
         Verdict
       </h3>
+      {/* Only the verdict itself is announced as it changes, not every figure and line below it. */}
+      <p aria-live="polite" className="sr-only">
+        {evaluation ? spokenVerdict[evaluation.verdict] : 'The checks are not complete yet.'}
+      </p>
       <div className="flex flex-wrap items-center gap-4">
         {evaluation ? (
           <VerdictBadge verdict={evaluation.verdict} label={checklistVerdictWords[evaluation.verdict]} large />

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { toast } from 'sonner';
-import { acknowledgementSchema, type Coat } from '../../../../shared/schemas/coat';
+import type { Coat } from '../../../../shared/schemas/coat';
 import type { Mix } from '../../../../shared/schemas/checklist';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Reading } from '../../../../shared/schemas/reading';
@@ -12,6 +12,7 @@ import { useCoatForm } from '../hooks/use-coat-form';
 import { useCoatPreview } from '../hooks/use-coat-preview';
 import type { PendingCoat } from '../hooks/use-pending-coats';
 import { useRecordCoat } from '../hooks/use-record-coat';
+import { useStopReasons } from '../hooks/use-stop-reasons';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import type { PickedPart } from '../utils/picked-part';
 import { newIdempotencyKey } from '../utils/idempotency';
@@ -31,6 +32,11 @@ interface CoatFormProps {
   timeZone: string;
 }
 
+/** "Go" on a tablet keyboard after typing a reading must not record the coat; only the big button does. */
+function keepEnterFromSubmitting(event: React.KeyboardEvent<HTMLFormElement>) {
+  if (event.key === 'Enter' && event.target instanceof HTMLInputElement) event.preventDefault();
+}
+
 const fieldNames = ['partIds', 'airTempC', 'relativeHumidityPct', 'surfaceTempC', 'thinningPct', 'wetFilmUm', 'stepPosition', 'lotId', 'mixId', 'notes'];
 
 export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading, queue, units, timeZone }: CoatFormProps) {
@@ -39,20 +45,12 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
   const { register, control, handleSubmit, setError, setValue, formState } = form;
   const preview = useCoatPreview({ coat, sessionCoats, units, timeZone });
   const { record, pending } = useRecordCoat(session.id, queue);
-  const [reasons, setReasons] = useState<Record<string, string>>({});
-  const [reasonErrors, setReasonErrors] = useState<Record<string, string>>({});
+  const stops = useStopReasons(preview.warnings);
   const [formError, setFormError] = useState<string | null>(null);
-
-  const acknowledgements = () => {
-    const stops = preview.warnings.filter((w) => w.verdict === 'stop');
-    const checked = stops.map((w) => ({ code: w.code, result: acknowledgementSchema.safeParse({ code: w.code, reason: reasons[w.code] ?? '' }) }));
-    setReasonErrors(Object.fromEntries(checked.flatMap((c) => (c.result.success ? [] : [[c.code, c.result.error.issues[0].message]]))));
-    return checked.every((c) => c.result.success) ? checked.flatMap((c) => (c.result.success ? [c.result.data] : [])) : null;
-  };
 
   const onSubmit = handleSubmit(async (entry) => {
     setFormError(null);
-    const acks = acknowledgements();
+    const acks = stops.check();
     if (!acks || !step || !product) return setFormError(!step || !product ? 'Choose the step this coat is.' : 'Give a reason for each stop before recording the coat.');
     if (coat.mixedSystems) return setFormError('These parts follow different finish systems. Record them as separate coats.');
     const body = { ...entry, spraySessionId: session.id, productId: product.id, sprayedAt: new Date().toISOString(), dryingTempC: null, acknowledgements: acks, idempotencyKey: newIdempotencyKey() };
@@ -62,11 +60,11 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
     else toast.warning('No connection: the coat is kept on this tablet and will be sent when the connection is back.');
     setValue('wetFilmUm', null);
     setValue('notes', '');
-    setReasons({});
+    stops.clear();
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} className="space-y-5">
+    <form noValidate onSubmit={onSubmit} onKeyDown={keepEnterFromSubmitting} className="space-y-5">
       <FormAlert message={formError} />
       <PartPicker chosen={values.partIds?.flatMap((id) => (id === undefined ? [] : [id])) ?? []} known={coat.known} planned={planned} onChange={coat.choose} error={formState.errors.partIds?.message} />
       {coat.mixedSystems && <p className="font-medium text-verdict-stop">These parts follow different finish systems: record them as separate coats.</p>}
@@ -75,7 +73,7 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
         <h3 className="mb-2 text-lg font-semibold">Conditions as sprayed</h3>
         <CoatConditionFields control={control} errors={formState.errors} units={units} />
       </div>
-      <CoatPreviewPanel preview={preview} product={product} step={step} thinningPct={values.thinningPct ?? 0} units={units} timeZone={timeZone} reasons={reasons} reasonErrors={reasonErrors} onReason={(code, reason) => setReasons((r) => ({ ...r, [code]: reason }))} />
+      <CoatPreviewPanel preview={preview} product={product} step={step} thinningPct={values.thinningPct ?? 0} units={units} timeZone={timeZone} reasons={stops.reasons} reasonErrors={stops.errors} onReason={stops.setReason} />
       <FieldShell label="Notes">{(c) => <textarea {...c} rows={2} className={inputClasses} {...register('notes')} />}</FieldShell>
       <Button type="submit" className="min-h-16 w-full text-xl" pending={pending} pendingText="Recording…">
         Record coat

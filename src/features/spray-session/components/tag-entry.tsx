@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useId, useRef, useState, type FormEvent } from 'react';
+import { useId, useRef, useState, type KeyboardEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { inputClasses } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
@@ -41,14 +41,16 @@ export function TagEntry({ onFound }: { onFound: (part: PickedPart) => void }) {
     }
   };
 
-  const submit = (event: FormEvent) => {
+  // Not a <form>: this sits inside the coat form, and a nested form would submit the coat instead.
+  const onEnter = (event: KeyboardEvent<HTMLInputElement>) => {
+    if (event.key !== 'Enter') return;
     event.preventDefault();
     void look(text);
   };
 
   return (
     <div className="space-y-3">
-      <form onSubmit={submit} noValidate aria-label="Add a part by its tag">
+      <div role="group" aria-label="Add a part by its tag">
         <label htmlFor={id} className="mb-1 block font-medium">
           Tag code
         </label>
@@ -62,12 +64,13 @@ export function TagEntry({ onFound }: { onFound: (part: PickedPart) => void }) {
             value={text}
             aria-describedby={`${id}-message`}
             onChange={(event) => setText(event.target.value)}
+            onKeyDown={onEnter}
           />
-          <Button type="submit" className="min-h-14 shrink-0" pending={pending} pendingText="Finding…">
+          <Button className="min-h-14 shrink-0" pending={pending} pendingText="Finding…" onClick={() => void look(text)}>
             Add part
           </Button>
         </div>
-      </form>
+      </div>
       <p id={`${id}-message`} role="status" className={message?.bad ? 'font-medium text-verdict-stop' : 'text-maple-700'}>
         {message?.text ?? 'Eight letters and digits, printed under the QR code on the rack tag.'}
       </p>

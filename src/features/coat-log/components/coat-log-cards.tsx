@@ -1,0 +1,57 @@
+import type { Coat } from '../../../../shared/schemas/coat';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import { formatQuantity } from '../../../../shared/units';
+import { Button } from '../../../components/ui/button';
+import { formatShopDateTime } from '../../../lib/shop-time';
+import { conditionWords, filmWords, partsWords, stepWords, versionWords } from './coat-log-format';
+
+interface CoatLogCardsProps {
+  coats: Coat[];
+  units: UnitSystem;
+  timeZone: string;
+  onCorrect?: (coat: Coat) => void;
+}
+
+/** The same records as the table, one card each, for tablets and phones where eleven columns do not fit. */
+export function CoatLogCards({ coats, units, timeZone, onCorrect }: CoatLogCardsProps) {
+  return (
+    <ul aria-label="Coat records" className="space-y-3">
+      {coats.map((coat) => {
+        const replaced = coat.supersededById !== null;
+        return (
+          <li key={coat.id} aria-label={`Coat ${coat.id}${replaced ? ', replaced' : ''}`} className={`rounded-panel border-2 p-4 ${replaced ? 'border-maple-300 bg-maple-100 text-maple-700' : 'border-maple-300 bg-white'}`}>
+            <div className={replaced ? 'line-through' : ''}>
+              <p className="text-lg font-bold">
+                #{coat.id} · {formatShopDateTime(coat.sprayedAt, timeZone)}
+              </p>
+              <p className="font-semibold">
+                {coat.productName} · {stepWords(coat)} · {partsWords(coat)}
+              </p>
+              <p>{filmWords(coat, units)}</p>
+              <p>
+                {conditionWords(coat, units)}, dew point {formatQuantity(coat.dewPointC, 'temperature', units)}
+              </p>
+              {coat.warnings.map((w) => (
+                <p key={w.code}>
+                  <span aria-hidden="true">⚠ </span>
+                  {w.message}
+                  {w.acknowledgedReason && <span className="block pl-5 text-sm">Reason: {w.acknowledgedReason}</span>}
+                </p>
+              ))}
+            </div>
+            <p className="mt-1 text-maple-800">
+              {coat.recordedByName} · {versionWords(coat)}
+              {coat.correctionReason && <span className="block">Why: {coat.correctionReason}</span>}
+            </p>
+            {replaced && <p className="font-bold text-verdict-stop">Corrected by #{coat.supersededById}</p>}
+            {onCorrect && !replaced && (
+              <Button variant="secondary" className="mt-2" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>
+                Correct
+              </Button>
+            )}
+          </li>
+        );
+      })}
+    </ul>
+  );
+}
