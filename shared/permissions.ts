@@ -36,32 +36,13 @@ export const permissions = [
 ] as const;
 export type Permission = (typeof permissions)[number];
 
+const adminOnly: readonly Permission[] = ['users:read', 'users:write', 'settings:write'];
+
 /** The one matrix: the server enforces it, the client hides what a role may not do. Deny by default. */
 const matrix: Record<Role, readonly Permission[]> = {
   admin: permissions,
-  lead: [
-    'booths:read',
-    'booths:write',
-    'racks:read',
-    'racks:write',
-    'settings:read',
-    'calculator:use',
-    'audit:read',
-    'products:read',
-    'products:write',
-    'finish-systems:read',
-    'finish-systems:write',
-    'jobs:read',
-    'jobs:write',
-    'spray-sessions:read',
-    'spray-sessions:write',
-    'spray-sessions:run',
-    'coats:read',
-    'coats:write',
-    'ready:read',
-    'parts:collect',
-    'readings:write',
-  ],
+  // A lead does everything but run the users and the shop's own settings.
+  lead: permissions.filter((p) => !adminOnly.includes(p)),
   sprayer: [
     'booths:read',
     'racks:read',
