@@ -12,11 +12,34 @@ type CodeDetectorConstructor = new (options: { formats: string[] }) => CodeDetec
 
 function detectorClass(): CodeDetectorConstructor | null {
   const candidate = (window as unknown as { BarcodeDetector?: CodeDetectorConstructor }).BarcodeDetector;
-  return typeof candidate === 'function' && Boolean(navigator.mediaDevices?.getUserMedia) ? candidate : null;
+  return typeof candidate === 'function' ? candidate : null;
 }
 
-/** Whether this browser can read QR codes from the camera itself; typing the code always works. */
-export const canScanTags = () => detectorClass() !== null;
+/** Whether this device has a camera the page may ask for; typing the code always works. */
+export const canScanTags = () => Boolean(navigator.mediaDevices?.getUserMedia);
+
+type CodeReader = (frame: HTMLVideoElement) => Promise<string | null>;
+
+/**
+ * The browser's own QR reader where it has one; elsewhere (Safari, Firefox) the jsQR library,
+ * loaded only when the camera opens, reads frames drawn onto a canvas.
+ */
+async function codeReader(): Promise<CodeReader> {
+  const Detector = detectorClass();
+  if (Detector) {
+    const detector = new Detector({ formats: ['qr_code'] });
+    return async (frame) => (await detector.detect(frame).catch(() => []))[0]?.rawValue ?? null;
+  }
+  const { default: jsQR } = await import('jsqr');
+  const canvas = document.createElement('canvas');
+  const context = canvas.getContext('2d', { willReadFrequently: true });
+  return async (frame) => {
+    if (!context || frame.videoWidth === 0) return null;
+    [canvas.width, canvas.height] = [frame.videoWidth, frame.videoHeight];
+    context.drawImage(frame, 0, 0);
+    return jsQR(context.getImageData(0, 0, canvas.width, canvas.height).data, canvas.width, canvas.height)?.data ?? null;
+  };
+}
 
 const scanEveryMs = 300;
 
@@ -30,16 +53,14 @@ export function TagScanner({ onCode, onClose }: { onCode: (raw: string) => void;
   }, [onCode]);
 
   useEffect(() => {
-    const Detector = detectorClass();
-    if (!Detector) return;
     let stream: MediaStream | null = null;
     let timer = 0;
     let stopped = false;
-    const detector = new Detector({ formats: ['qr_code'] });
+    const reader = codeReader();
     const scan = async () => {
       if (stopped || !video.current || video.current.readyState < 2) return;
-      const codes = await detector.detect(video.current).catch(() => []);
-      if (codes[0] && !stopped) found.current(codes[0].rawValue);
+      const code = await (await reader)(video.current);
+      if (code && !stopped) found.current(code);
     };
     navigator.mediaDevices
       .getUserMedia({ video: { facingMode: 'environment' }, audio: false })
