@@ -14,6 +14,7 @@ import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './ro
 import type { NotificationRuntime } from './mail/notifications-runtime';
 import { notificationRoutes } from './routes/notifications';
 import { plannerRoutes } from './routes/planner';
+import { reportRoutes } from './routes/reports';
 import { sessionCautionRoutes } from './routes/session-cautions';
 import { spraySessionRoutes } from './routes/spray-sessions';
 import { createCoatService } from './services/coats';
@@ -22,6 +23,7 @@ import { createMixService } from './services/mixes';
 import { createPlannerService } from './services/planner';
 import { createReadingService } from './services/readings';
 import { createReadyService } from './services/ready';
+import { createReportService } from './services/reports';
 import { createSpraySessionService } from './services/spray-sessions';
 import { authRoutes } from './routes/auth';
 import { jobRoutes, partRoutes } from './routes/jobs';
@@ -60,7 +62,8 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/products', productRoutes(createProductService(dataSource, files, settings, clock)));
   api.use('/files', fileRoutes(files));
   api.use('/finish-systems', masterDataRoutes({ resource: 'finishSystem', read: 'finish-systems:read', write: 'finish-systems:write', createSchema: createFinishSystemSchema, updateSchema: updateFinishSystemSchema, service: createFinishSystemService(dataSource, clock) }));
-  api.use('/jobs', jobRoutes(createJobService(dataSource, clock), parts, createPartImportService(dataSource, parts), createEstimateService(dataSource)));
+  const estimates = createEstimateService(dataSource);
+  api.use('/jobs', jobRoutes(createJobService(dataSource, clock), parts, createPartImportService(dataSource, parts), estimates));
   api.use('/parts', partRoutes(parts));
   const spraySessions = createSpraySessionService(dataSource, settings, events, clock);
   api.use(sessionCautionRoutes(dataSource));
@@ -71,6 +74,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/readings', readingRoutes(readings));
   api.use('/booths', sensorTokenRoutes(readings));
   api.use('/events', eventRoutes(events));
+  api.use('/reports', reportRoutes(createReportService(dataSource, settings, estimates)));
   api.use(notificationRoutes(notifications));
   api.use(apiNotFound);
   return api;

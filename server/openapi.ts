@@ -15,6 +15,7 @@ import { createPartSchema, partSchema } from '../shared/schemas/part';
 import { createLotSchema, createProductSchema, lotSchema, productSchema, updateProductSchema } from '../shared/schemas/product';
 import { createReadingSchema, readingSchema } from '../shared/schemas/reading';
 import { readyPartSchema } from '../shared/schemas/ready';
+import { areaSprayedReportSchema, boothUseReportSchema, conditionsReportSchema, materialReportSchema, reworkReportSchema, solventReportSchema } from '../shared/schemas/report';
 import { createSpraySessionSchema, spraySessionSchema, updateSpraySessionSchema } from '../shared/schemas/spray-session';
 
 interface Operation {
@@ -72,6 +73,13 @@ const operations: Operation[] = [
   { method: 'get', path: '/api/ready', summary: 'Part readiness', permission: 'ready:read', response: z.object({ items: z.array(readyPartSchema) }) },
   { method: 'post', path: '/api/readings', summary: 'Record conditions (session or booth sensor bearer token)', permission: 'readings:write', body: createReadingSchema, response: wrap('reading', readingSchema), status: 201 },
   { method: 'get', path: '/api/events', summary: 'Server-sent change events', permission: 'signed-in' },
+  // Reports take ?from=YYYY-MM-DD&to=YYYY-MM-DD (shop dates, both included) and &format=csv for the table as CSV.
+  { method: 'get', path: '/api/reports/booth-use', summary: 'Hours booked and sprayed per booth per week (?boothId)', permission: 'reports:read', response: boothUseReportSchema },
+  { method: 'get', path: '/api/reports/area-sprayed', summary: 'Area sprayed per week (?groupBy=product-kind|job)', permission: 'reports:read', response: areaSprayedReportSchema },
+  { method: 'get', path: '/api/reports/conditions', summary: 'Booth conditions against product limits (?boothId)', permission: 'reports:read', response: conditionsReportSchema },
+  { method: 'get', path: '/api/reports/solvent', summary: 'Litres mixed and VOC per month with the yearly total', permission: 'reports:read', response: solventReportSchema },
+  { method: 'get', path: '/api/reports/material', summary: 'Litres used against the estimate per job and product (?jobId)', permission: 'reports:read', response: materialReportSchema },
+  { method: 'get', path: '/api/reports/rework', summary: 'Coats corrected or re-sprayed by reason per month', permission: 'reports:read', response: reworkReportSchema },
 ];
 
 const jsonSchema = (schema: z.ZodType, io: 'input' | 'output') => z.toJSONSchema(schema, { io, unrepresentable: 'any' });

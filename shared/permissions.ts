@@ -33,6 +33,7 @@ export const permissions = [
   'ready:read',
   'parts:collect',
   'readings:write',
+  'reports:read',
 ] as const;
 export type Permission = (typeof permissions)[number];
 

@@ -43,6 +43,7 @@ export async function toCoatDtos(manager: EntityManager, coats: CoatEntity[]): P
     fullCureAt: c.fullCureAt,
     warnings: c.warnings.map((w) => ({ code: w.code, message: w.message, acknowledgedReason: w.acknowledgedReason ?? null })),
     notes: c.notes,
+    reworkReason: c.reworkReason,
     version: c.version,
     replacesId: c.replacesId,
     supersededById: successor.get(c.id) ?? null,

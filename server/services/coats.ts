@@ -67,6 +67,7 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
         fullCureAt: iso(record.fullCureAt),
         warnings: withAcknowledgements(record.warnings, fields),
         notes: fields.notes,
+        reworkReason: fields.reworkReason,
         recordedById: actor.id,
         recordedByName: actor.name,
         recordedAt: iso(clock.now()),

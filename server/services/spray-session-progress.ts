@@ -30,6 +30,7 @@ export function changeState(session: SpraySessionEntity, next: SpraySessionState
       throw new AppError('conflict', `The checklist says stop: ${checklist.problems.join(' ')} A lead may override with a reason.`, { checklist: 'Stop' });
     }
   }
+  if (next === 'spraying' && !session.sprayingStartedAt) session.sprayingStartedAt = now;
   if (next === 'clearing') session.clearingStartedAt = now;
   session.state = next;
 }

@@ -72,7 +72,7 @@ async function insertSession(manager: EntityManager, fields: SessionFields, acto
   await assertNoClash(manager, slot, booth, timezone);
   await assertRackSpace(manager, fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
   const session = await manager.save(
-    manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
+    manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, sprayingStartedAt: null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
   );
   await writeItems(manager, session.id, fields.items);
   const summary = `Booked ${booth.name} ${slot.startAt}–${slot.endAt}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;

@@ -6,6 +6,19 @@ export const acknowledgementSchema = z.object({
   reason: z.string().trim().min(3, 'Say why the coat went on anyway').max(500),
 });
 
+/** Why a step was sprayed again on parts that already had it (a re-spray, for the rework report). */
+export const reworkReasons = ['run-or-sag', 'dust-or-debris', 'orange-peel', 'poor-coverage', 'damage', 'colour-or-sheen', 'other'] as const;
+export type ReworkReason = (typeof reworkReasons)[number];
+export const reworkReasonLabels: Record<ReworkReason, string> = {
+  'run-or-sag': 'Run or sag',
+  'dust-or-debris': 'Dust or debris',
+  'orange-peel': 'Orange peel',
+  'poor-coverage': 'Poor coverage',
+  damage: 'Damaged in handling',
+  'colour-or-sheen': 'Wrong colour or sheen',
+  other: 'Other',
+};
+
 const coatFields = {
   spraySessionId: z.number({ error: 'Choose the spray session' }).int().positive(),
   partIds: z.array(z.number().int().positive()).min(1, 'Choose at least one part').max(2000),
@@ -24,6 +37,7 @@ const coatFields = {
   dryingTempC: z.number().min(0).max(80).nullable(),
   acknowledgements: z.array(acknowledgementSchema).max(20),
   notes: z.string().trim().max(2000),
+  reworkReason: z.enum(reworkReasons).nullable(),
   /** Lets a device resend a coat after a dropped connection without making a second record. */
   idempotencyKey: z.string().min(8).max(80).nullable(),
 };
@@ -38,6 +52,7 @@ export const createCoatSchema = z.object({
   dryingTempC: coatFields.dryingTempC.default(null),
   acknowledgements: coatFields.acknowledgements.default([]),
   notes: coatFields.notes.default(''),
+  reworkReason: coatFields.reworkReason.default(null),
   idempotencyKey: coatFields.idempotencyKey.default(null),
 });
 export type CreateCoatInput = z.input<typeof createCoatSchema>;
@@ -83,6 +98,7 @@ export const coatSchema = z.object({
   fullCureAt: z.string(),
   warnings: z.array(coatWarningSchema),
   notes: z.string(),
+  reworkReason: z.enum(reworkReasons).nullable(),
   version: z.number().int(),
   replacesId: z.number().int().nullable(),
   supersededById: z.number().int().nullable(),

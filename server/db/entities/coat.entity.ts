@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import type { ReworkReason } from '../../../shared/schemas/coat';
 
 export interface StoredWarning {
   code: string;
@@ -89,6 +90,10 @@ export class CoatEntity {
 
   @Column({ type: 'text', default: '' })
   notes: string;
+
+  /** Why a step was sprayed again (a re-spray); null for a first coat. */
+  @Column({ type: 'varchar', length: 20, nullable: true })
+  reworkReason: ReworkReason | null;
 
   @Column({ type: 'integer', default: 1 })
   version: number;

@@ -35,6 +35,10 @@ export class SpraySessionEntity {
   @Column({ type: 'text', nullable: true })
   overrideReason: string | null;
 
+  /** When the state went to spraying (the checklist passed); the start of sprayed hours. */
+  @Column({ type: 'varchar', length: 30, nullable: true })
+  sprayingStartedAt: string | null;
+
   @Column({ type: 'varchar', length: 30, nullable: true })
   clearingStartedAt: string | null;
 

@@ -1,0 +1,55 @@
+import type { DataSource } from 'typeorm';
+import type { BoothUseQuery, BoothUseReport } from '../../../shared/schemas/report';
+import { BoothEntity } from '../../db/entities/booth.entity';
+import { bucketsFor, shopRange } from './buckets';
+import { Statement, dialectOf, isCurrentCoat, num, round } from './sql';
+
+type Row = { week_start: string; booth_id: number; sessions: unknown; booked_hours: unknown; sprayed_hours: unknown };
+
+/**
+ * Booked hours are the sessions' slots; sprayed hours run from the checklist letting spraying
+ * start (or the first coat) to clearing (or the last coat). Sessions count in the week they start.
+ */
+export async function boothUseReport(dataSource: DataSource, query: BoothUseQuery, timeZone: string): Promise<BoothUseReport> {
+  const buckets = bucketsFor(query.from, query.to, timeZone, 'week');
+  const range = shopRange(query.from, query.to, timeZone);
+  const sql = new Statement(dialectOf(dataSource));
+  const coatTime = (fn: 'MIN' | 'MAX') => `(SELECT ${fn}(c.sprayed_at) FROM coats c WHERE c.spray_session_id = ss.id AND ${isCurrentCoat('c')})`;
+  const text = `
+    WITH ${sql.bucketValues(buckets)},
+    s AS (
+      SELECT ss.booth_id, ss.start_at, ss.end_at,
+        COALESCE(ss.spraying_started_at, ${coatTime('MIN')}) AS spray_from,
+        COALESCE(ss.clearing_started_at, ${coatTime('MAX')}) AS spray_to
+      FROM spray_sessions ss
+      WHERE ss.state <> 'cancelled' AND ss.start_at >= ${sql.param(range.startsAt)} AND ss.start_at < ${sql.param(range.endsAt)}
+        ${query.boothId ? `AND ss.booth_id = ${sql.param(query.boothId)}` : ''}
+    )
+    SELECT b.label AS week_start, s.booth_id, COUNT(*) AS sessions,
+      SUM(${sql.hoursBetween('s.start_at', 's.end_at')}) AS booked_hours,
+      SUM(CASE WHEN s.spray_to > s.spray_from THEN ${sql.hoursBetween('s.spray_from', 's.spray_to')} ELSE 0 END) AS sprayed_hours
+    FROM s JOIN b ON s.start_at >= b.starts_at AND s.start_at < b.ends_at
+    GROUP BY b.label, s.booth_id`;
+  const rows: Row[] = await dataSource.query(text, sql.params);
+  const booths = await dataSource.getRepository(BoothEntity).find({ where: query.boothId ? { id: query.boothId } : {}, order: { name: 'ASC' } });
+  const found = new Map(rows.map((r) => [`${r.week_start}|${Number(r.booth_id)}`, r]));
+  // Every booth gets every week, so an idle week shows as a zero rather than a gap.
+  return {
+    from: query.from,
+    to: query.to,
+    timezone: timeZone,
+    rows: buckets.flatMap((bucket) =>
+      booths.map((booth) => {
+        const row = found.get(`${bucket.label}|${booth.id}`);
+        return {
+          weekStart: bucket.label,
+          boothId: booth.id,
+          boothName: booth.name,
+          sessions: num(row?.sessions),
+          bookedHours: round(num(row?.booked_hours)),
+          sprayedHours: round(num(row?.sprayed_hours)),
+        };
+      }),
+    ),
+  };
+}
