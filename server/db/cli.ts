@@ -3,6 +3,7 @@ import path from 'node:path';
 import { loadConfig } from '../config/env';
 import { backupSqlite, restoreSqlite } from './backup';
 import { openDataSource } from './data-source';
+import { seedDemoHistory } from './demo-history';
 import { demoSignInLines, seedDemoShop } from './seed';
 
 async function generate(name: string | undefined): Promise<void> {
@@ -49,6 +50,7 @@ async function run(command: string | undefined, arg: string | undefined): Promis
       console.log('Migrations are up to date.');
     } else if (command === 'seed') {
       const { seeded } = await seedDemoShop(dataSource, { uploadDir: config.uploadDir });
+      if (seeded) await seedDemoHistory(dataSource);
       console.log(seeded ? `Seeded the demo shop. Sign-ins:\n${demoSignInLines().join('\n')}` : 'The database already has users; the demo shop was not seeded.');
     } else {
       throw new Error(`Unknown command "${command}": use migrate, seed or generate`);

@@ -38,7 +38,7 @@ export async function seedDemoShop(dataSource: DataSource, options: { uploadDir:
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return { seeded: false };
   const users = createUserService(dataSource);
   for (const user of demoUsers) await users.create(user, systemActor);
-  await createSettingsService(dataSource).update({ shopName: 'Larchmere Joinery', timezone: 'Europe/London', defaultUnits: 'metric' }, systemActor);
+  await createSettingsService(dataSource).update({ shopName: 'Larchmere Joinery', timezone: 'Europe/London', defaultUnits: 'metric', yearlySolventThresholdKg: 150 }, systemActor);
   const booths = createBoothService(dataSource);
   for (const booth of demoBooths) await booths.create(booth, systemActor);
   const racks = createRackService(dataSource);

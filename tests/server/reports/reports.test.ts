@@ -94,7 +94,8 @@ describe('solvent and VOC', () => {
       { month: '2025-04', litres: 2, vocKg: 0.84, runningTotalKg: 2.52, litresWithoutVoc: 0 },
     ]);
     expect(report.totalKg).toBe(2.1);
-    expect(report.thresholdKg).toBe(5000);
+    // The threshold is the admin's setting, 150 kg in the demo shop.
+    expect(report.thresholdKg).toBe(150);
   });
 });
 
@@ -130,7 +131,7 @@ describe('CSV, ranges and roles', () => {
     const res = await lead.agent.get('/api/reports/solvent?from=2025-03-01&to=2025-04-30&format=csv').expect(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/boothwright-solvent-2025-03-01-to-2025-04-30\.csv/);
-    expect(res.text.split('\r\n')).toEqual(['month,litres,voc_kg,running_total_kg,threshold_kg,litres_without_voc', '2025-03,4,1.26,1.68,5000,1', '2025-04,2,0.84,2.52,5000,0', '']);
+    expect(res.text.split('\r\n')).toEqual(['month,litres,voc_kg,running_total_kg,threshold_kg,litres_without_voc', '2025-03,4,1.26,1.68,150,1', '2025-04,2,0.84,2.52,150,0', '']);
   });
 
   it('refuses a backwards or too long range with field messages', async () => {
