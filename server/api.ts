@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type passport from 'passport';
 import type { DataSource } from 'typeorm';
 import { createBoothSchema, updateBoothSchema } from '../shared/schemas/booth';
+import { createSiteSchema, updateSiteSchema } from '../shared/schemas/site';
 import { createFinishSystemSchema, updateFinishSystemSchema } from '../shared/schemas/finish-system';
 import { createRackSchema, updateRackSchema } from '../shared/schemas/rack';
 import type { AppConfig } from './config/env';
@@ -41,6 +42,7 @@ import { createPartService } from './services/parts';
 import { createProductService } from './services/products';
 import { createRackService } from './services/racks';
 import { createSettingsService } from './services/settings';
+import { createSiteService } from './services/sites';
 import { createUserService } from './services/users';
 
 /** Every /api route behind sign-in and CSRF, wired to its service. */
@@ -55,6 +57,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
 
   api.use('/auth', authRoutes(auth, users, config.loginRateLimit));
   api.use('/users', userRoutes(users));
+  api.use('/sites', masterDataRoutes({ resource: 'site', read: 'sites:read', write: 'sites:write', createSchema: createSiteSchema, updateSchema: updateSiteSchema, service: createSiteService(dataSource, clock) }));
   api.use('/booths', masterDataRoutes({ resource: 'booth', read: 'booths:read', write: 'booths:write', createSchema: createBoothSchema, updateSchema: updateBoothSchema, service: createBoothService(dataSource, clock) }));
   api.use('/racks', masterDataRoutes({ resource: 'rack', read: 'racks:read', write: 'racks:write', createSchema: createRackSchema, updateSchema: updateRackSchema, service: createRackService(dataSource, clock) }));
   api.use('/settings', settingsRoutes(settings));

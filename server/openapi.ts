@@ -15,6 +15,7 @@ import { createPartSchema, partSchema } from '../shared/schemas/part';
 import { createLotSchema, createProductSchema, lotSchema, productSchema, updateProductSchema } from '../shared/schemas/product';
 import { createReadingSchema, readingSchema } from '../shared/schemas/reading';
 import { readyPartSchema } from '../shared/schemas/ready';
+import { createSiteSchema, siteSchema, updateSiteSchema } from '../shared/schemas/site';
 import { areaSprayedReportSchema, boothUseReportSchema, conditionsReportSchema, materialReportSchema, reworkReportSchema, solventReportSchema } from '../shared/schemas/report';
 import { createSpraySessionSchema, spraySessionSchema, updateSpraySessionSchema } from '../shared/schemas/spray-session';
 
@@ -40,7 +41,11 @@ const operations: Operation[] = [
   { method: 'get', path: '/api/users', summary: 'List users', permission: 'users:read', response: listSchema(userSchema) },
   { method: 'post', path: '/api/users', summary: 'Create a user', permission: 'users:write', body: createUserSchema, response: wrap('user', userSchema), status: 201 },
   { method: 'patch', path: '/api/users/{id}', summary: 'Change a user', permission: 'users:write', body: updateUserSchema, response: wrap('user', userSchema) },
-  { method: 'get', path: '/api/booths', summary: 'List booths', permission: 'booths:read', response: listSchema(boothSchema) },
+  { method: 'get', path: '/api/sites', summary: 'List sites', permission: 'sites:read', response: listSchema(siteSchema) },
+  { method: 'post', path: '/api/sites', summary: 'Add a site', permission: 'sites:write', body: createSiteSchema, response: wrap('site', siteSchema), status: 201 },
+  { method: 'get', path: '/api/sites/{id}', summary: 'One site', permission: 'sites:read', response: wrap('site', siteSchema) },
+  { method: 'patch', path: '/api/sites/{id}', summary: 'Rename a site', permission: 'sites:write', body: updateSiteSchema, response: wrap('site', siteSchema) },
+  { method: 'get', path: '/api/booths', summary: 'List booths (own site; an admin all, or ?siteId)', permission: 'booths:read', response: listSchema(boothSchema) },
   { method: 'post', path: '/api/booths', summary: 'Create a booth', permission: 'booths:write', body: createBoothSchema, response: wrap('booth', boothSchema), status: 201 },
   { method: 'get', path: '/api/booths/{id}', summary: 'One booth', permission: 'booths:read', response: wrap('booth', boothSchema) },
   { method: 'patch', path: '/api/booths/{id}', summary: 'Change a booth', permission: 'booths:write', body: updateBoothSchema, response: wrap('booth', boothSchema) },

@@ -34,10 +34,12 @@ export const permissions = [
   'parts:collect',
   'readings:write',
   'reports:read',
+  'sites:read',
+  'sites:write',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
-const adminOnly: readonly Permission[] = ['users:read', 'users:write', 'settings:write'];
+const adminOnly: readonly Permission[] = ['users:read', 'users:write', 'settings:write', 'sites:write'];
 
 /** The one matrix: the server enforces it, the client hides what a role may not do. Deny by default. */
 const matrix: Record<Role, readonly Permission[]> = {
@@ -45,6 +47,7 @@ const matrix: Record<Role, readonly Permission[]> = {
   // A lead does everything but run the users and the shop's own settings.
   lead: permissions.filter((p) => !adminOnly.includes(p)),
   sprayer: [
+    'sites:read',
     'booths:read',
     'racks:read',
     'settings:read',
@@ -59,7 +62,7 @@ const matrix: Record<Role, readonly Permission[]> = {
     'ready:read',
     'readings:write',
   ],
-  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
+  assembler: ['sites:read', 'booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
 };
 
 export function can(role: Role | null | undefined, permission: Permission): boolean {
@@ -69,4 +72,9 @@ export function can(role: Role | null | undefined, permission: Permission): bool
 
 export function permissionsOf(role: Role): readonly Permission[] {
   return matrix[role];
+}
+
+/** An admin works across every site; everyone else sees and plans their own site only. */
+export function seesAllSites(role: Role | null | undefined): boolean {
+  return role === 'admin';
 }

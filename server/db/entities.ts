@@ -9,6 +9,7 @@ import { ProductEntity } from './entities/product.entity';
 import { RackEntity } from './entities/rack.entity';
 import { SessionEntity } from './entities/session.entity';
 import { ShopSettingsEntity } from './entities/shop-settings.entity';
+import { SiteEntity } from './entities/site.entity';
 import { StoredFileEntity } from './entities/stored-file.entity';
 import { UserEntity } from './entities/user.entity';
 import { CoatPartEntity } from './entities/coat-part.entity';
@@ -26,6 +27,7 @@ export const entities = [
   RackEntity,
   AuditEntryEntity,
   ShopSettingsEntity,
+  SiteEntity,
   StoredFileEntity,
   ProductEntity,
   ProductLotEntity,

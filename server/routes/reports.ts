@@ -1,4 +1,5 @@
-import { Router, type Response } from 'express';
+import { Router, type Request, type Response } from 'express';
+import { siteScopeOf } from '../lib/site-scope';
 import type { z } from 'zod';
 import { areaSprayedQuerySchema, boothUseQuerySchema, conditionsQuerySchema, materialQuerySchema, reportRangeQuerySchema } from '../../shared/schemas/report';
 import { requirePermission } from '../middleware/permissions';
@@ -11,10 +12,12 @@ function send<R>(res: Response, name: string, format: 'json' | 'csv', report: R,
   res.attachment(`boothwright-${name}-${range.from}-to-${range.to}.csv`).type('text/csv').send(csv(report));
 }
 
-function reportRoute<S extends z.ZodType<{ from: string; to: string; format: 'json' | 'csv' }>, R>(name: string, schema: S, run: (q: z.infer<S>) => Promise<R>, csv: (r: R) => string) {
-  return async (req: { query: unknown }, res: Response) => {
+function reportRoute<S extends z.ZodType<{ from: string; to: string; format: 'json' | 'csv'; siteId?: number }>, R>(name: string, schema: S, run: (q: z.infer<S>) => Promise<R>, csv: (r: R) => string) {
+  return async (req: Request, res: Response) => {
     const query = schema.parse(req.query);
-    send(res, name, query.format, await run(query), csv, query);
+    // A lead's reports are their site's whatever they ask; an admin's are the site named, or all.
+    const siteId = siteScopeOf(req).siteId ?? undefined;
+    send(res, name, query.format, await run({ ...query, siteId }), csv, query);
   };
 }
 

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { idParamsSchema, pageQuerySchema } from '../../shared/schemas/common';
 import { createUserSchema, updateUserSchema } from '../../shared/schemas/user';
 import { actorOf } from '../lib/actor';
+import { siteScopeOf } from '../lib/site-scope';
 import { requirePermission } from '../middleware/permissions';
 import type { UserService } from '../services/users';
 
@@ -13,7 +14,7 @@ export function userRoutes(users: UserService): Router {
   });
 
   router.post('/', requirePermission('users:write'), async (req, res) => {
-    res.status(201).json({ user: await users.create(createUserSchema.parse(req.body), actorOf(req)) });
+    res.status(201).json({ user: await users.create(createUserSchema.parse(req.body), actorOf(req), siteScopeOf(req).homeSiteId) });
   });
 
   router.patch('/:id', requirePermission('users:write'), async (req, res) => {

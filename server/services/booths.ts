@@ -29,6 +29,7 @@ export function toBoothDto(booth: BoothEntity): Booth {
     faceVelocityMps: booth.openFaceAreaM2
       ? Math.round(faceVelocityMps({ extractionM3PerH: booth.extractionM3PerH, openFaceAreaM2: booth.openFaceAreaM2 }) * 100) / 100
       : null,
+    siteId: booth.siteId,
     createdAt: booth.createdAt,
     updatedAt: booth.updatedAt,
   };
@@ -41,6 +42,7 @@ export function createBoothService(dataSource: DataSource, clock: Clock = system
     createSchema: createBoothSchema,
     order: { name: 'ASC', id: 'ASC' },
     toDto: toBoothDto,
+    siteScoped: true,
   });
 }
 

@@ -2,6 +2,7 @@ import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
 import { autoPlan, type Plan, type PlanJob, type PlanStep } from '../../shared/finishing/auto-plan';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import { BoothEntity } from '../db/entities/booth.entity';
+import { everySite, type SiteScope } from '../lib/site-scope';
 import { JobEntity } from '../db/entities/job.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { ProductEntity } from '../db/entities/product.entity';
@@ -42,7 +43,8 @@ async function planJobInput(manager: EntityManager, job: JobEntity, system: Fini
 
 export function createPlannerService(dataSource: DataSource, settings: SettingsService, clock: Clock = systemClock) {
   return {
-    async propose(jobIds: number[] | undefined, horizonDays: number): Promise<Plan> {
+    /** Plans into the booths and racks of the caller's site (every site for an admin who names none). */
+    async propose(jobIds: number[] | undefined, horizonDays: number, scope: SiteScope = everySite): Promise<Plan> {
       const manager = dataSource.manager;
       const now = clock.now();
       const shop = await settings.get();
@@ -54,8 +56,8 @@ export function createPlannerService(dataSource: DataSource, settings: SettingsS
       const planJobs = (await Promise.all(jobs.map((job) => planJobInput(manager, job, steps.get(job.id) ?? [], products)))).filter((j): j is PlanJob => j !== null);
       const horizonEnd = new Date(now.getTime() + horizonDays * 86_400_000).toISOString();
       const [booths, racks, sessions, rackLoad] = await Promise.all([
-        manager.find(BoothEntity, { order: { id: 'ASC' } }),
-        manager.find(RackEntity),
+        manager.find(BoothEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId }, order: { id: 'ASC' } }),
+        manager.find(RackEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId } }),
         manager.createQueryBuilder(SpraySessionEntity, 's').where("s.state <> 'cancelled'").andWhere('s.end_at > :now AND s.start_at < :end', { now: now.toISOString(), end: horizonEnd }).getMany(),
         currentRackLoad(manager, now),
       ]);

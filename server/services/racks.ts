@@ -13,6 +13,7 @@ export function toRackDto(rack: RackEntity): Rack {
     shelfAreaM2: rack.shelfAreaM2,
     dryingTempC: rack.dryingTempC,
     totalAreaM2: Math.round(rack.shelves * rack.shelfAreaM2 * 100) / 100,
+    siteId: rack.siteId,
     createdAt: rack.createdAt,
     updatedAt: rack.updatedAt,
   };
@@ -25,6 +26,7 @@ export function createRackService(dataSource: DataSource, clock: Clock = systemC
     createSchema: createRackSchema,
     order: { name: 'ASC', id: 'ASC' },
     toDto: toRackDto,
+    siteScoped: true,
   });
 }
 

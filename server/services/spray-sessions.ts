@@ -14,6 +14,7 @@ import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { UserEntity } from '../db/entities/user.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
+import { everySite, inScope, type SiteScope } from '../lib/site-scope';
 import { systemClock, type Clock } from '../lib/clock';
 import { recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
@@ -63,10 +64,16 @@ async function writeItems(manager: EntityManager, sessionId: number, items: { pa
 
 type SessionFields = ReturnType<typeof createSpraySessionSchema.parse>;
 
-async function insertSession(manager: EntityManager, fields: SessionFields, actor: Actor, timezone: string, now: string): Promise<SpraySessionEntity> {
+/** A booth of another site is, to a lead, a booth that does not exist. */
+async function boothOrFail(manager: EntityManager, boothId: number, scope: SiteScope): Promise<BoothEntity> {
+  const booth = await manager.findOneBy(BoothEntity, { id: boothId });
+  if (!booth || !inScope(scope, booth.siteId)) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
+  return booth;
+}
+
+async function insertSession(manager: EntityManager, fields: SessionFields, actor: Actor, timezone: string, now: string, scope: SiteScope): Promise<SpraySessionEntity> {
   const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
-  const booth = await manager.findOneBy(BoothEntity, { id: fields.boothId });
-  if (!booth) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
+  const booth = await boothOrFail(manager, fields.boothId, scope);
   await assertSprayer(manager, fields.sprayerId);
   assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
   await assertNoClash(manager, slot, booth, timezone);
@@ -81,21 +88,21 @@ async function insertSession(manager: EntityManager, fields: SessionFields, acto
 }
 
 export function createSpraySessionService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
-  async function boothOrFail(manager: EntityManager, boothId: number): Promise<BoothEntity> {
-    const booth = await manager.findOneBy(BoothEntity, { id: boothId });
-    if (!booth) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
-    return booth;
+  async function sessionOrFail(manager: EntityManager, id: number, scope: SiteScope): Promise<SpraySessionEntity> {
+    const session = await manager.findOneBy(SpraySessionEntity, { id });
+    const booth = session && (await manager.findOneBy(BoothEntity, { id: session.boothId }));
+    if (!session || !booth || !inScope(scope, booth.siteId)) throw notFound('Spray session');
+    return session;
   }
 
-  async function getWith(manager: EntityManager, id: number): Promise<SpraySession> {
-    const session = await manager.findOneBy(SpraySessionEntity, { id });
-    if (!session) throw notFound('Spray session');
-    return (await toDtos(manager, [session]))[0];
+  async function getWith(manager: EntityManager, id: number, scope: SiteScope = everySite): Promise<SpraySession> {
+    return (await toDtos(manager, [await sessionOrFail(manager, id, scope)]))[0];
   }
 
   return {
-    async list(query: SpraySessionQuery): Promise<List<SpraySession>> {
+    async list(query: SpraySessionQuery, scope: SiteScope = everySite): Promise<List<SpraySession>> {
       const qb = dataSource.getRepository(SpraySessionEntity).createQueryBuilder('s');
+      if (scope.siteId !== null) qb.andWhere('s.booth_id IN (SELECT b.id FROM booths b WHERE b.site_id = :siteId)', { siteId: scope.siteId });
       if (query.from) qb.andWhere('s.end_at > :from', { from: new Date(query.from).toISOString() });
       if (query.to) qb.andWhere('s.start_at < :to', { to: new Date(query.to).toISOString() });
       if (query.boothId) qb.andWhere('s.booth_id = :boothId', { boothId: query.boothId });
@@ -104,35 +111,34 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
       return { items: await toDtos(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
     },
 
-    get: (id: number) => getWith(dataSource.manager, id),
+    get: (id: number, scope: SiteScope = everySite) => getWith(dataSource.manager, id, scope),
 
-    async create(input: CreateSpraySessionInput, actor: Actor): Promise<SpraySession> {
+    async create(input: CreateSpraySessionInput, actor: Actor, scope: SiteScope = everySite): Promise<SpraySession> {
       const fields = createSpraySessionSchema.parse(input);
       const { timezone } = await settings.get();
-      const created = await inTransaction(dataSource, async (manager) => getWith(manager, (await insertSession(manager, fields, actor, timezone, clock.now().toISOString())).id));
+      const created = await inTransaction(dataSource, async (manager) => getWith(manager, (await insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope)).id));
       events.publish({ type: 'spray-session.changed', id: created.id });
       return created;
     },
 
     /** Books every session of an accepted plan, or none of them. */
-    async createAll(inputs: CreateSpraySessionInput[], actor: Actor): Promise<SpraySession[]> {
+    async createAll(inputs: CreateSpraySessionInput[], actor: Actor, scope: SiteScope = everySite): Promise<SpraySession[]> {
       const all = inputs.map((input) => createSpraySessionSchema.parse(input));
       const { timezone } = await settings.get();
       const created = await inTransaction(dataSource, async (manager) => {
         const sessions: SpraySessionEntity[] = [];
-        for (const fields of all) sessions.push(await insertSession(manager, fields, actor, timezone, clock.now().toISOString()));
+        for (const fields of all) sessions.push(await insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope));
         return toDtos(manager, sessions);
       });
       for (const session of created) events.publish({ type: 'spray-session.changed', id: session.id });
       return created;
     },
 
-    async update(id: number, patch: UpdateSpraySessionInput, actor: SessionActor): Promise<SpraySession> {
+    async update(id: number, patch: UpdateSpraySessionInput, actor: SessionActor, scope: SiteScope = everySite): Promise<SpraySession> {
       const { timezone } = await settings.get();
       const now = clock.now().toISOString();
       const updated = await inTransaction(dataSource, async (manager) => {
-        const session = await manager.findOneBy(SpraySessionEntity, { id });
-        if (!session) throw notFound('Spray session');
+        const session = await sessionOrFail(manager, id, scope);
         const slot = {
           id,
           boothId: patch.boothId ?? session.boothId,
@@ -141,7 +147,7 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
           sprayerId: patch.sprayerId === undefined ? session.sprayerId : patch.sprayerId,
         };
         if (Date.parse(slot.endAt) <= Date.parse(slot.startAt)) throw new AppError('validation_failed', 'The end must be after the start', { end: 'The end must be after the start' });
-        const booth = await boothOrFail(manager, slot.boothId);
+        const booth = await boothOrFail(manager, slot.boothId, scope);
         const moved = slot.boothId !== session.boothId || slot.startAt !== session.startAt || slot.endAt !== session.endAt || slot.sprayerId !== session.sprayerId;
         if (moved) {
           await assertSprayer(manager, slot.sprayerId);

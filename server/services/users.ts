@@ -1,11 +1,12 @@
 import { inTransaction } from '../db/transaction';
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { defaultNotifyPrefs } from '../../shared/schemas/notification';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
 import { createUserSchema } from '../../shared/schemas/user';
 import { hashPassword } from '../auth/passwords';
+import { SiteEntity } from '../db/entities/site.entity';
 import { UserEntity } from '../db/entities/user.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
@@ -13,11 +14,15 @@ import { paginate } from '../lib/paginate';
 import { changedFields, recordAudit, type Actor } from './audit';
 
 export function toSessionUser(user: UserEntity): SessionUser {
-  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, notify: user.notify ?? defaultNotifyPrefs(user.role) };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: user.notify ?? defaultNotifyPrefs(user.role) };
 }
 
 export function toUserDto(user: UserEntity): User {
   return { ...toSessionUser(user), disabled: user.disabled, createdAt: user.createdAt };
+}
+
+async function requireSite(manager: EntityManager, siteId: number): Promise<void> {
+  if (!(await manager.existsBy(SiteEntity, { id: siteId }))) throw new AppError('validation_failed', 'That site does not exist', { siteId: 'Choose a site' });
 }
 
 export function createUserService(dataSource: DataSource, clock: Clock = systemClock) {
@@ -30,6 +35,7 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
     return inTransaction(dataSource, async (manager) => {
       const user = await manager.findOneBy(UserEntity, { id });
       if (!user) throw notFound('User');
+      if (fields.siteId !== undefined) await requireSite(manager, fields.siteId);
       const changes = changedFields(user, fields);
       if (passwordHash) changes.password = { from: '…', to: 'changed' };
       Object.assign(user, fields, passwordHash ? { passwordHash } : {}, { updatedAt: now.toISOString() });
@@ -44,15 +50,17 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
       return paginate(repo(), query, { order: { name: 'ASC', id: 'ASC' } }, toUserDto);
     },
 
-    async create(input: CreateUserInput, actor: Actor): Promise<User> {
-      const { password, ...fields } = createUserSchema.parse(input);
+    /** `homeSiteId` is where the user goes when the input names no site: the creating admin's. */
+    async create(input: CreateUserInput, actor: Actor, homeSiteId = 1): Promise<User> {
+      const { password, siteId = homeSiteId, ...fields } = createUserSchema.parse(input);
       const passwordHash = await hashPassword(password);
       const now = clock.now();
       return inTransaction(dataSource, async (manager) => {
         if (await manager.existsBy(UserEntity, { email: fields.email })) {
           throw new AppError('conflict', 'A user with this e-mail already exists', { email: 'Already in use' });
         }
-        const user = manager.create(UserEntity, { ...fields, passwordHash, disabled: false, createdAt: now.toISOString(), updatedAt: now.toISOString() });
+        await requireSite(manager, siteId);
+        const user = manager.create(UserEntity, { ...fields, siteId, passwordHash, disabled: false, createdAt: now.toISOString(), updatedAt: now.toISOString() });
         await manager.save(user);
         await recordAudit(manager, actor, { action: 'create', entity: 'user', entityId: user.id, summary: `Added user ${user.email} as ${user.role}` }, now);
         return toUserDto(user);

@@ -17,6 +17,7 @@ export const sessionUserSchema = z.object({
   name: z.string(),
   role: roleSchema,
   units: unitSystemSchema,
+  siteId: z.number().int(),
   notify: notifyPrefsSchema.optional(),
 });
 export type SessionUser = z.infer<typeof sessionUserSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { siteIdSchema } from './site';
 
 export const boothKinds = ['cross-draft', 'down-draft', 'open-face', 'spray-room'] as const;
 export const boothKindSchema = z.enum(boothKinds, { error: 'Choose a booth kind' });
@@ -40,6 +41,7 @@ export const boothFieldsSchema = z.object({
   openFaceAreaM2: z.number().positive('Open-face area must be more than 0').max(500).nullable(),
   openingHours: z.array(openingSpanSchema).max(21),
   sprayRateM2PerH: z.number().positive('Spray rate must be more than 0').max(1000),
+  siteId: siteIdSchema,
 });
 
 const f = boothFieldsSchema.shape;
@@ -51,6 +53,8 @@ export const createBoothSchema = boothFieldsSchema.extend({
   // No spans means no restriction: a booth is bookable at any hour until its hours are set.
   openingHours: f.openingHours.default([]),
   sprayRateM2PerH: f.sprayRateM2PerH.default(20),
+  // Left out, the booth goes to the creator's own site.
+  siteId: f.siteId.optional(),
 });
 export type CreateBoothInput = z.input<typeof createBoothSchema>;
 

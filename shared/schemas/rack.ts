@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { siteIdSchema } from './site';
 
 export const rackLocations = ['drying-room', 'booth-side'] as const;
 export const rackLocationSchema = z.enum(rackLocations, { error: 'Choose where the rack stands' });
@@ -16,6 +17,7 @@ export const rackFieldsSchema = z.object({
   shelves: z.number().int('Whole shelves only').min(1, 'At least one shelf').max(100),
   shelfAreaM2: z.number().positive('Shelf area must be more than 0').max(50),
   dryingTempC: z.number().min(5, 'Below 5 °C is not a drying temperature').max(80, 'Above 80 °C is out of range').nullable(),
+  siteId: siteIdSchema,
 });
 
 const f = rackFieldsSchema.shape;
@@ -24,6 +26,7 @@ export const createRackSchema = rackFieldsSchema.extend({
   shelves: f.shelves.default(10),
   shelfAreaM2: f.shelfAreaM2.default(1),
   dryingTempC: f.dryingTempC.default(null),
+  siteId: f.siteId.optional(),
 });
 export type CreateRackInput = z.input<typeof createRackSchema>;
 export const updateRackSchema = rackFieldsSchema.partial();

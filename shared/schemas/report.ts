@@ -13,6 +13,8 @@ const rangeFields = {
   to: reportDateSchema,
   /** `csv` answers with a CSV file of the report's table instead of JSON. */
   format: z.enum(['json', 'csv']).default('json'),
+  /** One site's figures; an admin may pick any site (or none for the whole group), everyone else gets their own. */
+  siteId: z.coerce.number().int().positive().optional(),
 };
 
 function checkRange(value: { from: string; to: string }, ctx: z.RefinementCtx) {
@@ -39,7 +41,7 @@ export type ConditionsQuery = z.infer<typeof conditionsQuerySchema>;
 export const materialQuerySchema = z.object({ ...rangeFields, jobId: optionalId }).superRefine(checkRange);
 export type MaterialQuery = z.infer<typeof materialQuerySchema>;
 
-const rangeEcho = { from: z.string(), to: z.string(), timezone: z.string() };
+const rangeEcho = { from: z.string(), to: z.string(), timezone: z.string(), siteId: z.number().int().nullable() };
 
 /** Week rows start on the shop's Monday. */
 export const boothUseRowSchema = z.object({

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { roleSchema } from './auth';
 import { unitSystemSchema } from './common';
 import { notifyPrefsSchema } from './notification';
+import { siteIdSchema } from './site';
 
 export const userSchema = z.object({
   id: z.number().int(),
@@ -9,6 +10,7 @@ export const userSchema = z.object({
   name: z.string(),
   role: roleSchema,
   units: unitSystemSchema,
+  siteId: z.number().int(),
   disabled: z.boolean(),
   createdAt: z.string(),
 });
@@ -22,6 +24,8 @@ export const createUserSchema = z.object({
   role: roleSchema,
   units: unitSystemSchema.default('metric'),
   password: passwordSchema,
+  /** Left out, the new user joins the creating admin's site. */
+  siteId: siteIdSchema.optional(),
 });
 export type CreateUserInput = z.input<typeof createUserSchema>;
 
@@ -32,6 +36,7 @@ export const updateUserSchema = z
     units: unitSystemSchema,
     disabled: z.boolean(),
     password: passwordSchema,
+    siteId: siteIdSchema,
   })
   .partial();
 export type UpdateUserInput = z.infer<typeof updateUserSchema>;

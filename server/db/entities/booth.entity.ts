@@ -1,4 +1,4 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { BoothKind, OpeningSpan } from '../../../shared/schemas/booth';
 
 @Entity({ name: 'booths' })
@@ -39,6 +39,10 @@ export class BoothEntity {
   /** SHA-256 of the booth sensor's bearer token; the token itself is shown once and never stored. */
   @Column({ type: 'varchar', length: 64, nullable: true })
   sensorTokenHash: string | null;
+
+  @Index()
+  @Column({ type: 'integer', default: 1 })
+  siteId: number;
 
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;

@@ -1,4 +1,4 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { RackLocation } from '../../../shared/schemas/rack';
 
 @Entity({ name: 'racks' })
@@ -20,6 +20,10 @@ export class RackEntity {
 
   @Column({ type: 'double precision', nullable: true })
   dryingTempC: number | null;
+
+  @Index()
+  @Column({ type: 'integer', default: 1 })
+  siteId: number;
 
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;

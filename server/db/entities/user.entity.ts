@@ -1,4 +1,4 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { Role } from '../../../shared/permissions';
 import type { UnitSystem } from '../../../shared/schemas/common';
 import type { NotifyPrefs } from '../../../shared/schemas/notification';
@@ -31,6 +31,10 @@ export class UserEntity {
   notify: NotifyPrefs | null;
 
   /** ISO 8601 UTC instants, stored as text so SQLite and PostgreSQL sort and compare them alike. */
+  @Index()
+  @Column({ type: 'integer', default: 1 })
+  siteId: number;
+
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;
 

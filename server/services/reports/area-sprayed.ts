@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { AreaSprayedQuery, AreaSprayedReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, isCurrentCoat, num, round } from './sql';
+import { Statement, dialectOf, inSite, isCurrentCoat, num, round } from './sql';
 
 type Row = { week_start: string; group_key: unknown; group_label: string; coats: unknown; area_m2: unknown };
 
@@ -20,7 +20,7 @@ export async function areaSprayedReport(dataSource: DataSource, query: AreaSpray
     WITH ${sql.bucketValues(buckets)},
     cur AS (
       SELECT c.id, c.sprayed_at, c.product_id FROM coats c
-      WHERE c.sprayed_at >= ${sql.param(range.startsAt)} AND c.sprayed_at < ${sql.param(range.endsAt)} AND ${isCurrentCoat('c')}
+      WHERE c.sprayed_at >= ${sql.param(range.startsAt)} AND c.sprayed_at < ${sql.param(range.endsAt)} AND ${isCurrentCoat('c')} ${inSite(sql, 'c.spray_session_id', query.siteId)}
     )
     SELECT b.label AS week_start, ${group.key} AS group_key, ${group.label} AS group_label,
       COUNT(DISTINCT cur.id) AS coats, SUM(p.coated_area_m2) AS area_m2
@@ -36,6 +36,7 @@ export async function areaSprayedReport(dataSource: DataSource, query: AreaSpray
     from: query.from,
     to: query.to,
     timezone: timeZone,
+    siteId: query.siteId ?? null,
     groupBy: query.groupBy,
     rows: rows.map((r) => ({ weekStart: r.week_start, key: String(r.group_key), label: r.group_label, coats: num(r.coats), areaM2: round(num(r.area_m2)) })),
   };

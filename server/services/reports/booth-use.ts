@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { BoothUseQuery, BoothUseReport } from '../../../shared/schemas/report';
 import { BoothEntity } from '../../db/entities/booth.entity';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, isCurrentCoat, num, round } from './sql';
+import { Statement, dialectOf, inSite, isCurrentCoat, num, round } from './sql';
 
 type Row = { week_start: string; booth_id: number; sessions: unknown; booked_hours: unknown; sprayed_hours: unknown };
 
@@ -24,6 +24,7 @@ export async function boothUseReport(dataSource: DataSource, query: BoothUseQuer
       FROM spray_sessions ss
       WHERE ss.state <> 'cancelled' AND ss.start_at >= ${sql.param(range.startsAt)} AND ss.start_at < ${sql.param(range.endsAt)}
         ${query.boothId ? `AND ss.booth_id = ${sql.param(query.boothId)}` : ''}
+        ${inSite(sql, 'ss.id', query.siteId)}
     )
     SELECT b.label AS week_start, s.booth_id, COUNT(*) AS sessions,
       SUM(${sql.hoursBetween('s.start_at', 's.end_at')}) AS booked_hours,
@@ -31,13 +32,14 @@ export async function boothUseReport(dataSource: DataSource, query: BoothUseQuer
     FROM s JOIN b ON s.start_at >= b.starts_at AND s.start_at < b.ends_at
     GROUP BY b.label, s.booth_id`;
   const rows: Row[] = await dataSource.query(text, sql.params);
-  const booths = await dataSource.getRepository(BoothEntity).find({ where: query.boothId ? { id: query.boothId } : {}, order: { name: 'ASC' } });
+  const booths = await dataSource.getRepository(BoothEntity).find({ where: { ...(query.boothId ? { id: query.boothId } : {}), ...(query.siteId ? { siteId: query.siteId } : {}) }, order: { name: 'ASC' } });
   const found = new Map(rows.map((r) => [`${r.week_start}|${Number(r.booth_id)}`, r]));
   // Every booth gets every week, so an idle week shows as a zero rather than a gap.
   return {
     from: query.from,
     to: query.to,
     timezone: timeZone,
+    siteId: query.siteId ?? null,
     rows: buckets.flatMap((bucket) =>
       booths.map((booth) => {
         const row = found.get(`${bucket.label}|${booth.id}`);

@@ -82,7 +82,7 @@ async function coatCount(dataSource: DataSource, boothId: number, range: { start
 /** Hourly for a week or less, else per shop day. */
 export async function conditionsReport(dataSource: DataSource, query: ConditionsQuery, timeZone: string): Promise<ConditionsReport> {
   const booth = await dataSource.getRepository(BoothEntity).findOneBy({ id: query.boothId });
-  if (!booth) throw notFound('Booth');
+  if (!booth || (query.siteId !== undefined && booth.siteId !== query.siteId)) throw notFound('Booth');
   const range = shopRange(query.from, query.to, timeZone);
   const days = (Date.parse(query.to) - Date.parse(query.from)) / 86_400_000 + 1;
   const bucket = days <= hourlyUpToDays ? 'hour' : 'day';
@@ -91,6 +91,7 @@ export async function conditionsReport(dataSource: DataSource, query: Conditions
     from: query.from,
     to: query.to,
     timezone: timeZone,
+    siteId: query.siteId ?? null,
     boothId: booth.id,
     boothName: booth.name,
     bucket,

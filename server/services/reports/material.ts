@@ -4,7 +4,7 @@ import { JobEntity } from '../../db/entities/job.entity';
 import { ProductEntity } from '../../db/entities/product.entity';
 import type { EstimateService } from '../estimates';
 import { shopRange } from './buckets';
-import { Statement, dialectOf, isCurrentCoat, num, round } from './sql';
+import { Statement, dialectOf, inSite, isCurrentCoat, num, round } from './sql';
 
 type UsedRow = { job_id: unknown; product_id: unknown; used_l: unknown };
 
@@ -16,15 +16,16 @@ type UsedRow = { job_id: unknown; product_id: unknown; used_l: unknown };
 async function usedLitres(dataSource: DataSource, query: MaterialQuery, timeZone: string): Promise<UsedRow[]> {
   const range = shopRange(query.from, query.to, timeZone);
   const sql = new Statement(dialectOf(dataSource));
-  const jobFilter = query.jobId ? `AND p.job_id = ${sql.param(query.jobId)}` : '';
+  // Placeholders are written in text order: better-sqlite3 binds `?` by position.
+  const jobFilter = () => (query.jobId ? `AND p.job_id = ${sql.param(query.jobId)}` : '');
   const text = `
     WITH jobs_in_range AS (
       SELECT DISTINCT p.job_id FROM coats c JOIN coat_parts cp ON cp.coat_id = c.id JOIN parts p ON p.id = cp.part_id
-      WHERE c.sprayed_at >= ${sql.param(range.startsAt)} AND c.sprayed_at < ${sql.param(range.endsAt)} AND ${isCurrentCoat('c')} ${jobFilter}
+      WHERE c.sprayed_at >= ${sql.param(range.startsAt)} AND c.sprayed_at < ${sql.param(range.endsAt)} AND ${isCurrentCoat('c')} ${jobFilter()} ${inSite(sql, 'c.spray_session_id', query.siteId)}
     ),
     sessions_of_jobs AS (
       SELECT DISTINCT c.spray_session_id FROM coats c JOIN coat_parts cp ON cp.coat_id = c.id JOIN parts p ON p.id = cp.part_id
-      WHERE p.job_id IN (SELECT job_id FROM jobs_in_range)
+      WHERE p.job_id IN (SELECT job_id FROM jobs_in_range) ${inSite(sql, 'c.spray_session_id', query.siteId)}
     ),
     share AS (
       SELECT c.spray_session_id AS sid, c.product_id AS pid, p.job_id AS jid, SUM(p.coated_area_m2) AS area
@@ -53,7 +54,7 @@ async function jobsInRange(dataSource: DataSource, query: MaterialQuery, timeZon
   const rows: { job_id: unknown }[] = await dataSource.query(
     `SELECT DISTINCT p.job_id FROM coats c JOIN coat_parts cp ON cp.coat_id = c.id JOIN parts p ON p.id = cp.part_id
      WHERE c.sprayed_at >= ${sql.param(range.startsAt)} AND c.sprayed_at < ${sql.param(range.endsAt)} AND ${isCurrentCoat('c')}
-     ${query.jobId ? `AND p.job_id = ${sql.param(query.jobId)}` : ''}`,
+     ${query.jobId ? `AND p.job_id = ${sql.param(query.jobId)}` : ''} ${inSite(sql, 'c.spray_session_id', query.siteId)}`,
     sql.params,
   );
   return rows.map((r) => num(r.job_id));
@@ -90,7 +91,7 @@ export async function materialReport(dataSource: DataSource, estimates: Estimate
     estimatedL: round(c.estimatedL),
     usedL: round(c.usedL),
   }));
-  return { from: query.from, to: query.to, timezone: timeZone, rows, byProduct: totalsByProduct(rows) };
+  return { from: query.from, to: query.to, timezone: timeZone, siteId: query.siteId ?? null, rows, byProduct: totalsByProduct(rows) };
 }
 
 function totalsByProduct(rows: MaterialReport['rows']): MaterialReport['byProduct'] {

@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { ReportRangeQuery, ReworkReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, isCurrentCoat, num } from './sql';
+import { Statement, dialectOf, inSite, isCurrentCoat, num } from './sql';
 
 type Row = { month: string; kind: 'corrected' | 'repeated'; reason: string; n: unknown };
 
@@ -14,7 +14,7 @@ export async function reworkReport(dataSource: DataSource, query: ReportRangeQue
   const range = shopRange(query.from, query.to, timeZone);
   const sql = new Statement(dialectOf(dataSource));
   const buckets = sql.bucketValues(bucketsFor(query.from, query.to, timeZone, 'month'));
-  const inRange = (alias: string) => `${alias}.sprayed_at >= ${sql.param(range.startsAt)} AND ${alias}.sprayed_at < ${sql.param(range.endsAt)}`;
+  const inRange = (alias: string) => `${alias}.sprayed_at >= ${sql.param(range.startsAt)} AND ${alias}.sprayed_at < ${sql.param(range.endsAt)} ${inSite(sql, `${alias}.spray_session_id`, query.siteId)}`;
   const sprayedBefore = `EXISTS (
     SELECT 1 FROM coat_parts cp JOIN coat_parts cp2 ON cp2.part_id = cp.part_id AND cp2.coat_id <> cp.coat_id JOIN coats c2 ON c2.id = cp2.coat_id
     WHERE cp.coat_id = c.id AND c2.step_position = c.step_position AND c2.sprayed_at < c.sprayed_at AND ${isCurrentCoat('c2')})`;
@@ -34,8 +34,8 @@ export async function reworkReport(dataSource: DataSource, query: ReportRangeQue
   const rows: Row[] = await dataSource.query(text, sql.params);
   const count = new Statement(sql.dialect);
   const [total]: { n: unknown }[] = await dataSource.query(
-    `SELECT COUNT(*) AS n FROM coats c WHERE c.sprayed_at >= ${count.param(range.startsAt)} AND c.sprayed_at < ${count.param(range.endsAt)} AND ${isCurrentCoat('c')}`,
+    `SELECT COUNT(*) AS n FROM coats c WHERE c.sprayed_at >= ${count.param(range.startsAt)} AND c.sprayed_at < ${count.param(range.endsAt)} AND ${isCurrentCoat('c')} ${inSite(count, 'c.spray_session_id', query.siteId)}`,
     count.params,
   );
-  return { from: query.from, to: query.to, timezone: timeZone, coatCount: num(total?.n), rows: rows.map((r) => ({ month: r.month, kind: r.kind, reason: r.reason, count: num(r.n) })) };
+  return { from: query.from, to: query.to, timezone: timeZone, siteId: query.siteId ?? null, coatCount: num(total?.n), rows: rows.map((r) => ({ month: r.month, kind: r.kind, reason: r.reason, count: num(r.n) })) };
 }

@@ -1,12 +1,12 @@
 import type { DataSource } from 'typeorm';
 import type { ReportRangeQuery, SolventReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, num, round } from './sql';
+import { Statement, dialectOf, inSite, num, round } from './sql';
 
 type Row = { month: string; litres: unknown; voc_g: unknown; litres_without_voc: unknown };
 
 /** Litres mixed per shop month, all components, and the VOC they carry (litres × VOC g/L as applied). */
-async function monthlyMixes(dataSource: DataSource, from: string, to: string, timeZone: string): Promise<Map<string, Row>> {
+async function monthlyMixes(dataSource: DataSource, from: string, to: string, timeZone: string, siteId: number | undefined): Promise<Map<string, Row>> {
   const sql = new Statement(dialectOf(dataSource));
   const range = shopRange(from, to, timeZone);
   const litres = '(m.base_l + m.hardener_l + m.thinner_l)';
@@ -18,7 +18,7 @@ async function monthlyMixes(dataSource: DataSource, from: string, to: string, ti
     FROM mixes m
       JOIN b ON m.mixed_at >= b.starts_at AND m.mixed_at < b.ends_at
       JOIN products pr ON pr.id = m.product_id
-    WHERE m.mixed_at >= ${sql.param(range.startsAt)} AND m.mixed_at < ${sql.param(range.endsAt)}
+    WHERE m.mixed_at >= ${sql.param(range.startsAt)} AND m.mixed_at < ${sql.param(range.endsAt)} ${inSite(sql, 'm.spray_session_id', siteId)}
     GROUP BY b.label`;
   const rows: Row[] = await dataSource.query(text, sql.params);
   return new Map(rows.map((r) => [r.month, r]));
@@ -31,7 +31,7 @@ async function monthlyMixes(dataSource: DataSource, from: string, to: string, ti
  */
 export async function solventReport(dataSource: DataSource, query: ReportRangeQuery, timeZone: string, thresholdKg: number): Promise<SolventReport> {
   const yearStart = `${query.from.slice(0, 4)}-01-01`;
-  const byMonth = await monthlyMixes(dataSource, yearStart, query.to, timeZone);
+  const byMonth = await monthlyMixes(dataSource, yearStart, query.to, timeZone, query.siteId);
   const rows: SolventReport['rows'] = [];
   let running = 0;
   for (const { label } of bucketsFor(yearStart, query.to, timeZone, 'month')) {
@@ -42,5 +42,5 @@ export async function solventReport(dataSource: DataSource, query: ReportRangeQu
     if (label < query.from.slice(0, 7)) continue;
     rows.push({ month: label, litres: round(num(row?.litres)), vocKg: round(vocKg, 3), runningTotalKg: round(running, 3), litresWithoutVoc: round(num(row?.litres_without_voc)) });
   }
-  return { from: query.from, to: query.to, timezone: timeZone, thresholdKg, totalKg: round(rows.reduce((sum, r) => sum + r.vocKg, 0), 3), rows };
+  return { from: query.from, to: query.to, timezone: timeZone, siteId: query.siteId ?? null, thresholdKg, totalKg: round(rows.reduce((sum, r) => sum + r.vocKg, 0), 3), rows };
 }

@@ -1,0 +1,23 @@
+import { z } from 'zod';
+
+/** A workshop of the group: booths, racks and people belong to one. */
+export const siteFieldsSchema = z.object({
+  name: z.string().trim().min(1, 'Enter a name').max(80),
+});
+export const createSiteSchema = siteFieldsSchema;
+export type CreateSiteInput = z.input<typeof createSiteSchema>;
+export const updateSiteSchema = siteFieldsSchema.partial();
+export type UpdateSiteInput = z.infer<typeof updateSiteSchema>;
+
+export const siteSchema = siteFieldsSchema.extend({
+  id: z.number().int(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Site = z.infer<typeof siteSchema>;
+
+/** Where a booth, rack or user belongs; optional on create (the creator's own site). */
+export const siteIdSchema = z.number({ error: 'Choose a site' }).int().positive('Choose a site');
+
+/** `?siteId=` on lists and reports: an admin may pick a site; everyone else sees their own. */
+export const siteFilterSchema = z.object({ siteId: z.coerce.number().int().positive().optional() });
