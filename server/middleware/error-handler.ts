@@ -21,6 +21,30 @@ interface BodyParserError {
   status?: number;
 }
 
+// Body-parser and the router refuse a request they cannot read with an HTTP 4xx of their own.
+const unreadable: Record<string, string> = {
+  'charset.unsupported': 'Send the request body as UTF-8',
+  'encoding.unsupported': 'The request body is compressed in a way the server does not read',
+};
+
+function clientFault(error: BodyParserError): AppError | null {
+  if (typeof error?.status !== 'number' || error.status < 400 || error.status >= 500) return null;
+  if (error instanceof URIError) return new AppError('bad_request', 'The address has a malformed %-escape');
+  return new AppError('bad_request', unreadable[error.type ?? ''] ?? 'The request could not be read');
+}
+
+// PostgreSQL's class 22 (data exception): a value from the request it cannot hold. SQLite takes them as they are.
+const refusedValue: Record<string, string> = {
+  '22003': 'A number is too large to store',
+  '22021': 'Text may not contain NUL or other invalid characters',
+};
+
+function databaseRefusedValue(error: unknown): AppError | null {
+  const code = (error as { driverError?: { code?: unknown } } | null)?.driverError?.code;
+  if (typeof code !== 'string' || !code.startsWith('22')) return null;
+  return new AppError('bad_request', refusedValue[code] ?? 'A value in the request cannot be stored as given');
+}
+
 function toAppError(error: unknown): AppError | null {
   if (error instanceof AppError) return error;
   if (error instanceof ZodError) {
@@ -29,6 +53,8 @@ function toAppError(error: unknown): AppError | null {
   if (error instanceof FinishingInputError) {
     return new AppError('validation_failed', error.message, { [error.field]: error.message });
   }
+  const refused = databaseRefusedValue(error);
+  if (refused) return refused;
   // The database's own guards (see the sessions-and-coats migration) speak for themselves.
   const dbMessage = error instanceof Error ? error.message : '';
   if (dbMessage.includes('booth_overlap')) return new AppError('conflict', 'The booth is already booked at that time', { start: 'Overlaps another spray session of this booth' });
@@ -36,7 +62,7 @@ function toAppError(error: unknown): AppError | null {
   const parserError = error as BodyParserError;
   if (parserError?.type === 'entity.parse.failed') return new AppError('bad_request', 'The request body is not valid JSON');
   if (parserError?.type === 'entity.too.large') return new AppError('payload_too_large', 'The request body is too large');
-  return null;
+  return clientFault(parserError);
 }
 
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {

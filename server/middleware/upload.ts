@@ -16,7 +16,8 @@ export function singleUpload(maxBytes: number): RequestHandler {
         if (error.code === 'LIMIT_FILE_SIZE') return next(new AppError('payload_too_large', `The file is larger than ${limitMb} MB`, { file: `At most ${limitMb} MB` }));
         return next(new AppError('validation_failed', 'Send one file in the field "file"', { file: error.message }));
       }
-      next(error);
+      // Files are kept in memory, so any other failure is a form that could not be parsed.
+      next(new AppError('bad_request', 'The upload is not a readable multipart form'));
     });
   };
 }

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 
-export const idSchema = z.coerce.number().int().positive();
+/** Ids are 32-bit integer columns; a larger number names nothing and PostgreSQL would refuse it. */
+export const maxId = 2_147_483_647;
+export const idSchema = z.coerce.number().int().positive().max(maxId);
 export const idParamsSchema = z.object({ id: idSchema });
 
 /** ISO 8601 instant with an offset, as DESIGN.md §7 asks. */
