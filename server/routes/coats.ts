@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { correctCoatSchema, coatQuerySchema, createCoatSchema } from '../../shared/schemas/coat';
 import { idParamsSchema } from '../../shared/schemas/common';
-import { actorOf } from '../lib/actor';
+import { runnerOf } from '../lib/actor';
 import { requirePermission } from '../middleware/permissions';
 import type { CoatService } from '../services/coats';
 
@@ -9,7 +9,7 @@ export function coatRoutes(coats: CoatService): Router {
   const router = Router();
 
   router.post('/', requirePermission('coats:write'), async (req, res) => {
-    const { coat, replayed } = await coats.create(createCoatSchema.parse(req.body), actorOf(req));
+    const { coat, replayed } = await coats.create(createCoatSchema.parse(req.body), runnerOf(req));
     // A replay of an idempotency key answers with the record already made, never a second one.
     res.status(replayed ? 200 : 201).json({ coat, replayed });
   });
@@ -24,7 +24,7 @@ export function coatRoutes(coats: CoatService): Router {
 
   router.post('/:id/corrections', requirePermission('coats:write'), async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
-    res.status(201).json({ coat: await coats.correct(id, correctCoatSchema.parse(req.body), actorOf(req)) });
+    res.status(201).json({ coat: await coats.correct(id, correctCoatSchema.parse(req.body), runnerOf(req)) });
   });
 
   return router;

@@ -3,7 +3,7 @@ import { can } from '../../shared/permissions';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { createSpraySessionSchema, spraySessionQuerySchema, updateSpraySessionSchema } from '../../shared/schemas/spray-session';
 import { AppError } from '../lib/app-error';
-import { actorOf } from '../lib/actor';
+import { actorOf, runnerOf } from '../lib/actor';
 import { siteScopeOf } from '../lib/site-scope';
 import { requirePermission } from '../middleware/permissions';
 import type { MixService } from '../services/mixes';
@@ -22,7 +22,7 @@ export function spraySessionRoutes(sessions: SpraySessionService, mixes: MixServ
 
   router.post('/:id/mixes', requirePermission('coats:write'), async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
-    res.status(201).json({ mix: await mixes.create(id, createMixSchema.parse(req.body), actorOf(req)) });
+    res.status(201).json({ mix: await mixes.create(id, createMixSchema.parse(req.body), runnerOf(req)) });
   });
 
   router.get('/', requirePermission('spray-sessions:read'), async (req, res) => {

@@ -7,7 +7,7 @@ import { PartEntity } from '../db/entities/part.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
-import type { Actor } from './audit';
+import { assertRunsSession, type SessionRunner } from './session-runner';
 import { toCoatDtos } from './coat-dto';
 import { prepareCoat, type CoatFields } from './coat-inputs';
 import type { EventBus } from './events';
@@ -37,7 +37,8 @@ async function refreshPartStates(manager: EntityManager, partIds: number[], now:
 }
 
 export function createCoatService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
-  async function write(manager: EntityManager, fields: CoatFields, version: Version, actor: Actor): Promise<CoatEntity> {
+  async function write(manager: EntityManager, fields: CoatFields, version: Version, actor: SessionRunner): Promise<CoatEntity> {
+    await assertRunsSession(manager, fields.spraySessionId, actor);
     const { timezone } = await settings.get();
     const { record, stepPosition, dryingTempC } = await prepareCoat(manager, fields, timezone);
     const iso = (d: Date) => d.toISOString();
@@ -85,7 +86,7 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
 
   return {
     /** A resent coat with a known idempotency key returns the first record instead of a second one. */
-    async create(input: CreateCoatInput, actor: Actor): Promise<{ coat: Coat; replayed: boolean }> {
+    async create(input: CreateCoatInput, actor: SessionRunner): Promise<{ coat: Coat; replayed: boolean }> {
       const { idempotencyKey, ...fields } = createCoatSchema.parse(input);
       if (idempotencyKey) {
         const existing = await dataSource.getRepository(CoatEntity).findOneBy({ idempotencyKey });
@@ -96,7 +97,7 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
       return { coat, replayed: false };
     },
 
-    async correct(id: number, input: CorrectCoatInput, actor: Actor): Promise<Coat> {
+    async correct(id: number, input: CorrectCoatInput, actor: SessionRunner): Promise<Coat> {
       const { reason, ...changes } = input;
       const coat = await inTransaction(dataSource, async (manager) => {
         const old = await manager.findOneBy(CoatEntity, { id });

@@ -9,7 +9,7 @@ import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
-import type { Actor } from './audit';
+import { assertRunsSession, type SessionRunner } from './session-runner';
 
 /** Pot life on a data sheet is quoted at its reference temperature: the row nearest 20 °C. */
 export function potLifeReferenceTempC(product: ProductEntity): number {
@@ -23,10 +23,11 @@ function toMixDto(mix: MixEntity, productName: string): Mix {
 
 export function createMixService(dataSource: DataSource, clock: Clock = systemClock) {
   return {
-    async create(spraySessionId: number, input: CreateMixInput, actor: Actor): Promise<Mix> {
+    async create(spraySessionId: number, input: CreateMixInput, actor: SessionRunner): Promise<Mix> {
       const fields = createMixSchema.parse(input);
       return inTransaction(dataSource, async (manager) => {
         if (!(await manager.existsBy(SpraySessionEntity, { id: spraySessionId }))) throw notFound('Spray session');
+        await assertRunsSession(manager, spraySessionId, actor);
         const product = await manager.findOneBy(ProductEntity, { id: fields.productId });
         if (!product) throw new AppError('validation_failed', 'That product does not exist', { productId: 'Choose a product' });
         const lots = fields.lotIds.length ? await manager.findBy(ProductLotEntity, { id: In(fields.lotIds) }) : [];

@@ -147,3 +147,20 @@ describe('a correction that names one field', () => {
     expect(fixed.body.coat).toMatchObject({ wetFilmUm: 140, thinningPct: 12, stepPosition: 2 });
   });
 });
+
+describe('a session not assigned to the sprayer', () => {
+  it('takes no coats, pots or corrections from them, and still takes them from a lead', async () => {
+    const booth = await lead.agent.post('/api/booths').set('x-csrf-token', lead.csrf).send({ name: 'Unassigned booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 }).expect(201);
+    const other = await lead.agent
+      .post('/api/spray-sessions')
+      .set('x-csrf-token', lead.csrf)
+      .send({ boothId: booth.body.booth.id, start: '2027-03-02T09:00:00Z', end: '2027-03-02T12:00:00Z', sprayerId: null })
+      .expect(201);
+    const otherId = other.body.spraySession.id;
+    const refused = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ spraySessionId: otherId, sprayedAt: '2027-03-02T09:30:00Z' })).expect(403);
+    expect(refused.body.error.fields.spraySessionId).toBe('Not your session');
+    await sprayer.agent.post(`/api/spray-sessions/${otherId}/mixes`).set('x-csrf-token', sprayer.csrf).send({ productId: primerId, wantedL: 1, tempC: 20 }).expect(403);
+    const byLead = await lead.agent.post('/api/coats').set('x-csrf-token', lead.csrf).send(coat({ spraySessionId: otherId, sprayedAt: '2027-03-02T09:30:00Z' })).expect(201);
+    await sprayer.agent.post(`/api/coats/${byLead.body.coat.id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Not mine to fix', notes: 'x' }).expect(403);
+  });
+});
