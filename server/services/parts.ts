@@ -4,6 +4,7 @@ import { In, type DataSource, type EntityManager } from 'typeorm';
 import { coatedAreaM2, pieceAreaM2 } from '../../shared/finishing/area';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import { createPartSchema, type CreatePartInput, type Part, type UpdatePartInput } from '../../shared/schemas/part';
+import { AuditEntryEntity } from '../db/entities/audit-entry.entity';
 import { JobEntity } from '../db/entities/job.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { RackEntity } from '../db/entities/rack.entity';
@@ -62,6 +63,16 @@ async function assertRackPlace(manager: EntityManager, rackId: number | null | u
 
 function newPartEntity(manager: EntityManager, jobId: number, fields: ReturnType<typeof createPartSchema.parse>, now: string): PartEntity {
   return manager.create(PartEntity, { ...fields, jobId, coatedAreaM2: coatedAreaM2(fields), tag: newTag(), state: 'waiting', createdAt: now, updatedAt: now });
+}
+
+/** Where the part stood before its last collection, from the trail; nowhere if it has a place again or the rack is gone. */
+async function placeBeforeCollection(manager: EntityManager, part: PartEntity): Promise<{ rackId: number | null; shelf: number | null }> {
+  if (part.rackId !== null || part.collectedAt === null) return { rackId: part.rackId, shelf: part.shelf };
+  const entry = await manager.findOne(AuditEntryEntity, { where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
+  const changes = (entry?.changes ?? {}) as { rackId?: { from?: number | null }; shelf?: { from?: number | null } };
+  const rackId = changes.rackId?.from ?? null;
+  if (rackId === null || !(await manager.existsBy(RackEntity, { id: rackId }))) return { rackId: null, shelf: null };
+  return { rackId, shelf: changes.shelf?.from ?? null };
 }
 
 export function createPartService(dataSource: DataSource, clock: Clock = systemClock, events?: EventBus) {
@@ -123,18 +134,24 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
       });
     },
 
-    /** Taken off the rack by an assembler: frees the shelf, and says so in the trail. */
+    /**
+     * Taken off the rack by an assembler: frees the shelf, and says so in the trail. Undoing it
+     * puts the part back on the rack and shelf the trail says it was taken from, if still empty of it.
+     */
     async setCollected(id: number, collected: boolean, actor: Actor): Promise<Part> {
       const now = clock.now();
       return inTransaction(dataSource, async (manager) => {
         const part = await manager.findOneBy(PartEntity, { id });
         if (!part) throw notFound('Part');
-        const rackName = part.rackId ? (await rackNamesFor(manager, [part])).get(part.rackId) : null;
-        Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null }, { updatedAt: now.toISOString() });
+        const place = collected ? { rackId: part.rackId, shelf: part.shelf } : await placeBeforeCollection(manager, part);
+        const rackName = place.rackId ? (await rackNamesFor(manager, [place as PartEntity])).get(place.rackId) : null;
+        Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null, ...place }, { updatedAt: now.toISOString() });
         part.state = (await readinessOf(manager, [part], now)).get(part.id)!.state;
         await manager.save(part);
-        const summary = collected ? `Collected part ${part.label}${rackName ? ` from ${rackName}` : ''}` : `Put part ${part.label} back as not collected`;
-        await recordAudit(manager, actor, { action: collected ? 'collect' : 'uncollect', entity: 'part', entityId: id, summary }, now);
+        const where = rackName ? `${collected ? ' from' : ' on'} ${rackName}${place.shelf ? ` shelf ${place.shelf}` : ''}` : '';
+        const summary = collected ? `Collected part ${part.label}${where}` : `Put part ${part.label} back as not collected${where}`;
+        const changes = collected ? { rackId: { from: place.rackId, to: null }, shelf: { from: place.shelf, to: null } } : undefined;
+        await recordAudit(manager, actor, { action: collected ? 'collect' : 'uncollect', entity: 'part', entityId: id, summary, changes }, now);
         return dto(manager, part);
       }).then(published);
     },
