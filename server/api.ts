@@ -34,6 +34,7 @@ import { auditRoutes, settingsRoutes } from './routes/settings';
 import { userRoutes } from './routes/users';
 import { createBoothService } from './services/booths';
 import { createEstimateService } from './services/estimates';
+import { createFileStorage } from './services/file-storage';
 import { createFileService } from './services/files';
 import { createFinishSystemService } from './services/finish-systems';
 import { createJobService } from './services/jobs';
@@ -52,7 +53,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use(sensorAuth(readings), requireCsrf);
   const users = createUserService(dataSource, clock);
   const settings = createSettingsService(dataSource, clock);
-  const files = createFileService(dataSource, config.uploadDir, clock);
+  const files = createFileService(dataSource, createFileStorage(config), clock);
   const parts = createPartService(dataSource, clock, events);
 
   api.use('/auth', authRoutes(auth, users, config.loginRateLimit));

@@ -2,6 +2,7 @@ import path from 'node:path';
 import pino from 'pino';
 import { createApp } from './app';
 import { startNotifications } from './mail/notifications-runtime';
+import { startEventBus } from './services/pg-event-bus';
 import { loadConfig } from './config/env';
 import { resolveSessionSecret } from './config/session-secret';
 import { openDataSource } from './db/data-source';
@@ -16,7 +17,8 @@ async function main(): Promise<void> {
   const dataDir = config.database.kind === 'sqlite' ? path.dirname(path.resolve(config.database.path)) : path.resolve('data');
   const sessionSecret = resolveSessionSecret(config.sessionSecret, dataDir);
   const notifications = await startNotifications(dataSource, config, logger, { schedule: true });
-  const app = createApp({ dataSource, config, sessionSecret, logger, notifications, clientDir: path.resolve(config.clientDir) });
+  const changeFeed = await startEventBus(dataSource, config, logger);
+  const app = createApp({ dataSource, config, sessionSecret, logger, events: changeFeed.events, notifications, clientDir: path.resolve(config.clientDir) });
   const server = app.listen(config.port, config.host, () => {
     void announce(config.port, dataSource);
   });
@@ -26,6 +28,7 @@ async function main(): Promise<void> {
     server.close(() => {
       void notifications
         .stop()
+        .then(() => changeFeed.stop())
         .then(() => dataSource.destroy())
         .finally(() => process.exit(0));
     });

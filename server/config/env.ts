@@ -1,5 +1,17 @@
 import path from 'node:path';
+import { Cron } from 'croner';
 import { z } from 'zod';
+
+const optionalText = z.preprocess((v) => (v === '' ? undefined : v), z.string().optional());
+
+function isCronPattern(pattern: string): boolean {
+  try {
+    new Cron(pattern, { paused: true }).stop();
+    return true;
+  } catch {
+    return false;
+  }
+}
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -24,9 +36,29 @@ const envSchema = z.object({
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   RECOAT_WARNING_HOURS: z.coerce.number().min(0.25).max(48).default(2),
   CLIENT_DIR: z.string().default(path.join('dist', 'client')),
-});
+  NOTIFICATION_SCHEDULE: z.string().default('0 * * * * *').refine(isCronPattern, 'NOTIFICATION_SCHEDULE must be a cron pattern, e.g. "0 * * * * *" (each minute)'),
+  S3_BUCKET: optionalText,
+  S3_ENDPOINT: optionalText.pipe(z.url('S3_ENDPOINT must be a URL such as http://127.0.0.1:4568').optional()),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_ACCESS_KEY_ID: optionalText,
+  S3_SECRET_ACCESS_KEY: optionalText,
+  S3_FORCE_PATH_STYLE: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
+}).refine((env) => !env.S3_ACCESS_KEY_ID === !env.S3_SECRET_ACCESS_KEY, { path: ['S3_SECRET_ACCESS_KEY'], message: 'Set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither (the AWS SDK then finds credentials itself)' });
 
 export type DatabaseConfig = { kind: 'sqlite'; path: string } | { kind: 'postgres'; url: string };
+
+/** An S3-compatible bucket for uploads, shared by every instance; unset means the local UPLOAD_DIR. */
+export interface S3Config {
+  bucket: string;
+  /** Unset: AWS itself. Set for any other S3-compatible store (or the local fake). */
+  endpoint: string | undefined;
+  region: string;
+  credentials: { accessKeyId: string; secretAccessKey: string } | undefined;
+  forcePathStyle: boolean;
+}
 
 export interface AppConfig {
   env: 'development' | 'production' | 'test';
@@ -47,6 +79,9 @@ export interface AppConfig {
   recoatWarningHours: number;
   /** The built client to serve. */
   clientDir: string;
+  /** When the notification scheduler ticks (croner pattern with seconds). */
+  notificationSchedule: string;
+  s3: S3Config | undefined;
 }
 
 export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
@@ -71,7 +106,15 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     fakeSmtpPort: env.FAKE_SMTP_PORT,
     recoatWarningHours: env.RECOAT_WARNING_HOURS,
     clientDir: env.CLIENT_DIR,
+    notificationSchedule: env.NOTIFICATION_SCHEDULE,
+    s3: s3Config(env),
   };
+}
+
+function s3Config(env: z.infer<typeof envSchema>): S3Config | undefined {
+  if (!env.S3_BUCKET) return undefined;
+  const credentials = env.S3_ACCESS_KEY_ID && env.S3_SECRET_ACCESS_KEY ? { accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY } : undefined;
+  return { bucket: env.S3_BUCKET, endpoint: env.S3_ENDPOINT, region: env.S3_REGION, credentials, forcePathStyle: env.S3_FORCE_PATH_STYLE };
 }
 
 let cached: AppConfig | undefined;

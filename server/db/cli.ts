@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { loadConfig } from '../config/env';
+import { createFileStorage } from '../services/file-storage';
 import { backupSqlite, restoreSqlite } from './backup';
 import { openDataSource } from './data-source';
 import { seedDemoHistory } from './demo-history';
@@ -49,7 +50,7 @@ async function run(command: string | undefined, arg: string | undefined): Promis
     if (command === 'migrate') {
       console.log('Migrations are up to date.');
     } else if (command === 'seed') {
-      const { seeded } = await seedDemoShop(dataSource, { uploadDir: config.uploadDir });
+      const { seeded } = await seedDemoShop(dataSource, { uploadDir: config.uploadDir, storage: createFileStorage(config) });
       if (seeded) await seedDemoHistory(dataSource);
       console.log(seeded ? `Seeded the demo shop. Sign-ins:\n${demoSignInLines().join('\n')}` : 'The database already has users; the demo shop was not seeded.');
     } else {

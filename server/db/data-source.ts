@@ -3,6 +3,7 @@ import path from 'node:path';
 import 'reflect-metadata';
 import { DataSource, type DataSourceOptions } from 'typeorm';
 import type { DatabaseConfig } from '../config/env';
+import { advisoryLocks, withAdvisoryLock } from './advisory-lock';
 import { entities } from './entities';
 import { migrations } from './migrations';
 import { SnakeNamingStrategy } from './naming-strategy';
@@ -30,6 +31,7 @@ export function dataSourceOptions(database: DatabaseConfig): DataSourceOptions {
 export async function openDataSource(database: DatabaseConfig, options: { migrate: boolean }): Promise<DataSource> {
   const dataSource = new DataSource(dataSourceOptions(database));
   await dataSource.initialize();
-  if (options.migrate) await dataSource.runMigrations({ transaction: 'each' });
+  // Several instances starting together on PostgreSQL migrate one after another, not at once.
+  if (options.migrate) await withAdvisoryLock(dataSource, advisoryLocks.migrations, { wait: true }, () => dataSource.runMigrations({ transaction: 'each' }));
   return dataSource;
 }

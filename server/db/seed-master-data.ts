@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { FinishStepInput } from '../../shared/schemas/finish-system';
 import { calendarDateIn } from '../../shared/time';
 import { systemActor } from '../services/audit';
+import type { FileStorage } from '../services/file-storage';
 import { createFileService } from '../services/files';
 import { createFinishSystemService } from '../services/finish-systems';
 import { createJobService } from '../services/jobs';
@@ -14,9 +15,9 @@ import { demoProducts } from './demo-products';
 
 const dayMs = 24 * 60 * 60 * 1000;
 
-async function seedProducts(dataSource: DataSource, uploadDir: string): Promise<Map<string, number>> {
+async function seedProducts(dataSource: DataSource, storage: FileStorage | string): Promise<Map<string, number>> {
   const settings = createSettingsService(dataSource);
-  const products = createProductService(dataSource, createFileService(dataSource, uploadDir), settings);
+  const products = createProductService(dataSource, createFileService(dataSource, storage), settings);
   const ids = new Map<string, number>();
   const today = Date.now();
   for (const [index, input] of demoProducts.entries()) {
@@ -60,8 +61,8 @@ async function seedJobs(dataSource: DataSource, systemIds: Map<string, number>, 
 }
 
 /** Data sheets, finish systems and a job book for the demo shop. */
-export async function seedMasterData(dataSource: DataSource, uploadDir: string, timezone: string): Promise<void> {
-  const productIds = await seedProducts(dataSource, uploadDir);
+export async function seedMasterData(dataSource: DataSource, storage: FileStorage | string, timezone: string): Promise<void> {
+  const productIds = await seedProducts(dataSource, storage);
   const systemIds = await seedFinishSystems(dataSource, productIds);
   await seedJobs(dataSource, systemIds, timezone);
 }

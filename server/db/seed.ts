@@ -4,6 +4,7 @@ import type { CreateRackInput } from '../../shared/schemas/rack';
 import type { CreateUserInput } from '../../shared/schemas/user';
 import { systemActor } from '../services/audit';
 import { createBoothService } from '../services/booths';
+import type { FileStorage } from '../services/file-storage';
 import { createRackService } from '../services/racks';
 import { createSettingsService } from '../services/settings';
 import { createUserService } from '../services/users';
@@ -34,7 +35,8 @@ const demoRacks: CreateRackInput[] = [
 ];
 
 /** Seeds the demo shop only into an empty database; existing data is never touched. */
-export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string }): Promise<{ seeded: boolean }> {
+/** `storage` (when S3 is configured) takes the demo data sheet instead of `uploadDir`. */
+export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string; storage?: FileStorage }): Promise<{ seeded: boolean }> {
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return { seeded: false };
   const users = createUserService(dataSource);
   for (const user of demoUsers) await users.create(user, systemActor);
@@ -43,7 +45,7 @@ export async function seedDemoShop(dataSource: DataSource, options: { uploadDir:
   for (const booth of demoBooths) await booths.create(booth, systemActor);
   const racks = createRackService(dataSource);
   for (const rack of demoRacks) await racks.create(rack, systemActor);
-  await seedMasterData(dataSource, options.uploadDir, 'Europe/London');
+  await seedMasterData(dataSource, options.storage ?? options.uploadDir, 'Europe/London');
   return { seeded: true };
 }
 

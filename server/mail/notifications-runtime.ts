@@ -2,6 +2,7 @@ import { Cron } from 'croner';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config/env';
+import { advisoryLocks, withAdvisoryLock } from '../db/advisory-lock';
 import { createNotificationService, type NotificationService } from '../services/notifications';
 import { createSettingsService } from '../services/settings';
 import { startFakeSmtp, type FakeSmtp } from './fake-smtp';
@@ -24,15 +25,7 @@ export async function startNotifications(dataSource: DataSource, config: AppConf
   const mailer = createMailer(config.smtpUrl ? { url: config.smtpUrl } : { port: mailbox!.port }, config.mailFrom);
   const service = createNotificationService(dataSource, createSettingsService(dataSource), mailer, { recoatWarningHours: config.recoatWarningHours });
   // protect: a slow tick is never overlapped by the next one, so nothing is sent twice by this process.
-  const job = options.schedule
-    ? new Cron('0 * * * * *', { protect: true }, async () => {
-        try {
-          await service.tick(new Date());
-        } catch (error) {
-          logger.error({ err: error }, 'notification tick failed');
-        }
-      })
-    : null;
+  const job = options.schedule ? new Cron(config.notificationSchedule, { protect: true }, () => scheduledTick(dataSource, service, logger)) : null;
   return {
     service,
     mailbox,
@@ -42,4 +35,18 @@ export async function startNotifications(dataSource: DataSource, config: AppConf
       await mailbox?.close();
     },
   };
+}
+
+/**
+ * One tick of the scheduler. With several instances on PostgreSQL only the one that gets the
+ * advisory lock sends; the others skip this tick. What the holder leaves unsent (it died, the
+ * mail server was down) is still owed in the notifications table and goes out on a later tick.
+ */
+async function scheduledTick(dataSource: DataSource, service: NotificationService, logger: Logger): Promise<void> {
+  try {
+    const outcome = await withAdvisoryLock(dataSource, advisoryLocks.notificationTick, { wait: false }, () => service.tick(new Date()));
+    logger.debug(outcome.held ? { sent: outcome.value.sent } : { skipped: 'another instance is sending' }, 'notification tick');
+  } catch (error) {
+    logger.error({ err: error }, 'notification tick failed');
+  }
 }

@@ -1,8 +1,8 @@
+import { pipeline } from 'node:stream/promises';
 import { Router } from 'express';
 import { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { createLotSchema, createProductSchema, documentKindSchema, productListQuerySchema, updateProductSchema } from '../../shared/schemas/product';
-import { AppError } from '../lib/app-error';
 import { actorOf } from '../lib/actor';
 import { requirePermission, requireSignIn } from '../middleware/permissions';
 import { singleUpload } from '../middleware/upload';
@@ -45,12 +45,12 @@ export function productRoutes(products: ProductService): Router {
 
 export function fileRoutes(files: FileService): Router {
   const router = Router();
-  router.get('/:id', requireSignIn, async (req, res, next) => {
-    const { absolutePath, file } = await files.locate(idParamsSchema.parse(req.params).id);
-    res.type(file.mimeType);
-    res.download(absolutePath, file.originalName, { headers: { 'Cache-Control': 'private, no-store' } }, (error) => {
-      if (error && !res.headersSent) next(new AppError('not_found', 'The file is recorded but missing from the upload folder'));
-    });
+  router.get('/:id', requireSignIn, async (req, res) => {
+    const { file, content } = await files.open(idParamsSchema.parse(req.params).id);
+    res.attachment(file.originalName).type(file.mimeType).set('Cache-Control', 'private, no-store');
+    if (content.sizeBytes !== undefined) res.set('Content-Length', String(content.sizeBytes));
+    // The headers are gone once bytes flow: a failure now can only cut the download short.
+    await pipeline(content.body, res).catch((error: Error) => req.log.warn({ err: error, fileId: file.id }, 'file download cut short'));
   });
   return router;
 }

@@ -1,11 +1,10 @@
 import { randomUUID } from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { FileRef } from '../../shared/schemas/product';
 import { StoredFileEntity } from '../db/entities/stored-file.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { LocalDiskStorage, type FileStorage, type StoredContent } from './file-storage';
 
 export const maxUploadBytes = 20 * 1024 * 1024;
 
@@ -35,8 +34,9 @@ export function toFileRef(file: StoredFileEntity): FileRef {
   return { id: file.id, originalName: file.originalName, sizeBytes: file.sizeBytes, uploadedAt: file.uploadedAt };
 }
 
-export function createFileService(dataSource: DataSource, uploadDir: string, clock: Clock = systemClock) {
-  const root = path.resolve(uploadDir);
+/** `storage` may be a folder name: the local disk storage there. */
+export function createFileService(dataSource: DataSource, storage: FileStorage | string, clock: Clock = systemClock) {
+  const store = typeof storage === 'string' ? new LocalDiskStorage(storage) : storage;
 
   return {
     /** Writes the bytes under a generated name and records them; call inside the caller's transaction. */
@@ -44,8 +44,7 @@ export function createFileService(dataSource: DataSource, uploadDir: string, clo
       if (!upload) throw new AppError('validation_failed', 'Choose a PDF file to upload', { file: 'Choose a PDF file' });
       if (!isPdf(upload.buffer)) throw new AppError('validation_failed', 'That file is not a PDF', { file: 'Only PDF files are accepted' });
       const storedName = `${randomUUID()}.pdf`;
-      await fs.mkdir(root, { recursive: true });
-      await fs.writeFile(path.join(root, storedName), upload.buffer, { flag: 'wx' });
+      await store.put(storedName, upload.buffer, 'application/pdf');
       const file = manager.create(StoredFileEntity, {
         originalName: cleanOriginalName(upload.originalname),
         storedName,
@@ -57,11 +56,13 @@ export function createFileService(dataSource: DataSource, uploadDir: string, clo
       return manager.save(file);
     },
 
-    async locate(id: number): Promise<{ absolutePath: string; file: StoredFileEntity }> {
+    /** The record and its bytes, wherever they are stored. */
+    async open(id: number): Promise<{ file: StoredFileEntity; content: StoredContent }> {
       const file = await dataSource.getRepository(StoredFileEntity).findOneBy({ id });
       if (!file) throw notFound('File');
-      const absolutePath = path.join(root, path.basename(file.storedName));
-      return { absolutePath, file };
+      const content = await store.open(file.storedName);
+      if (!content) throw new AppError('not_found', 'The file is recorded but missing from the file storage');
+      return { file, content };
     },
   };
 }

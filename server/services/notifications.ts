@@ -30,8 +30,9 @@ export function createNotificationService(dataSource: DataSource, settings: Sett
       const user = users.get(n.userId);
       try {
         if (user && !user.disabled) await mailer.send({ to: `${user.name} <${user.email}>`, subject: n.subject, text: n.body });
-        await dataSource.getRepository(NotificationEntity).update({ id: n.id }, { sentAt: new Date().toISOString(), lastError: null });
-        sent++;
+        // Only the first marking counts, so a sent time is never moved and each send is counted once.
+        const marked = await dataSource.getRepository(NotificationEntity).update({ id: n.id, sentAt: IsNull() }, { sentAt: new Date().toISOString(), lastError: null });
+        if (marked.affected !== 0) sent++;
       } catch (error) {
         await dataSource.getRepository(NotificationEntity).update({ id: n.id }, { lastError: (error as Error).message.slice(0, 500) });
       }

@@ -15,16 +15,21 @@ export function seedProcess(env: NodeJS.ProcessEnv): void {
   if (result.status !== 0) throw new Error(`seed failed: ${result.stderr}`);
 }
 
-/** Starts server/index.ts as its own process and waits until it answers health. */
-export async function startServerProcess(env: NodeJS.ProcessEnv): Promise<ChildProcess> {
+/** Starts server/index.ts as its own process and waits until it answers health; `onOutput` hears its stdout and stderr. */
+export async function startServerProcess(env: NodeJS.ProcessEnv, onOutput?: (text: string) => void): Promise<ChildProcess> {
   // Node itself with tsx loaded (not the tsx wrapper), so a SIGKILL reaches the server, not a parent.
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: 'ignore' });
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: onOutput ? ['ignore', 'pipe', 'pipe'] : 'ignore' });
+  child.stdout?.on('data', (chunk: Buffer) => onOutput?.(chunk.toString()));
+  child.stderr?.on('data', (chunk: Buffer) => onOutput?.(chunk.toString()));
   const deadline = Date.now() + 30_000;
   for (;;) {
     try {
       if ((await fetch(`http://127.0.0.1:${env.PORT}/api/health`)).ok) return child;
     } catch {
-      if (Date.now() > deadline) throw new Error('server did not start');
+      if (Date.now() > deadline) {
+        child.kill('SIGKILL');
+        throw new Error('server did not start');
+      }
       await new Promise((r) => setTimeout(r, 200));
     }
   }
