@@ -2,6 +2,8 @@ import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { useShopSettings } from '../../features/settings/api/get-settings';
 import { PlannerPage } from '../../features/planner/components/planner-page';
+import { SiteSwitcher } from '../../features/sites/components/site-switcher';
+import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
 import { useSessionUser } from '../session-user';
@@ -10,11 +12,20 @@ import { useSessionUser } from '../session-user';
 function PlannerWithSettings() {
   const user = useSessionUser();
   const settings = useShopSettings();
+  const scope = useSiteScope(user);
   if (settings.isPending) return <LoadingState what="the shop settings" />;
   if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;
   const { timezone, setupMin, cleanDownMin } = settings.data;
   const viewer = { id: user.id, name: user.name, canWrite: can(user.role, 'spray-sessions:write'), canReadProducts: can(user.role, 'products:read') };
-  return <PlannerPage settings={{ timezone, setupMin, cleanDownMin }} viewer={viewer} canListUsers={can(user.role, 'users:read')} />;
+  return (
+    <PlannerPage
+      settings={{ timezone, setupMin, cleanDownMin }}
+      viewer={viewer}
+      canListUsers={can(user.role, 'users:read')}
+      siteId={scope.siteId}
+      siteSwitcher={<SiteSwitcher scope={scope} />}
+    />
+  );
 }
 
 export function PlannerRoute() {

@@ -1,5 +1,6 @@
 import { can } from '../../../shared/permissions';
 import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { UsersPage } from '../../features/users/components/users-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
@@ -8,7 +9,17 @@ import { useSessionUser } from '../session-user';
 function UsersWithDefaults() {
   const user = useSessionUser();
   const settings = useShopSettings();
-  return <UsersPage currentUserId={user.id} canWrite={can(user.role, 'users:write')} defaultUnits={settings.data?.defaultUnits ?? 'metric'} />;
+  // Users are listed across every site, so the switcher has no place here; the names and the form's choice do.
+  const { view } = useSiteScope(user);
+  return (
+    <UsersPage
+      currentUserId={user.id}
+      canWrite={can(user.role, 'users:write')}
+      defaultUnits={settings.data?.defaultUnits ?? 'metric'}
+      siteNames={view?.names}
+      siteChoice={view?.choice}
+    />
+  );
 }
 
 export function UsersRoute() {

@@ -17,7 +17,18 @@ type BoothFormOutput = z.output<typeof createBoothSchema>;
 const fieldNames = Object.keys(createBoothSchema.shape);
 const kindOptions = boothKinds.map((kind) => ({ value: kind, label: boothKindLabels[kind] }));
 
-function startingValues(booth?: Booth): DefaultValues<BoothFormInput> {
+/** The sites an admin of several may put the booth on; left out, the server keeps it on the user's own. */
+export interface BoothSiteChoice {
+  options: ReadonlyArray<{ value: number; label: string }>;
+  defaultSiteId: number;
+}
+
+function startingValues(booth?: Booth, siteChoice?: BoothSiteChoice): DefaultValues<BoothFormInput> {
+  const site = siteChoice ? { siteId: booth?.siteId ?? siteChoice.defaultSiteId } : {};
+  return { ...fieldValues(booth), ...site };
+}
+
+function fieldValues(booth?: Booth): DefaultValues<BoothFormInput> {
   if (!booth) {
     return {
       name: '',
@@ -35,7 +46,7 @@ function startingValues(booth?: Booth): DefaultValues<BoothFormInput> {
 }
 
 /** All booth fields, entered in metric (they are stored that way). Creates, or edits the booth given. */
-export function BoothForm({ booth, onDone }: { booth?: Booth; onDone: () => void }) {
+export function BoothForm({ booth, siteChoice, onDone }: { booth?: Booth; siteChoice?: BoothSiteChoice; onDone: () => void }) {
   const createBooth = useCreateBooth();
   const updateBooth = useUpdateBooth();
   const [formError, setFormError] = useState<string | null>(null);
@@ -45,7 +56,7 @@ export function BoothForm({ booth, onDone }: { booth?: Booth; onDone: () => void
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm<BoothFormInput, unknown, BoothFormOutput>({ resolver: zodResolver(createBoothSchema), defaultValues: startingValues(booth) });
+  } = useForm<BoothFormInput, unknown, BoothFormOutput>({ resolver: zodResolver(createBoothSchema), defaultValues: startingValues(booth, siteChoice) });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -67,6 +78,9 @@ export function BoothForm({ booth, onDone }: { booth?: Booth; onDone: () => void
       <div className="grid gap-4 sm:grid-cols-2">
         <InputField label="Name" error={errors.name?.message} registration={register('name')} />
         <SelectField label="Kind" options={kindOptions} error={errors.kind?.message} registration={register('kind')} />
+        {siteChoice && (
+          <SelectField label="Site" options={siteChoice.options} error={errors.siteId?.message} registration={register('siteId', { setValueAs: asNumber })} />
+        )}
         <InputField {...number} label="Internal volume" unit="m³" error={errors.volumeM3?.message} registration={register('volumeM3', { setValueAs: asNumber })} />
         <InputField
           {...number}

@@ -13,6 +13,8 @@ const column = createColumnHelper<Booth>();
 interface BoothsTableProps {
   booths: Booth[];
   units: UnitSystem;
+  /** Site names by id when the booths shown may be on several sites; left out, no Site column. */
+  siteNames?: ReadonlyMap<number, string>;
   onEdit?: (booth: Booth) => void;
 }
 
@@ -28,11 +30,12 @@ function FaceVelocity({ booth, units }: { booth: Booth; units: UnitSystem }) {
   );
 }
 
-export function BoothsTable({ booths, units, onEdit }: BoothsTableProps) {
+export function BoothsTable({ booths, units, siteNames, onEdit }: BoothsTableProps) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo(
     () => [
       column.accessor('name', { header: 'Name' }),
+      ...(siteNames ? [column.accessor((booth) => siteNames.get(booth.siteId) ?? `Site ${booth.siteId}`, { id: 'site', header: 'Site' })] : []),
       column.accessor((booth) => boothKindLabels[booth.kind], { id: 'kind', header: 'Kind' }),
       column.accessor('volumeM3', { header: 'Volume', cell: (info) => <Nowrap>{formatQuantity('roomVolume', info.getValue(), units)}</Nowrap> }),
       column.accessor('extractionM3PerH', { header: 'Extraction', cell: (info) => <Nowrap>{formatQuantity('airflow', info.getValue(), units)}</Nowrap> }),
@@ -63,7 +66,7 @@ export function BoothsTable({ booths, units, onEdit }: BoothsTableProps) {
           ]
         : []),
     ],
-    [units, onEdit],
+    [units, siteNames, onEdit],
   );
 
   const table = useReactTable({

@@ -2,6 +2,8 @@ export interface SessionRange {
   from: string;
   to: string;
   boothId?: number;
+  /** An admin looking at one site; left out, every site they see. */
+  siteId?: number;
 }
 
 /** Keys for what the planner reads, broad to narrow; its own so it never reads another feature's cache shape. */
@@ -10,7 +12,7 @@ export const plannerKeys = {
   sessions: () => [...plannerKeys.all, 'spray-sessions'] as const,
   sessionList: (range: SessionRange) => [...plannerKeys.sessions(), 'list', range] as const,
   session: (id: number) => [...plannerKeys.sessions(), 'detail', id] as const,
-  booths: () => [...plannerKeys.all, 'booths'] as const,
+  booths: (siteId?: number) => [...plannerKeys.all, 'booths', siteId ?? 'every-site'] as const,
   jobs: () => [...plannerKeys.all, 'jobs'] as const,
   job: (id: number) => [...plannerKeys.jobs(), id] as const,
   jobParts: (jobId: number) => [...plannerKeys.job(jobId), 'parts'] as const,

@@ -15,14 +15,16 @@ interface AutoPlanDialogProps {
   onClose: () => void;
   timeZone: string;
   boothNames: Map<number, string>;
+  /** An admin looking at one site plans onto its booths only. */
+  siteId?: number;
 }
 
 /** Choose jobs, see where their remaining coats would go, and book them all at once. */
-export function AutoPlanDialog({ open, onClose, timeZone, boothNames }: AutoPlanDialogProps) {
+export function AutoPlanDialog({ open, onClose, timeZone, boothNames, siteId }: AutoPlanDialogProps) {
   const jobs = usePlannableJobs(open);
   const [chosen, setChosen] = useState<number[]>([]);
   const [plan, setPlan] = useState<Plan | null>(null);
-  const propose = useProposePlan();
+  const propose = useProposePlan(siteId);
   const accept = useAcceptPlan();
   const toggle = (id: number) => setChosen((ids) => (ids.includes(id) ? ids.filter((x) => x !== id) : [...ids, id]));
   const close = () => {

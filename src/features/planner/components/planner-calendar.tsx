@@ -17,6 +17,8 @@ import { SessionList } from './session-list';
 interface PlannerCalendarProps {
   settings: PlanningSettings;
   booths: Booth[];
+  /** An admin looking at one site; the sessions are that site's. */
+  siteId?: number;
   canWrite: boolean;
   day: string;
   onDay: (day: string) => void;
@@ -39,16 +41,18 @@ function Problem({ message, onDismiss }: { message: string; onDismiss: () => voi
 }
 
 /** What is on screen (week or day, which booths) and the calendar of it, with a list of the same sessions. */
-export function PlannerCalendar({ settings, booths, canWrite, day, onDay, onBook, onOpen }: PlannerCalendarProps) {
+export function PlannerCalendar({ settings, booths, siteId, canWrite, day, onDay, onBook, onOpen }: PlannerCalendarProps) {
   const timeZone = settings.timezone;
   const [chosenView, setView] = useState<PlannerView>('week');
-  const [boothFilter, setBoothFilter] = useState<BoothFilter>('all');
+  const [chosenBooth, setBoothFilter] = useState<BoothFilter>('all');
+  // A booth chosen before the site changed is not among this site's booths: show them all.
+  const boothFilter = booths.some((booth) => booth.id === chosenBooth) ? chosenBooth : 'all';
   const [showCancelled, setShowCancelled] = useState(false);
   const [interacting, setInteracting] = useState(false);
   const narrow = useNarrowScreen();
   const view = narrow ? 'day' : chosenView;
   const boothId = boothFilter === 'all' ? undefined : boothFilter;
-  const sessions = useSpraySessions({ ...visibleRange(view, day, timeZone), boothId }, !interacting);
+  const sessions = useSpraySessions({ ...visibleRange(view, day, timeZone), boothId, siteId }, !interacting);
   const moves = useCalendarMoves(timeZone);
   const title = rangeTitle(view, day);
   const shownBooths = boothId ? booths.filter((booth) => booth.id === boothId) : booths;

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { calendarDateIn } from '../../../../shared/time';
 import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -17,16 +17,19 @@ interface PlannerPageProps {
   settings: PlanningSettings;
   viewer: Viewer;
   canListUsers: boolean;
+  /** An admin looking at one site (left out: every site), and the switcher that chooses it. */
+  siteId?: number;
+  siteSwitcher?: ReactNode;
 }
 
 /** The booth planner: a week or day of spray sessions per booth, booked and moved by the lead. */
-export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps) {
+export function PlannerPage({ settings, viewer, canListUsers, siteId, siteSwitcher }: PlannerPageProps) {
   const timeZone = settings.timezone;
   const [day, setDay] = useState(() => calendarDateIn(new Date(), timeZone));
   const [booking, setBooking] = useState<BookingTarget | null>(null);
   const [opened, setOpened] = useState<PlannerSession | undefined>(undefined);
   const [autoPlanning, setAutoPlanning] = useState(false);
-  const booths = usePlannerBooths();
+  const booths = usePlannerBooths(siteId);
   const sprayers = useSprayers(viewer.canWrite && canListUsers);
   const cancelSession = useCancelSession(timeZone);
 
@@ -50,16 +53,17 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
           : 'Who is in which booth, and when. The finishing lead books and moves sessions.'
       }
       actions={
-        viewer.canWrite &&
-        booths.data &&
-        booths.data.items.length > 0 && (
-          <div className="flex flex-wrap gap-2">
-            <Button variant="secondary" onClick={() => setAutoPlanning(true)}>
-              Auto-plan jobs
-            </Button>
-            <Button onClick={bookBlank}>Book a session</Button>
-          </div>
-        )
+        <>
+          {siteSwitcher}
+          {viewer.canWrite && booths.data && booths.data.items.length > 0 && (
+            <div className="flex flex-wrap gap-2">
+              <Button variant="secondary" onClick={() => setAutoPlanning(true)}>
+                Auto-plan jobs
+              </Button>
+              <Button onClick={bookBlank}>Book a session</Button>
+            </div>
+          )}
+        </>
       }
     />
   );
@@ -72,7 +76,7 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
         ) : booths.isError ? (
           <ErrorState error={booths.error} what="the booths" onRetry={() => booths.refetch()} />
         ) : (
-          <EmptyState title="No booths yet">Booths are added under Booths; then sessions can be booked here.</EmptyState>
+          <EmptyState title={siteId === undefined ? 'No booths yet' : 'No booths at this site yet'}>Booths are added under Booths; then sessions can be booked here.</EmptyState>
         )}
       </>
     );
@@ -83,6 +87,7 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
       <PlannerCalendar
         settings={settings}
         booths={booths.data.items}
+        siteId={siteId}
         canWrite={viewer.canWrite}
         day={day}
         onDay={setDay}
@@ -94,6 +99,7 @@ export function PlannerPage({ settings, viewer, canListUsers }: PlannerPageProps
         onClose={() => setAutoPlanning(false)}
         timeZone={timeZone}
         boothNames={new Map(booths.data.items.map((b) => [b.id, b.name]))}
+        siteId={siteId}
       />
       <PlannerDialogs
         viewer={viewer}

@@ -1,9 +1,12 @@
 import type { PageQuery } from '../../../../shared/schemas/common';
 
+/** A page of racks; an admin may name one site (left out: every site they see). */
+export type RackListFilters = PageQuery & { siteId?: number };
+
 export const rackKeys = {
   all: ['racks'] as const,
   lists: () => [...rackKeys.all, 'list'] as const,
-  list: (filters: PageQuery) => [...rackKeys.lists(), filters] as const,
+  list: (filters: RackListFilters) => [...rackKeys.lists(), filters] as const,
   details: () => [...rackKeys.all, 'detail'] as const,
   detail: (id: number) => [...rackKeys.details(), id] as const,
 };

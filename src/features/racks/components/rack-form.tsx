@@ -16,13 +16,20 @@ type RackFormOutput = z.output<typeof createRackSchema>;
 const fieldNames = Object.keys(createRackSchema.shape);
 const locationOptions = rackLocations.map((location) => ({ value: location, label: rackLocationLabels[location] }));
 
-function startingValues(rack?: Rack): DefaultValues<RackFormInput> {
-  if (!rack) return { name: '', location: 'drying-room', shelves: 10, shelfAreaM2: 1, dryingTempC: null };
-  const { name, location, shelves, shelfAreaM2, dryingTempC } = rack;
-  return { name, location, shelves, shelfAreaM2, dryingTempC };
+/** The sites an admin of several may put the rack on; left out, the server keeps it on the user's own. */
+export interface RackSiteChoice {
+  options: ReadonlyArray<{ value: number; label: string }>;
+  defaultSiteId: number;
 }
 
-export function RackForm({ rack, onDone }: { rack?: Rack; onDone: () => void }) {
+function startingValues(rack?: Rack, siteChoice?: RackSiteChoice): DefaultValues<RackFormInput> {
+  const site = siteChoice ? { siteId: rack?.siteId ?? siteChoice.defaultSiteId } : {};
+  if (!rack) return { name: '', location: 'drying-room', shelves: 10, shelfAreaM2: 1, dryingTempC: null, ...site };
+  const { name, location, shelves, shelfAreaM2, dryingTempC } = rack;
+  return { name, location, shelves, shelfAreaM2, dryingTempC, ...site };
+}
+
+export function RackForm({ rack, siteChoice, onDone }: { rack?: Rack; siteChoice?: RackSiteChoice; onDone: () => void }) {
   const createRack = useCreateRack();
   const updateRack = useUpdateRack();
   const [formError, setFormError] = useState<string | null>(null);
@@ -31,7 +38,7 @@ export function RackForm({ rack, onDone }: { rack?: Rack; onDone: () => void }) 
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm<RackFormInput, unknown, RackFormOutput>({ resolver: zodResolver(createRackSchema), defaultValues: startingValues(rack) });
+  } = useForm<RackFormInput, unknown, RackFormOutput>({ resolver: zodResolver(createRackSchema), defaultValues: startingValues(rack, siteChoice) });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -52,6 +59,9 @@ export function RackForm({ rack, onDone }: { rack?: Rack; onDone: () => void }) 
       <div className="grid gap-4 sm:grid-cols-2">
         <InputField label="Name" error={errors.name?.message} registration={register('name')} />
         <SelectField label="Where it stands" options={locationOptions} error={errors.location?.message} registration={register('location')} />
+        {siteChoice && (
+          <SelectField label="Site" options={siteChoice.options} error={errors.siteId?.message} registration={register('siteId', { setValueAs: asNumber })} />
+        )}
         <InputField
           type="number"
           inputMode="numeric"

@@ -9,11 +9,20 @@ import { formatQuantity } from '../../../lib/units-display';
 
 const column = createColumnHelper<Rack>();
 
-export function RacksTable({ racks, units, onEdit }: { racks: Rack[]; units: UnitSystem; onEdit?: (rack: Rack) => void }) {
+interface RacksTableProps {
+  racks: Rack[];
+  units: UnitSystem;
+  /** Site names by id when the racks shown may be on several sites; left out, no Site column. */
+  siteNames?: ReadonlyMap<number, string>;
+  onEdit?: (rack: Rack) => void;
+}
+
+export function RacksTable({ racks, units, siteNames, onEdit }: RacksTableProps) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo(
     () => [
       column.accessor('name', { header: 'Name' }),
+      ...(siteNames ? [column.accessor((rack) => siteNames.get(rack.siteId) ?? `Site ${rack.siteId}`, { id: 'site', header: 'Site' })] : []),
       column.accessor((rack) => rackLocationLabels[rack.location], { id: 'location', header: 'Where' }),
       column.accessor('shelves', { header: 'Shelves' }),
       column.accessor('shelfAreaM2', { header: 'Shelf area', cell: (info) => <Nowrap>{formatQuantity('area', info.getValue(), units)}</Nowrap> }),
@@ -40,7 +49,7 @@ export function RacksTable({ racks, units, onEdit }: { racks: Rack[]; units: Uni
           ]
         : []),
     ],
-    [units, onEdit],
+    [units, siteNames, onEdit],
   );
 
   const table = useReactTable({

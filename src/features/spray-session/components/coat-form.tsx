@@ -16,9 +16,11 @@ import { useStopReasons } from '../hooks/use-stop-reasons';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import type { PickedPart } from '../utils/picked-part';
 import { newIdempotencyKey } from '../utils/idempotency';
+import { repeatsStep } from '../utils/respray';
 import { CoatConditionFields, CoatMaterialFields } from './coat-material-fields';
 import { CoatPreviewPanel } from './coat-preview-panel';
 import { PartPicker } from './part-picker';
+import { ReworkReasonField } from './rework-reason-field';
 
 interface CoatFormProps {
   session: SpraySession;
@@ -37,7 +39,7 @@ function keepEnterFromSubmitting(event: React.KeyboardEvent<HTMLFormElement>) {
   if (event.key === 'Enter' && event.target instanceof HTMLInputElement) event.preventDefault();
 }
 
-const fieldNames = ['partIds', 'airTempC', 'relativeHumidityPct', 'surfaceTempC', 'thinningPct', 'wetFilmUm', 'stepPosition', 'lotId', 'mixId', 'notes'];
+const fieldNames = ['partIds', 'airTempC', 'relativeHumidityPct', 'surfaceTempC', 'thinningPct', 'wetFilmUm', 'stepPosition', 'lotId', 'mixId', 'notes', 'reworkReason'];
 
 export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading, queue, units, timeZone }: CoatFormProps) {
   const coat = useCoatForm(session, plan, planned, mixes, reading);
@@ -60,6 +62,7 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
     else toast.warning('No connection: the coat is kept on this tablet and will be sent when the connection is back.');
     setValue('wetFilmUm', null);
     setValue('notes', '');
+    setValue('reworkReason', null);
     stops.clear();
   });
 
@@ -74,6 +77,13 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
         <CoatConditionFields control={control} errors={formState.errors} units={units} />
       </div>
       <CoatPreviewPanel preview={preview} product={product} step={step} thinningPct={values.thinningPct ?? 0} units={units} timeZone={timeZone} reasons={stops.reasons} reasonErrors={stops.errors} onReason={stops.setReason} />
+      <ReworkReasonField
+        register={register}
+        hasReason={Boolean(values.reworkReason)}
+        likely={repeatsStep(values.partIds?.flatMap((id) => (id === undefined ? [] : [id])) ?? [], step, coat.steps, coat.work.ready, sessionCoats)}
+        onClear={() => setValue('reworkReason', null)}
+        error={formState.errors.reworkReason?.message}
+      />
       <FieldShell label="Notes">{(c) => <textarea {...c} rows={2} className={inputClasses} {...register('notes')} />}</FieldShell>
       <Button type="submit" className="min-h-16 w-full text-xl" pending={pending} pendingText="Recording…">
         Record coat

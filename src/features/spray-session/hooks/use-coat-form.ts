@@ -12,7 +12,7 @@ import { useFinishWork } from './use-finish-work';
 import type { SessionPlan } from './use-session-plan';
 
 export const coatEntrySchema = createCoatSchema
-  .pick({ partIds: true, airTempC: true, relativeHumidityPct: true, surfaceTempC: true, thinningPct: true, wetFilmUm: true, stepPosition: true, lotId: true, mixId: true, notes: true })
+  .pick({ partIds: true, airTempC: true, relativeHumidityPct: true, surfaceTempC: true, thinningPct: true, wetFilmUm: true, stepPosition: true, lotId: true, mixId: true, notes: true, reworkReason: true })
   .refine((coat) => coat.stepPosition !== null, { path: ['stepPosition'], message: 'Choose the step this coat is' });
 export type CoatEntryInput = z.input<typeof coatEntrySchema>;
 export type CoatEntry = z.output<typeof coatEntrySchema>;
@@ -31,7 +31,7 @@ export function useCoatForm(session: SpraySession, plan: SessionPlan, planned: P
   const [known, setKnown] = useState(() => new Map(planned.map((part) => [part.id, part])));
   const form = useForm<CoatEntryInput, unknown, CoatEntry>({
     resolver: zodResolver(coatEntrySchema),
-    defaultValues: { partIds: planned.map((p) => p.id), stepPosition: null, wetFilmUm: null, thinningPct: 0, lotId: null, mixId: null, notes: '', ...startingConditions(session, reading) },
+    defaultValues: { partIds: planned.map((p) => p.id), stepPosition: null, wetFilmUm: null, thinningPct: 0, lotId: null, mixId: null, notes: '', reworkReason: null, ...startingConditions(session, reading) },
   });
   const values = useWatch({ control: form.control });
   const chosen = (values.partIds ?? []).flatMap((id) => (id === undefined ? [] : (known.get(id) ?? [])));

@@ -19,6 +19,7 @@ export const readyCards: ReadyCard[] = [
   { to: '/planner', title: 'Booth planner', text: 'A week and day calendar of spray sessions per booth: book, move and check the safety cautions.', permission: 'spray-sessions:read' },
   { to: '/spray-sessions', title: 'Spray sessions', text: 'Your sessions today and this week: pre-spray checks, cautions, mixes with pot-life countdowns, coat entry and the clearance countdown.', permission: 'spray-sessions:read' },
   { to: '/coat-log', title: 'Coat log', text: 'Every coat with its film, conditions, warnings and who sprayed it; corrections and CSV export.', permission: 'coats:read' },
+  { to: '/reports', title: 'Reports', text: 'Booth use, area sprayed, conditions against limits, solvent and VOC, material against estimate and rework, with CSV and print.', permission: 'reports:read' },
   { to: '/ready', title: 'Ready board', text: 'Parts by job or rack, with live countdowns to handle, pack and full cure; mark parts collected.', permission: 'ready:read' },
   { to: '/jobs', title: 'Jobs and parts', text: 'Jobs and their parts, cut-list import, printable rack tags and material estimates.', permission: 'jobs:read' },
   { to: '/booths', title: 'Booths', text: 'Clearance times, face velocity, spray rate and opening hours.', permission: 'booths:read', count: 'booths' },
@@ -30,14 +31,4 @@ export const readyCards: ReadyCard[] = [
   { to: '/activity', title: 'Activity log', text: 'Who changed what, and when.', permission: 'audit:read' },
   { to: '/settings/shop', title: 'Shop settings', text: 'Shop name, timezone and planning defaults.', permission: 'settings:write' },
   { to: '/settings/preferences', title: 'My preferences', text: 'Your name and whether you see metric or US units.' },
-];
-
-interface NotYet {
-  title: string;
-  text: string;
-  roles: readonly Role[];
-}
-
-export const notBuiltYet: NotYet[] = [
-  { title: 'Reports', text: 'Booth use, area sprayed, conditions and solvent used.', roles: ['admin', 'lead'] },
 ];

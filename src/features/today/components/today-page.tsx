@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { can, roleLabels } from '../../../../shared/permissions';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { ShopSettings } from '../../../../shared/schemas/settings';
-import { notBuiltYet, readyCards, roleIntro, type ReadyCard } from './today-content';
+import { readyCards, roleIntro, type ReadyCard } from './today-content';
 import { ShopClock } from './shop-clock';
 
 interface TodayPageProps {
@@ -20,7 +20,6 @@ function countWords(card: ReadyCard, counts: TodayPageProps['counts']): string |
 
 export function TodayPage({ user, settings, counts }: TodayPageProps) {
   const cards = readyCards.filter((card) => !card.permission || can(user.role, card.permission));
-  const comingLater = notBuiltYet.filter((item) => item.roles.includes(user.role));
 
   return (
     <div className="space-y-8">
@@ -54,26 +53,6 @@ export function TodayPage({ user, settings, counts }: TodayPageProps) {
           ))}
         </ul>
       </section>
-
-      {comingLater.length > 0 && (
-        <section aria-labelledby="later-heading" className="rounded-panel border border-dashed border-maple-400 bg-maple-100 p-4">
-          <h2 id="later-heading" className="text-xl font-semibold">
-            Not built yet
-          </h2>
-          <p className="mt-1 max-w-2xl text-maple-800">
-            These parts of Boothwright are not built yet, so there is nothing from them to show here. Keep using your board and paper log for
-            them until they arrive.
-          </p>
-          <ul className="mt-3 grid gap-3 sm:grid-cols-2">
-            {comingLater.map((item) => (
-              <li key={item.title}>
-                <span className="font-semibold">{item.title}</span> <span className="text-sm text-maple-700">(not built yet)</span>
-                <span className="block text-maple-800">{item.text}</span>
-              </li>
-            ))}
-          </ul>
-        </section>
-      )}
     </div>
   );
 }

@@ -6,15 +6,21 @@ import type { z } from 'zod';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { createUserSchema } from '../../../../shared/schemas/user';
 import { Button } from '../../../components/ui/button';
-import { FormAlert, InputField, SelectField } from '../../../components/ui/field';
+import { asNumber, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateUser } from '../api/create-user';
-import { roleOptions, unitOptions } from './user-options';
+import { roleOptions, unitOptions, type UserSiteChoice } from './user-options';
 
 type CreateUserFormInput = z.input<typeof createUserSchema>;
 const fieldNames = Object.keys(createUserSchema.shape);
 
-export function CreateUserForm({ defaultUnits, onDone }: { defaultUnits: UnitSystem; onDone: () => void }) {
+interface CreateUserFormProps {
+  defaultUnits: UnitSystem;
+  siteChoice?: UserSiteChoice;
+  onDone: () => void;
+}
+
+export function CreateUserForm({ defaultUnits, siteChoice, onDone }: CreateUserFormProps) {
   const createUser = useCreateUser();
   const [formError, setFormError] = useState<string | null>(null);
   const {
@@ -24,7 +30,7 @@ export function CreateUserForm({ defaultUnits, onDone }: { defaultUnits: UnitSys
     formState: { errors },
   } = useForm<CreateUserFormInput, unknown, z.output<typeof createUserSchema>>({
     resolver: zodResolver(createUserSchema),
-    defaultValues: { email: '', name: '', role: 'sprayer', units: defaultUnits, password: '' },
+    defaultValues: { email: '', name: '', role: 'sprayer', units: defaultUnits, password: '', ...(siteChoice && { siteId: siteChoice.defaultSiteId }) },
   });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -44,6 +50,9 @@ export function CreateUserForm({ defaultUnits, onDone }: { defaultUnits: UnitSys
       <InputField label="Name" autoComplete="off" error={errors.name?.message} registration={register('name')} />
       <InputField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} registration={register('email')} />
       <SelectField label="Role" options={roleOptions} error={errors.role?.message} registration={register('role')} />
+      {siteChoice && (
+        <SelectField label="Site" options={siteChoice.options} error={errors.siteId?.message} registration={register('siteId', { setValueAs: asNumber })} />
+      )}
       <SelectField label="Units" options={unitOptions} error={errors.units?.message} registration={register('units')} />
       <InputField
         label="First password"

@@ -14,12 +14,22 @@ import { useUpdateUser } from '../api/update-user';
 import { CreateUserForm } from './create-user-form';
 import { EditUserForm } from './edit-user-form';
 import { ResetPasswordForm } from './reset-password-form';
+import type { UserSiteChoice } from './user-options';
 import { UsersTable, type UserAction } from './users-table';
 
 const pageSize = 50;
 type Open = { action: UserAction | 'create'; user?: User } | null;
 
-export function UsersPage({ currentUserId, defaultUnits, canWrite }: { currentUserId: number; defaultUnits: UnitSystem; canWrite: boolean }) {
+interface UsersPageProps {
+  currentUserId: number;
+  defaultUnits: UnitSystem;
+  canWrite: boolean;
+  /** For a group of several sites: names for the Site column and the choice on the forms. */
+  siteNames?: ReadonlyMap<number, string>;
+  siteChoice?: UserSiteChoice;
+}
+
+export function UsersPage({ currentUserId, defaultUnits, canWrite, siteNames, siteChoice }: UsersPageProps) {
   const [page, setPage] = useState(1);
   const [open, setOpen] = useState<Open>(null);
   const users = useUsers({ page, pageSize });
@@ -54,15 +64,15 @@ export function UsersPage({ currentUserId, defaultUnits, canWrite }: { currentUs
         <EmptyState title="No users found" />
       ) : (
         <>
-          <UsersTable users={users.data.items} currentUserId={currentUserId} onAction={canWrite ? onAction : undefined} />
+          <UsersTable users={users.data.items} currentUserId={currentUserId} siteNames={siteNames} onAction={canWrite ? onAction : undefined} />
           <Pagination page={page} pageSize={pageSize} total={users.data.total} noun="users" onPage={setPage} />
         </>
       )}
       <Dialog open={open?.action === 'create'} onClose={close} title="Add a user">
-        <CreateUserForm defaultUnits={defaultUnits} onDone={close} />
+        <CreateUserForm defaultUnits={defaultUnits} siteChoice={siteChoice} onDone={close} />
       </Dialog>
       <Dialog open={open?.action === 'edit'} onClose={close} title={`Edit ${target?.name ?? 'user'}`}>
-        {target && <EditUserForm user={target} isSelf={target.id === currentUserId} onDone={close} />}
+        {target && <EditUserForm user={target} isSelf={target.id === currentUserId} siteChoice={siteChoice} onDone={close} />}
       </Dialog>
       <Dialog open={open?.action === 'password'} onClose={close} title={`Reset password for ${target?.name ?? 'user'}`}>
         {target && <ResetPasswordForm user={target} onDone={close} />}

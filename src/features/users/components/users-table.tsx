@@ -21,17 +21,26 @@ function Status({ user }: { user: User }) {
   );
 }
 
-export function UsersTable({ users, currentUserId, onAction }: { users: User[]; currentUserId: number; onAction?: (action: UserAction, user: User) => void }) {
+interface UsersTableProps {
+  users: User[];
+  currentUserId: number;
+  /** Site names by id when there are several sites; left out, no Site column. */
+  siteNames?: ReadonlyMap<number, string>;
+  onAction?: (action: UserAction, user: User) => void;
+}
+
+export function UsersTable({ users, currentUserId, siteNames, onAction }: UsersTableProps) {
   const columns = useMemo(
     () => [
       column.accessor('name', { header: 'Name', cell: (info) => (info.row.original.id === currentUserId ? `${info.getValue()} (you)` : info.getValue()) }),
       column.accessor('email', { header: 'E-mail' }),
       column.accessor((user) => roleLabels[user.role], { id: 'role', header: 'Role' }),
+      ...(siteNames ? [column.accessor((user) => siteNames.get(user.siteId) ?? `Site ${user.siteId}`, { id: 'site', header: 'Site' })] : []),
       column.accessor('units', { header: 'Units', cell: (info) => (info.getValue() === 'us' ? 'US customary' : 'Metric') }),
       column.accessor('disabled', { header: 'Status', cell: ({ row }) => <Status user={row.original} /> }),
       ...(onAction ? [actionsColumn(currentUserId, onAction)] : []),
     ],
-    [currentUserId, onAction],
+    [currentUserId, siteNames, onAction],
   );
 
   const table = useReactTable({ data: users, columns, getCoreRowModel: getCoreRowModel(), enableSorting: false });

@@ -54,7 +54,7 @@ describe('SignInForm', () => {
   });
 
   it('signs in, keeps the user, fetches a fresh CSRF token and moves on', async () => {
-    const user = { id: 2, email: 'lead@larchmere.test', name: 'Dev Okafor', role: 'lead', units: 'metric' };
+    const user = { id: 2, email: 'lead@larchmere.test', name: 'Dev Okafor', role: 'lead', units: 'metric', siteId: 1 };
     fetchMock.mockImplementation((url: string) =>
       Promise.resolve(url === '/api/auth/csrf' ? json(200, { token: 't' }) : json(200, { user })),
     );

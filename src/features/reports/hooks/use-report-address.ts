@@ -1,0 +1,46 @@
+import { useSearchParams } from 'react-router-dom';
+import { areaGroupings } from '../../../../shared/schemas/report';
+import { reportKinds, type ReportKind } from '../api/report-keys';
+import { quickRange, type DateRange } from '../utils/report-range';
+
+export type AreaGrouping = (typeof areaGroupings)[number];
+
+export interface ReportAddress {
+  kind: ReportKind;
+  range: DateRange;
+  boothId?: number;
+  groupBy: AreaGrouping;
+  jobId?: number;
+}
+
+const positiveId = (value: string | null) => {
+  const id = Number(value);
+  return Number.isInteger(id) && id > 0 ? id : undefined;
+};
+const oneOf = <T extends string>(values: readonly T[], value: string | null, fallback: T): T => values.find((v) => v === value) ?? fallback;
+
+/**
+ * The report, range and options live in the address (?report=solvent&from=…&to=…&booth=2), so a
+ * link or bookmark opens the same report. Without a range it is this month: a lead opening
+ * Reports mostly wants to see how the month is going, and last month is one tap away.
+ */
+export function useReportAddress(today: string): [ReportAddress, (patch: Partial<ReportAddress>) => void] {
+  const [params, setParams] = useSearchParams();
+  const fallback = quickRange('this-month', today);
+  const address: ReportAddress = {
+    kind: oneOf(reportKinds, params.get('report'), 'booth-use'),
+    range: { from: params.get('from') || fallback.from, to: params.get('to') || fallback.to },
+    boothId: positiveId(params.get('booth')),
+    groupBy: oneOf(areaGroupings, params.get('group'), 'product-kind'),
+    jobId: positiveId(params.get('job')),
+  };
+  const change = (patch: Partial<ReportAddress>) => {
+    const next = { ...address, ...patch };
+    const search = new URLSearchParams({ report: next.kind, from: next.range.from, to: next.range.to });
+    if (next.boothId) search.set('booth', String(next.boothId));
+    if (next.groupBy !== 'product-kind') search.set('group', next.groupBy);
+    if (next.jobId) search.set('job', String(next.jobId));
+    setParams(search, { replace: true });
+  };
+  return [address, change];
+}

@@ -1,0 +1,31 @@
+import { reportRangeQuerySchema } from '../../../../shared/schemas/report';
+import type { ReportKind, ReportParams } from '../api/report-keys';
+import type { ReportAddress } from '../hooks/use-report-address';
+
+export type ReportRequest = { [K in ReportKind]: { kind: K; params: ReportParams[K] } }[ReportKind];
+
+/** The range checked with the server's own rules, so a bad range is explained before anything is asked. */
+export function rangeErrors(address: ReportAddress): { from?: string; to?: string } {
+  const checked = reportRangeQuerySchema.safeParse(address.range);
+  if (checked.success) return {};
+  return Object.fromEntries(checked.error.issues.map((issue) => [String(issue.path[0]), issue.message]));
+}
+
+/** What to ask the server for; null while something it needs is missing (a valid range, a booth for conditions). */
+export function reportRequest(address: ReportAddress, conditionsBoothId: number | undefined): ReportRequest | null {
+  if (Object.keys(rangeErrors(address)).length > 0) return null;
+  const { from, to } = address.range;
+  switch (address.kind) {
+    case 'booth-use':
+      return { kind: 'booth-use', params: { from, to, boothId: address.boothId } };
+    case 'area-sprayed':
+      return { kind: 'area-sprayed', params: { from, to, groupBy: address.groupBy } };
+    case 'conditions':
+      return conditionsBoothId ? { kind: 'conditions', params: { from, to, boothId: conditionsBoothId } } : null;
+    case 'material':
+      return { kind: 'material', params: { from, to, jobId: address.jobId } };
+    case 'solvent':
+    case 'rework':
+      return { kind: address.kind, params: { from, to } };
+  }
+}
