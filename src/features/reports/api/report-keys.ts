@@ -17,6 +17,6 @@ export const reportKeys = {
   all: ['reports'] as const,
   reports: () => [...reportKeys.all, 'report'] as const,
   report: <K extends ReportKind>(kind: K, params: ReportParams[K]) => [...reportKeys.reports(), kind, params] as const,
-  booths: () => [...reportKeys.all, 'booths'] as const,
+  booths: (siteId?: number) => [...reportKeys.all, 'booths', siteId ?? 'all'] as const,
   jobs: () => [...reportKeys.all, 'jobs'] as const,
 };

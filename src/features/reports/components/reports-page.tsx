@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -21,6 +22,10 @@ interface ReportsPageProps {
   /** Today in the shop's calendar, for the quick ranges. */
   today: string;
   units: UnitSystem;
+  /** An admin's choice of one site (undefined: every site, or the user's own). */
+  siteId?: number;
+  /** The admin's site choice, drawn with the other options; nothing for a one-site shop. */
+  siteSwitcher?: ReactNode;
 }
 
 // Portrait on whatever paper the printer has (A4 or Letter), with room for the printer's own margin.
@@ -45,14 +50,14 @@ function WhyNoReport({ address, booths }: { address: ReportAddress; booths: Retu
   return <EmptyState title="No booths set up">Conditions are reported per booth. Add a booth under Booths first.</EmptyState>;
 }
 
-export function ReportsPage({ shopName, timeZone, today, units }: ReportsPageProps) {
+export function ReportsPage({ shopName, timeZone, today, units, siteId, siteSwitcher }: ReportsPageProps) {
   const [address, change] = useReportAddress(today);
-  const boothQuery = useBoothChoices();
+  const boothQuery = useBoothChoices(siteId);
   const jobQuery = useJobChoices();
   const booths = (boothQuery.data?.items ?? []).map((b) => ({ id: b.id, label: b.name }));
   const jobs = (jobQuery.data?.items ?? []).map((j) => ({ id: j.id, label: `${j.reference} · ${j.customer}` }));
   const conditionsBoothId = address.boothId ?? booths[0]?.id;
-  const request = reportRequest(address, conditionsBoothId);
+  const request = reportRequest(address, conditionsBoothId, siteId);
   const entry = reportCatalogue[address.kind];
   const options = optionWords(address, booths, jobs, conditionsBoothId);
   const thisMonth = quickRange('this-month', today);
@@ -89,6 +94,7 @@ export function ReportsPage({ shopName, timeZone, today, units }: ReportsPagePro
           }
         />
         <div className="mb-6 space-y-4 rounded-panel border border-maple-300 bg-white p-4">
+          {siteSwitcher}
           <ReportPicker value={address.kind} onChange={(kind) => change({ kind })} />
           <RangeControls range={address.range} today={today} errors={rangeErrors(address)} onChange={(range) => change({ range })} />
           <ReportOptions kind={address.kind} address={address} conditionsBoothId={conditionsBoothId} booths={booths} jobs={jobs} onChange={change} />

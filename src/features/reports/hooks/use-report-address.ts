@@ -40,6 +40,9 @@ export function useReportAddress(today: string): [ReportAddress, (patch: Partial
     if (next.boothId) search.set('booth', String(next.boothId));
     if (next.groupBy !== 'product-kind') search.set('group', next.groupBy);
     if (next.jobId) search.set('job', String(next.jobId));
+    // The admin's site choice (`site`) belongs to the page, not to one report: keep it.
+    const site = params.get('site');
+    if (site) search.set('site', site);
     setParams(search, { replace: true });
   };
   return [address, change];

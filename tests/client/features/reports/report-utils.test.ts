@@ -5,6 +5,7 @@ import { reworkReasonWords, vocWords } from '../../../../src/features/reports/ut
 import { monthRange, quickRange, rangeWords, shiftMonth, wholeMonthOf } from '../../../../src/features/reports/utils/report-range';
 import { monthsIn, stackRows, weeksIn } from '../../../../src/features/reports/utils/report-series';
 import { everyMonth } from '../../../../src/features/reports/utils/solvent-months';
+import { reportRequest } from '../../../../src/features/reports/utils/report-request';
 
 describe('report ranges', () => {
   it('gives whole calendar periods for the quick picks, across a year end', () => {
@@ -111,5 +112,20 @@ describe('words for the reports', () => {
     ]);
     // A margin is a temperature difference: 3 °C is 5.4 °F, with no 32° offset.
     expect(outsideReasonWords({ ...coat, reasons: ['dew-point-margin'] }, undefined, 3, 'us')[0]).toBe('Too close to the dew point: 4.0 °F above it (at least 5.4 °F)');
+  });
+});
+
+describe('report requests', () => {
+  const address = { kind: 'solvent' as const, range: { from: '2026-10-01', to: '2026-10-31' }, boothId: undefined, groupBy: 'product-kind' as const, jobId: undefined };
+
+  it('asks for one site only when an admin picked one', () => {
+    expect(reportRequest(address, undefined)).toEqual({ kind: 'solvent', params: { from: '2026-10-01', to: '2026-10-31' } });
+    expect(reportRequest(address, undefined, 4)).toEqual({ kind: 'solvent', params: { from: '2026-10-01', to: '2026-10-31', siteId: 4 } });
+  });
+
+  it('asks nothing for a backwards range, and conditions only with a booth', () => {
+    expect(reportRequest({ ...address, range: { from: '2026-10-31', to: '2026-10-01' } }, undefined)).toBeNull();
+    expect(reportRequest({ ...address, kind: 'conditions' }, undefined)).toBeNull();
+    expect(reportRequest({ ...address, kind: 'conditions' }, 2, 4)).toEqual({ kind: 'conditions', params: { from: '2026-10-01', to: '2026-10-31', siteId: 4, boothId: 2 } });
   });
 });
