@@ -46,7 +46,9 @@ export class PgEventBus extends EventBus {
   override publish(event: ChangeEvent): void {
     // Straight to this instance's own boards, so they hear it even while the listener reconnects.
     this.deliver(event);
-    const payload = JSON.stringify({ from: this.instanceId, event } satisfies SharedChange);
+    let payload = JSON.stringify({ from: this.instanceId, event } satisfies SharedChange);
+    // A coat over a whole job's parts can outgrow NOTIFY; boards refresh by event type, so the ids can go.
+    if (Buffer.byteLength(payload) > maxPayloadBytes && 'partIds' in event) payload = JSON.stringify({ from: this.instanceId, event: { ...event, partIds: [] } } satisfies SharedChange);
     if (Buffer.byteLength(payload) > maxPayloadBytes) {
       this.logger.error({ event: event.type, bytes: Buffer.byteLength(payload) }, 'change event too large to share with other instances');
       return;
