@@ -1,4 +1,4 @@
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In, IsNull, MoreThan, type DataSource, type EntityManager } from 'typeorm';
 import { partReadiness, type FinishStep, type PartReadiness } from '../../shared/finishing/readiness';
 import type { ReadyPart } from '../../shared/schemas/ready';
 import { JobEntity } from '../db/entities/job.entity';
@@ -26,14 +26,28 @@ export async function readinessOf(manager: EntityManager, parts: PartEntity[], n
   );
 }
 
+// Collected parts stay on the board for a week (to show them, and to undo a wrong "collected");
+// older ones are history, seen on their job. A shop's whole past must not load on every refresh.
+const collectedStaysOnBoardMs = 7 * 86_400_000;
+const boardLimit = 5000;
+
+async function boardParts(dataSource: DataSource, query: { jobId?: number; rackId?: number }, now: Date): Promise<PartEntity[]> {
+  const scope = { ...(query.jobId ? { jobId: query.jobId } : {}), ...(query.rackId ? { rackId: query.rackId } : {}) };
+  const since = new Date(now.getTime() - collectedStaysOnBoardMs).toISOString();
+  const where = query.jobId ? scope : [{ ...scope, collectedAt: IsNull() }, { ...scope, collectedAt: MoreThan(since) }];
+  // Sorted here rather than in SQL: an ORDER BY job makes SQLite walk every part by job instead of using the collected-at index.
+  const parts = await dataSource.getRepository(PartEntity).find({ where });
+  return parts.sort((a, b) => a.jobId - b.jobId || a.id - b.id).slice(0, boardLimit);
+}
+
 export function createReadyService(dataSource: DataSource, clock: Clock = systemClock) {
   return {
     async list(query: { jobId?: number; rackId?: number; state?: string }): Promise<ReadyPart[]> {
-      const where = { ...(query.jobId ? { jobId: query.jobId } : {}), ...(query.rackId ? { rackId: query.rackId } : {}) };
-      const parts = await dataSource.getRepository(PartEntity).find({ where, order: { jobId: 'ASC', id: 'ASC' }, take: 5000 });
+      const now = clock.now();
+      const parts = await boardParts(dataSource, query, now);
       const manager = dataSource.manager;
       const [readiness, jobs, racks] = await Promise.all([
-        readinessOf(manager, parts, clock.now()),
+        readinessOf(manager, parts, now),
         manager.findBy(JobEntity, { id: In([...new Set(parts.map((p) => p.jobId))]) }),
         manager.findBy(RackEntity, { id: In([...new Set(parts.map((p) => p.rackId).filter((id): id is number => id !== null))]) }),
       ]);

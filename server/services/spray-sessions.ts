@@ -103,8 +103,13 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
     async list(query: SpraySessionQuery, scope: SiteScope = everySite): Promise<List<SpraySession>> {
       const qb = dataSource.getRepository(SpraySessionEntity).createQueryBuilder('s');
       if (scope.siteId !== null) qb.andWhere('s.booth_id IN (SELECT b.id FROM booths b WHERE b.site_id = :siteId)', { siteId: scope.siteId });
-      if (query.from) qb.andWhere('s.end_at > :from', { from: new Date(query.from).toISOString() });
-      if (query.to) qb.andWhere('s.start_at < :to', { to: new Date(query.to).toISOString() });
+      // The time window as a subquery, so SQLite finds this week's sessions through the end_at index;
+      // next to the ORDER BY it would walk the start_at index through every earlier session instead.
+      const window = [...(query.from ? ['w.end_at > :from'] : []), ...(query.to ? ['w.start_at < :to'] : [])];
+      if (window.length) {
+        const bounds = { ...(query.from ? { from: new Date(query.from).toISOString() } : {}), ...(query.to ? { to: new Date(query.to).toISOString() } : {}) };
+        qb.andWhere(`s.id IN (SELECT w.id FROM spray_sessions w WHERE ${window.join(' AND ')})`, bounds);
+      }
       if (query.boothId) qb.andWhere('s.booth_id = :boothId', { boothId: query.boothId });
       qb.orderBy('s.start_at', 'ASC').addOrderBy('s.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
