@@ -27,8 +27,24 @@ function wallClockFormat(timeZone: string): Intl.DateTimeFormat {
   return format;
 }
 
-export function wallClockIn(instant: Date, timeZone: string): WallClock {
+function readWallClock(instant: Date, timeZone: string): WallClock {
   const parts = wallClockFormat(timeZone).formatToParts(instant);
   const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? '';
-  return { date: `${part('year')}-${part('month')}-${part('day')}`, isoWeekday: weekdayNumbers[part('weekday')], time: `${part('hour')}:${part('minute')}` };
+  return Object.freeze({ date: `${part('year')}-${part('month')}-${part('day')}`, isoWeekday: weekdayNumbers[part('weekday')], time: `${part('hour')}:${part('minute')}` });
+}
+
+// The planner asks about the same quarter-hours again and again while it tries slots; the answer
+// for a whole UTC minute never changes (zones' offsets are whole minutes), so keep it.
+const wallClockCache = new Map<string, WallClock>();
+const wallClockCacheLimit = 50_000;
+
+export function wallClockIn(instant: Date, timeZone: string): WallClock {
+  const key = `${timeZone}|${Math.floor(instant.getTime() / 60_000)}`;
+  let clock = wallClockCache.get(key);
+  if (!clock) {
+    if (wallClockCache.size >= wallClockCacheLimit) wallClockCache.clear();
+    clock = readWallClock(instant, timeZone);
+    wallClockCache.set(key, clock);
+  }
+  return clock;
 }

@@ -8,15 +8,17 @@ const expected: Record<string, string[]> = {
     ...['booths:read', 'booths:write', 'racks:read', 'racks:write', 'settings:read', 'calculator:use', 'audit:read'],
     ...['products:read', 'products:write', 'finish-systems:read', 'finish-systems:write', 'jobs:read', 'jobs:write'],
     ...['spray-sessions:read', 'spray-sessions:write', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'parts:collect', 'readings:write'],
+    // All reports; their own site's sites list, but adding or renaming sites is the admin's.
+    ...['reports:read', 'sites:read'],
   ],
   // Sprayers read data sheets, finish systems and jobs but edit none of them.
   sprayer: [
     ...['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
     // Sprayers run the sessions they are given and log coats, but do not book the booth.
-    ...['spray-sessions:read', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'readings:write'],
+    ...['spray-sessions:read', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'readings:write', 'sites:read'],
   ],
   // Assemblers read jobs (and the systems they name) to know what is coming.
-  assembler: ['booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
+  assembler: ['sites:read', 'booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
 };
 
 describe('the permission matrix', () => {
@@ -35,5 +37,10 @@ describe('the permission matrix', () => {
   it('keeps users and shop settings to the admin', () => {
     expect(roles.filter((role) => can(role, 'users:write'))).toEqual(['admin']);
     expect(roles.filter((role) => can(role, 'settings:write'))).toEqual(['admin']);
+    expect(roles.filter((role) => can(role, 'sites:write'))).toEqual(['admin']);
+  });
+
+  it('shows reports to the owner and the finishing lead only', () => {
+    expect(roles.filter((role) => can(role, 'reports:read'))).toEqual(['admin', 'lead']);
   });
 });
