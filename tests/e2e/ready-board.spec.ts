@@ -162,9 +162,11 @@ test.describe('ready board', () => {
     await page.getByRole('button', { name: 'Undo' }).click();
     await expect(page.getByText(`${part.label} is back on the board as not collected.`)).toBeVisible();
     await expect(door).toContainText(`Ready to handle since ${shopClock(coat.handleAt)}`);
-    await expect(door).toContainText('Not on a rack');
+    // Undo puts the door back where it was taken from.
+    await expect(door).toContainText('Rack A (drying room), shelf 4');
     const back = (await lead.get<{ items: ReadyItem[] }>(`/api/ready?jobId=${job.id}`)).items.find((p) => p.id === part.id)!;
     expect(back.state).not.toBe('collected');
+    expect(back.rack).not.toBeNull();
   });
 
   test('a sprayer reads the board without collect buttons, and an empty filter says so and can be cleared', async ({ page }) => {
