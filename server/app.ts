@@ -13,6 +13,7 @@ import { errorHandler } from './middleware/error-handler';
 import { securityHeaders } from './middleware/security';
 import { sessionMiddleware } from './middleware/session';
 import { buildOpenApiDocument } from './openapi';
+import { runAsOwnWork } from './db/sqlite-gate';
 import { EventBus } from './services/events';
 import type { NotificationRuntime } from './mail/notifications-runtime';
 
@@ -37,6 +38,8 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   if (config.trustProxy) app.set('trust proxy', 1);
   app.disable('x-powered-by');
+  // Each request is its own piece of work: on SQLite none of its queries may run inside another request's transaction.
+  app.use((_req, _res, next) => runAsOwnWork(next));
   app.use(securityHeaders(config.trustProxy));
   app.use(pinoHttp({ logger, genReqId: (req) => (req.headers['x-request-id'] as string) || randomUUID(), autoLogging: config.env !== 'test' }));
 
