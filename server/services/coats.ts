@@ -88,11 +88,21 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
     /** A resent coat with a known idempotency key returns the first record instead of a second one. */
     async create(input: CreateCoatInput, actor: SessionRunner): Promise<{ coat: Coat; replayed: boolean }> {
       const { idempotencyKey, ...fields } = createCoatSchema.parse(input);
-      if (idempotencyKey) {
-        const existing = await dataSource.getRepository(CoatEntity).findOneBy({ idempotencyKey });
-        if (existing) return { coat: await dto(dataSource.manager, existing), replayed: true };
+      const replay = async () => {
+        const existing = idempotencyKey ? await dataSource.getRepository(CoatEntity).findOneBy({ idempotencyKey }) : null;
+        return existing ? { coat: await dto(dataSource.manager, existing), replayed: true } : null;
+      };
+      const earlier = await replay();
+      if (earlier) return earlier;
+      let coat: Coat;
+      try {
+        coat = await inTransaction(dataSource, async (manager) => dto(manager, await write(manager, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor)));
+      } catch (error) {
+        // The same coat resent twice at once: the database let one in and refused the other.
+        const raced = await replay();
+        if (raced) return raced;
+        throw error;
       }
-      const coat = await inTransaction(dataSource, async (manager) => dto(manager, await write(manager, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor)));
       events.publish({ type: 'coat.created', id: coat.id, partIds: coat.partIds });
       return { coat, replayed: false };
     },

@@ -148,6 +148,16 @@ describe('a correction that names one field', () => {
   });
 });
 
+describe('a coat resent while the first send is still being written', () => {
+  it('keeps one record when a device resends the same coat twice at once', async () => {
+    const body = coat({ partIds: [partIds[0]], sprayedAt: '2027-03-01T11:58:00Z', stepPosition: 2, idempotencyKey: 'tablet-1-coat-0002' });
+    const send = () => sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(body);
+    const [a, b] = await Promise.all([send(), send()]);
+    expect([a.status, b.status].sort()).toEqual([200, 201]);
+    expect(a.body.coat.id).toBe(b.body.coat.id);
+  });
+});
+
 describe('a session not assigned to the sprayer', () => {
   it('takes no coats, pots or corrections from them, and still takes them from a lead', async () => {
     const booth = await lead.agent.post('/api/booths').set('x-csrf-token', lead.csrf).send({ name: 'Unassigned booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 }).expect(201);
