@@ -1,4 +1,4 @@
-import { spawn, type ChildProcess } from 'node:child_process';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -39,9 +39,20 @@ describe('the server process', () => {
       throw new Error(`${String(error)}\nserver output:\n${output}`);
     });
     expect(await res.json()).toEqual({ ok: true });
+
+    // A backup may be taken while the server runs; a restore onto its database is refused.
+    const cli = (...args: string[]) => spawnSync('node_modules/.bin/tsx', ['--tsconfig', 'tsconfig.server.json', 'server/db/cli.ts', ...args], { env: { ...process.env, DATABASE_PATH: path.join(dir, 'db.sqlite'), DATABASE_URL: '', UPLOAD_DIR: path.join(dir, 'uploads') }, encoding: 'utf8' });
+    const backup = cli('backup');
+    expect(backup.status, backup.stderr).toBe(0);
+    const folder = /to (\S+) \(readable/.exec(backup.stdout)?.[1] ?? '';
+    const restore = cli('restore', folder);
+    expect(restore.status).toBe(1);
+    expect(restore.stderr).toMatch(/A Boothwright server \(process \d+.*Stop the server first.*Nothing was changed/);
+
     const exited = new Promise<number | null>((resolve) => child!.on('exit', resolve));
     child.kill('SIGTERM');
     expect(await exited).toBe(0);
+    expect(fs.existsSync(path.join(dir, 'db.sqlite.lock'))).toBe(false);
     expect(output).toContain(`http://localhost:${port}`);
-  }, 40000);
+  }, 60000);
 });
