@@ -10,6 +10,8 @@ import type { Clock } from './lib/clock';
 import { requireCsrf } from './middleware/csrf';
 import { apiNotFound } from './middleware/error-handler';
 import { sensorAuth } from './middleware/sensor-auth';
+import { signInLimits } from './middleware/sign-in-limits';
+import { limitLiveStreams } from './middleware/live-stream-limits';
 import { coatRoutes } from './routes/coats';
 import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './routes/live';
 import type { NotificationRuntime } from './mail/notifications-runtime';
@@ -56,7 +58,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   const files = createFileService(dataSource, createFileStorage(config), clock);
   const parts = createPartService(dataSource, clock, events);
 
-  api.use('/auth', authRoutes(auth, users, config.loginRateLimit));
+  api.use('/auth', authRoutes(auth, users, signInLimits(config.loginRateLimit, config.loginAccountRateLimit)));
   api.use('/users', userRoutes(users));
   api.use('/sites', masterDataRoutes({ resource: 'site', read: 'sites:read', write: 'sites:write', createSchema: createSiteSchema, updateSchema: updateSiteSchema, service: createSiteService(dataSource, clock) }));
   api.use('/booths', masterDataRoutes({ resource: 'booth', read: 'booths:read', write: 'booths:write', createSchema: createBoothSchema, updateSchema: updateBoothSchema, service: createBoothService(dataSource, clock) }));
@@ -77,7 +79,7 @@ export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock:
   api.use('/ready', readyRoutes(createReadyService(dataSource, clock)));
   api.use('/readings', readingRoutes(readings));
   api.use('/booths', sensorTokenRoutes(readings));
-  api.use('/events', eventRoutes(events));
+  api.use('/events', limitLiveStreams(config.liveStreams), eventRoutes(events));
   api.use('/reports', reportRoutes(createReportService(dataSource, settings, estimates)));
   api.use(notificationRoutes(notifications));
   api.use(apiNotFound);

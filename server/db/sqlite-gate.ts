@@ -42,16 +42,14 @@ class Gate {
 
 const gates = new WeakMap<DataSource, Gate>();
 
-type Method<K extends keyof QueryRunner> = QueryRunner[K] & ((...args: never[]) => Promise<unknown>);
-
 function guard(runner: QueryRunner, gate: Gate): void {
-  const query = runner.query.bind(runner) as Method<'query'>;
-  runner.query = (async (...args: Parameters<QueryRunner['query']>) => {
+  const query = runner.query.bind(runner) as (...args: unknown[]) => Promise<unknown>;
+  runner.query = (async (...args: unknown[]) => {
     const me = currentWork();
-    if (gate.holder === me) return query(...(args as never[]));
+    if (gate.holder === me) return query(...args);
     const release = await gate.acquire(me);
     try {
-      return await query(...(args as never[]));
+      return await query(...args);
     } finally {
       release();
     }

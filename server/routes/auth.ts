@@ -1,5 +1,4 @@
-import { Router, type NextFunction, type Request, type Response } from 'express';
-import rateLimit from 'express-rate-limit';
+import { Router, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
 import type passport from 'passport';
 import { loginSchema, type SessionUser } from '../../shared/schemas/auth';
 import { updateMeSchema } from '../../shared/schemas/user';
@@ -20,22 +19,13 @@ function logIn(req: Request, user: SessionUser): Promise<void> {
   return new Promise((resolve, reject) => req.logIn(user, { session: true, keepSessionInfo: true }, (error) => (error ? reject(error) : resolve())));
 }
 
-export function authRoutes(auth: passport.PassportStatic, users: UserService, loginLimit: number): Router {
+export function authRoutes(auth: passport.PassportStatic, users: UserService, loginLimits: RequestHandler[]): Router {
   const router = Router();
-  const loginLimiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: loginLimit,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError('too_many_requests', 'Too many failed sign-ins; wait 15 minutes and try again')),
-  });
-
   router.get('/csrf', (req, res) => {
     res.json({ token: csrfToken(req) });
   });
 
-  router.post('/login', loginLimiter, async (req, res, next) => {
+  router.post('/login', ...loginLimits, async (req, res, next) => {
     req.body = loginSchema.parse(req.body);
     const user = await authenticate(auth, req, res, next);
     if (!user) throw new AppError('unauthenticated', 'E-mail or password is wrong, or the account is disabled');

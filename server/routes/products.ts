@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { createLotSchema, createProductSchema, documentKindSchema, productListQuerySchema, updateProductSchema } from '../../shared/schemas/product';
 import { actorOf } from '../lib/actor';
-import { requirePermission, requireSignIn } from '../middleware/permissions';
+import { requirePermission } from '../middleware/permissions';
 import { singleUpload } from '../middleware/upload';
 import { maxUploadBytes, type FileService } from '../services/files';
 import type { ProductService } from '../services/products';
@@ -45,7 +45,7 @@ export function productRoutes(products: ProductService): Router {
 
 export function fileRoutes(files: FileService): Router {
   const router = Router();
-  router.get('/:id', requireSignIn, async (req, res) => {
+  router.get('/:id', requirePermission('products:read'), async (req, res) => {
     const { file, content } = await files.open(idParamsSchema.parse(req.params).id);
     res.attachment(file.originalName).type(file.mimeType).set('Cache-Control', 'private, no-store');
     if (content.sizeBytes !== undefined) res.set('Content-Length', String(content.sizeBytes));

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { idParamsSchema, pageQuerySchema } from '../../shared/schemas/common';
 import { createUserSchema, updateUserSchema } from '../../shared/schemas/user';
+import { renewSignIn } from '../auth/passport';
 import { actorOf } from '../lib/actor';
 import { siteScopeOf } from '../lib/site-scope';
 import { requirePermission } from '../middleware/permissions';
@@ -19,7 +20,10 @@ export function userRoutes(users: UserService): Router {
 
   router.patch('/:id', requirePermission('users:write'), async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
-    res.json({ user: await users.update(id, updateUserSchema.parse(req.body), actorOf(req)) });
+    const patch = updateUserSchema.parse(req.body);
+    const user = await users.update(id, patch, actorOf(req));
+    if (patch.password && id === req.user!.id) await renewSignIn(req);
+    res.json({ user });
   });
 
   return router;

@@ -5,6 +5,7 @@ import { defaultNotifyPrefs } from '../../shared/schemas/notification';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
 import { createUserSchema } from '../../shared/schemas/user';
+import { assertStrongPassword } from '../auth/password-strength';
 import { hashPassword } from '../auth/passwords';
 import { SiteEntity } from '../db/entities/site.entity';
 import { UserEntity } from '../db/entities/user.entity';
@@ -31,6 +32,11 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
   async function applyUpdate(id: number, patch: UpdateUserInput, actor: Actor, summary: string): Promise<UserEntity> {
     const now = clock.now();
     const { password, ...fields } = patch;
+    if (password) {
+      const user = await repo().findOneBy({ id });
+      if (!user) throw notFound('User');
+      assertStrongPassword(password, [user.email, fields.name ?? user.name]);
+    }
     const passwordHash = password ? await hashPassword(password) : undefined;
     return inTransaction(dataSource, async (manager) => {
       const user = await manager.findOneBy(UserEntity, { id });
@@ -38,7 +44,8 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
       if (fields.siteId !== undefined) await requireSite(manager, fields.siteId);
       const changes = changedFields(user, fields);
       if (passwordHash) changes.password = { from: '…', to: 'changed' };
-      Object.assign(user, fields, passwordHash ? { passwordHash } : {}, { updatedAt: now.toISOString() });
+      // A new password ends every sign-in made with the old one (see passport.ts).
+      Object.assign(user, fields, passwordHash ? { passwordHash, sessionEpoch: user.sessionEpoch + 1 } : {}, { updatedAt: now.toISOString() });
       await manager.save(user);
       await recordAudit(manager, actor, { action: 'update', entity: 'user', entityId: id, summary: `${summary} ${user.email}`, changes }, now);
       return user;
@@ -53,6 +60,7 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
     /** `homeSiteId` is where the user goes when the input names no site: the creating admin's. */
     async create(input: CreateUserInput, actor: Actor, homeSiteId = 1): Promise<User> {
       const { password, siteId = homeSiteId, ...fields } = createUserSchema.parse(input);
+      assertStrongPassword(password, [fields.email, fields.name]);
       const passwordHash = await hashPassword(password);
       const now = clock.now();
       return inTransaction(dataSource, async (manager) => {

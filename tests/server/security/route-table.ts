@@ -95,7 +95,7 @@ export const routeTable: RouteRow[] = [
     url: `/api/products/${fx.productId}/documents`,
     form: { fields: { kind: 'sds' }, file: { name: 'sheet.pdf', content: pdfBytes } },
   })),
-  row('GET', '/api/files/:id', 'signed-in', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/files/${fx.fileId}` })),
+  row('GET', '/api/files/:id', 'products:read', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/files/${fx.fileId}` })),
   row('GET', '/api/finish-systems', 'finish-systems:read', s(401, 200, 200, 200, 200), get('/api/finish-systems')),
   row('POST', '/api/finish-systems', 'finish-systems:write', s(401, 201, 201, 403, 403), (fx) => ({
     url: '/api/finish-systems',
