@@ -7,6 +7,7 @@ import { PartEntity } from '../db/entities/part.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { assertHappenedNearNow } from '../lib/instant-window';
 import { assertRunsSession, type SessionRunner } from './session-runner';
 import { toCoatDtos } from './coat-dto';
 import { prepareCoat, type CoatFields } from './coat-inputs';
@@ -94,6 +95,8 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
       };
       const earlier = await replay();
       if (earlier) return earlier;
+      // A resend of a coat already recorded is answered above, however long the tablet was offline.
+      assertHappenedNearNow(fields.sprayedAt, 'sprayedAt', clock.now());
       let coat: Coat;
       try {
         coat = await inTransaction(dataSource, async (manager) => dto(manager, await write(manager, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor)));
@@ -109,6 +112,8 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
 
     async correct(id: number, input: CorrectCoatInput, actor: SessionRunner): Promise<Coat> {
       const { reason, ...changes } = input;
+      // A correction that leaves the time alone may correct a coat of any age.
+      assertHappenedNearNow(changes.sprayedAt, 'sprayedAt', clock.now());
       const coat = await inTransaction(dataSource, async (manager) => {
         const old = await manager.findOneBy(CoatEntity, { id });
         if (!old) throw notFound('Coat record');

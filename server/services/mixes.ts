@@ -9,6 +9,7 @@ import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { assertHappenedNearNow } from '../lib/instant-window';
 import { assertRunsSession, type SessionRunner } from './session-runner';
 
 /** Pot life on a data sheet is quoted at its reference temperature: the row nearest 20 °C. */
@@ -25,6 +26,7 @@ export function createMixService(dataSource: DataSource, clock: Clock = systemCl
   return {
     async create(spraySessionId: number, input: CreateMixInput, actor: SessionRunner): Promise<Mix> {
       const fields = createMixSchema.parse(input);
+      assertHappenedNearNow(fields.mixedAt, 'mixedAt', clock.now());
       return inTransaction(dataSource, async (manager) => {
         if (!(await manager.existsBy(SpraySessionEntity, { id: spraySessionId }))) throw notFound('Spray session');
         await assertRunsSession(manager, spraySessionId, actor);

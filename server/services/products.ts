@@ -21,6 +21,15 @@ import { toFileRef, type FileService, type Upload } from './files';
 import { toLotDto, toProductDto } from './product-dto';
 import type { SettingsService } from './settings';
 
+/** Deletes a file's record when no product points at it any more; returns the stored name whose bytes can go. */
+async function forgetUnusedFile(manager: EntityManager, fileId: number): Promise<string | null> {
+  const stillUsed = await manager.existsBy(ProductEntity, [{ tdsFileId: fileId }, { sdsFileId: fileId }]);
+  const file = stillUsed ? null : await manager.findOneBy(StoredFileEntity, { id: fileId });
+  if (!file) return null;
+  await manager.delete(StoredFileEntity, { id: fileId });
+  return file.storedName;
+}
+
 export function createProductService(dataSource: DataSource, files: FileService, settings: SettingsService, clock: Clock = systemClock) {
   async function today(): Promise<string> {
     return calendarDateIn(clock.now(), (await settings.get()).timezone);
@@ -99,18 +108,33 @@ export function createProductService(dataSource: DataSource, files: FileService,
       return toLotDto(lot, await today());
     },
 
+    /**
+     * Stores the PDF and points the product at it. The bytes it replaces are deleted once the
+     * change has committed (and their record with it); if the change fails, the new bytes go.
+     */
     async attachDocument(productId: number, kind: 'tds' | 'sds', upload: Upload | undefined, actor: Actor): Promise<Product> {
       const now = clock.now();
-      await inTransaction(dataSource, async (manager) => {
-        const product = await findOrFail(manager, productId);
-        const file = await files.storePdf(manager, upload, actor.id);
-        if (kind === 'tds') product.tdsFileId = file.id;
-        else product.sdsFileId = file.id;
-        product.updatedAt = now.toISOString();
-        await manager.save(product);
-        const what = kind === 'tds' ? 'technical data sheet' : 'safety data sheet';
-        await recordAudit(manager, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
-      });
+      let stored: string | null = null;
+      let replaced: string | null = null;
+      try {
+        await inTransaction(dataSource, async (manager) => {
+          const product = await findOrFail(manager, productId);
+          const file = await files.storePdf(manager, upload, actor.id);
+          stored = file.storedName;
+          const previousId = kind === 'tds' ? product.tdsFileId : product.sdsFileId;
+          if (kind === 'tds') product.tdsFileId = file.id;
+          else product.sdsFileId = file.id;
+          product.updatedAt = now.toISOString();
+          await manager.save(product);
+          replaced = previousId === null ? null : await forgetUnusedFile(manager, previousId);
+          const what = kind === 'tds' ? 'technical data sheet' : 'safety data sheet';
+          await recordAudit(manager, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
+        });
+      } catch (error) {
+        if (stored) await files.discard(stored);
+        throw error;
+      }
+      if (replaced) await files.discard(replaced);
       return this.get(productId);
     },
   };

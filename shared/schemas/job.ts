@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { requiredTextSchema, optionalTextSchema } from './common';
 import { sprayMethodIds } from '../finishing/material';
 
 export const jobStates = ['open', 'in-finish', 'finished', 'cancelled'] as const;
@@ -8,13 +9,13 @@ export type JobState = z.infer<typeof jobStateSchema>;
 const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31' });
 
 export const jobFieldsSchema = z.object({
-  customer: z.string().trim().min(1, 'Enter the customer').max(120),
-  reference: z.string().trim().min(1, 'Enter the job reference').max(60),
+  customer: requiredTextSchema('Enter the customer', 120),
+  reference: requiredTextSchema('Enter the job reference', 60),
   dueDate: isoDate,
   finishSystemId: z.number().int().positive().nullable(),
-  colour: z.string().trim().max(80),
-  sheen: z.string().trim().max(40),
-  notes: z.string().trim().max(4000),
+  colour: optionalTextSchema(80),
+  sheen: optionalTextSchema(40),
+  notes: optionalTextSchema(4000),
   state: jobStateSchema,
 });
 

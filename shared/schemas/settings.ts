@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { unitSystemSchema } from './common';
+import { unitSystemSchema, requiredTextSchema } from './common';
 
 export const shopSettingsSchema = z.object({
-  shopName: z.string().trim().min(1, 'Enter the shop name').max(120),
+  shopName: requiredTextSchema('Enter the shop name', 120),
   timezone: z.string().refine(isKnownTimeZone, 'Unknown timezone'),
   defaultUnits: unitSystemSchema,
   planningDryingTempC: z.number().min(5).max(60),

@@ -78,7 +78,7 @@ export async function createFixtures(app: Express, admin: SignedIn): Promise<Fix
   const coatBody = () => {
     const door = doors[doorIndex++];
     if (!door) throw new Error('Fixtures ran out of uncoated doors');
-    return { spraySessionId, partIds: [door.id], productId: primer.id, sprayedAt: '2027-06-01T09:15:00Z', airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
+    return { spraySessionId, partIds: [door.id], productId: primer.id, sprayedAt: new Date(Date.now() - 3_600_000).toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
   };
   const newCoat = async (): Promise<number> => (await ok(post(admin, '/api/coats', coatBody()), 'coat')).coat.id;
   let firstCoat: Promise<number> | undefined;
