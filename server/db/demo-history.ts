@@ -1,4 +1,6 @@
 import { TZDate } from '@date-fns/tz';
+import { openSiteData } from '../data/site-data';
+import { everySite } from '../lib/site-scope';
 import { addDays, startOfWeek } from 'date-fns';
 import type { DataSource } from 'typeorm';
 import { dewPointC } from '../../shared/finishing/conditions';
@@ -66,8 +68,8 @@ interface HistoryContext {
 }
 
 async function createPastJobs(dataSource: DataSource, weeksBack: Date): Promise<{ steps: PendingStep[][]; partIds: number[] }> {
-  const jobs = createJobService(dataSource);
-  const parts = createPartService(dataSource);
+  const jobs = createJobService(openSiteData(dataSource, everySite));
+  const parts = createPartService(openSiteData(dataSource, everySite));
   const systems = new Map((await dataSource.getRepository(FinishSystemEntity).find()).map((s) => [s.name, s.id]));
   const steps: PendingStep[][] = [];
   const allParts: number[] = [];
@@ -156,7 +158,7 @@ async function respray(ctx: HistoryContext, coats: ReturnType<typeof createCoatS
  * in the booth), sensor readings, a correction and two re-sprays. Parts end collected.
  */
 export async function seedDemoHistory(dataSource: DataSource, options: { now?: Date; weeks?: number } = {}): Promise<void> {
-  const settings = createSettingsService(dataSource);
+  const settings = createSettingsService(openSiteData(dataSource, everySite));
   const { timezone } = await settings.get();
   const weeks = options.weeks ?? 8;
   const thisMonday = startOfWeek(new TZDate((options.now ?? new Date()).getTime(), timezone), { weekStartsOn: 1 });
@@ -170,7 +172,7 @@ export async function seedDemoHistory(dataSource: DataSource, options: { now?: D
     products: new Map((await dataSource.getRepository(ProductEntity).find()).map((p) => [p.id, p])),
   };
   if (ctx.booths.length === 0) return;
-  const coats = createCoatService(dataSource, settings, new EventBus(), clock);
+  const coats = createCoatService(openSiteData(dataSource, everySite), settings, new EventBus(), clock);
   const { steps, partIds } = await createPastJobs(dataSource, firstMonday);
   // Each job goes through in consecutive sessions, as a shop runs a batch, one step a session.
   const queue = steps.flat();

@@ -1,7 +1,6 @@
 import { parse } from 'csv-parse/sync';
-import type { DataSource } from 'typeorm';
 import { createPartSchema, csvTemplateHeaders, type CreatePartInput, type ImportResult, type ImportRowError } from '../../shared/schemas/part';
-import { JobEntity } from '../db/entities/job.entity';
+import type { SiteData } from '../data/site-data';
 import { AppError, notFound } from '../lib/app-error';
 import type { Actor } from './audit';
 import type { PartService } from './parts';
@@ -33,13 +32,12 @@ function toCandidate(raw: Record<string, string>, mapping: Record<string, string
   return candidate;
 }
 
-export function createPartImportService(dataSource: DataSource, parts: PartService) {
+export function createPartImportService(data: SiteData, parts: PartService) {
   return {
     /** Every row is checked; nothing is saved unless all are good and this is not a preview. */
     async importCsv(jobId: number, buffer: Buffer | undefined, mapping: Record<string, string>, preview: boolean, actor: Actor): Promise<ImportResult> {
       if (!buffer) throw new AppError('validation_failed', 'Choose a CSV file', { file: 'Choose a CSV file' });
-      const job = await dataSource.getRepository(JobEntity).findOneBy({ id: jobId });
-      if (!job) throw notFound('Job');
+      if (!(await data.jobs.existsBy({ id: jobId }))) throw notFound('Job');
       const rows = readCsv(buffer);
       const headers = rows.length ? Object.keys(rows[0]) : [];
       const errors: ImportRowError[] = [];

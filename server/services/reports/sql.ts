@@ -1,10 +1,4 @@
-import type { DataSource } from 'typeorm';
-
-export type Dialect = 'sqlite' | 'postgres';
-
-export function dialectOf(dataSource: DataSource): Dialect {
-  return dataSource.options.type === 'postgres' ? 'postgres' : 'sqlite';
-}
+import type { Dialect } from '../../data/site-data';
 
 /**
  * Collects parameters for one raw statement and writes the placeholders each driver expects
