@@ -20,7 +20,7 @@ import type { NotificationRuntime } from './mail/notifications-runtime';
 export interface AppDeps {
   dataSource: DataSource;
   config: AppConfig;
-  sessionSecret: string;
+  signInSecret: string;
   clock?: Clock;
   logger?: Logger;
   /** The change feed behind GET /api/events; tests pass their own to listen in. */
@@ -45,7 +45,7 @@ export function createApp(deps: AppDeps): Express {
   const services = { clock, events: deps.events ?? new EventBus(), storage: createFileStorage(config), notifications: deps.notifications };
   const registry: RegistryDeps = { dataSource, config, services, auth };
   app.use('/api', buildBareApiRouter(registry));
-  app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.sessionSecret, config.trustProxy), auth.initialize(), auth.session());
+  app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.signInSecret, config.trustProxy), auth.initialize(), auth.session());
   app.use('/api', buildApiRouter(registry));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);

@@ -33,7 +33,7 @@ const at = (iso: string, ctx: RuleContext) => wallClockIn(new Date(iso), ctx.tim
 const ofSite = (user: UserEntity, siteId: number | undefined) => seesAllSites(user.role) || user.siteId === siteId;
 
 /** The site of each spray session's booth. */
-async function sessionSites(ctx: RuleContext, spraySessions: Pick<SpraySessionEntity, 'boothId'>[]): Promise<Map<number, number>> {
+async function spraySessionSites(ctx: RuleContext, spraySessions: Pick<SpraySessionEntity, 'boothId'>[]): Promise<Map<number, number>> {
   const boothIds = [...new Set(spraySessions.map((s) => s.boothId))];
   const booths = boothIds.length ? await ctx.data.booths.findBy({ id: In(boothIds) }) : [];
   return new Map(booths.map((b) => [b.id, b.siteId]));
@@ -52,7 +52,7 @@ async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClos
   const parts = links.length ? await ctx.data.parts.findBy({ id: In(links.map((l) => l.partId)) }) : [];
   const jobs = parts.length ? await ctx.data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }) : [];
   const spraySessions = coats.length ? await ctx.data.spraySessions.findBy({ id: In([...new Set(coats.map((c) => c.spraySessionId))]) }) : [];
-  const boothSite = await sessionSites(ctx, spraySessions);
+  const boothSite = await spraySessionSites(ctx, spraySessions);
   const siteOfSession = new Map(spraySessions.map((s) => [s.id, boothSite.get(s.boothId)]));
   return coats.map((coat) => {
     const own = parts.filter((p) => links.some((l) => l.coatId === coat.id && l.partId === p.id));
@@ -91,7 +91,7 @@ export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]
 }
 
 /** Each booking, move or cancellation of a sprayer's session in the last day, once per version. */
-export async function sessionChanges(ctx: RuleContext): Promise<DueNotification[]> {
+export async function spraySessionChanges(ctx: RuleContext): Promise<DueNotification[]> {
   const spraySessions = await ctx.data.spraySessions.find({ where: { updatedAt: MoreThan(new Date(ctx.now.getTime() - dayMs).toISOString()) } });
   return spraySessions.flatMap((s) => {
     const user = ctx.users.find((u) => u.id === s.sprayerId);
@@ -111,7 +111,7 @@ export async function dailyPlan(ctx: RuleContext): Promise<DueNotification[]> {
     order: { startAt: 'ASC' },
   });
   const today = spraySessions.filter((s) => s.state !== 'cancelled' && calendarDateIn(new Date(s.startAt), ctx.timeZone) === clock.date);
-  const boothSite = await sessionSites(ctx, today);
+  const boothSite = await spraySessionSites(ctx, today);
   const linesFor = (user: UserEntity) => {
     const own = today.filter((s) => ofSite(user, boothSite.get(s.boothId)));
     return own.length ? own.map((s) => `- ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}: session ${s.id} (booth ${s.boothId})`).join('\n') : 'No spray sessions are booked today.';
@@ -121,4 +121,4 @@ export async function dailyPlan(ctx: RuleContext): Promise<DueNotification[]> {
     .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${clock.date}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
 }
 
-export const notificationRules = [partsReady, recoatClosing, sessionChanges, dailyPlan];
+export const notificationRules = [partsReady, recoatClosing, spraySessionChanges, dailyPlan];

@@ -15,15 +15,15 @@ export async function partsSeenBy(data: SiteData, parts: PlacedPart[]): Promise<
   const rackIds = [...new Set(parts.map((p) => p.rackId).filter((id): id is number => id !== null))];
   const racks = new Set(rackIds.length ? (await data.racks.find({ where: { id: In(rackIds) }, select: { id: true } })).map((r) => r.id) : []);
   const unplaced = parts.filter((p) => p.rackId === null).map((p) => p.id);
-  const latestSession = await latestSessionOf(data, unplaced);
-  const sessionIds = [...new Set(latestSession.values())];
+  const latestSpraySession = await latestSpraySessionOf(data, unplaced);
+  const sessionIds = [...new Set(latestSpraySession.values())];
   const sessions = new Set(sessionIds.length ? (await data.spraySessions.find({ where: { id: In(sessionIds) }, select: { id: true } })).map((s) => s.id) : []);
-  const seen = (p: PlacedPart) => (p.rackId !== null ? racks.has(p.rackId) : !latestSession.has(p.id) || sessions.has(latestSession.get(p.id)!));
+  const seen = (p: PlacedPart) => (p.rackId !== null ? racks.has(p.rackId) : !latestSpraySession.has(p.id) || sessions.has(latestSpraySession.get(p.id)!));
   return new Set(parts.filter(seen).map((p) => p.id));
 }
 
 /** The spray session of each part's latest current coat, for parts that have one. */
-async function latestSessionOf(data: SiteData, partIds: number[]): Promise<Map<number, number>> {
+async function latestSpraySessionOf(data: SiteData, partIds: number[]): Promise<Map<number, number>> {
   const coats = await currentCoatsByPart(data.acrossSites, partIds);
   const latest = new Map<number, number>();
   for (const [partId, list] of coats) {

@@ -5,7 +5,7 @@ import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
 
 /** The products a spray session will spray: each planned part's step (or its next coat step, from the part's whole history). */
 export async function spraySessionProducts(data: SiteData, spraySessionId: number): Promise<ChecklistProduct[]> {
-  const items = await data.sessionItems.findBy({ spraySessionId });
+  const items = await data.spraySessionItems.findBy({ spraySessionId });
   if (items.length === 0) return [];
   const whole = data.acrossSites;
   const parts = await data.parts.findBy({ id: In(items.map((i) => i.partId)) });

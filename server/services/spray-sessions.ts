@@ -25,7 +25,7 @@ async function toDtos(data: SiteData, spraySessions: SpraySessionEntity[]): Prom
   const boothIds = [...new Set(spraySessions.map((s) => s.boothId))];
   const userIds = [...new Set(spraySessions.map((s) => s.sprayerId).filter((id): id is number => id !== null))];
   const [items, booths, users] = await Promise.all([
-    ids.length ? data.sessionItems.find({ where: { spraySessionId: In(ids) }, order: { id: 'ASC' } }) : [],
+    ids.length ? data.spraySessionItems.find({ where: { spraySessionId: In(ids) }, order: { id: 'ASC' } }) : [],
     boothIds.length ? data.booths.find({ where: { id: In(boothIds) }, select: { id: true, name: true } }) : [],
     userIds.length ? data.users.find({ where: { id: In(userIds) }, select: { id: true, name: true } }) : [],
   ]);
@@ -57,8 +57,8 @@ async function writeItems(tx: SiteData, booth: BoothEntity, spraySessionId: numb
   if (parts.length !== partIds.length || (await partsSeenBy(tx.forSite(booth.siteId), parts)).size !== partIds.length) {
     throw new AppError('validation_failed', 'A planned part does not exist or is at another site', { items: 'Choose parts that exist at this site' });
   }
-  await tx.sessionItems.delete({ spraySessionId });
-  await tx.sessionItems.insert(items.map((i) => ({ spraySessionId, partId: i.partId, stepPosition: i.stepPosition })));
+  await tx.spraySessionItems.delete({ spraySessionId });
+  await tx.spraySessionItems.insert(items.map((i) => ({ spraySessionId, partId: i.partId, stepPosition: i.stepPosition })));
 }
 
 type SpraySessionFields = ReturnType<typeof createSpraySessionSchema.parse>;
