@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { idParamsSchema, listSchema } from '../../shared/schemas/common';
 import { createPartSchema, csvTemplateHeaders, importMappingSchema, importResultSchema, partListQuerySchema, partSchema, updatePartSchema } from '../../shared/schemas/part';
-import { AppError } from '../lib/app-error';
 import { answered, defineRoute, Reply, type ApiRoute } from '../registry/route';
 
 const partEnvelope = z.object({ part: partSchema });
@@ -73,10 +72,6 @@ export const partRoutes: ApiRoute[] = [
     response: { status: 201, otherStatuses: [200], schema: importResultSchema },
     handler: async ({ params, form, file }, { services, actor }) => {
       const result = await services.partImport.importCsv(params.id, file?.buffer, form.mapping, form.preview, actor);
-      if (!form.preview && result.errors.length) {
-        const fields = Object.fromEntries(result.errors.map((e) => [`rows.${e.row}.${e.field}`, e.message]));
-        throw new AppError('validation_failed', `${new Set(result.errors.map((e) => e.row)).size} rows need fixing; nothing was saved`, fields);
-      }
       return new Reply(result.saved ? 201 : 200, result);
     },
   }),
