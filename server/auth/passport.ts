@@ -3,7 +3,7 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { DataSource } from 'typeorm';
 import { UserEntity } from '../db/entities/user.entity';
-import { toSessionUser } from '../services/users';
+import { toSignedInUser } from '../services/users';
 import { hashPassword, verifyPassword } from './passwords';
 
 /** What a session keeps of its sign-in. */
@@ -26,7 +26,7 @@ export function configurePassport(dataSource: DataSource): passport.PassportStat
         .then(async (user) => {
           const ok = await verifyPassword(user?.passwordHash ?? (await decoy()), password);
           if (!user || !ok || user.disabled) return done(null, false);
-          return done(null, toSessionUser(user));
+          return done(null, toSignedInUser(user));
         })
         .catch(done);
     }),
@@ -43,7 +43,7 @@ export function configurePassport(dataSource: DataSource): passport.PassportStat
     const { id, epoch } = typeof stored === 'number' ? { id: stored, epoch: 0 } : stored;
     users
       .findOneBy({ id })
-      .then((user) => done(null, user && !user.disabled && user.sessionEpoch === epoch ? toSessionUser(user) : false))
+      .then((user) => done(null, user && !user.disabled && user.sessionEpoch === epoch ? toSignedInUser(user) : false))
       .catch(done);
   });
   return instance as unknown as passport.PassportStatic;

@@ -92,7 +92,7 @@ describe('GET /api/events stream limits', () => {
   let port: number;
   const open: http.ClientRequest[] = [];
   beforeAll(async () => {
-    const app = createApp({ dataSource: ctx.dataSource, config: { ...ctx.config, liveStreams: { perUser: 2, perServer: 3 } }, sessionSecret: testSecret });
+    const app = createApp({ dataSource: ctx.dataSource, config: { ...ctx.config, liveStreams: { perUser: 2, perServer: 3 } }, signInSecret: testSecret });
     server = app.listen(0, '127.0.0.1');
     await new Promise((resolve) => server.once('listening', resolve));
     port = (server.address() as AddressInfo).port;

@@ -3,9 +3,11 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import { parseConfig } from '../../../server/config/env';
+import { openSiteData } from '../../../server/data/site-data';
 import { openDataSource } from '../../../server/db/data-source';
 import { simplePdf } from '../../../server/db/demo-pdf';
 import { StoredFileEntity } from '../../../server/db/entities/stored-file.entity';
+import { everySite } from '../../../server/lib/site-scope';
 import { systemActor } from '../../../server/services/audit';
 import { createFileStorage, LocalDiskStorage, type FileStorage } from '../../../server/services/file-storage';
 import { createFileService } from '../../../server/services/files';
@@ -29,6 +31,11 @@ afterAll(async () => {
 });
 
 const row = { tempC: 20, flashOffMin: 10, recoatMinMin: 60, recoatMaxMin: 600, touchDryMin: 20, handleMin: 90, packMin: 300, fullCureH: 168 };
+/** The product service as the system sees it (data sheets are the whole group's). */
+const productService = (store: FileStorage) => {
+  const data = openSiteData(dataSource, everySite);
+  return createProductService(data, createFileService(data, store), createSettingsService(data));
+};
 const pdf = (n: number) => ({ originalname: `sheet-${n}.pdf`, buffer: simplePdf(`Sheet ${n}`, ['line']), size: 0 });
 
 const stores: [string, () => FileStorage][] = [
@@ -39,7 +46,7 @@ const stores: [string, () => FileStorage][] = [
 describe.each(stores)('a data sheet replaced %s', (_label, storage) => {
   it('deletes the old PDF and its record once the new one is attached, and keeps the other sheet', async () => {
     const store = storage();
-    const products = createProductService(dataSource, createFileService(dataSource, store), createSettingsService(dataSource));
+    const products = productService(store);
     const product = await products.create({ name: `Replaced ${_label}`, kind: 'clear', chemistry: 'solvent-borne', volumeSolidsPct: 30, dryingTimes: [row] }, systemActor);
     const first = (await products.attachDocument(product.id, 'tds', pdf(1), systemActor)).tdsFile!;
     const safety = (await products.attachDocument(product.id, 'sds', pdf(2), systemActor)).sdsFile!;
@@ -58,7 +65,7 @@ describe.each(stores)('a data sheet replaced %s', (_label, storage) => {
 
   it('deletes the new bytes when the change cannot be made', async () => {
     const store = storage();
-    const products = createProductService(dataSource, createFileService(dataSource, store), createSettingsService(dataSource));
+    const products = productService(store);
     const before = await dataSource.getRepository(StoredFileEntity).count();
     await expect(products.attachDocument(999_999, 'tds', pdf(4), systemActor)).rejects.toThrow(/Product/);
     expect(await dataSource.getRepository(StoredFileEntity).count()).toBe(before);
