@@ -14,7 +14,9 @@ import { createJobSchema, jobSchema, updateJobSchema } from '../shared/schemas/j
 import { createPartSchema, partSchema } from '../shared/schemas/part';
 import { createLotSchema, createProductSchema, lotSchema, productSchema, updateProductSchema } from '../shared/schemas/product';
 import { createReadingSchema, readingSchema } from '../shared/schemas/reading';
-import { readyPartSchema } from '../shared/schemas/ready';
+import { createDenibSchema, denibSchema } from '../shared/schemas/denib';
+import { partHistorySchema } from '../shared/schemas/part-history';
+import { readyListSchema } from '../shared/schemas/ready';
 import { createSiteSchema, siteSchema, updateSiteSchema } from '../shared/schemas/site';
 import { areaSprayedReportSchema, boothUseReportSchema, conditionsReportSchema, materialReportSchema, reworkReportSchema, solventReportSchema } from '../shared/schemas/report';
 import { createSpraySessionSchema, spraySessionSchema, updateSpraySessionSchema } from '../shared/schemas/spray-session';
@@ -75,7 +77,10 @@ const operations: Operation[] = [
   { method: 'post', path: '/api/coats', summary: 'Record a coat', permission: 'coats:write', body: createCoatSchema, response: wrap('coat', coatSchema), status: 201 },
   { method: 'get', path: '/api/coats', summary: 'The coat log', permission: 'coats:read', response: listSchema(coatSchema) },
   { method: 'post', path: '/api/coats/{id}/corrections', summary: 'Correct a coat (a new version)', permission: 'coats:write', body: correctCoatSchema, response: wrap('coat', coatSchema), status: 201 },
-  { method: 'get', path: '/api/ready', summary: 'Part readiness', permission: 'ready:read', response: z.object({ items: z.array(readyPartSchema) }) },
+  { method: 'post', path: '/api/denibs', summary: 'Record a denib between coats (append-only; on own sessions for a sprayer)', permission: 'coats:write', body: createDenibSchema, response: wrap('denib', denibSchema), status: 201 },
+  { method: 'get', path: '/api/denibs', summary: 'Denib records, newest first (?partId&spraySessionId&jobId&from&to)', permission: 'coats:read', response: listSchema(denibSchema) },
+  { method: 'get', path: '/api/ready', summary: 'Part readiness with expected handle and pack times, and each job’s (?jobId&rackId&state&collectedDays)', permission: 'ready:read', response: readyListSchema },
+  { method: 'get', path: '/api/parts/{id}/history', summary: 'A part’s coats, denibs, next step and times (what its rack tag opens)', permission: 'ready:read', response: wrap('history', partHistorySchema) },
   { method: 'post', path: '/api/readings', summary: 'Record conditions (session or booth sensor bearer token)', permission: 'readings:write', body: createReadingSchema, response: wrap('reading', readingSchema), status: 201 },
   { method: 'get', path: '/api/events', summary: 'Server-sent change events', permission: 'signed-in' },
   // Reports take ?from=YYYY-MM-DD&to=YYYY-MM-DD (shop dates, both included) and &format=csv for the table as CSV.

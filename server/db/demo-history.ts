@@ -1,6 +1,6 @@
 import { TZDate } from '@date-fns/tz';
 import { addDays, startOfWeek } from 'date-fns';
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import { dewPointC } from '../../shared/finishing/conditions';
 import { wetFilmTargetUm } from '../../shared/finishing/film';
 import { litresNeeded } from '../../shared/finishing/material';
@@ -8,6 +8,7 @@ import type { CreatePartInput } from '../../shared/schemas/part';
 import { systemActor, type Actor } from '../services/audit';
 import { createCoatService } from '../services/coats';
 import { EventBus } from '../services/events';
+import { refreshJobStates } from '../services/job-states';
 import { createJobService } from '../services/jobs';
 import { createPartService } from '../services/parts';
 import { createSettingsService } from '../services/settings';
@@ -20,6 +21,7 @@ import { ProductEntity } from './entities/product.entity';
 import { ReadingEntity } from './entities/reading.entity';
 import { SpraySessionEntity } from './entities/spray-session.entity';
 import { UserEntity } from './entities/user.entity';
+import { inTransaction } from './transaction';
 
 /** Finished jobs of the last few weeks, so the coat log and reports have something to show. */
 const pastJobs: { customer: string; reference: string; system: string; parts: CreatePartInput[] }[] = [
@@ -191,4 +193,6 @@ export async function seedDemoHistory(dataSource: DataSource, options: { now?: D
   }
   const collectedAt = thisMonday.toISOString();
   await dataSource.getRepository(PartEntity).createQueryBuilder().update().set({ state: 'collected', collectedAt: new Date(collectedAt).toISOString() }).whereInIds(partIds).execute();
+  const jobIds = [...new Set((await dataSource.getRepository(PartEntity).findBy({ id: In(partIds) })).map((p) => p.jobId))];
+  await inTransaction(dataSource, (manager) => refreshJobStates(manager, jobIds, systemActor, options.now ?? new Date()));
 }

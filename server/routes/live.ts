@@ -12,7 +12,7 @@ import type { ReadyService } from '../services/ready';
 export function readyRoutes(ready: ReadyService): Router {
   const router = Router();
   router.get('/', requirePermission('ready:read'), async (req, res) => {
-    res.json({ items: await ready.list(readyQuerySchema.parse(req.query)) });
+    res.json(await ready.list(readyQuerySchema.parse(req.query)));
   });
   return router;
 }

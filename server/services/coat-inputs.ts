@@ -11,7 +11,7 @@ import { ProductEntity } from '../db/entities/product.entity';
 import { RackEntity } from '../db/entities/rack.entity';
 import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { AppError } from '../lib/app-error';
-import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
+import { currentCoatsByPart, denibTimesByPart, nextCoatStep, stepsByJob } from './part-coats';
 
 export type CoatFields = Omit<Required<CreateCoatInput>, 'idempotencyKey'>;
 
@@ -56,16 +56,27 @@ async function mixWarnings(manager: EntityManager, fields: CoatFields): Promise<
   return [];
 }
 
-/** A denib planned between the last coat and this one gives a mechanical key: then only the opening counts. */
-function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: number | null) {
-  const abraded = latest.stepPosition !== null && stepPosition !== null && system.slice(latest.stepPosition + 1, stepPosition).some((s) => s.kind === 'abrade');
+/**
+ * A denib between the last coat and this one gives a mechanical key: then only the opening counts.
+ * It is on record when every part was denibbed since that coat; a planned abrade step counts too
+ * for a coat logged without its denib record.
+ */
+function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: number | null, denibbed: boolean) {
+  const planned = latest.stepPosition !== null && stepPosition !== null && system.slice(latest.stepPosition + 1, stepPosition).some((s) => s.kind === 'abrade');
+  const abraded = planned || denibbed;
   return { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt && !abraded ? new Date(latest.recoatClosesAt) : null };
+}
+
+function denibbedSince(denibs: Map<number, Date[]>, partIds: number[], since: string, until: Date): boolean {
+  const from = Date.parse(since);
+  return partIds.every((id) => (denibs.get(id) ?? []).some((at) => at.getTime() > from && at.getTime() <= until.getTime()));
 }
 
 /** Works out the step, the target film, the previous window and every computed value of a coat. */
 export async function prepareCoat(manager: EntityManager, fields: CoatFields, timeZone: string): Promise<{ record: CoatRecord; stepPosition: number | null; dryingTempC: number }> {
   const { product, parts } = await loadReferences(manager, fields);
-  const [coats, steps] = await Promise.all([currentCoatsByPart(manager, parts.map((p) => p.id)), stepsByJob(manager, parts)]);
+  const ids = parts.map((p) => p.id);
+  const [coats, steps, denibs] = await Promise.all([currentCoatsByPart(manager, ids), stepsByJob(manager, parts), denibTimesByPart(manager, ids)]);
   const first = parts[0];
   const system = steps.get(first.jobId) ?? [];
   const firstCoats = coats.get(first.id) ?? [];
@@ -86,7 +97,7 @@ export async function prepareCoat(manager: EntityManager, fields: CoatFields, ti
     wetFilmUm: fields.wetFilmUm,
     targetDryFilmUm: step?.kind === 'coat' ? step.dryFilmUm : null,
     lotExpired: await lotExpired(manager, fields, timeZone),
-    previousWindow: latest ? previousWindow(latest, system, stepPosition) : null,
+    previousWindow: latest ? previousWindow(latest, system, stepPosition, denibbedSince(denibs, ids, latest.sprayedAt, sprayedAt)) : null,
     timeZone,
   });
   record.warnings.push(...(await mixWarnings(manager, fields)));

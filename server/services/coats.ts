@@ -1,9 +1,8 @@
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { createCoatSchema, type Coat, type CoatQuery, type CorrectCoatInput, type CreateCoatInput } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import { CoatPartEntity } from '../db/entities/coat-part.entity';
 import { CoatEntity, type StoredWarning } from '../db/entities/coat.entity';
-import { PartEntity } from '../db/entities/part.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
@@ -11,7 +10,7 @@ import { assertRunsSession, type SessionRunner } from './session-runner';
 import { toCoatDtos } from './coat-dto';
 import { prepareCoat, type CoatFields } from './coat-inputs';
 import type { EventBus } from './events';
-import { readinessOf } from './ready';
+import { refreshPartStates } from './part-states';
 import type { SettingsService } from './settings';
 
 interface Version {
@@ -24,16 +23,6 @@ interface Version {
 function withAcknowledgements(warnings: StoredWarning[], fields: CoatFields): StoredWarning[] {
   const reasons = new Map(fields.acknowledgements.map((a) => [a.code, a.reason]));
   return warnings.map((w) => ({ code: w.code, message: w.message, acknowledgedReason: reasons.get(w.code) ?? null }));
-}
-
-/** Stores each part's state for lists and job progress; the ready board recomputes it live. */
-async function refreshPartStates(manager: EntityManager, partIds: number[], now: Date): Promise<void> {
-  const parts = await manager.findBy(PartEntity, { id: In(partIds) });
-  const readiness = await readinessOf(manager, parts, now);
-  for (const part of parts) {
-    const state = readiness.get(part.id)!.state;
-    if (state !== part.state) await manager.update(PartEntity, { id: part.id }, { state, updatedAt: now.toISOString() });
-  }
 }
 
 export function createCoatService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
@@ -76,7 +65,7 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
       }),
     );
     await manager.insert(CoatPartEntity, [...new Set(fields.partIds)].map((partId) => ({ coatId: coat.id, partId })));
-    await refreshPartStates(manager, fields.partIds, clock.now());
+    await refreshPartStates(manager, fields.partIds, actor, clock.now());
     return coat;
   }
 

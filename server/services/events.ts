@@ -2,6 +2,7 @@ import { EventEmitter } from 'node:events';
 
 export type ChangeEvent =
   | { type: 'coat.created'; id: number; partIds: number[] }
+  | { type: 'denib.created'; id: number; partIds: number[] }
   | { type: 'spray-session.changed'; id: number }
   | { type: 'part.changed'; id: number }
   | { type: 'reading.created'; id: number; boothId: number | null; rackId: number | null };

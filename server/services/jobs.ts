@@ -1,7 +1,9 @@
 import { inTransaction } from '../db/transaction';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { DataSource, EntityManager, SelectQueryBuilder } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
-import { createJobSchema, type CreateJobInput, type Job, type JobListQuery, type UpdateJobInput } from '../../shared/schemas/job';
+import { jobStateAt } from '../../shared/finishing/job-state';
+import { createJobSchema, liveJobStates, type CreateJobInput, type Job, type JobListQuery, type JobState, type UpdateJobInput } from '../../shared/schemas/job';
+import { jobStateWords } from './job-states';
 import { FinishSystemEntity } from '../db/entities/finish-system.entity';
 import { JobEntity } from '../db/entities/job.entity';
 import { AppError, notFound } from '../lib/app-error';
@@ -43,7 +45,7 @@ async function jobFigures(manager: EntityManager, ids: number[]): Promise<Map<nu
   );
 }
 
-function toJobDto(job: JobEntity, figures: JobRow | undefined): Job {
+function toJobDto(job: JobEntity, figures: JobRow | undefined, now: Date): Job {
   return {
     id: job.id,
     customer: job.customer,
@@ -54,7 +56,9 @@ function toJobDto(job: JobEntity, figures: JobRow | undefined): Job {
     colour: job.colour,
     sheen: job.sheen,
     notes: job.notes,
-    state: job.state,
+    state: jobStateAt(job.state, job.readyAt, now),
+    stateSetBy: job.stateSetBy,
+    readyAt: job.readyAt,
     partCount: figures?.partCount ?? 0,
     partsThrough: figures?.partsThrough ?? 0,
     coatedAreaM2: Math.round((figures?.coatedAreaM2 ?? 0) * 1000) / 1000,
@@ -75,22 +79,32 @@ async function assertReferenceFree(manager: EntityManager, reference: string | u
   if (existing && existing.id !== exceptId) throw new AppError('conflict', `Job reference ${reference} is already used`, { reference: 'Already used by another job' });
 }
 
+/** Filters by the state as shown: an in-finish job whose ready time has passed counts as ready. */
+function whereState(qb: SelectQueryBuilder<JobEntity>, state: NonNullable<JobListQuery['state']>, now: string): void {
+  const passed = 'j.ready_at IS NOT NULL AND j.ready_at <= :now';
+  if (state === 'active') qb.andWhere('j.state IN (:...live)', { live: liveJobStates });
+  else if (state === 'ready') qb.andWhere(`(j.state = 'ready' OR (j.state = 'in-finish' AND ${passed}))`, { now });
+  else if (state === 'in-finish') qb.andWhere(`j.state = 'in-finish' AND NOT (${passed})`, { now });
+  else qb.andWhere('j.state = :state', { state });
+}
+
 export function createJobService(dataSource: DataSource, clock: Clock = systemClock) {
   async function getWith(manager: EntityManager, id: number): Promise<Job> {
     const job = await manager.findOneBy(JobEntity, { id });
     if (!job) throw notFound('Job');
-    return toJobDto(job, (await jobFigures(manager, [id])).get(id));
+    return toJobDto(job, (await jobFigures(manager, [id])).get(id), clock.now());
   }
 
   return {
     async list(query: JobListQuery): Promise<List<Job>> {
       const qb = dataSource.getRepository(JobEntity).createQueryBuilder('j');
       if (query.q) qb.andWhere('(LOWER(j.customer) LIKE :q OR LOWER(j.reference) LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
-      if (query.state) qb.andWhere('j.state = :state', { state: query.state });
+      const now = clock.now();
+      if (query.state) whereState(qb, query.state, now.toISOString());
       qb.orderBy('j.due_date', 'ASC').addOrderBy('j.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
       const figures = await jobFigures(dataSource.manager, rows.map((r) => r.id));
-      return { items: rows.map((r) => toJobDto(r, figures.get(r.id))), total, page: query.page, pageSize: query.pageSize };
+      return { items: rows.map((r) => toJobDto(r, figures.get(r.id), now)), total, page: query.page, pageSize: query.pageSize };
     },
 
     get: (id: number) => getWith(dataSource.manager, id),
@@ -101,7 +115,8 @@ export function createJobService(dataSource: DataSource, clock: Clock = systemCl
       return inTransaction(dataSource, async (manager) => {
         await assertFinishSystem(manager, fields.finishSystemId);
         await assertReferenceFree(manager, fields.reference);
-        const job = await manager.save(manager.create(JobEntity, { ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        const stateSetBy = fields.state === 'open' ? 'auto' : 'lead';
+        const job = await manager.save(manager.create(JobEntity, { ...fields, stateSetBy, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
         await recordAudit(manager, actor, { action: 'create', entity: 'job', entityId: job.id, summary: `Added job ${job.reference} for ${job.customer}` }, now);
         return getWith(manager, job.id);
       });
@@ -114,10 +129,14 @@ export function createJobService(dataSource: DataSource, clock: Clock = systemCl
         if (!job) throw notFound('Job');
         await assertFinishSystem(manager, patch.finishSystemId);
         await assertReferenceFree(manager, patch.reference, id);
-        const changes = changedFields(job, patch);
-        Object.assign(job, patch, { updatedAt: now.toISOString() });
+        const changes = changedFields({ ...job, state: jobStateAt(job.state, job.readyAt, now) }, patch);
+        // A lead's state holds (delivered, cancelled) or stands until the next coat or collection moves the job on.
+        const byLead = patch.state !== undefined ? { stateSetBy: 'lead' as const, readyAt: null } : {};
+        Object.assign(job, patch, byLead, { updatedAt: now.toISOString() });
         await manager.save(job);
-        await recordAudit(manager, actor, { action: 'update', entity: 'job', entityId: id, summary: `Changed job ${job.reference}`, changes }, now);
+        const stateChange = changes?.state as { from: JobState; to: JobState } | undefined;
+        const summary = stateChange ? `Set job ${job.reference} to ${jobStateWords[stateChange.to]} (was ${jobStateWords[stateChange.from]})` : `Changed job ${job.reference}`;
+        await recordAudit(manager, actor, { action: 'update', entity: 'job', entityId: id, summary, changes }, now);
         return getWith(manager, id);
       });
     },

@@ -2,6 +2,7 @@ import { In, type EntityManager } from 'typeorm';
 import type { FinishStep, PartCoat } from '../../shared/finishing/readiness';
 import { CoatPartEntity } from '../db/entities/coat-part.entity';
 import { CoatEntity } from '../db/entities/coat.entity';
+import { DenibPartEntity } from '../db/entities/denib.entity';
 import { FinishStepEntity } from '../db/entities/finish-step.entity';
 import { JobEntity } from '../db/entities/job.entity';
 import type { PartEntity } from '../db/entities/part.entity';
@@ -24,6 +25,22 @@ export async function currentCoatsByPart(manager: EntityManager, partIds: number
     const coat = byId.get(link.coatId);
     if (coat) byPart.get(link.partId)?.push(coat);
   }
+  return byPart;
+}
+
+/** When each part was denibbed or scuffed, from the denib records, by part id (oldest first). */
+export async function denibTimesByPart(manager: EntityManager, partIds: number[]): Promise<Map<number, Date[]>> {
+  const byPart = new Map<number, Date[]>(partIds.map((id) => [id, []]));
+  if (partIds.length === 0) return byPart;
+  const rows = await manager
+    .createQueryBuilder(DenibPartEntity, 'dp')
+    .innerJoin('denibs', 'd', 'd.id = dp.denib_id')
+    .select('dp.part_id', 'partId')
+    .addSelect('d.abraded_at', 'abradedAt')
+    .where('dp.part_id IN (:...partIds)', { partIds })
+    .orderBy('d.abraded_at', 'ASC')
+    .getRawMany<{ partId: number | string; abradedAt: string }>();
+  for (const row of rows) byPart.get(Number(row.partId))?.push(new Date(row.abradedAt));
   return byPart;
 }
 

@@ -12,7 +12,8 @@ import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
-import { readinessOf } from './ready';
+import { refreshJobStates } from './job-states';
+import { refreshPartStates } from './part-states';
 
 // Unambiguous characters only: a tag may be typed in by hand when a camera cannot read it.
 const tagAlphabet = 'ABCDEFGHJKMNPQRSTUVWXYZ23456789';
@@ -65,14 +66,17 @@ function newPartEntity(manager: EntityManager, jobId: number, fields: ReturnType
   return manager.create(PartEntity, { ...fields, jobId, coatedAreaM2: coatedAreaM2(fields), tag: newTag(), state: 'waiting', createdAt: now, updatedAt: now });
 }
 
-/** Where the part stood before its last collection, from the trail; nowhere if it has a place again or the rack is gone. */
+/** Where the part stood before its last collection (recorded on it, or for older ones in the trail); nowhere if it has a place again or the rack is gone. */
 async function placeBeforeCollection(manager: EntityManager, part: PartEntity): Promise<{ rackId: number | null; shelf: number | null }> {
   if (part.rackId !== null || part.collectedAt === null) return { rackId: part.rackId, shelf: part.shelf };
-  const entry = await manager.findOne(AuditEntryEntity, { where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
-  const changes = (entry?.changes ?? {}) as { rackId?: { from?: number | null }; shelf?: { from?: number | null } };
-  const rackId = changes.rackId?.from ?? null;
-  if (rackId === null || !(await manager.existsBy(RackEntity, { id: rackId }))) return { rackId: null, shelf: null };
-  return { rackId, shelf: changes.shelf?.from ?? null };
+  let place = { rackId: part.collectedFromRackId, shelf: part.collectedFromShelf };
+  if (place.rackId === null) {
+    const entry = await manager.findOne(AuditEntryEntity, { where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
+    const changes = (entry?.changes ?? {}) as { rackId?: { from?: number | null }; shelf?: { from?: number | null } };
+    place = { rackId: changes.rackId?.from ?? null, shelf: changes.shelf?.from ?? null };
+  }
+  if (place.rackId === null || !(await manager.existsBy(RackEntity, { id: place.rackId }))) return { rackId: null, shelf: null };
+  return place;
 }
 
 export function createPartService(dataSource: DataSource, clock: Clock = systemClock, events?: EventBus) {
@@ -115,6 +119,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
         await assertRackPlace(manager, fields.rackId, fields.shelf);
         const part = await manager.save(newPartEntity(manager, jobId, fields, now.toISOString()));
         await recordAudit(manager, actor, { action: 'create', entity: 'part', entityId: part.id, summary: `Added part ${part.label} × ${part.quantity} to job ${job.reference}` }, now);
+        await refreshJobStates(manager, [jobId], actor, now);
         return dto(manager, part);
       });
     },
@@ -129,6 +134,7 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
         for (const row of rows) await assertRackPlace(manager, row.rackId, row.shelf);
         const stored = await manager.save(rows.map((row) => newPartEntity(manager, jobId, row, now.toISOString())), { chunk: 200 });
         await recordAudit(manager, actor, { action: 'create', entity: 'part', entityId: null, summary: `${how} ${stored.length} parts to job ${job.reference}` }, now);
+        await refreshJobStates(manager, [jobId], actor, now);
         const names = await rackNamesFor(manager, stored);
         return stored.map((p) => toPartDto(p, names));
       });
@@ -145,9 +151,14 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
         if (!part) throw notFound('Part');
         const place = collected ? { rackId: part.rackId, shelf: part.shelf } : await placeBeforeCollection(manager, part);
         const rackName = place.rackId ? (await rackNamesFor(manager, [place as PartEntity])).get(place.rackId) : null;
-        Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null, ...place }, { updatedAt: now.toISOString() });
-        part.state = (await readinessOf(manager, [part], now)).get(part.id)!.state;
+        // Collected twice: it was taken from where the first collection says.
+        const from = part.collectedAt ? { collectedFromRackId: part.collectedFromRackId, collectedFromShelf: part.collectedFromShelf } : { collectedFromRackId: part.rackId, collectedFromShelf: part.shelf };
+        const taken = { collectedAt: now.toISOString(), ...from, rackId: null, shelf: null };
+        const back = { collectedAt: null, collectedFromRackId: null, collectedFromShelf: null, ...place };
+        Object.assign(part, collected ? taken : back, { updatedAt: now.toISOString() });
         await manager.save(part);
+        await refreshPartStates(manager, [part.id], actor, now);
+        part.state = (await manager.findOneByOrFail(PartEntity, { id })).state;
         const where = rackName ? `${collected ? ' from' : ' on'} ${rackName}${place.shelf ? ` shelf ${place.shelf}` : ''}` : '';
         const summary = collected ? `Collected part ${part.label}${where}` : `Put part ${part.label} back as not collected${where}`;
         const changes = collected ? { rackId: { from: place.rackId, to: null }, shelf: { from: place.shelf, to: null } } : undefined;
