@@ -94,8 +94,8 @@ function betweenCoats({ steps, abradedAt = [], now }: ReadinessInput, last: Part
     .at(-1);
   if (abraded) {
     // A sanded surface gives the next coat a mechanical key, so no closing time applies any more.
-    const opensAt = abraded.getTime() > last.recoatOpensAt.getTime() ? abraded : last.recoatOpensAt;
-    return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: { opensAt, closesAt: null }, abradeRequired: false, recoatWindowMissed: missed };
+    // The film must still be ready to recoat: the opening stays the coat's own (sanding is already past).
+    return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: { opensAt: last.recoatOpensAt, closesAt: null }, abradeRequired: false, recoatWindowMissed: missed };
   }
   const window = missed ? null : { opensAt: last.recoatOpensAt, closesAt: last.recoatClosesAt };
   const plannedAbrade = steps.findIndex((step, index) => index > last.stepIndex && index < nextCoat && step.kind === 'abrade');

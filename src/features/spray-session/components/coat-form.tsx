@@ -8,6 +8,7 @@ import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { useOnline } from '../../../lib/use-online';
 import { useCoatForm } from '../hooks/use-coat-form';
 import { useCoatPreview } from '../hooks/use-coat-preview';
 import type { PendingCoat } from '../hooks/use-pending-coats';
@@ -26,6 +27,8 @@ interface CoatFormProps {
   session: SpraySession;
   plan: SessionPlan;
   planned: PickedPart[];
+  /** Planned parts whose next coat is the planned step: chosen to start with. */
+  due: number[];
   mixes: Mix[];
   sessionCoats: Coat[];
   reading: Reading | null;
@@ -41,8 +44,9 @@ function keepEnterFromSubmitting(event: React.KeyboardEvent<HTMLFormElement>) {
 
 const fieldNames = ['partIds', 'airTempC', 'relativeHumidityPct', 'surfaceTempC', 'thinningPct', 'wetFilmUm', 'stepPosition', 'lotId', 'mixId', 'notes', 'reworkReason'];
 
-export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading, queue, units, timeZone }: CoatFormProps) {
-  const coat = useCoatForm(session, plan, planned, mixes, reading);
+export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, reading, queue, units, timeZone }: CoatFormProps) {
+  const coat = useCoatForm(session, plan, planned, due, mixes, reading);
+  const online = useOnline();
   const { form, values, step, product } = coat;
   const { register, control, handleSubmit, setError, setValue, formState } = form;
   const preview = useCoatPreview({ coat, sessionCoats, units, timeZone });
@@ -53,7 +57,7 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
   const onSubmit = handleSubmit(async (entry) => {
     setFormError(null);
     const acks = stops.check();
-    if (!acks || !step || !product) return setFormError(!step || !product ? 'Choose the step this coat is.' : 'Give a reason for each stop before recording the coat.');
+    if (!acks || !step || !product) return setFormError(!step || !product ? 'Choose the step this coat is.' : 'Say why this coat goes on despite the stops before recording it.');
     if (coat.mixedSystems) return setFormError('These parts follow different finish systems. Record them as separate coats.');
     const body = { ...entry, spraySessionId: session.id, productId: product.id, sprayedAt: new Date().toISOString(), dryingTempC: null, acknowledgements: acks, idempotencyKey: newIdempotencyKey() };
     const outcome = await record(body, `${product.name} on ${entry.partIds.length === 1 ? '1 part' : `${entry.partIds.length} parts`}`);
@@ -64,6 +68,7 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
     setValue('notes', '');
     setValue('reworkReason', null);
     stops.clear();
+    coat.startNext(entry.partIds);
   });
 
   return (
@@ -76,7 +81,7 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
         <h3 className="mb-2 text-lg font-semibold">Conditions as sprayed</h3>
         <CoatConditionFields control={control} errors={formState.errors} units={units} />
       </div>
-      <CoatPreviewPanel preview={preview} product={product} step={step} thinningPct={values.thinningPct ?? 0} units={units} timeZone={timeZone} reasons={stops.reasons} reasonErrors={stops.errors} onReason={stops.setReason} />
+      <CoatPreviewPanel preview={preview} product={product} step={step} thinningPct={values.thinningPct ?? 0} units={units} timeZone={timeZone} reason={stops.reason} reasonError={stops.error} onReason={stops.setReason} />
       <ReworkReasonField
         register={register}
         hasReason={Boolean(values.reworkReason)}
@@ -86,8 +91,9 @@ export function CoatForm({ session, plan, planned, mixes, sessionCoats, reading,
       />
       <FieldShell label="Notes">{(c) => <textarea {...c} rows={2} className={inputClasses} {...register('notes')} />}</FieldShell>
       <Button type="submit" className="min-h-16 w-full text-xl" pending={pending} pendingText="Recording…">
-        Record coat
+        {online ? 'Record coat' : 'Record coat on this tablet'}
       </Button>
+      {!online && <p className="text-center font-medium text-verdict-caution">No connection: the coat is kept on this tablet and sent by itself when the connection is back.</p>}
     </form>
   );
 }
