@@ -48,7 +48,7 @@ export function createPlannerService(dataSource: DataSource, settings: SettingsS
       const manager = dataSource.manager;
       const now = clock.now();
       const shop = await settings.get();
-      const jobs = await manager.find(JobEntity, { where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['finished', 'cancelled'])) }, order: { dueDate: 'ASC' } });
+      const jobs = await manager.find(JobEntity, { where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['delivered', 'cancelled'])) }, order: { dueDate: 'ASC' } });
       const allParts = await manager.find(PartEntity, { where: { jobId: In(jobs.map((j) => j.id)) }, select: { id: true, jobId: true } });
       const steps = await stepsByJob(manager, allParts as PartEntity[]);
       const productIds = [...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : []));

@@ -268,7 +268,7 @@ test.describe('ready board', () => {
     await signIn(page, 'assembler', `/parts/${part.id}`);
     await expect(page.getByRole('heading', { name: part.label, level: 1 })).toBeVisible();
     const now = page.getByRole('region', { name: 'Now' });
-    await expect(now).toContainText('Next: denib P320, then coat 2 of 3');
+    await expect(now).toContainText('Next: denib P320, then coat 2 of 3 (Kestrel 2K PU Topcoat Satin)');
     await expect(now).toContainText(/Window for the next coat opens \d\d:\d\d \(in .+\)|Window open until/);
     await expect(now).toContainText(/Ready to handle from about .+; ready to pack from about .+\. An estimate: 2 coats to go/);
     const steps = page.getByRole('region', { name: 'Finish system' });
@@ -282,7 +282,7 @@ test.describe('ready board', () => {
 
     // The sprayer denibs it; the open page follows without a reload.
     await sprayer.post('/api/denibs', { spraySessionId: sessionId, partIds: [part.id], grit: 'P320', abradedAt: new Date().toISOString() });
-    await expect(now).toContainText('Next: coat 2 of 3', { timeout: 5_000 });
+    await expect(now).toContainText('Next: coat 2 of 3 (Kestrel 2K PU Topcoat Satin)', { timeout: 5_000 });
     await expect(now).toContainText(/Denibbed \d\d:\d\d/);
     await expect(steps.getByRole('listitem').nth(1)).toContainText('Done');
     await expect(log).toContainText('Denib P320');

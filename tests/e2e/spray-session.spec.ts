@@ -283,6 +283,7 @@ test.describe('between coats', () => {
     await expect(chosen).toContainText(labels.missed);
     await expect(chosen).toContainText(labels.due);
     await expect(chosen).not.toContainText(labels.ahead);
+    await expect(coatForm.getByRole('note')).toContainText(`Denib first: ${labels.missed}, ${labels.due} need their denib before this coat.`);
 
     // Both chosen doors need their denib first; record it from the session page.
     const denibs = page.getByRole('region', { name: 'Denib between coats' });
@@ -296,6 +297,7 @@ test.describe('between coats', () => {
     await denibs.getByRole('button', { name: 'Record denib' }).click();
     await expect(page.getByText('Denib P320 recorded on 2 parts.')).toBeVisible();
     await expect(denibs).toContainText('No planned part needs a denib right now.');
+    await expect(coatForm.getByRole('note')).toHaveCount(0);
     const denibCard = page.getByRole('article', { name: /^Denib \d+$/ });
     await expect(denibCard).toContainText('P320');
     await expect(denibCard).toContainText('by Mina Castell');
@@ -327,12 +329,13 @@ test.describe('between coats', () => {
 
     // The coat log shows the denib in line with the coats, as a row of its own kind.
     await page.goto(`/coat-log?job=${jobId}`);
-    const denibRow = page.getByRole('row', { name: /^Denib \d+$/ });
+    const [denib] = (await api.get<List<{ id: number }>>(`/api/denibs?spraySessionId=${sessionId}`)).items;
+    const denibRow = page.getByRole('row', { name: `Denib ${denib.id}`, exact: true });
     await expect(denibRow).toContainText('Denib P320 · 2 parts');
     await expect(denibRow).toContainText('Mina Castell');
     await expect(page.getByRole('row', { name: `Coat ${coat.id}` })).toContainText('Reason for the stops: Customer collecting tonight; parts warmed after');
     const rows = await page.getByRole('row').evaluateAll((all) => all.map((row) => row.getAttribute('aria-label') ?? ''));
-    const at = rows.findIndex((label) => label.startsWith('Denib'));
+    const at = rows.indexOf(`Denib ${denib.id}`);
     expect(rows[at - 1]).toBe(`Coat ${coat.id}`);
     await page.screenshot({ path: `${shotsDir}/coat-log-denib-1366.png`, fullPage: true });
     await api.context.dispose();

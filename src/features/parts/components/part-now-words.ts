@@ -29,7 +29,8 @@ export function partNowLines(history: PartHistory, now: Date, timeZone: string, 
     const [headline, ...details] = lines.filter((line): line is string => Boolean(line));
     return { headline: headline ?? 'Every coat is on', details };
   }
-  const next = `coat ${r.coatsDone + 1} of ${r.coatsTotal}`;
+  const nextStep = history.steps.filter((step) => step.kind === 'coat')[r.coatsDone];
+  const next = `coat ${r.coatsDone + 1} of ${r.coatsTotal}${nextStep?.kind === 'coat' ? ` (${nextStep.productName})` : ''}`;
   const grit = /^Abrade (.+)$/.exec(r.nextStep ?? '')?.[1];
   const headline = r.abradeRequired ? `Next: denib${grit ? ` ${grit}` : ''}, then ${next}` : `Next: ${next}`;
   const temp = formatQuantity(history.dryingTempC, 'temperature', units);

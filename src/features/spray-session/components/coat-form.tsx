@@ -16,6 +16,7 @@ import { useRecordCoat } from '../hooks/use-record-coat';
 import { useStopReasons } from '../hooks/use-stop-reasons';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import type { PickedPart } from '../utils/picked-part';
+import { nextCoatPosition, type FinishWork } from '../utils/session-plan';
 import { newIdempotencyKey } from '../utils/idempotency';
 import { repeatsStep } from '../utils/respray';
 import { CoatConditionFields, CoatMaterialFields } from './coat-material-fields';
@@ -35,6 +36,23 @@ interface CoatFormProps {
   queue: (body: PendingCoat['body'], label: string) => void;
   units: UnitSystem;
   timeZone: string;
+}
+
+/** The coat is the part's next one, and its finish system (or a closed window) asks for a denib before it. */
+function needsDenibFirst(part: PickedPart, position: number | undefined, work: FinishWork): boolean {
+  const ready = work.ready.get(part.id);
+  return Boolean(ready?.abradeRequired) && position !== undefined && position === nextCoatPosition(work.systemByJob.get(part.jobId), ready);
+}
+
+/** Parts chosen for this coat that need their denib first. */
+function DenibFirstNote({ parts }: { parts: PickedPart[] }) {
+  if (parts.length === 0) return null;
+  const names = parts.length <= 3 ? parts.map((p) => p.label).join(', ') : `${parts.length} of the chosen parts`;
+  return (
+    <p role="note" className="rounded-panel border-2 border-verdict-caution bg-white p-3 text-lg">
+      <span className="font-semibold">Denib first:</span> {names} {parts.length === 1 ? 'needs its' : 'need their'} denib before this coat. Record it under “Denib between coats”.
+    </p>
+  );
 }
 
 /** "Go" on a tablet keyboard after typing a reading must not record the coat; only the big button does. */
@@ -76,6 +94,7 @@ export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, rea
       <FormAlert message={formError} />
       <PartPicker chosen={values.partIds?.flatMap((id) => (id === undefined ? [] : [id])) ?? []} known={coat.known} planned={planned} onChange={coat.choose} error={formState.errors.partIds?.message} />
       {coat.mixedSystems && <p className="font-medium text-verdict-stop">These parts follow different finish systems: record them as separate coats.</p>}
+      <DenibFirstNote parts={coat.chosen.filter((part) => needsDenibFirst(part, step?.position, coat.work))} />
       <CoatMaterialFields control={control} register={register} errors={formState.errors} steps={coat.steps} product={product} mixes={coat.productMixes} units={units} timeZone={timeZone} />
       <div>
         <h3 className="mb-2 text-lg font-semibold">Conditions as sprayed</h3>

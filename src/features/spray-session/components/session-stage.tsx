@@ -72,10 +72,10 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
     return (
       <>
         {session.checklist && <RecordedChecklist checklist={session.checklist} timeZone={timeZone} />}
+        {denib}
         {roles.canRecord && (
           <CoatEntrySection session={session} plan={plan} sessionCoats={coats.data?.items ?? []} coatsPending={coats.isPending} queue={pendingCoats.add} units={units} timeZone={timeZone} />
         )}
-        {denib}
         {coatsList}
         {mixes}
         {roles.canRun && <StopSpraying sessionId={session.id} booth={booth} />}
