@@ -1,23 +1,28 @@
-import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
+import { In, IsNull, Not } from 'typeorm';
 import { autoPlan, type Plan, type PlanJob, type PlanStep } from '../../shared/finishing/auto-plan';
+import type { Plan as PlanDto } from '../../shared/schemas/planner';
 import type { FinishStep } from '../../shared/finishing/readiness';
-import { BoothEntity } from '../db/entities/booth.entity';
-import { everySite, type SiteScope } from '../lib/site-scope';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { ProductEntity } from '../db/entities/product.entity';
-import { RackEntity } from '../db/entities/rack.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import type { SiteData } from '../data/site-data';
+import type { JobEntity } from '../db/entities/job.entity';
+import type { PartEntity } from '../db/entities/part.entity';
+import type { ProductEntity } from '../db/entities/product.entity';
 import { systemClock, type Clock } from '../lib/clock';
 import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
-import { currentRackLoad, footprintM2 } from './rack-space';
+import { partsSeenBy } from './part-sites';
+import { currentRackLoad, footprintM2, rackCapacityM2 } from './rack-space';
 import type { SettingsService } from './settings';
 
+/** The job's parts still to finish that the scope may plan: not collected, and not placed at another site. */
+async function plannableParts(data: SiteData, job: JobEntity): Promise<PartEntity[]> {
+  const parts = await data.parts.findBy({ jobId: job.id, collectedAt: IsNull() });
+  const seen = await partsSeenBy(data, parts);
+  return parts.filter((p) => seen.has(p.id));
+}
 
 /** One job's remaining steps, planned from its least advanced part (the whole batch moves together). */
-async function planJobInput(manager: EntityManager, job: JobEntity, system: FinishStep[], products: Map<number, ProductEntity>): Promise<PlanJob | null> {
-  const parts = await manager.findBy(PartEntity, { jobId: job.id, collectedAt: IsNull() });
-  const coats = await currentCoatsByPart(manager, parts.map((p) => p.id));
+async function planJobInput(data: SiteData, job: JobEntity, system: FinishStep[], products: Map<number, ProductEntity>): Promise<PlanJob | null> {
+  const parts = await plannableParts(data, job);
+  const coats = await currentCoatsByPart(data.acrossSites, parts.map((p) => p.id));
   const open = parts.filter((p) => nextCoatStep(system, coats.get(p.id) ?? []) !== null);
   if (open.length === 0) return null;
   const lastDone = (p: PartEntity) => Math.max(-1, ...(coats.get(p.id) ?? []).map((c) => c.stepPosition ?? -1));
@@ -41,27 +46,36 @@ async function planJobInput(manager: EntityManager, job: JobEntity, system: Fini
   };
 }
 
-export function createPlannerService(dataSource: DataSource, settings: SettingsService, clock: Clock = systemClock) {
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+function toPlanDto(plan: Plan): PlanDto {
   return {
-    /** Plans into the booths and racks of the caller's site (every site for an admin who names none). */
-    async propose(jobIds: number[] | undefined, horizonDays: number, scope: SiteScope = everySite): Promise<Plan> {
-      const manager = dataSource.manager;
+    sessions: plan.sessions.map((s) => ({ ...s, start: s.start.toISOString(), end: s.end.toISOString() })),
+    jobs: plan.jobs.map((j) => ({ ...j, finishesAt: iso(j.finishesAt) })),
+  };
+}
+
+/** Jobs are the group's; the booths, racks and parts planned are those of the caller's site (every site for an admin who names none). */
+export function createPlannerService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
+  return {
+    /** A proposal only: nothing is booked until the lead accepts it. */
+    async propose(jobIds: number[] | undefined, horizonDays: number): Promise<PlanDto> {
       const now = clock.now();
       const shop = await settings.get();
-      const jobs = await manager.find(JobEntity, { where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['delivered', 'cancelled'])) }, order: { dueDate: 'ASC' } });
-      const allParts = await manager.find(PartEntity, { where: { jobId: In(jobs.map((j) => j.id)) }, select: { id: true, jobId: true } });
-      const steps = await stepsByJob(manager, allParts as PartEntity[]);
+      const jobs = await data.jobs.find({ where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['delivered', 'cancelled'])) }, order: { dueDate: 'ASC' } });
+      const allParts = await data.parts.find({ where: { jobId: In(jobs.map((j) => j.id)) }, select: { id: true, jobId: true } });
+      const steps = await stepsByJob(data, allParts);
       const productIds = [...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : []));
-      const products = new Map((await manager.findBy(ProductEntity, { id: In(productIds) })).map((p) => [p.id, p]));
-      const planJobs = (await Promise.all(jobs.map((job) => planJobInput(manager, job, steps.get(job.id) ?? [], products)))).filter((j): j is PlanJob => j !== null);
+      const products = new Map((await data.products.findBy({ id: In(productIds) })).map((p) => [p.id, p]));
+      const planJobs = (await Promise.all(jobs.map((job) => planJobInput(data, job, steps.get(job.id) ?? [], products)))).filter((j): j is PlanJob => j !== null);
       const horizonEnd = new Date(now.getTime() + horizonDays * 86_400_000).toISOString();
-      const [booths, racks, sessions, rackLoad] = await Promise.all([
-        manager.find(BoothEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId }, order: { id: 'ASC' } }),
-        manager.find(RackEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId } }),
-        manager.createQueryBuilder(SpraySessionEntity, 's').where("s.state <> 'cancelled'").andWhere('s.end_at > :now AND s.start_at < :end', { now: now.toISOString(), end: horizonEnd }).getMany(),
-        currentRackLoad(manager, now),
+      const [booths, rackCapacity, spraySessions, rackLoad] = await Promise.all([
+        data.booths.find({ order: { id: 'ASC' } }),
+        rackCapacityM2(data),
+        data.spraySessions.select('s').where("s.state <> 'cancelled'").andWhere('s.end_at > :now AND s.start_at < :end', { now: now.toISOString(), end: horizonEnd }).getMany(),
+        currentRackLoad(data, now),
       ]);
-      return autoPlan({
+      const plan = autoPlan({
         now,
         horizonDays,
         timeZone: shop.timezone,
@@ -70,11 +84,12 @@ export function createPlannerService(dataSource: DataSource, settings: SettingsS
         cleanDownMin: shop.cleanDownMin,
         abradeMin: 30,
         booths,
-        busy: sessions.map((s) => ({ boothId: s.boothId, start: new Date(s.startAt), end: new Date(s.endAt) })),
-        rackCapacityM2: racks.reduce((sum, r) => sum + r.shelves * r.shelfAreaM2, 0),
+        busy: spraySessions.map((s) => ({ boothId: s.boothId, start: new Date(s.startAt), end: new Date(s.endAt) })),
+        rackCapacityM2: rackCapacity,
         rackLoad,
         jobs: planJobs,
       });
+      return toPlanDto(plan);
     },
   };
 }

@@ -1,11 +1,13 @@
-import { In, IsNull, MoreThan, Not, type DataSource } from 'typeorm';
+import { In, IsNull, MoreThan, Not } from 'typeorm';
 import type { PartReadyTime } from '../../shared/finishing/job-ready-time';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { ReadyJob, ReadyPart, ReadyQuery } from '../../shared/schemas/ready';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { RackEntity } from '../db/entities/rack.entity';
+import type { SiteData } from '../data/site-data';
+import type { JobEntity } from '../db/entities/job.entity';
+import type { PartEntity } from '../db/entities/part.entity';
+import type { RackEntity } from '../db/entities/rack.entity';
 import { systemClock, type Clock } from '../lib/clock';
+import { partsSeenBy } from './part-sites';
 import type { PartFacts } from './readiness-inputs';
 import { readyJobsOf, readyTimesOf } from './ready-times';
 import type { SettingsService } from './settings';
@@ -24,7 +26,8 @@ export function describeStep(step: FinishStep | null): string | null {
 // a wrong "collected"); older ones are history, seen on their job. A shop's whole past must not load on every refresh.
 const boardLimit = 5000;
 
-async function boardParts(dataSource: DataSource, query: ReadyQuery, now: Date): Promise<PartEntity[]> {
+/** The board's parts the scope sees: on its site's racks, last coated there, or not yet begun. */
+async function boardParts(data: SiteData, query: ReadyQuery, now: Date): Promise<PartEntity[]> {
   const jobScope = query.jobId ? { jobId: query.jobId } : {};
   const since = new Date(now.getTime() - (query.collectedDays ?? 7) * dayMs).toISOString();
   const onRack = query.rackId ? { rackId: query.rackId } : {};
@@ -33,12 +36,14 @@ async function boardParts(dataSource: DataSource, query: ReadyQuery, now: Date):
   const collectedWhen = query.jobId ? Not(IsNull()) : MoreThan(since);
   const where = query.jobId && !query.rackId ? jobScope : [{ ...jobScope, ...onRack, collectedAt: IsNull() }, { ...jobScope, ...takenFrom, collectedAt: collectedWhen }];
   // Sorted here rather than in SQL: an ORDER BY job makes SQLite walk every part by job instead of using the collected-at index.
-  const parts = await dataSource.getRepository(PartEntity).find({ where });
-  return parts.sort((a, b) => a.jobId - b.jobId || a.id - b.id).slice(0, boardLimit);
+  const parts = await data.parts.find({ where });
+  const seen = await partsSeenBy(data, parts);
+  return parts.filter((p) => seen.has(p.id)).sort((a, b) => a.jobId - b.jobId || a.id - b.id).slice(0, boardLimit);
 }
 
 interface Lookups {
   jobs: Map<number, JobEntity>;
+  /** Only the racks the scope sees: a place on another site's rack is left out. */
   racks: Map<number, RackEntity>;
 }
 
@@ -84,27 +89,28 @@ function toReadyPart(part: PartEntity, fact: PartFacts, time: PartReadyTime, { j
   };
 }
 
-/** Parts with their readiness and expected times, in the shape the board and the part page read. */
-export async function readyPartsOf(dataSource: DataSource, parts: PartEntity[], tempC: number, now: Date): Promise<ReadyPart[]> {
-  const manager = dataSource.manager;
+/**
+ * Parts with their readiness and expected times, in the shape the board and the part page read.
+ * The times come from each part's whole history; a rack place is given only on the scope's racks.
+ */
+export async function readyPartsOf(data: SiteData, parts: PartEntity[], tempC: number, now: Date): Promise<ReadyPart[]> {
   const rackIds = [...new Set(parts.flatMap((p) => [p.rackId, p.collectedFromRackId]).filter((id): id is number => id !== null))];
-  const [{ facts, times }, jobs, racks] = await Promise.all([
-    readyTimesOf(manager, parts, tempC, now),
-    manager.findBy(JobEntity, { id: In([...new Set(parts.map((p) => p.jobId))]) }),
-    rackIds.length ? manager.findBy(RackEntity, { id: In(rackIds) }) : Promise.resolve([]),
-  ]);
+  const { facts, times } = await readyTimesOf(data, parts, tempC, now);
+  const jobs = await data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) });
+  const racks = rackIds.length ? await data.racks.findBy({ id: In(rackIds) }) : [];
   const lookups = { jobs: new Map(jobs.map((j) => [j.id, j])), racks: new Map(racks.map((r) => [r.id, r])) };
   return parts.map((part) => toReadyPart(part, facts.get(part.id)!, times.get(part.id)!, lookups));
 }
 
-export function createReadyService(dataSource: DataSource, settings: SettingsService, clock: Clock = systemClock) {
+/** The ready board: the parts the scope sees, with each of their jobs' expected ready times. */
+export function createReadyService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
   return {
     async list(query: ReadyQuery): Promise<{ items: ReadyPart[]; jobs: ReadyJob[] }> {
       const now = clock.now();
       const { planningDryingTempC } = await settings.get();
-      const parts = await boardParts(dataSource, query, now);
-      const items = await readyPartsOf(dataSource, parts, planningDryingTempC, now);
-      const jobs = await readyJobsOf(dataSource.manager, [...new Set(parts.map((p) => p.jobId))], planningDryingTempC, now);
+      const parts = await boardParts(data, query, now);
+      const items = await readyPartsOf(data, parts, planningDryingTempC, now);
+      const jobs = await readyJobsOf(data, [...new Set(parts.map((p) => p.jobId))], planningDryingTempC, now);
       return { items: query.state ? items.filter((i) => i.state === query.state) : items, jobs };
     },
   };

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { isoInstantSchema } from './common';
+import { idSchema, isoInstantSchema, pageFields } from './common';
+import { siteFilterFields } from './site';
 
 /**
  * A denib (or a scuff after a missed recoat window) between coats: which parts, with what grit,
@@ -28,12 +29,12 @@ export const denibSchema = z.object({
 export type Denib = z.infer<typeof denibSchema>;
 
 export const denibQuerySchema = z.object({
-  partId: z.coerce.number().int().positive().optional(),
-  spraySessionId: z.coerce.number().int().positive().optional(),
-  jobId: z.coerce.number().int().positive().optional(),
+  partId: idSchema.optional(),
+  spraySessionId: idSchema.optional(),
+  jobId: idSchema.optional(),
   from: isoInstantSchema.optional(),
   to: isoInstantSchema.optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(500).default(100),
+  ...pageFields(100, 500),
+  ...siteFilterFields,
 });
 export type DenibQuery = z.infer<typeof denibQuerySchema>;

@@ -1,12 +1,15 @@
 import { z } from 'zod';
 import { readinessStates } from '../finishing/readiness';
+import { idSchema, queryIntSchema } from './common';
+import { siteFilterFields } from './site';
 
 export const readyQuerySchema = z.object({
-  jobId: z.coerce.number().int().positive().optional(),
-  rackId: z.coerce.number().int().positive().optional(),
+  jobId: idSchema.optional(),
+  rackId: idSchema.optional(),
+  ...siteFilterFields,
   state: z.enum(readinessStates).optional(),
   /** Collected parts stay on the board this many days (a week unless asked); a job asked for by id shows all of its parts. */
-  collectedDays: z.coerce.number().int().min(0).max(90).default(7),
+  collectedDays: queryIntSchema(0, 90).default(7),
 });
 export type ReadyQuery = z.infer<typeof readyQuerySchema>;
 
