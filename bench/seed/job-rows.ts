@@ -34,7 +34,7 @@ export function jobRows(jobSeq: number, timeline: Timeline, refs: ShopRefs): { j
   const createdMs = Math.min(start.midnightMs - 14 * 86_400_000 + 9 * 3_600_000, timeline.now.getTime());
   const dueMs = start.midnightMs + (progress.coats + 4) * 86_400_000;
   const collectedMs = timeline.days[progress.collectedDay] ? timeline.days[progress.collectedDay].midnightMs + 15 * 3_600_000 : null;
-  const state = progress.collected ? 'finished' : progress.coatsDone > 0 ? 'in-finish' : 'open';
+  const state = progress.collected ? 'delivered' : progress.coatsDone > 0 ? 'in-finish' : 'open';
   const customer = customers[Math.floor(random() * customers.length)];
   const job: Row = [jobId, customer, `BN-${String(jobSeq + 1).padStart(5, '0')}`, iso(dueMs).slice(0, 10), system.id, '', '', '', state, iso(createdMs), iso(progress.collected && collectedMs ? collectedMs : createdMs)];
   const shape = shapes[(jobSeq % refs.systems.length) % shapes.length];

@@ -3,6 +3,7 @@ import { AuditEntryEntity } from '../db/entities/audit-entry.entity';
 import { BoothEntity } from '../db/entities/booth.entity';
 import { CoatPartEntity } from '../db/entities/coat-part.entity';
 import { CoatEntity } from '../db/entities/coat.entity';
+import { DenibEntity, DenibPartEntity } from '../db/entities/denib.entity';
 import { FinishStepEntity } from '../db/entities/finish-step.entity';
 import { FinishSystemEntity } from '../db/entities/finish-system.entity';
 import { JobEntity } from '../db/entities/job.entity';
@@ -22,7 +23,7 @@ import { UserEntity } from '../db/entities/user.entity';
 import { inTransaction } from '../db/transaction';
 import { everySite, type SiteScope } from '../lib/site-scope';
 import { ScopedRepository } from './scoped-repository';
-import { byBoothOrRack, byCoat, bySpraySession, byBooth, groupWide, ownSite, placedOnRack, siteOrGroup, type SiteRule } from './site-rules';
+import { byBoothOrRack, byCoat, byDenib, bySpraySession, byBooth, groupWide, ownSite, placedOnRack, siteOrGroup, type SiteRule } from './site-rules';
 
 export type Dialect = 'sqlite' | 'postgres';
 
@@ -47,6 +48,8 @@ export interface SiteData {
   readonly mixes: ScopedRepository<MixEntity>;
   readonly coats: ScopedRepository<CoatEntity>;
   readonly coatParts: ScopedRepository<CoatPartEntity>;
+  readonly denibs: ScopedRepository<DenibEntity>;
+  readonly denibParts: ScopedRepository<DenibPartEntity>;
   readonly readings: ScopedRepository<ReadingEntity>;
   readonly audit: ScopedRepository<AuditEntryEntity>;
   readonly parts: ScopedRepository<PartEntity>;
@@ -85,6 +88,8 @@ function build(dataSource: DataSource, manager: EntityManager, scope: SiteScope)
     mixes: repo(MixEntity, bySpraySession),
     coats: repo(CoatEntity, bySpraySession),
     coatParts: repo(CoatPartEntity, byCoat),
+    denibs: repo(DenibEntity, bySpraySession),
+    denibParts: repo(DenibPartEntity, byDenib),
     readings: repo(ReadingEntity, byBoothOrRack),
     audit: repo(AuditEntryEntity, siteOrGroup),
     parts: repo(PartEntity, placedOnRack),

@@ -2,7 +2,7 @@ import type { EntityManager } from 'typeorm';
 
 /**
  * How the rows of one table belong to a site. Booths, racks and users carry a site; spray
- * sessions belong to their booth's site; mixes, coats and planned items to their session's;
+ * sessions belong to their booth's site; mixes, coats, denibs and planned items to their session's;
  * readings to their booth's or rack's; audit entries to the site they were written about (or to
  * the whole group). Jobs, parts, products, finish systems and settings are group-wide, but a part
  * placed on a rack is placed on that rack's site.
@@ -20,6 +20,7 @@ const boothsOfSite = 'SELECT sb.id FROM booths sb WHERE sb.site_id = :scopeSiteI
 const racksOfSite = 'SELECT sr.id FROM racks sr WHERE sr.site_id = :scopeSiteId';
 const spraySessionsOfSite = `SELECT ss.id FROM spray_sessions ss WHERE ss.booth_id IN (${boothsOfSite})`;
 const coatsOfSite = `SELECT sc.id FROM coats sc WHERE sc.spray_session_id IN (${spraySessionsOfSite})`;
+const denibsOfSite = `SELECT sd.id FROM denibs sd WHERE sd.spray_session_id IN (${spraySessionsOfSite})`;
 
 /** The site of the row with this id, by one of the lookups below; none when there is no such row. */
 async function siteOf(manager: EntityManager, lookup: (id: string) => string, id: number | null | undefined): Promise<number[]> {
@@ -33,6 +34,7 @@ const boothSites = (id: string) => `SELECT site_id FROM booths WHERE id = ${id}`
 const rackSites = (id: string) => `SELECT site_id FROM racks WHERE id = ${id}`;
 const spraySessionSites = (id: string) => `SELECT b.site_id FROM spray_sessions s JOIN booths b ON b.id = s.booth_id WHERE s.id = ${id}`;
 const coatSites = (id: string) => `SELECT b.site_id FROM coats c JOIN spray_sessions s ON s.id = c.spray_session_id JOIN booths b ON b.id = s.booth_id WHERE c.id = ${id}`;
+const denibSites = (id: string) => `SELECT b.site_id FROM denibs d JOIN spray_sessions s ON s.id = d.spray_session_id JOIN booths b ON b.id = s.booth_id WHERE d.id = ${id}`;
 
 const own = (siteId: number | undefined): number[] => (siteId === undefined ? [] : [siteId]);
 
@@ -56,6 +58,11 @@ export const bySpraySession: SiteRule<{ spraySessionId: number }> = {
 export const byCoat: SiteRule<{ coatId: number }> = {
   where: (a) => `${a}.coat_id IN (${coatsOfSite})`,
   sitesOf: (row, manager) => siteOf(manager, coatSites, row.coatId),
+};
+
+export const byDenib: SiteRule<{ denibId: number }> = {
+  where: (a) => `${a}.denib_id IN (${denibsOfSite})`,
+  sitesOf: (row, manager) => siteOf(manager, denibSites, row.denibId),
 };
 
 export const byBoothOrRack: SiteRule<{ boothId: number | null; rackId: number | null }> = {

@@ -2,7 +2,7 @@ import { TZDate } from '@date-fns/tz';
 import { openSiteData } from '../data/site-data';
 import { everySite } from '../lib/site-scope';
 import { addDays, startOfWeek } from 'date-fns';
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import { dewPointC } from '../../shared/finishing/conditions';
 import { wetFilmTargetUm } from '../../shared/finishing/film';
 import { litresNeeded } from '../../shared/finishing/material';
@@ -10,6 +10,7 @@ import type { CreatePartInput } from '../../shared/schemas/part';
 import { systemActor, type Actor } from '../services/audit';
 import { createCoatService } from '../services/coats';
 import { EventBus } from '../services/events';
+import { refreshJobStates } from '../services/job-states';
 import { createJobService } from '../services/jobs';
 import { createPartService } from '../services/parts';
 import { createSettingsService } from '../services/settings';
@@ -193,4 +194,6 @@ export async function seedDemoHistory(dataSource: DataSource, options: { now?: D
   }
   const collectedAt = thisMonday.toISOString();
   await dataSource.getRepository(PartEntity).createQueryBuilder().update().set({ state: 'collected', collectedAt: new Date(collectedAt).toISOString() }).whereInIds(partIds).execute();
+  const jobIds = [...new Set((await dataSource.getRepository(PartEntity).findBy({ id: In(partIds) })).map((p) => p.jobId))];
+  await openSiteData(dataSource, everySite).transaction((tx) => refreshJobStates(tx, jobIds, systemActor, options.now ?? new Date()));
 }

@@ -14,6 +14,7 @@ import { StoredFileEntity } from './entities/stored-file.entity';
 import { UserEntity } from './entities/user.entity';
 import { CoatPartEntity } from './entities/coat-part.entity';
 import { CoatEntity } from './entities/coat.entity';
+import { DenibEntity, DenibPartEntity } from './entities/denib.entity';
 import { MixEntity } from './entities/mix.entity';
 import { NotificationEntity } from './entities/notification.entity';
 import { ReadingEntity } from './entities/reading.entity';
@@ -39,6 +40,8 @@ export const entities = [
   SpraySessionItemEntity,
   CoatEntity,
   CoatPartEntity,
+  DenibEntity,
+  DenibPartEntity,
   ReadingEntity,
   MixEntity,
   NotificationEntity,

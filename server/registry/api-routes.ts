@@ -3,6 +3,7 @@ import { auditRoutes } from '../routes/audit';
 import { authRoutes } from '../routes/auth';
 import { boothRoutes } from '../routes/booths';
 import { coatRoutes } from '../routes/coats';
+import { denibRoutes } from '../routes/denibs';
 import { eventRoutes } from '../routes/events';
 import { fileRoutes } from '../routes/files';
 import { finishSystemRoutes } from '../routes/finish-systems';
@@ -60,6 +61,7 @@ export const apiRoutes: ApiRoute[] = [
   ...spraySessionRoutes,
   ...plannerRoutes,
   ...coatRoutes,
+  ...denibRoutes,
   ...readyRoutes,
   ...readingRoutes,
   ...eventRoutes,

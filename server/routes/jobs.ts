@@ -10,7 +10,7 @@ export const jobRoutes: ApiRoute[] = [
   defineRoute({
     method: 'get',
     path: '/api/jobs',
-    summary: 'List jobs by due date (?q searches customer and reference)',
+    summary: 'List jobs by due date (?q searches customer and reference; ?state: a state, "active" for not delivered or cancelled, or the old "finished" for delivered)',
     access: 'jobs:read',
     sites: 'group',
     query: jobListQuerySchema,
@@ -40,7 +40,7 @@ export const jobRoutes: ApiRoute[] = [
   defineRoute({
     method: 'patch',
     path: '/api/jobs/:id',
-    summary: 'Change a job',
+    summary: 'Change a job; a state set here is recorded as set by a lead (the old value "finished" is read as "delivered")',
     access: 'jobs:write',
     sites: 'group',
     params: idParamsSchema,

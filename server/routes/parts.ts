@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { idParamsSchema, listSchema } from '../../shared/schemas/common';
+import { partHistorySchema } from '../../shared/schemas/part-history';
 import { createPartSchema, csvTemplateHeaders, importMappingSchema, importResultSchema, partListQuerySchema, partSchema, updatePartSchema } from '../../shared/schemas/part';
 import { answered, defineRoute, Reply, type ApiRoute } from '../registry/route';
 
@@ -94,6 +95,16 @@ export const partRoutes: ApiRoute[] = [
     params: idParamsSchema,
     response: { status: 200, schema: partEnvelope },
     handler: async ({ params }, { services }) => ({ part: await services.parts.get(params.id) }),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/parts/:id/history',
+    summary: 'What a part’s rack tag opens: where it stands, its next step and times, and the caller’s site’s coats and denibs on it',
+    access: 'ready:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: z.object({ history: partHistorySchema }) },
+    handler: async ({ params }, { services }) => ({ history: await services.partHistory.get(params.id) }),
   }),
   defineRoute({
     method: 'patch',

@@ -1,16 +1,16 @@
-import { z } from 'zod';
-import { readyPartSchema, readyQuerySchema } from '../../shared/schemas/ready';
+import { readyListSchema, readyQuerySchema } from '../../shared/schemas/ready';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 export const readyRoutes: ApiRoute[] = [
   defineRoute({
     method: 'get',
     path: '/api/ready',
-    summary: 'Part readiness: parts on the caller’s site’s racks, last coated there, or not yet begun (?jobId, ?rackId)',
+    summary:
+      'Part readiness with expected handle and pack times, and each job’s: parts on the caller’s site’s racks, last coated there, or not yet begun (?jobId, ?rackId, ?state, ?collectedDays)',
     access: 'ready:read',
     sites: 'site',
     query: readyQuerySchema,
-    response: { status: 200, schema: z.object({ items: z.array(readyPartSchema) }) },
-    handler: async ({ query }, { services }) => ({ items: await services.ready.list(query) }),
+    response: { status: 200, schema: readyListSchema },
+    handler: ({ query }, { services }) => services.ready.list(query),
   }),
 ];

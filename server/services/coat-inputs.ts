@@ -7,7 +7,7 @@ import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 import { AppError } from '../lib/app-error';
-import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
+import { currentCoatsByPart, denibTimesByPart, nextCoatStep, stepsByJob } from './part-coats';
 import { partsSeenBy } from './part-sites';
 
 export type CoatFields = Omit<Required<CreateCoatInput>, 'idempotencyKey'>;
@@ -59,19 +59,30 @@ async function mixWarnings(tx: SiteData, fields: CoatFields): Promise<CoatWarnin
   return [];
 }
 
-/** A denib planned between the last coat and this one gives a mechanical key: then only the opening counts. */
-function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: number | null) {
-  const abraded = latest.stepPosition !== null && stepPosition !== null && system.slice(latest.stepPosition + 1, stepPosition).some((s) => s.kind === 'abrade');
+/**
+ * A denib between the last coat and this one gives a mechanical key: then only the opening counts.
+ * It is on record when every part was denibbed since that coat; a planned abrade step counts too
+ * for a coat logged without its denib record.
+ */
+function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: number | null, denibbed: boolean) {
+  const planned = latest.stepPosition !== null && stepPosition !== null && system.slice(latest.stepPosition + 1, stepPosition).some((s) => s.kind === 'abrade');
+  const abraded = planned || denibbed;
   return { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt && !abraded ? new Date(latest.recoatClosesAt) : null };
+}
+
+function denibbedSince(denibs: Map<number, Date[]>, partIds: number[], since: string, until: Date): boolean {
+  const from = Date.parse(since);
+  return partIds.every((id) => (denibs.get(id) ?? []).some((at) => at.getTime() > from && at.getTime() <= until.getTime()));
 }
 
 /**
  * Works out the step, the target film, the previous window and every computed value of a coat.
- * The step and the previous window come from the parts' whole history, whichever site coated them.
+ * The step, the previous window and the denibs since come from the parts' whole history, whichever site did them.
  */
 export async function prepareCoat(tx: SiteData, fields: CoatFields, timeZone: string): Promise<{ record: CoatRecord; stepPosition: number | null; dryingTempC: number; siteId: number | null }> {
   const { product, parts, siteId } = await loadReferences(tx, fields);
-  const [coats, steps] = await Promise.all([currentCoatsByPart(tx.acrossSites, parts.map((p) => p.id)), stepsByJob(tx, parts)]);
+  const ids = parts.map((p) => p.id);
+  const [coats, steps, denibs] = await Promise.all([currentCoatsByPart(tx.acrossSites, ids), stepsByJob(tx, parts), denibTimesByPart(tx.acrossSites, ids)]);
   const first = parts[0];
   const system = steps.get(first.jobId) ?? [];
   const firstCoats = coats.get(first.id) ?? [];
@@ -92,7 +103,7 @@ export async function prepareCoat(tx: SiteData, fields: CoatFields, timeZone: st
     wetFilmUm: fields.wetFilmUm,
     targetDryFilmUm: step?.kind === 'coat' ? step.dryFilmUm : null,
     lotExpired: await lotExpired(tx, fields, timeZone),
-    previousWindow: latest ? previousWindow(latest, system, stepPosition) : null,
+    previousWindow: latest ? previousWindow(latest, system, stepPosition, denibbedSince(denibs, ids, latest.sprayedAt, sprayedAt)) : null,
     timeZone,
   });
   record.warnings.push(...(await mixWarnings(tx, fields)));

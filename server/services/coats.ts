@@ -1,4 +1,3 @@
-import { In } from 'typeorm';
 import { createCoatSchema, type Coat, type CoatQuery, type CorrectCoatInput, type CreateCoatInput } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { SiteData } from '../data/site-data';
@@ -10,7 +9,7 @@ import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session
 import { toCoatDtos } from './coat-dto';
 import { prepareCoat, type CoatFields } from './coat-inputs';
 import type { EventBus } from './events';
-import { readinessOf } from './ready';
+import { refreshPartStates } from './part-states';
 import type { SettingsService } from './settings';
 
 interface Version {
@@ -23,16 +22,6 @@ interface Version {
 function withAcknowledgements(warnings: StoredWarning[], fields: CoatFields): StoredWarning[] {
   const reasons = new Map(fields.acknowledgements.map((a) => [a.code, a.reason]));
   return warnings.map((w) => ({ code: w.code, message: w.message, acknowledgedReason: reasons.get(w.code) ?? null }));
-}
-
-/** Stores each part's state for lists and job progress; the ready board recomputes it live. */
-async function refreshPartStates(tx: SiteData, partIds: number[], now: Date): Promise<void> {
-  const parts = await tx.parts.findBy({ id: In(partIds) });
-  const readiness = await readinessOf(tx, parts, now);
-  for (const part of parts) {
-    const state = readiness.get(part.id)!.state;
-    if (state !== part.state) await tx.parts.update({ id: part.id }, { state, updatedAt: now.toISOString() });
-  }
 }
 
 /** The coat log: a site's coats are those of its booths' spray sessions. */
@@ -77,7 +66,7 @@ export function createCoatService(data: SiteData, settings: SettingsService, eve
       }),
     );
     await tx.coatParts.insert([...new Set(fields.partIds)].map((partId) => ({ coatId: coat.id, partId })));
-    await refreshPartStates(tx, fields.partIds, clock.now());
+    await refreshPartStates(tx, fields.partIds, actor, clock.now());
     return { coat, siteId };
   }
 

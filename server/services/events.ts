@@ -3,6 +3,7 @@ import { EventEmitter } from 'node:events';
 /** `siteId` says whose change it is: a stream passes it only to users who see that site (null: the whole group's). */
 export type ChangeEvent =
   | { type: 'coat.created'; id: number; partIds: number[]; siteId: number | null }
+  | { type: 'denib.created'; id: number; partIds: number[]; siteId: number | null }
   | { type: 'spray-session.changed'; id: number; siteId: number | null }
   | { type: 'part.changed'; id: number; siteId: number | null }
   | { type: 'reading.created'; id: number; boothId: number | null; rackId: number | null; siteId: number | null };

@@ -1,7 +1,10 @@
+import type { SelectQueryBuilder } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
-import { createJobSchema, type CreateJobInput, type Job, type JobListQuery, type UpdateJobInput } from '../../shared/schemas/job';
+import { jobStateAt } from '../../shared/finishing/job-state';
+import { createJobSchema, liveJobStates, type CreateJobInput, type Job, type JobListQuery, type JobState, type UpdateJobInput } from '../../shared/schemas/job';
 import type { SiteData } from '../data/site-data';
 import type { JobEntity } from '../db/entities/job.entity';
+import { jobStateWords } from './job-states';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
@@ -41,7 +44,7 @@ async function jobFigures(data: SiteData, ids: number[]): Promise<Map<number, Jo
   );
 }
 
-function toJobDto(job: JobEntity, figures: JobRow | undefined): Job {
+function toJobDto(job: JobEntity, figures: JobRow | undefined, now: Date): Job {
   return {
     id: job.id,
     customer: job.customer,
@@ -52,7 +55,9 @@ function toJobDto(job: JobEntity, figures: JobRow | undefined): Job {
     colour: job.colour,
     sheen: job.sheen,
     notes: job.notes,
-    state: job.state,
+    state: jobStateAt(job.state, job.readyAt, now),
+    stateSetBy: job.stateSetBy,
+    readyAt: job.readyAt,
     partCount: figures?.partCount ?? 0,
     partsThrough: figures?.partsThrough ?? 0,
     coatedAreaM2: Math.round((figures?.coatedAreaM2 ?? 0) * 1000) / 1000,
@@ -73,23 +78,33 @@ async function assertReferenceFree(tx: SiteData, reference: string | undefined, 
   if (existing && existing.id !== exceptId) throw new AppError('conflict', `Job reference ${reference} is already used`, { reference: 'Already used by another job' });
 }
 
+/** Filters by the state as shown: an in-finish job whose ready time has passed counts as ready. */
+function whereState(qb: SelectQueryBuilder<JobEntity>, state: NonNullable<JobListQuery['state']>, now: string): void {
+  const passed = 'j.ready_at IS NOT NULL AND j.ready_at <= :now';
+  if (state === 'active') qb.andWhere('j.state IN (:...live)', { live: liveJobStates });
+  else if (state === 'ready') qb.andWhere(`(j.state = 'ready' OR (j.state = 'in-finish' AND ${passed}))`, { now });
+  else if (state === 'in-finish') qb.andWhere(`j.state = 'in-finish' AND NOT (${passed})`, { now });
+  else qb.andWhere('j.state = :state', { state });
+}
+
 /** Jobs are the group's work orders: every site sees the same job book. */
 export function createJobService(data: SiteData, clock: Clock = systemClock) {
   async function getWith(tx: SiteData, id: number): Promise<Job> {
     const job = await tx.jobs.findOneBy({ id });
     if (!job) throw notFound('Job');
-    return toJobDto(job, (await jobFigures(tx, [id])).get(id));
+    return toJobDto(job, (await jobFigures(tx, [id])).get(id), clock.now());
   }
 
   return {
     async list(query: JobListQuery): Promise<List<Job>> {
       const qb = data.jobs.select('j');
       if (query.q) qb.andWhere('(LOWER(j.customer) LIKE :q OR LOWER(j.reference) LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
-      if (query.state) qb.andWhere('j.state = :state', { state: query.state });
+      const now = clock.now();
+      if (query.state) whereState(qb, query.state, now.toISOString());
       qb.orderBy('j.due_date', 'ASC').addOrderBy('j.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
       const figures = await jobFigures(data, rows.map((r) => r.id));
-      return { items: rows.map((r) => toJobDto(r, figures.get(r.id))), total, page: query.page, pageSize: query.pageSize };
+      return { items: rows.map((r) => toJobDto(r, figures.get(r.id), now)), total, page: query.page, pageSize: query.pageSize };
     },
 
     get: (id: number) => getWith(data, id),
@@ -100,7 +115,8 @@ export function createJobService(data: SiteData, clock: Clock = systemClock) {
       return data.transaction(async (tx) => {
         await assertFinishSystem(tx, fields.finishSystemId);
         await assertReferenceFree(tx, fields.reference);
-        const job = await tx.jobs.save(tx.jobs.create({ ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        const stateSetBy = fields.state === 'open' ? 'auto' : 'lead';
+        const job = await tx.jobs.save(tx.jobs.create({ ...fields, stateSetBy, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
         await recordAudit(tx, actor, { action: 'create', entity: 'job', entityId: job.id, summary: `Added job ${job.reference} for ${job.customer}` }, now);
         return getWith(tx, job.id);
       });
@@ -113,10 +129,14 @@ export function createJobService(data: SiteData, clock: Clock = systemClock) {
         if (!job) throw notFound('Job');
         await assertFinishSystem(tx, patch.finishSystemId);
         await assertReferenceFree(tx, patch.reference, id);
-        const changes = changedFields(job, patch);
-        Object.assign(job, patch, { updatedAt: now.toISOString() });
+        const changes = changedFields({ ...job, state: jobStateAt(job.state, job.readyAt, now) }, patch);
+        // A lead's state holds (delivered, cancelled) or stands until the next coat or collection moves the job on.
+        const byLead = patch.state !== undefined ? { stateSetBy: 'lead' as const, readyAt: null } : {};
+        Object.assign(job, patch, byLead, { updatedAt: now.toISOString() });
         await tx.jobs.save(job);
-        await recordAudit(tx, actor, { action: 'update', entity: 'job', entityId: id, summary: `Changed job ${job.reference}`, changes }, now);
+        const stateChange = changes?.state as { from: JobState; to: JobState } | undefined;
+        const summary = stateChange ? `Set job ${job.reference} to ${jobStateWords[stateChange.to]} (was ${jobStateWords[stateChange.from]})` : `Changed job ${job.reference}`;
+        await recordAudit(tx, actor, { action: 'update', entity: 'job', entityId: id, summary, changes }, now);
         return getWith(tx, id);
       });
     },

@@ -29,6 +29,25 @@ export async function currentCoatsByPart(data: SiteData, partIds: number[]): Pro
   return byPart;
 }
 
+/**
+ * When each part was denibbed or scuffed, from the denib records the data's scope sees, by part id
+ * (oldest first). For a part's readiness pass `data.acrossSites`, as for its coats.
+ */
+export async function denibTimesByPart(data: SiteData, partIds: number[]): Promise<Map<number, Date[]>> {
+  const byPart = new Map<number, Date[]>(partIds.map((id) => [id, []]));
+  if (partIds.length === 0) return byPart;
+  const rows = await data.denibParts
+    .select('dp')
+    .innerJoin('denibs', 'd', 'd.id = dp.denib_id')
+    .select('dp.part_id', 'partId')
+    .addSelect('d.abraded_at', 'abradedAt')
+    .where('dp.part_id IN (:...partIds)', { partIds })
+    .orderBy('d.abraded_at', 'ASC')
+    .getRawMany<{ partId: number | string; abradedAt: string }>();
+  for (const row of rows) byPart.get(Number(row.partId))?.push(new Date(row.abradedAt));
+  return byPart;
+}
+
 /** Each job's finish-system steps, in order, for the parts given. */
 export async function stepsByJob(data: SiteData, parts: Pick<PartEntity, 'jobId'>[]): Promise<Map<number, FinishStep[]>> {
   const jobIds = [...new Set(parts.map((p) => p.jobId))];

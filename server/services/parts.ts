@@ -10,8 +10,9 @@ import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
+import { refreshJobStates } from './job-states';
 import { partSeenBy } from './part-sites';
-import { readinessOf } from './ready';
+import { refreshPartStates } from './part-states';
 
 // Unambiguous characters only: a tag may be typed in by hand when a camera cannot read it.
 const tagAlphabet = 'ABCDEFGHJKMNPQRSTUVWXYZ23456789';
@@ -72,18 +73,27 @@ async function partToChange(tx: SiteData, id: number): Promise<PartEntity> {
   return part;
 }
 
+/** Off its rack, remembering where it was taken from; collected twice, where the first collection says. */
+function collectedFields(part: PartEntity, now: Date): Partial<PartEntity> {
+  const from = part.collectedAt ? { collectedFromRackId: part.collectedFromRackId, collectedFromShelf: part.collectedFromShelf } : { collectedFromRackId: part.rackId, collectedFromShelf: part.shelf };
+  return { collectedAt: now.toISOString(), ...from, rackId: null, shelf: null };
+}
+
 function newPartEntity(tx: SiteData, jobId: number, fields: ReturnType<typeof createPartSchema.parse>, now: string): PartEntity {
   return tx.parts.create({ ...fields, jobId, coatedAreaM2: coatedAreaM2(fields), tag: newTag(), state: 'waiting', createdAt: now, updatedAt: now });
 }
 
-/** Where the part stood before its last collection, from the trail; nowhere if it has a place again or the rack is gone. */
+/** Where the part stood before its last collection (recorded on it, or for older ones in the trail); nowhere if it has a place again or the rack is gone. */
 async function placeBeforeCollection(tx: SiteData, part: PartEntity): Promise<{ rackId: number | null; shelf: number | null }> {
   if (part.rackId !== null || part.collectedAt === null) return { rackId: part.rackId, shelf: part.shelf };
-  const entry = await tx.audit.findOne({ where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
-  const changes = (entry?.changes ?? {}) as { rackId?: { from?: number | null }; shelf?: { from?: number | null } };
-  const rackId = changes.rackId?.from ?? null;
-  if (rackId === null || !(await tx.racks.existsBy({ id: rackId }))) return { rackId: null, shelf: null };
-  return { rackId, shelf: changes.shelf?.from ?? null };
+  let place = { rackId: part.collectedFromRackId, shelf: part.collectedFromShelf };
+  if (place.rackId === null) {
+    const entry = await tx.audit.findOne({ where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
+    const changes = (entry?.changes ?? {}) as { rackId?: { from?: number | null }; shelf?: { from?: number | null } };
+    place = { rackId: changes.rackId?.from ?? null, shelf: changes.shelf?.from ?? null };
+  }
+  if (place.rackId === null || !(await tx.racks.existsBy({ id: place.rackId }))) return { rackId: null, shelf: null };
+  return place;
 }
 
 export function createPartService(data: SiteData, clock: Clock = systemClock, events?: EventBus) {
@@ -132,6 +142,7 @@ export function createPartService(data: SiteData, clock: Clock = systemClock, ev
         const part = await tx.parts.save(newPartEntity(tx, jobId, fields, now.toISOString()));
         const summary = `Added part ${part.label} × ${part.quantity} to job ${job.reference}`;
         await recordAudit(tx, actor, { action: 'create', entity: 'part', entityId: part.id, summary, siteId: rack?.siteId }, now);
+        await refreshJobStates(tx, [jobId], actor, now);
         return dto(tx, part);
       });
     },
@@ -145,6 +156,7 @@ export function createPartService(data: SiteData, clock: Clock = systemClock, ev
         for (const row of rows) await assertRackPlace(tx, row.rackId, row.shelf);
         const stored = await tx.parts.saveMany(rows.map((row) => newPartEntity(tx, jobId, row, now.toISOString())), { chunk: 200 });
         await recordAudit(tx, actor, { action: 'create', entity: 'part', entityId: null, summary: `${how} ${stored.length} parts to job ${job.reference}` }, now);
+        await refreshJobStates(tx, [jobId], actor, now);
         const racks = await racksFor(tx, stored);
         return stored.map((p) => toPartDto(p, racks));
       });
@@ -161,9 +173,10 @@ export function createPartService(data: SiteData, clock: Clock = systemClock, ev
           const part = await partToChange(tx, id);
           const place = collected ? { rackId: part.rackId, shelf: part.shelf } : await placeBeforeCollection(tx, part);
           const rack = place.rackId === null ? undefined : (await racksFor(tx, [place])).get(place.rackId);
-          Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null, ...place }, { updatedAt: now.toISOString() });
-          part.state = (await readinessOf(tx, [part], now)).get(part.id)!.state;
+          Object.assign(part, collected ? collectedFields(part, now) : { collectedAt: null, collectedFromRackId: null, collectedFromShelf: null, ...place }, { updatedAt: now.toISOString() });
           await tx.parts.save(part);
+          await refreshPartStates(tx, [part.id], actor, now);
+          part.state = (await tx.parts.findOneBy({ id }))?.state ?? part.state;
           const where = rack ? `${collected ? ' from' : ' on'} ${rack.name}${place.shelf ? ` shelf ${place.shelf}` : ''}` : '';
           const summary = collected ? `Collected part ${part.label}${where}` : `Put part ${part.label} back as not collected${where}`;
           const changes = collected ? { rackId: { from: place.rackId, to: null }, shelf: { from: place.shelf, to: null } } : undefined;

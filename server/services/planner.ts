@@ -62,7 +62,7 @@ export function createPlannerService(data: SiteData, settings: SettingsService, 
     async propose(jobIds: number[] | undefined, horizonDays: number): Promise<PlanDto> {
       const now = clock.now();
       const shop = await settings.get();
-      const jobs = await data.jobs.find({ where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['finished', 'cancelled'])) }, order: { dueDate: 'ASC' } });
+      const jobs = await data.jobs.find({ where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['delivered', 'cancelled'])) }, order: { dueDate: 'ASC' } });
       const allParts = await data.parts.find({ where: { jobId: In(jobs.map((j) => j.id)) }, select: { id: true, jobId: true } });
       const steps = await stepsByJob(data, allParts);
       const productIds = [...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : []));

@@ -1,87 +1,117 @@
-import { In, IsNull, MoreThan } from 'typeorm';
-import { partReadiness, type FinishStep, type PartReadiness } from '../../shared/finishing/readiness';
-import type { ReadyPart } from '../../shared/schemas/ready';
+import { In, IsNull, MoreThan, Not } from 'typeorm';
+import type { PartReadyTime } from '../../shared/finishing/job-ready-time';
+import type { FinishStep } from '../../shared/finishing/readiness';
+import type { ReadyJob, ReadyPart, ReadyQuery } from '../../shared/schemas/ready';
 import type { SiteData } from '../data/site-data';
+import type { JobEntity } from '../db/entities/job.entity';
 import type { PartEntity } from '../db/entities/part.entity';
+import type { RackEntity } from '../db/entities/rack.entity';
 import { systemClock, type Clock } from '../lib/clock';
-import { currentCoatsByPart, stepsByJob, toPartCoats } from './part-coats';
 import { partsSeenBy } from './part-sites';
+import type { PartFacts } from './readiness-inputs';
+import { readyJobsOf, readyTimesOf } from './ready-times';
+import type { SettingsService } from './settings';
+
+export { readinessOf } from './readiness-inputs';
 
 const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+const dayMs = 86_400_000;
 
-function describeStep(step: FinishStep | null): string | null {
+export function describeStep(step: FinishStep | null): string | null {
   if (!step) return null;
   return step.kind === 'abrade' ? `Abrade ${step.grit}` : `Coat at ${step.dryFilmUm} µm dry`;
 }
 
-/**
- * Readiness of each part at `now`, from its current coats and its job's finish system. It is a
- * fact about the part, so every coat counts, whichever site sprayed it; callers show it only for
- * parts their scope sees.
- */
-export async function readinessOf(data: SiteData, parts: PartEntity[], now: Date): Promise<Map<number, PartReadiness>> {
-  const whole = data.acrossSites;
-  const [coats, steps] = await Promise.all([currentCoatsByPart(whole, parts.map((p) => p.id)), stepsByJob(whole, parts)]);
-  return new Map(
-    parts.map((part) => {
-      const system = steps.get(part.jobId) ?? [];
-      const collectedAt = part.collectedAt ? new Date(part.collectedAt) : null;
-      return [part.id, partReadiness({ steps: system, coats: toPartCoats(coats.get(part.id) ?? [], system), collectedAt, now })];
-    }),
-  );
-}
-
-// Collected parts stay on the board for a week (to show them, and to undo a wrong "collected");
-// older ones are history, seen on their job. A shop's whole past must not load on every refresh.
-const collectedStaysOnBoardMs = 7 * 86_400_000;
+// Collected parts stay on the board for a week unless asked for longer (to show them, and to undo
+// a wrong "collected"); older ones are history, seen on their job. A shop's whole past must not load on every refresh.
 const boardLimit = 5000;
 
-async function boardParts(data: SiteData, query: { jobId?: number; rackId?: number }, now: Date): Promise<PartEntity[]> {
-  const scope = { ...(query.jobId ? { jobId: query.jobId } : {}), ...(query.rackId ? { rackId: query.rackId } : {}) };
-  const since = new Date(now.getTime() - collectedStaysOnBoardMs).toISOString();
-  const where = query.jobId ? scope : [{ ...scope, collectedAt: IsNull() }, { ...scope, collectedAt: MoreThan(since) }];
+/** The board's parts the scope sees: on its site's racks, last coated there, or not yet begun. */
+async function boardParts(data: SiteData, query: ReadyQuery, now: Date): Promise<PartEntity[]> {
+  const jobScope = query.jobId ? { jobId: query.jobId } : {};
+  const since = new Date(now.getTime() - (query.collectedDays ?? 7) * dayMs).toISOString();
+  const onRack = query.rackId ? { rackId: query.rackId } : {};
+  // A collected part has left its rack; it still belongs to the rack it was taken from.
+  const takenFrom = query.rackId ? { collectedFromRackId: query.rackId } : {};
+  const collectedWhen = query.jobId ? Not(IsNull()) : MoreThan(since);
+  const where = query.jobId && !query.rackId ? jobScope : [{ ...jobScope, ...onRack, collectedAt: IsNull() }, { ...jobScope, ...takenFrom, collectedAt: collectedWhen }];
   // Sorted here rather than in SQL: an ORDER BY job makes SQLite walk every part by job instead of using the collected-at index.
   const parts = await data.parts.find({ where });
   const seen = await partsSeenBy(data, parts);
   return parts.filter((p) => seen.has(p.id)).sort((a, b) => a.jobId - b.jobId || a.id - b.id).slice(0, boardLimit);
 }
 
-/** The ready board: the parts the scope sees (on its site's racks, or last coated there, or not yet begun). */
-export function createReadyService(data: SiteData, clock: Clock = systemClock) {
+interface Lookups {
+  jobs: Map<number, JobEntity>;
+  /** Only the racks the scope sees: a place on another site's rack is left out. */
+  racks: Map<number, RackEntity>;
+}
+
+function place(racks: Map<number, RackEntity>, rackId: number | null, shelf: number | null) {
+  const rack = rackId ? racks.get(rackId) : undefined;
+  return rack ? { id: rack.id, name: rack.name, shelf } : null;
+}
+
+/** The latest denib since the part's last coat (or any, before its first coat). */
+function denibSinceLastCoat(fact: PartFacts): string | null {
+  const lastCoat = Math.max(0, ...fact.input.coats.map((c) => c.sprayedAt.getTime()));
+  const after = (fact.input.abradedAt ?? []).filter((at) => at.getTime() > lastCoat);
+  return iso(after.at(-1));
+}
+
+function toReadyPart(part: PartEntity, fact: PartFacts, time: PartReadyTime, { jobs, racks }: Lookups): ReadyPart {
+  const r = time.readiness;
+  const job = jobs.get(part.jobId);
   return {
-    async list(query: { jobId?: number; rackId?: number; state?: string }): Promise<ReadyPart[]> {
+    id: part.id,
+    label: part.label,
+    jobId: part.jobId,
+    jobReference: job?.reference ?? '',
+    customer: job?.customer ?? '',
+    state: r.state,
+    coatsDone: r.coatsDone,
+    coatsTotal: r.coatsTotal,
+    nextStep: describeStep(r.nextStep),
+    nextWindowOpensAt: iso(r.nextWindow?.opensAt),
+    nextWindowClosesAt: iso(r.nextWindow?.closesAt),
+    abradeRequired: r.abradeRequired,
+    handleAt: iso(r.handleAt),
+    packAt: iso(r.packAt),
+    fullCureAt: iso(r.fullCureAt),
+    rack: place(racks, part.rackId, part.shelf),
+    coatsRemaining: time.coatsRemaining,
+    nextCoatAt: iso(time.nextCoatAt),
+    expectedHandleAt: iso(time.handleAt),
+    expectedPackAt: iso(time.packAt),
+    denibbedAt: denibSinceLastCoat(fact),
+    collectedAt: part.collectedAt,
+    collectedFrom: part.collectedAt ? place(racks, part.collectedFromRackId, part.collectedFromShelf) : null,
+  };
+}
+
+/**
+ * Parts with their readiness and expected times, in the shape the board and the part page read.
+ * The times come from each part's whole history; a rack place is given only on the scope's racks.
+ */
+export async function readyPartsOf(data: SiteData, parts: PartEntity[], tempC: number, now: Date): Promise<ReadyPart[]> {
+  const rackIds = [...new Set(parts.flatMap((p) => [p.rackId, p.collectedFromRackId]).filter((id): id is number => id !== null))];
+  const { facts, times } = await readyTimesOf(data, parts, tempC, now);
+  const jobs = await data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) });
+  const racks = rackIds.length ? await data.racks.findBy({ id: In(rackIds) }) : [];
+  const lookups = { jobs: new Map(jobs.map((j) => [j.id, j])), racks: new Map(racks.map((r) => [r.id, r])) };
+  return parts.map((part) => toReadyPart(part, facts.get(part.id)!, times.get(part.id)!, lookups));
+}
+
+/** The ready board: the parts the scope sees, with each of their jobs' expected ready times. */
+export function createReadyService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
+  return {
+    async list(query: ReadyQuery): Promise<{ items: ReadyPart[]; jobs: ReadyJob[] }> {
       const now = clock.now();
+      const { planningDryingTempC } = await settings.get();
       const parts = await boardParts(data, query, now);
-      const [readiness, jobs, racks] = await Promise.all([
-        readinessOf(data, parts, now),
-        data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }),
-        data.racks.findBy({ id: In([...new Set(parts.map((p) => p.rackId).filter((id): id is number => id !== null))]) }),
-      ]);
-      const jobById = new Map(jobs.map((j) => [j.id, j]));
-      const rackById = new Map(racks.map((r) => [r.id, r]));
-      const items = parts.map((part): ReadyPart => {
-        const r = readiness.get(part.id)!;
-        const rack = part.rackId ? rackById.get(part.rackId) : undefined;
-        return {
-          id: part.id,
-          label: part.label,
-          jobId: part.jobId,
-          jobReference: jobById.get(part.jobId)?.reference ?? '',
-          customer: jobById.get(part.jobId)?.customer ?? '',
-          state: r.state,
-          coatsDone: r.coatsDone,
-          coatsTotal: r.coatsTotal,
-          nextStep: describeStep(r.nextStep),
-          nextWindowOpensAt: iso(r.nextWindow?.opensAt),
-          nextWindowClosesAt: iso(r.nextWindow?.closesAt),
-          abradeRequired: r.abradeRequired,
-          handleAt: iso(r.handleAt),
-          packAt: iso(r.packAt),
-          fullCureAt: iso(r.fullCureAt),
-          rack: rack ? { id: rack.id, name: rack.name, shelf: part.shelf } : null,
-        };
-      });
-      return query.state ? items.filter((i) => i.state === query.state) : items;
+      const items = await readyPartsOf(data, parts, planningDryingTempC, now);
+      const jobs = await readyJobsOf(data, [...new Set(parts.map((p) => p.jobId))], planningDryingTempC, now);
+      return { items: query.state ? items.filter((i) => i.state === query.state) : items, jobs };
     },
   };
 }

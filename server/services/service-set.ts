@@ -6,6 +6,7 @@ import { listAudit } from './audit';
 import { createChangeFeed, type ChangeFeed } from './change-feed';
 import { createBoothService, type BoothService } from './booths';
 import { createCoatService, type CoatService } from './coats';
+import { createDenibService, type DenibService } from './denibs';
 import { createEstimateService, type EstimateService } from './estimates';
 import type { EventBus } from './events';
 import type { FileStorage } from './file-storage';
@@ -14,6 +15,7 @@ import { createFinishSystemService, type FinishSystemService } from './finish-sy
 import { createJobService, type JobService } from './jobs';
 import { createMixService, type MixService } from './mixes';
 import { createNotificationReader, type NotificationReader } from './notification-reader';
+import { createPartHistoryService, type PartHistoryService } from './part-history';
 import { createPartImportService, type PartImportService } from './part-import';
 import { createPartService, type PartService } from './parts';
 import { createPlannerService, type PlannerService } from './planner';
@@ -50,12 +52,14 @@ export interface ServiceSet {
   jobs: JobService;
   parts: PartService;
   partImport: PartImportService;
+  partHistory: PartHistoryService;
   estimates: EstimateService;
   spraySessions: SpraySessionService;
   cautions: SpraySessionCautionService;
   sprayers: SprayerService;
   mixes: MixService;
   coats: CoatService;
+  denibs: DenibService;
   planner: PlannerService;
   ready: ReadyService;
   readings: ReadingService;
@@ -100,14 +104,16 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
     jobs: () => createJobService(data, clock),
     parts: () => createPartService(data, clock, events),
     partImport: () => createPartImportService(data, set.parts),
+    partHistory: () => createPartHistoryService(data, set.settings, clock),
     estimates: () => createEstimateService(data),
     spraySessions: () => createSpraySessionService(data, set.settings, events, clock),
     cautions: () => createSpraySessionCautionService(data),
     sprayers: () => createSprayerService(data),
     mixes: () => createMixService(data, clock),
     coats: () => createCoatService(data, set.settings, events, clock),
+    denibs: () => createDenibService(data, events, clock),
     planner: () => createPlannerService(data, set.settings, clock),
-    ready: () => createReadyService(data, clock),
+    ready: () => createReadyService(data, set.settings, clock),
     readings: () => createReadingService(data, events, clock),
     reports: () => createReportService(data, set.settings, set.estimates),
     audit: () => ({ list: (query) => listAudit(data, query) }),

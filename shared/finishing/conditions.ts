@@ -76,15 +76,35 @@ export function assessConditions(input: ConditionsInput): ConditionsAssessment {
   return { dewPointC: dewPoint, surfaceMarginC, verdict: worstVerdict(checks.map((c) => c.verdict)), checks };
 }
 
+/**
+ * Where the surface stands against the dew point, in words: "4.6 °C above the dew point",
+ * "2.1 °C below the dew point" or "at the dew point". A negative margin is never "above".
+ */
+export function surfaceMarginWords(marginC: number, units: UnitSystem = 'metric'): string {
+  const size = formatQuantity(Math.abs(marginC), 'temperatureDifference', units);
+  // Judged on the figure as shown, so "0.0 °C below" can never appear.
+  if (Number.parseFloat(size) === 0) return 'at the dew point';
+  return `${size} ${marginC < 0 ? 'below' : 'above'} the dew point`;
+}
+
 function dewPointCheck(marginC: number, dewPoint: number, units: UnitSystem): ConditionCheck {
   const margin = formatQuantity(marginC, 'temperatureDifference', units);
   const dew = formatQuantity(dewPoint, 'temperature', units);
   const needed = formatQuantity(conditionMargins.stopBelowC, 'temperatureDifference', units);
+  const fix = `Warm the parts or dry the air until the surface is at least ${needed} above the dew point.`;
+  const where = surfaceMarginWords(marginC, units);
+  if (!where.endsWith('above the dew point')) {
+    return {
+      code: 'dew-point-margin',
+      verdict: 'stop',
+      message: `The surface is ${where} (${dew}): moisture will condense on the part and spoil the finish. ${fix}`,
+    };
+  }
   if (marginC < conditionMargins.stopBelowC) {
     return {
       code: 'dew-point-margin',
       verdict: 'stop',
-      message: `The surface is only ${margin} above the dew point (${dew}). Moisture can condense on the part and spoil the finish. Warm the parts or dry the air until the margin is at least ${needed}.`,
+      message: `The surface is only ${margin} above the dew point (${dew}). Moisture can condense on the part and spoil the finish. ${fix}`,
     };
   }
   if (marginC < conditionMargins.goFromC) {

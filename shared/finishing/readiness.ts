@@ -21,7 +21,7 @@ export type ReadinessState = (typeof readinessStates)[number];
 export type ReadinessInput = {
   steps: FinishStep[];
   coats: PartCoat[];
-  /** When the part was denibbed or scuffed; only an abrade after the latest coat counts. */
+  /** When the part was denibbed or scuffed (denib records); only an abrade after the latest coat counts, or any before the first. */
   abradedAt?: Date[];
   collectedAt?: Date | null;
   now: Date;
@@ -66,17 +66,24 @@ export function partReadiness(input: ReadinessInput): PartReadiness {
     packAt: last?.packAt ?? null,
     fullCureAt: last?.fullCureAt ?? null,
   };
-  if (!last) {
-    const first = steps[0] ?? null;
-    const move = { nextStep: first, nextStepIndex: first ? 0 : null, nextWindow: null, abradeRequired: first?.kind === 'abrade', recoatWindowMissed: false };
-    return { ...shared, ...move, state: collected ? 'collected' : 'waiting' };
-  }
+  if (!last) return { ...shared, ...beforeFirstCoat(input), state: collected ? 'collected' : 'waiting' };
   const nextCoat = coatSteps.find((index) => index > last.stepIndex && !doneSteps.has(index));
   if (nextCoat === undefined) {
     const move = { nextStep: null, nextStepIndex: null, nextWindow: null, abradeRequired: false, recoatWindowMissed: false };
     return { ...shared, ...move, state: collected ? 'collected' : dryingState(last, now) };
   }
   return { ...shared, ...betweenCoats(input, last, nextCoat), state: collected ? 'collected' : 'in-finish' };
+}
+
+/** A system that starts by sanding the bare part asks for that first, until a sanding is on record. */
+function beforeFirstCoat({ steps, abradedAt = [], now }: ReadinessInput): NextMove {
+  const first = steps[0] ?? null;
+  const sanded = abradedAt.some((at) => at.getTime() <= now.getTime());
+  const firstCoat = steps.findIndex((step) => step.kind === 'coat');
+  if (first?.kind === 'abrade' && sanded && firstCoat >= 0) {
+    return { nextStep: steps[firstCoat], nextStepIndex: firstCoat, nextWindow: null, abradeRequired: false, recoatWindowMissed: false };
+  }
+  return { nextStep: first, nextStepIndex: first ? 0 : null, nextWindow: null, abradeRequired: first?.kind === 'abrade', recoatWindowMissed: false };
 }
 
 function betweenCoats({ steps, abradedAt = [], now }: ReadinessInput, last: PartCoat, nextCoat: number): NextMove {
@@ -87,8 +94,8 @@ function betweenCoats({ steps, abradedAt = [], now }: ReadinessInput, last: Part
     .at(-1);
   if (abraded) {
     // A sanded surface gives the next coat a mechanical key, so no closing time applies any more.
-    const opensAt = abraded.getTime() > last.recoatOpensAt.getTime() ? abraded : last.recoatOpensAt;
-    return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: { opensAt, closesAt: null }, abradeRequired: false, recoatWindowMissed: missed };
+    // The film must still be ready to recoat: the opening stays the coat's own (sanding is already past).
+    return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: { opensAt: last.recoatOpensAt, closesAt: null }, abradeRequired: false, recoatWindowMissed: missed };
   }
   const window = missed ? null : { opensAt: last.recoatOpensAt, closesAt: last.recoatClosesAt };
   const plannedAbrade = steps.findIndex((step, index) => index > last.stepIndex && index < nextCoat && step.kind === 'abrade');
@@ -111,7 +118,7 @@ function dryingState(last: PartCoat, now: Date): ReadinessState {
 }
 
 /** The coat furthest along the finish system; a re-spray of the same step counts from its latest spraying. */
-function latestCoat(coats: PartCoat[]): PartCoat | undefined {
+export function latestCoat(coats: PartCoat[]): PartCoat | undefined {
   return coats.reduce<PartCoat | undefined>((latest, coat) => {
     if (!latest || coat.stepIndex > latest.stepIndex) return coat;
     if (coat.stepIndex === latest.stepIndex && coat.sprayedAt.getTime() > latest.sprayedAt.getTime()) return coat;

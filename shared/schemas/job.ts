@@ -1,11 +1,30 @@
 import { z } from 'zod';
-import { requiredTextSchema, optionalTextSchema } from './common';
 import { sprayMethodIds } from '../finishing/material';
-import { pageFields, queryNumberSchema } from './common';
+import { optionalTextSchema, pageFields, queryNumberSchema, requiredTextSchema } from './common';
 
-export const jobStates = ['open', 'in-finish', 'finished', 'cancelled'] as const;
+/**
+ * A job's life cycle: open → in finish (its first coat is on) → ready (every part can be handled)
+ * → delivered (every part collected; closed). Set by the server as coats and collections are
+ * recorded; a lead may set it too. Cancelled only by a lead.
+ */
+export const jobStates = ['open', 'in-finish', 'ready', 'delivered', 'cancelled'] as const;
 export const jobStateSchema = z.enum(jobStates, { error: 'Unknown job state' });
 export type JobState = z.infer<typeof jobStateSchema>;
+
+/**
+ * Older clients knew "finished" for a job that was done and gone; it is read as "delivered"
+ * wherever a state is sent (create, change, list filter). Answers never carry it.
+ */
+export const legacyJobStates = { finished: 'delivered' } as const satisfies Record<string, JobState>;
+const acceptedStates = [...jobStates, ...(Object.keys(legacyJobStates) as (keyof typeof legacyJobStates)[])] as const;
+export const jobStateInputSchema = z
+  .enum(acceptedStates, { error: 'Unknown job state' })
+  .transform((state): JobState => (state in legacyJobStates ? legacyJobStates[state as keyof typeof legacyJobStates] : (state as JobState)));
+
+/** Jobs not yet delivered or cancelled: the ones that can be late. */
+export const liveJobStates: readonly JobState[] = ['open', 'in-finish', 'ready'];
+/** Who set the state last: the server from what was recorded, or a lead by hand. */
+export const jobStateSources = ['auto', 'lead'] as const;
 
 const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31' });
 
@@ -17,7 +36,7 @@ export const jobFieldsSchema = z.object({
   colour: optionalTextSchema(80),
   sheen: optionalTextSchema(40),
   notes: optionalTextSchema(4000),
-  state: jobStateSchema,
+  state: jobStateInputSchema,
 });
 
 const f = jobFieldsSchema.shape;
@@ -33,6 +52,10 @@ export const updateJobSchema = jobFieldsSchema.partial();
 export type UpdateJobInput = z.infer<typeof updateJobSchema>;
 
 export const jobSchema = jobFieldsSchema.extend({
+  state: jobStateSchema,
+  stateSetBy: z.enum(jobStateSources),
+  /** Once every coat is on: when the last part can be handled (the job turns ready then). */
+  readyAt: z.string().nullable(),
   id: z.number().int(),
   finishSystemName: z.string().nullable(),
   partCount: z.number().int(),
@@ -46,7 +69,8 @@ export type Job = z.infer<typeof jobSchema>;
 
 export const jobListQuerySchema = z.object({
   q: z.string().trim().max(80).optional(),
-  state: jobStateSchema.optional(),
+  /** One state, or `active` for every job not delivered or cancelled. */
+  state: z.union([z.literal('active'), jobStateInputSchema]).optional(),
   ...pageFields(50, 200),
 });
 export type JobListQuery = z.infer<typeof jobListQuerySchema>;

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { createSpraySessionSchema, spraySessionSchema } from './spray-session';
 
 export const planRequestSchema = z.object({
-  /** Empty or missing: every job not finished or cancelled. */
+  /** Empty or missing: every job not delivered or cancelled. */
   jobIds: z.array(z.number().int().positive()).max(500).default([]),
   horizonDays: z.number().int().min(1).max(60).default(14),
 });

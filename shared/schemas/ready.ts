@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { readinessStates } from '../finishing/readiness';
-import { idSchema } from './common';
+import { idSchema, queryIntSchema } from './common';
 import { siteFilterFields } from './site';
 
 export const readyQuerySchema = z.object({
@@ -8,7 +8,12 @@ export const readyQuerySchema = z.object({
   rackId: idSchema.optional(),
   ...siteFilterFields,
   state: z.enum(readinessStates).optional(),
+  /** Collected parts stay on the board this many days (a week unless asked); a job asked for by id shows all of its parts. */
+  collectedDays: queryIntSchema(0, 90).default(7),
 });
+export type ReadyQuery = z.infer<typeof readyQuerySchema>;
+
+const rackPlaceSchema = z.object({ id: z.number().int(), name: z.string(), shelf: z.number().int().nullable() });
 
 export const readyPartSchema = z.object({
   id: z.number().int(),
@@ -23,9 +28,41 @@ export const readyPartSchema = z.object({
   nextWindowOpensAt: z.string().nullable(),
   nextWindowClosesAt: z.string().nullable(),
   abradeRequired: z.boolean(),
+  /** The last coat's own times; while coats remain they are between-coats times, not "ready". */
   handleAt: z.string().nullable(),
   packAt: z.string().nullable(),
   fullCureAt: z.string().nullable(),
-  rack: z.object({ id: z.number().int(), name: z.string(), shelf: z.number().int().nullable() }).nullable(),
+  rack: rackPlaceSchema.nullable(),
+  /** Coat steps of the finish system still to go on. */
+  coatsRemaining: z.number().int().default(0),
+  /** When the next coat can go on at the earliest (window open, denib done, booked session); null when none remains. */
+  nextCoatAt: z.string().nullable().default(null),
+  /** When the part can be handled and packed once every coat is on; an estimate at the shop's drying temperature while coats remain. */
+  expectedHandleAt: z.string().nullable().default(null),
+  expectedPackAt: z.string().nullable().default(null),
+  /** The latest denib since the last coat, if any. */
+  denibbedAt: z.string().nullable().default(null),
+  collectedAt: z.string().nullable().default(null),
+  /** Where it was taken from when collected. */
+  collectedFrom: rackPlaceSchema.nullable().default(null),
 });
 export type ReadyPart = z.infer<typeof readyPartSchema>;
+
+/** A job as a whole: ready to handle (and to pack) when its last part not yet collected is. */
+export const readyJobSchema = z.object({
+  jobId: z.number().int(),
+  jobReference: z.string(),
+  handleAt: z.string().nullable(),
+  packAt: z.string().nullable(),
+  coatsRemaining: z.number().int(),
+  partsCounted: z.number().int(),
+  partsCollected: z.number().int(),
+  partsUnknown: z.number().int(),
+  /** True while coats remain: the times assume each goes on as soon as its window opens. */
+  projected: z.boolean(),
+  /** The drying temperature the estimate assumes (the shop's expected drying temperature). */
+  dryingTempC: z.number(),
+});
+export type ReadyJob = z.infer<typeof readyJobSchema>;
+
+export const readyListSchema = z.object({ items: z.array(readyPartSchema), jobs: z.array(readyJobSchema).default([]) });

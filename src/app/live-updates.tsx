@@ -16,6 +16,7 @@ const readings: QueryKey = ['readings'];
 
 const keysByChange: Record<string, readonly QueryKey[]> = {
   'coat.created': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, coatLog],
+  'denib.created': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, coatLog],
   'spray-session.changed': [plannerKeys.all, spraySessionKeys.all, sessionLists],
   'part.changed': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, rackKeys.all],
   'reading.created': [spraySessionKeys.all, readings],

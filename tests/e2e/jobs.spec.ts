@@ -1,7 +1,8 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { expect, test, type Page } from '@playwright/test';
+import type { Page } from '@playwright/test';
+import { expect, shotsDir, test } from './console-guard';
 import { mainNav, signIn } from './helpers';
 
 /** Cut lists from a spreadsheet: our own column names are not used, so every size column needs matching. */
@@ -152,5 +153,50 @@ test.describe('jobs and parts', () => {
 
     await page.goto(page.url().replace(/\/?$/, '/import'));
     await expect(page.getByRole('heading', { name: 'Not part of your role' })).toBeVisible();
+  });
+
+  test('jobs move through their life cycle: the list filters by state, delivered jobs are never late, and a lead sets a state with an activity entry', async ({ page }) => {
+    await signIn(page, 'lead', '/jobs');
+    // The demo's past jobs had every part collected: delivered, and not overdue though their dates have passed.
+    await page.getByLabel('State').selectOption({ label: 'Delivered (closed): every part collected' });
+    await expect(page).toHaveURL(/state=delivered/);
+    const past = page.getByRole('row', { name: /LJ-26-091/ });
+    await expect(past).toContainText('Delivered');
+    await expect(past).not.toContainText('Overdue');
+    await expect(page.getByRole('row', { name: /LJ-26-101/ })).toHaveCount(0);
+    await page.getByLabel('State').selectOption({ label: 'Not delivered yet (open, in finish, ready)' });
+    await expect(page.getByRole('row', { name: /LJ-26-101/ })).toContainText('Open');
+    await expect(page.getByRole('row', { name: /LJ-26-091/ })).toHaveCount(0);
+    await page.getByLabel('State').selectOption({ label: 'Any state' });
+    await expect(page.getByRole('row', { name: /LJ-26-091/ })).toBeVisible();
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await page.screenshot({ path: `${shotsDir}/jobs-states-1366.png`, fullPage: true });
+
+    // A new job with one part: open, with the time it could be ready if sprayed now.
+    const reference = `E2E-LIFE-${Date.now()}`;
+    await addJob(page, reference, /Painted MDF/);
+    await expect(page.getByRole('heading', { name: `Job ${reference}`, level: 1 })).toBeVisible();
+    await page.getByRole('button', { name: 'Add part' }).click();
+    const partDialog = page.getByRole('dialog', { name: 'Add a part' });
+    await partDialog.getByLabel('Label').fill('Panel 1');
+    await partDialog.getByLabel('Length').fill('700');
+    await partDialog.getByLabel('Width').fill('500');
+    await partDialog.getByLabel('Thickness').fill('18');
+    await partDialog.getByRole('button', { name: 'Save part' }).click();
+    await expect(partDialog).toBeHidden();
+    const ready = page.getByRole('region', { name: 'When it is ready' });
+    await expect(ready).toContainText(/Whole job ready to handle from about .+ \(in .+\)/);
+    await expect(ready).toContainText('3 coats still to go on.');
+    await expect(page.getByText('Follows its parts’ coats and collections')).toBeVisible();
+
+    await page.getByRole('button', { name: 'Edit job' }).click();
+    const dialog = page.getByRole('dialog', { name: `Edit job ${reference}` });
+    await dialog.getByLabel('State').selectOption({ label: 'Cancelled' });
+    await dialog.getByRole('button', { name: 'Save changes' }).click();
+    await expect(dialog).toBeHidden();
+    await expect(page.getByText('Set by a lead')).toBeVisible();
+    await expect(ready).toHaveCount(0);
+    await page.goto('/activity');
+    await expect(page.getByText(`Set job ${reference} to cancelled (was open)`)).toBeVisible();
   });
 });

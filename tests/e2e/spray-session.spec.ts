@@ -1,9 +1,10 @@
-import { expect, request, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
+import { request, type APIRequestContext, type Locator, type Page } from '@playwright/test';
 import type { Coat } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import type { SpraySession } from '../../shared/schemas/spray-session';
+import { expect, shotsDir, test } from './console-guard';
 import { demo, demoPassword, signIn } from './helpers';
 
 const shopZone = 'Europe/London';
@@ -69,6 +70,9 @@ async function fillChecklist(page: Page, mask: RegExp) {
 }
 
 test.describe('spray session', () => {
+  // Taking the tablet off line makes the browser report the requests it could not send.
+  test.use({ expectedConsoleError: /net::ERR_INTERNET_DISCONNECTED|net::ERR_NETWORK_CHANGED/ });
+
   test('a sprayer checks, mixes, records coats on and off line, stops spraying, and corrects a coat in the log', async ({ page, context, baseURL }) => {
     test.setTimeout(120_000);
     const api = await leadApi(baseURL!);
@@ -134,17 +138,25 @@ test.describe('spray session', () => {
     await expect(latest.getByText('Handle from').locator('..')).toContainText(clock(first.handleAt));
     await expect(latest).toContainText(/Flash-off until \d{2}:\d{2}/);
     await expect(latest).toContainText(`Next on ${partLabel}: Abrade P320`);
+    // The door has just had its planned step: the form does not offer it again by itself.
+    await expect(coatForm.getByText('No parts chosen yet.')).toBeVisible();
 
-    // No connection: the second coat waits on the tablet with its idempotency key.
+    // No connection: the tablet says so before anything is saved, and the second coat waits on it with its idempotency key.
     await context.setOffline(true);
+    await expect(page.getByRole('status').filter({ hasText: 'This tablet is offline.' })).toBeVisible();
+    await expect(coatForm.getByRole('button', { name: 'Record coat on this tablet' })).toBeVisible();
+    await coatForm.getByRole('button', { name: 'Planned parts' }).click();
+    await coatForm.getByRole('checkbox', { name: new RegExp(partLabel) }).check();
+    await expect(coatForm.getByLabel('Step')).toHaveValue('0');
     await box(coatForm, 'Wet film reading').fill('150');
     await expect(coatForm.getByText(/not ready to recoat until/)).toBeVisible();
     await coatForm.getByLabel('Why this coat goes on anyway').fill('Second pass on the edges while the first is wet');
-    await coatForm.getByRole('button', { name: 'Record coat' }).click();
+    await coatForm.getByRole('button', { name: 'Record coat on this tablet' }).click();
     await expect(page.getByText('Pending — not yet on the server')).toBeVisible();
     expect((await api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`)).total).toBe(1);
 
     await context.setOffline(false);
+    await expect(page.getByRole('status').filter({ hasText: 'This tablet is offline.' })).toHaveCount(0);
     await expect(page.getByText('Pending — not yet on the server')).toBeHidden({ timeout: 20_000 });
     await expect(page.getByRole('article', { name: /^Coat \d+$/ })).toHaveCount(2);
     const sent = await api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`);
@@ -201,6 +213,131 @@ test.describe('spray session', () => {
     await start.click();
     await expect(page.getByText('Lead’s override: Dehumidifier running; sealer coat only')).toBeVisible();
     await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
+    await api.context.dispose();
+  });
+});
+
+interface DenibPlan {
+  sessionId: number;
+  jobId: number;
+  labels: { missed: string; due: string; ahead: string };
+}
+
+/**
+ * Three fresh doors of the vanity job (2K PU primer, denib, two topcoats), all planned for their
+ * first topcoat in a session booked now: one whose primer window closed hours ago, one between
+ * coats with its window open, and one that has had the first topcoat already.
+ */
+async function bookTopcoatSession(api: Api): Promise<DenibPlan> {
+  const now = Date.now();
+  const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
+  const labels = { missed: `Door missed ${now}`, due: `Door due ${now}`, ahead: `Door ahead ${now}` };
+  const ids: Record<string, number> = {};
+  for (const [key, label] of Object.entries(labels)) ids[key] = (await api.send<{ part: Part }>('POST', `/api/jobs/${job.id}/parts`, { label, lengthMm: 715, widthMm: 496, thicknessMm: 18 })).part.id;
+  const around = { from: new Date(now - 3 * 3_600_000).toISOString(), to: new Date(now + 3 * 3_600_000).toISOString() };
+  const { items } = await api.get<List<SpraySession>>(`/api/spray-sessions?from=${encodeURIComponent(around.from)}&to=${encodeURIComponent(around.to)}`);
+  for (const old of items) if (old.state !== 'cancelled' && (old.sprayerId === 3 || old.boothId === 1)) await api.send('PATCH', `/api/spray-sessions/${old.id}`, { state: 'cancelled' });
+  const { spraySession } = await api.send<{ spraySession: SpraySession }>('POST', '/api/spray-sessions', {
+    boothId: 1,
+    start: new Date(now - 5 * 60_000).toISOString(),
+    end: new Date(now + 2 * 3_600_000).toISOString(),
+    sprayerId: 3,
+    items: Object.values(ids).map((partId) => ({ partId, stepPosition: 2 })),
+    override: { reason: 'Browser test: booked whatever the hour' },
+  });
+  const primer = (await api.get<List<{ id: number }>>('/api/products?q=PU%20Primer')).items[0].id;
+  const topcoat = (await api.get<List<{ id: number }>>('/api/products?q=PU%20Topcoat')).items[0].id;
+  const coat = (partIds: number[], productId: number, hoursAgo: number, stepPosition: number) =>
+    api.send('POST', '/api/coats', { spraySessionId: spraySession.id, partIds, productId, stepPosition, sprayedAt: new Date(now - hoursAgo * 3_600_000).toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 });
+  // The primer's window at 20 °C closes 24 h after the coat: 30 h ago means it closed 6 h ago.
+  await coat([ids.missed], primer, 30, 0);
+  await coat([ids.due, ids.ahead], primer, 3, 0);
+  await coat([ids.ahead], topcoat, 2, 2);
+  return { sessionId: spraySession.id, jobId: job.id, labels };
+}
+
+test.describe('between coats', () => {
+  test('a sprayer records a denib, and the coat form starts with the parts due, takes one reason for every stop and words a cold surface as below the dew point', async ({ page, baseURL }) => {
+    test.setTimeout(120_000);
+    const api = await leadApi(baseURL!);
+    const { sessionId, jobId, labels } = await bookTopcoatSession(api);
+    await page.setViewportSize({ width: 1024, height: 768 });
+    await signIn(page, 'sprayer', `/spray-sessions/${sessionId}`);
+
+    // The checklist: a part colder than the dew point is said to be below it.
+    await fillChecklist(page, /Air-fed hood or visor/);
+    await box(page, 'Relative humidity').fill('90');
+    await box(page, 'Surface temperature').fill('14');
+    await expect(page.getByText(/Surface\s*4\.3 °C below the dew point/)).toBeVisible();
+    await expect(page.getByText(/The surface is 4\.3 °C below the dew point \(18\.3 °C\)/).first()).toBeVisible();
+    await expect(page.getByText(/only -|only −/)).toHaveCount(0);
+    await box(page, 'Relative humidity').fill('50');
+    await box(page, 'Surface temperature').fill('19');
+    await page.getByRole('button', { name: 'Start spraying' }).click();
+    await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
+
+    // Only the doors whose next coat is the planned first topcoat are chosen; the one that had it is not.
+    const coatForm = page.getByRole('region', { name: 'Record a coat' });
+    const chosen = coatForm.getByRole('list', { name: 'Chosen parts' });
+    await expect(chosen.getByRole('listitem')).toHaveCount(2);
+    await expect(chosen).toContainText(labels.missed);
+    await expect(chosen).toContainText(labels.due);
+    await expect(chosen).not.toContainText(labels.ahead);
+    await expect(coatForm.getByRole('note')).toContainText(`Denib first: ${labels.missed}, ${labels.due} need their denib before this coat.`);
+
+    // Both chosen doors need their denib first; record it from the session page.
+    const denibs = page.getByRole('region', { name: 'Denib between coats' });
+    await expect(denibs).toContainText('2 planned parts need a denib before the next coat.');
+    await denibs.getByRole('button', { name: 'Record a denib' }).click();
+    await expect(denibs.getByRole('checkbox', { name: new RegExp(labels.missed) })).toBeChecked();
+    await expect(denibs.getByRole('checkbox', { name: new RegExp(labels.due) })).toBeChecked();
+    await expect(denibs.getByRole('checkbox', { name: new RegExp(labels.ahead) })).not.toBeChecked();
+    await expect(denibs.getByLabel('Grit')).toHaveValue('P320');
+    await denibs.getByLabel('Notes').fill('Faces and edges, tack rag after');
+    await denibs.getByRole('button', { name: 'Record denib' }).click();
+    await expect(page.getByText('Denib P320 recorded on 2 parts.')).toBeVisible();
+    await expect(denibs).toContainText('No planned part needs a denib right now.');
+    await expect(coatForm.getByRole('note')).toHaveCount(0);
+    const denibCard = page.getByRole('article', { name: /^Denib \d+$/ });
+    await expect(denibCard).toContainText('P320');
+    await expect(denibCard).toContainText('by Mina Castell');
+    await expect(denibCard).toContainText('Faces and edges, tack rag after');
+    await page.screenshot({ path: `${shotsDir}/session-denib-1024.png`, fullPage: true });
+
+    // Humid air and a cold part: three stops, one reason for all of them.
+    await box(coatForm, 'Relative humidity').fill('90');
+    await box(coatForm, 'Surface temperature').fill('14');
+    await box(coatForm, 'Wet film reading').fill('100');
+    const warnings = coatForm.getByRole('list', { name: 'Warnings for this coat' });
+    await expect(warnings).toContainText(/The surface is 4\.3 °C below the dew point/);
+    await expect(warnings).not.toContainText('recoat window had closed');
+    await expect(coatForm.getByRole('textbox', { name: 'Why this coat goes on anyway' })).toHaveCount(1);
+    await expect(coatForm.getByText('One reason for all 3 stops above; kept on the coat record with each.')).toBeVisible();
+    await coatForm.getByRole('button', { name: 'Record coat' }).click();
+    await expect(coatForm.getByText('Say why this coat goes on despite the stops before recording it.')).toBeVisible();
+    await coatForm.getByRole('textbox', { name: 'Why this coat goes on anyway' }).fill('Customer collecting tonight; parts warmed after');
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await page.screenshot({ path: `${shotsDir}/session-one-reason-1366.png`, fullPage: true });
+    await coatForm.getByRole('button', { name: 'Record coat' }).click();
+    await expect(page.getByText('Coat recorded on 2 parts.')).toBeVisible();
+    await expect(coatForm.getByText('No parts chosen yet.')).toBeVisible();
+
+    const [coat] = (await api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`)).items;
+    const stops = coat.warnings.filter((w) => ['relative-humidity', 'dew-point-margin', 'surface-temperature'].includes(w.code));
+    expect(stops.map((w) => w.acknowledgedReason)).toEqual(Array(3).fill('Customer collecting tonight; parts warmed after'));
+    expect(coat.warnings.map((w) => w.code)).not.toContain('recoat-window-missed');
+
+    // The coat log shows the denib in line with the coats, as a row of its own kind.
+    await page.goto(`/coat-log?job=${jobId}`);
+    const [denib] = (await api.get<List<{ id: number }>>(`/api/denibs?spraySessionId=${sessionId}`)).items;
+    const denibRow = page.getByRole('row', { name: `Denib ${denib.id}`, exact: true });
+    await expect(denibRow).toContainText('Denib P320 · 2 parts');
+    await expect(denibRow).toContainText('Mina Castell');
+    await expect(page.getByRole('row', { name: `Coat ${coat.id}` })).toContainText('Reason for the stops: Customer collecting tonight; parts warmed after');
+    const rows = await page.getByRole('row').evaluateAll((all) => all.map((row) => row.getAttribute('aria-label') ?? ''));
+    const at = rows.indexOf(`Denib ${denib.id}`);
+    expect(rows[at - 1]).toBe(`Coat ${coat.id}`);
+    await page.screenshot({ path: `${shotsDir}/coat-log-denib-1366.png`, fullPage: true });
     await api.context.dispose();
   });
 });

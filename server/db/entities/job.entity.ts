@@ -31,6 +31,14 @@ export class JobEntity {
   @Column({ type: 'varchar', length: 20, default: 'open' })
   state: JobState;
 
+  /** Whether the server set the state from what was recorded, or a lead set it by hand. */
+  @Column({ type: 'varchar', length: 10, default: 'auto' })
+  stateSetBy: 'auto' | 'lead';
+
+  /** Once every coat is on: when the last part can be handled. An in-finish job is ready from then. */
+  @Column({ type: 'varchar', length: 30, nullable: true })
+  readyAt: string | null;
+
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;
 

@@ -55,6 +55,13 @@ export class PartEntity {
   @Column({ type: 'varchar', length: 30, nullable: true })
   collectedAt: string | null;
 
+  /** The rack and shelf it was taken from when collected, so the board can still place it. */
+  @Column({ type: 'integer', nullable: true })
+  collectedFromRackId: number | null;
+
+  @Column({ type: 'integer', nullable: true })
+  collectedFromShelf: number | null;
+
   @Column({ type: 'varchar', length: 30 })
   createdAt: string;
 

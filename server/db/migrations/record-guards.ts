@@ -9,11 +9,13 @@ const collisions: Record<string, string> = {
   coats: 'r.id = NEW.id OR r.idempotency_key = NEW.idempotency_key OR r.replaces_id = NEW.replaces_id',
   coat_parts: 'r.coat_id = NEW.coat_id AND r.part_id = NEW.part_id',
   mixes: 'r.id = NEW.id',
+  denibs: 'r.id = NEW.id',
+  denib_parts: 'r.denib_id = NEW.denib_id AND r.part_id = NEW.part_id',
   readings: 'r.id = NEW.id',
   audit_entries: 'r.id = NEW.id',
 };
 export const appendOnlyTables = Object.keys(collisions);
-/** Tables that had no update or delete guard before (coats, coat_parts and mixes had). */
+/** Tables that had no update or delete guard before (coats, coat_parts, mixes, denibs and denib_parts had). */
 const newlyGuarded = ['readings', 'audit_entries'];
 
 const replaceMessage = 'append_only: a record is never replaced; add a new one (a correction for a coat)';

@@ -4,12 +4,15 @@ import { can } from '../../../shared/permissions';
 import { jobQueryOptions } from '../../features/jobs/api/get-job';
 import { useRefreshJob } from '../../features/jobs/api/refresh-job';
 import { usePart } from '../../features/parts/api/get-part';
+import { usePartHistory } from '../../features/parts/api/get-part-history';
+import { PartHistorySection, PartNow } from '../../features/parts/components/part-history';
 import { PartPage } from '../../features/parts/components/part-page';
 import { useRacks } from '../../features/racks/api/get-racks';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
 import { useSessionUser } from '../session-user';
+import { useShopTimeZone } from '../use-shop-time-zone';
 import { useIdParam } from './id-param';
 import { NotFoundRoute } from './not-found-route';
 
@@ -31,18 +34,26 @@ function PartView({ partId }: { partId: number }) {
   const part = usePart(partId);
   const racks = useRacks({ page: 1, pageSize: 200 });
   const refreshJob = useRefreshJob(part.data?.jobId ?? 0);
+  const timeZone = useShopTimeZone();
+  const readsReady = can(user.role, 'ready:read');
+  const history = usePartHistory(partId, readsReady);
   usePageTitle(part.data ? `Part ${part.data.label}` : 'Part');
   if (part.isPending) return <LoadingState what="the part" />;
   if (part.isError) return <ErrorState error={part.error} what="the part" onRetry={() => part.refetch()} />;
   return (
-    <PartPage
-      part={part.data}
-      units={user.units}
-      canWrite={can(user.role, 'jobs:write')}
-      racks={racks.data?.items}
-      job={<JobLine jobId={part.data.jobId} />}
-      onSaved={refreshJob}
-    />
+    <>
+      <PartPage
+        part={part.data}
+        units={user.units}
+        canWrite={can(user.role, 'jobs:write')}
+        racks={racks.data?.items}
+        job={<JobLine jobId={part.data.jobId} />}
+        onSaved={refreshJob}
+        stateNow={history.data?.readiness.state}
+        status={timeZone && readsReady ? <PartNow partId={partId} units={user.units} timeZone={timeZone} /> : null}
+      />
+      {timeZone && readsReady && <PartHistorySection partId={partId} units={user.units} timeZone={timeZone} />}
+    </>
   );
 }
 

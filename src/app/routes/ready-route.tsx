@@ -10,7 +10,7 @@ function ReadyBoardWithClock() {
   const user = useSessionUser();
   const timeZone = useShopTimeZone();
   if (!timeZone) return <LoadingState what="the ready board" />;
-  return <ReadyBoardPage timeZone={timeZone} canCollect={can(user.role, 'parts:collect')} />;
+  return <ReadyBoardPage timeZone={timeZone} units={user.units} canCollect={can(user.role, 'parts:collect')} />;
 }
 
 export function ReadyRoute() {

@@ -17,6 +17,11 @@ beforeAll(async () => {
   postgres = dataSource.options.type === 'postgres';
   await seedDemoShop(dataSource, { uploadDir: path.join(database.uploadDir) });
   await seedDemoHistory(dataSource, { weeks: 2 });
+  // The demo history holds no denib: record one the ordinary way, to have a row to attack.
+  await dataSource.query(
+    "INSERT INTO denibs (spray_session_id, grit, abraded_at, notes, recorded_by_name, recorded_at) SELECT MIN(id), 'P320', '2027-01-04T08:00:00.000Z', 'Faces', 'test', '2027-01-04T08:05:00.000Z' FROM spray_sessions",
+  );
+  await dataSource.query('INSERT INTO denib_parts (denib_id, part_id) SELECT (SELECT MIN(id) FROM denibs), MIN(id) FROM parts');
 }, 60_000);
 afterAll(async () => {
   await dataSource?.destroy();
@@ -55,6 +60,16 @@ const guarded: Guarded[] = [
   { table: 'mixes', where: () => firstId('mixes'), textColumn: 'recorded_by_name', conflict: 'id' },
   { table: 'readings', where: () => firstId('readings'), textColumn: 'source', conflict: 'id' },
   { table: 'audit_entries', where: () => firstId('audit_entries'), textColumn: 'summary', conflict: 'id' },
+  { table: 'denibs', where: () => firstId('denibs'), textColumn: 'notes', conflict: 'id' },
+  {
+    table: 'denib_parts',
+    where: async () => {
+      const [row] = (await dataSource.query('SELECT denib_id, part_id FROM denib_parts ORDER BY denib_id, part_id LIMIT 1')) as { denib_id: number; part_id: number }[];
+      return `denib_id = ${row.denib_id} AND part_id = ${row.part_id}`;
+    },
+    textColumn: null,
+    conflict: 'denib_id, part_id',
+  },
   {
     table: 'coat_parts',
     where: async () => {

@@ -1,7 +1,7 @@
 import type { Express } from 'express';
 import { demo, signIn, type SignedIn } from '../../helpers/test-app';
 
-/** One site's records for the site matrix: a booth and rack free at any hour, a session, a coat, a reading and a part on its rack. */
+/** One site's records for the site matrix: a booth and rack free at any hour, a session, a coat, a denib, a reading and a part on its rack. */
 export interface SiteSide {
   siteId: number;
   boothId: number;
@@ -9,6 +9,8 @@ export interface SiteSide {
   sprayerId: number;
   spraySessionId: number;
   coatId: number;
+  /** A denib of the placed part in this site's session. */
+  denibId: number;
   /** A part standing on this site's rack, coated in this site's session. */
   placedPartId: number;
   placedPartTag: string;
@@ -78,9 +80,10 @@ async function buildSide(shared: Shared, siteId: number, sprayerId: number, labe
   const spraySessionId = (await ok(post(admin, '/api/spray-sessions', { boothId, ...shared.freeSlot(), sprayerId }), `${label} session`)).spraySession.id;
   const placed = await shared.freshPart(rackId);
   const coatId = (await ok(post(admin, '/api/coats', coatOn(spraySessionId, [placed.id], shared.productId)), `${label} coat`)).coat.id;
+  const denibId = (await ok(post(admin, '/api/denibs', { spraySessionId, partIds: [placed.id], grit: 'P320', abradedAt: new Date(Date.now() - 30_000).toISOString() }), `${label} denib`)).denib.id;
   await ok(post(admin, '/api/readings', { boothId, airTempC: 19, relativeHumidityPct: 55 }), `${label} reading`);
   await ok(post(admin, `/api/spray-sessions/${spraySessionId}/mixes`, { productId: shared.productId, wantedL: 1, tempC: 20 }), `${label} mix`);
-  return { siteId, boothId, rackId, sprayerId, spraySessionId, coatId, placedPartId: placed.id, placedPartTag: placed.tag };
+  return { siteId, boothId, rackId, sprayerId, spraySessionId, coatId, denibId, placedPartId: placed.id, placedPartTag: placed.tag };
 }
 
 async function secondSitePeople(app: Express, admin: SignedIn, siteId: number): Promise<{ people: SiteFixtures['people']; sprayerId: number }> {

@@ -102,7 +102,7 @@ async function openStream(base: string, email: string, password: string) {
   const preCookie = first.headers.get('set-cookie')!.split(';')[0];
   const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { cookie: preCookie, 'x-csrf-token': token, 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) });
   const cookie = login.headers.get('set-cookie')!.split(';')[0];
-  const events: { type: string; siteId: number | null; boothId?: number | null }[] = [];
+  const events: { type: string; id: number; siteId: number | null; boothId?: number | null }[] = [];
   const request = http.get(`${base}/api/events`, { headers: { cookie } });
   await new Promise<void>((resolve) =>
     request.on('response', (res) => {
@@ -125,11 +125,17 @@ describe('GET /api/events as the lead of another site', () => {
     const reading = (boothId: number) => fx.admin.agent.post('/api/readings').set('x-csrf-token', fx.admin.csrf).send({ boothId, airTempC: 18, relativeHumidityPct: 60 }).expect(201);
     await reading(fx.first.boothId);
     await fx.admin.agent.post('/api/coats').set('x-csrf-token', fx.admin.csrf).send(await fx.coatBody(fx.first)).expect(201);
+    const denib = async (side: typeof fx.first) =>
+      (await fx.admin.agent.post('/api/denibs').set('x-csrf-token', fx.admin.csrf).send({ spraySessionId: side.spraySessionId, partIds: [side.placedPartId], grit: 'P320', abradedAt: new Date().toISOString() }).expect(201)).body.denib.id as number;
+    const firstDenib = await denib(fx.first);
+    const secondDenib = await denib(fx.second);
     await reading(fx.second.boothId);
     for (let tries = 0; tries < 100 && !stream.events.some((e) => e.boothId === fx.second.boothId); tries++) await new Promise((resolve) => setTimeout(resolve, 20));
     stream.close();
     await new Promise((resolve) => server.close(resolve));
     expect(stream.events.some((e) => e.type === 'reading.created' && e.boothId === fx.second.boothId)).toBe(true);
     expect(stream.events.filter((e) => e.siteId === fx.first.siteId)).toEqual([]);
+    expect(stream.events.filter((e) => e.type === 'denib.created').map((e) => e.id)).toEqual([secondDenib]);
+    expect(stream.events.some((e) => e.id === firstDenib && e.type === 'denib.created')).toBe(false);
   });
 });

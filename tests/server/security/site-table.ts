@@ -58,6 +58,21 @@ const reportRange = 'from=2027-05-01&to=2027-06-30';
 const booth = (fx: SiteFixtures) => ({ name: `Matrix booth ${fx.next()}`, kind: 'open-face', volumeM3: 40, extractionM3PerH: 12000 });
 const slotOn = (boothId: number, fx: SiteFixtures) => ({ boothId, ...fx.freeSlot() });
 const csv = 'label,kind,lengthMm,widthMm,thicknessMm,quantity,faces,edges\nShelf 1,shelf,800,300,18,1,both,yes\n';
+const denibOn = (spraySessionId: number, partIds: number[]) => ({ spraySessionId, partIds, grit: 'P320', abradedAt: new Date(Date.now() - 60_000).toISOString() });
+/** A rack place (on the board, or where a collected part was taken from) on one of the first site's racks. */
+const onFirstRack = (place: Body, first: FirstSite) => place !== null && place !== undefined && first.racks.includes(place.id);
+
+/** What a part's history shows of the first site: its place there, or the first site's coats and denibs. */
+function historyLeaks(b: Body, fx: SiteFixtures, first: FirstSite): string[] {
+  const { readiness, entries } = b.history;
+  return [
+    ...(onFirstRack(readiness.rack, first) ? [`its place on rack ${readiness.rack.name}`] : []),
+    ...(onFirstRack(readiness.collectedFrom, first) ? [`where it was collected from, rack ${readiness.collectedFrom.name}`] : []),
+    ...leaked(entries, 'spraySessionId', first.spraySessions, 'entry of session'),
+    ...entries.filter((e: Body) => (e.kind === 'coat' && e.id === fx.first.coatId) || (e.kind === 'denib' && e.id === fx.first.denibId)).map((e: Body) => `the first site’s ${e.kind} ${e.id}`),
+  ];
+}
+
 const reportOf = (body: Body, fx: SiteFixtures) => (body.report?.siteId === fx.second.siteId ? [] : [`report of site ${body.report?.siteId}`]);
 
 export const siteTable: SiteRow[] = [
@@ -122,6 +137,7 @@ export const siteTable: SiteRow[] = [
   row('POST', '/api/jobs/:id/parts', (fx) => ({ url: `/api/jobs/${fx.jobId}/parts`, body: { label: `Filler ${fx.next()}`, lengthMm: 700, widthMm: 60, thicknessMm: 18, rackId: fx.second.rackId, shelf: 2 } }), refused((fx) => [{ url: `/api/jobs/${fx.jobId}/parts`, body: { label: `Filler ${fx.next()}`, lengthMm: 700, widthMm: 60, thicknessMm: 18, rackId: fx.first.rackId, shelf: 2 }, fields: ['rackId'] }])),
   row('GET', '/api/parts/by-tag/:tag', (fx) => ({ url: `/api/parts/by-tag/${fx.second.placedPartTag}` }), filtered((fx) => ({ url: `/api/parts/by-tag/${fx.first.placedPartTag}` }), (b, _fx, first) => leaked([b.part], 'rackId', first.racks, 'part on rack'))),
   row('GET', '/api/parts/:id', (fx) => ({ url: `/api/parts/${fx.second.placedPartId}` }), filtered((fx) => ({ url: `/api/parts/${fx.first.placedPartId}` }), (b, _fx, first) => leaked([b.part], 'rackId', first.racks, 'part on rack'))),
+  row('GET', '/api/parts/:id/history', (fx) => ({ url: `/api/parts/${fx.second.placedPartId}/history` }), filtered((fx) => ({ url: `/api/parts/${fx.first.placedPartId}/history` }), historyLeaks)),
   row('PATCH', '/api/parts/:id', async (fx) => ({ url: `/api/parts/${await fx.freshPart()}`, body: { rackId: fx.second.rackId, shelf: 3 } }), refused(async (fx) => [
     { url: `/api/parts/${await fx.freshPart()}`, body: { rackId: fx.first.rackId, shelf: 3 }, fields: ['rackId'] },
     { url: `/api/parts/${fx.first.placedPartId}`, body: { label: 'Taken over' } },
@@ -154,8 +170,17 @@ export const siteTable: SiteRow[] = [
   row('GET', '/api/coats/:id', (fx) => ({ url: `/api/coats/${fx.second.coatId}` }), refused((fx) => [{ url: `/api/coats/${fx.first.coatId}` }])),
   row('POST', '/api/coats/:id/corrections', async (fx) => ({ url: `/api/coats/${await fx.secondSiteCoat()}/corrections`, body: { reason: 'Wrong notes', notes: 'Corrected' } }), refused((fx) => [{ url: `/api/coats/${fx.first.coatId}/corrections`, body: { reason: 'Wrong notes', notes: 'Rewritten' } }])),
   row('GET', '/api/ready', get('/api/ready'), filtered((fx) => ({ url: `/api/ready?jobId=${fx.jobId}&siteId=1` }), (b, fx, first) => [
-    ...b.items.filter((p: Body) => p.rack && first.racks.includes(p.rack.id)).map((p: Body) => `part ${p.id} on rack ${p.rack.name}`),
+    ...b.items.filter((p: Body) => onFirstRack(p.rack, first)).map((p: Body) => `part ${p.id} on rack ${p.rack.name}`),
+    ...b.items.filter((p: Body) => onFirstRack(p.collectedFrom, first)).map((p: Body) => `part ${p.id} collected from rack ${p.collectedFrom.name}`),
     ...b.items.filter((p: Body) => p.id === fx.first.placedPartId).map(() => 'the part on the first site’s rack'),
+  ])),
+  row('POST', '/api/denibs', (fx) => ({ url: '/api/denibs', body: denibOn(fx.second.spraySessionId, [fx.second.placedPartId]) }), refused((fx) => [
+    { url: '/api/denibs', body: denibOn(fx.first.spraySessionId, [fx.first.placedPartId]), fields: ['spraySessionId'] },
+    { url: '/api/denibs', body: denibOn(fx.second.spraySessionId, [fx.first.placedPartId]), fields: ['partIds'] },
+  ])),
+  row('GET', '/api/denibs', get('/api/denibs?pageSize=500'), filtered((fx) => ({ url: `/api/denibs?pageSize=500&spraySessionId=${fx.first.spraySessionId}&siteId=1` }), (b, fx, first) => [
+    ...leaked(b.items, 'spraySessionId', first.spraySessions, 'denib of session'),
+    ...b.items.filter((d: Body) => d.id === fx.first.denibId).map(() => 'the first site’s denib'),
   ])),
   row('GET', '/api/readings', get('/api/readings'), filtered((fx) => ({ url: `/api/readings?boothId=${fx.first.boothId}&siteId=1` }), (b, _fx, first) => [...leaked(b.items, 'boothId', first.booths, 'reading of booth'), ...leaked(b.items, 'rackId', first.racks, 'reading of rack')])),
   row('POST', '/api/readings', (fx) => ({ url: '/api/readings', body: { boothId: fx.second.boothId, airTempC: 19, relativeHumidityPct: 55 } }), refused((fx) => [

@@ -2,7 +2,7 @@ import { unit } from 'mathjs';
 import psychrolib from 'psychrolib';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { FinishingInputError } from '../../../shared/errors';
-import { assessConditions, dewPointC } from '../../../shared/finishing/conditions';
+import { assessConditions, dewPointC, surfaceMarginWords } from '../../../shared/finishing/conditions';
 
 const fToC = (f: number) => unit(f, 'degF').toNumber('degC');
 const cToF = (c: number) => unit(c, 'degC').toNumber('degF');
@@ -81,6 +81,24 @@ describe('assessConditions', () => {
     expect(check(at(dew + 3), 'dew-point-margin')?.verdict).toBe('caution');
     expect(check(at(dew + 4.99), 'dew-point-margin')?.verdict).toBe('caution');
     expect(check(at(dew + 5), 'dew-point-margin')?.verdict).toBe('go');
+  });
+
+  it('says a surface colder than the dew point is below it, never "only … above"', () => {
+    // Air 20 °C, RH 60 %: dew point 12.0 °C (Magnus, Alduchov–Eskridge); a 7.4 °C surface is 4.6 °C below it.
+    const message = check(at(dew - 4.6), 'dew-point-margin')?.message ?? '';
+    expect(message).toMatch(/^The surface is 4\.6 °C below the dew point \(12\.0 °C\)/);
+    expect(message).not.toMatch(/only|−|-4/);
+    expect(check(at(dew), 'dew-point-margin')?.message).toMatch(/^The surface is at the dew point/);
+    expect(check(at(dew + 1), 'dew-point-margin')?.message).toMatch(/^The surface is only 1\.0 °C above the dew point/);
+  });
+
+  it('puts the margin in words for every screen, in either unit system', () => {
+    expect(surfaceMarginWords(-4.6)).toBe('4.6 °C below the dew point');
+    expect(surfaceMarginWords(2.5)).toBe('2.5 °C above the dew point');
+    expect(surfaceMarginWords(-0.02)).toBe('at the dew point');
+    expect(surfaceMarginWords(0.5)).toBe('0.5 °C above the dew point');
+    // A temperature difference converts without the 32° offset: 5 K = 9 °F (NIST SP 811 §B.8).
+    expect(surfaceMarginWords(-5, 'us')).toBe('9.0 °F below the dew point');
   });
 
   it('reports the dew point and margin it judged on', () => {

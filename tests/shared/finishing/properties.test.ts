@@ -68,7 +68,8 @@ describe('film and material properties', () => {
   it('never gives a dry film thicker than the wet film', () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 2000, noNaN: true }), volumeSolidsPct, thinningPct, (wetFilmUm, vs, t) => {
-        return dryFilmUm({ wetFilmUm, volumeSolidsPct: vs, thinningPct: t }) <= wetFilmUm;
+        // At 100 % solids and no thinner the two are equal; float rounding may put one a ulp above.
+        return dryFilmUm({ wetFilmUm, volumeSolidsPct: vs, thinningPct: t }) <= wetFilmUm * (1 + 1e-12);
       }),
     );
   });

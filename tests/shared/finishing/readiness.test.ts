@@ -45,7 +45,19 @@ describe('partReadiness', () => {
   it('moves on to the topcoat once the denib is done, with no closing time', () => {
     const result = partReadiness({ steps, coats: [coat(0, start)], abradedAt: [hours(1.5)], now: hours(2) });
     expect(result).toMatchObject({ state: 'in-finish', nextStepIndex: 2, abradeRequired: false });
-    expect(result.nextWindow).toEqual({ opensAt: hours(1.5), closesAt: null });
+    // The primer's own recoat opening (60 min) still holds; the sanding only removes the closing time.
+    expect(result.nextWindow).toEqual({ opensAt: hours(1), closesAt: null });
+  });
+
+  it('keeps the coat’s recoat opening when the denib came early', () => {
+    const result = partReadiness({ steps, coats: [coat(0, start)], abradedAt: [hours(0.5)], now: hours(0.75) });
+    expect(result).toMatchObject({ abradeRequired: false, nextStepIndex: 2, nextWindow: { opensAt: hours(1), closesAt: null } });
+  });
+
+  it('asks for a sanding of the bare part first when the system starts with one, until one is on record', () => {
+    const sandFirst: FinishStep[] = [{ kind: 'abrade', grit: 'P180' }, ...steps];
+    expect(partReadiness({ steps: sandFirst, coats: [], now: start })).toMatchObject({ state: 'waiting', abradeRequired: true, nextStepIndex: 0 });
+    expect(partReadiness({ steps: sandFirst, coats: [], abradedAt: [start], now: hours(1) })).toMatchObject({ state: 'waiting', abradeRequired: false, nextStepIndex: 1 });
   });
 
   it('ignores a sanding done before the latest coat', () => {
@@ -69,7 +81,7 @@ describe('partReadiness', () => {
 
   it('lets the coat go on after the scuff', () => {
     const result = partReadiness({ steps, coats: [coat(0, start), coat(2, hours(3))], abradedAt: [hours(20)], now: hours(21) });
-    expect(result).toMatchObject({ abradeRequired: false, nextStepIndex: 3, nextWindow: { opensAt: hours(20), closesAt: null } });
+    expect(result).toMatchObject({ abradeRequired: false, nextStepIndex: 3, nextWindow: { opensAt: hours(4), closesAt: null } });
   });
 
   it('never asks for a scuff when the product has no latest recoat time', () => {

@@ -1,4 +1,4 @@
-import { assessConditions, type ConditionsAssessment } from '../../../../shared/finishing/conditions';
+import { assessConditions, surfaceMarginWords, type ConditionsAssessment } from '../../../../shared/finishing/conditions';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity, unitSymbol } from '../../../../shared/units';
 import { CalculatorSection, FieldGrid, ResultItem, Results, VerdictBadge } from './calculator-output';
@@ -55,7 +55,7 @@ function ConditionsResult({ result, units }: { result: ConditionsAssessment; uni
     <div className="space-y-4">
       <Results label="Conditions result">
         <ResultItem term="Dew point">{formatQuantity(result.dewPointC, 'temperature', units)}</ResultItem>
-        <ResultItem term="Surface above dew point">{formatQuantity(result.surfaceMarginC, 'temperatureDifference', units)}</ResultItem>
+        <ResultItem term="Surface against dew point">{surfaceMarginWords(result.surfaceMarginC, units)}</ResultItem>
         <ResultItem term="Verdict">
           <VerdictBadge verdict={result.verdict} label={verdictWords[result.verdict]} />
         </ResultItem>

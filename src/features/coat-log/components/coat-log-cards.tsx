@@ -1,22 +1,40 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { Denib } from '../../../../shared/schemas/denib';
 import { formatQuantity } from '../../../../shared/units';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
-import { conditionWords, filmWords, partsWords, stepWords, versionWords } from './coat-log-format';
+import { denibWords, logEntries } from './coat-log-entries';
+import { conditionWords, filmWords, partsWords, sharedReason, stepWords, versionWords } from './coat-log-format';
 
 interface CoatLogCardsProps {
   coats: Coat[];
+  denibs: Denib[];
   units: UnitSystem;
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
 }
 
 /** The same records as the table, one card each, for tablets and phones where eleven columns do not fit. */
-export function CoatLogCards({ coats, units, timeZone, onCorrect }: CoatLogCardsProps) {
+export function CoatLogCards({ coats, denibs, units, timeZone, onCorrect }: CoatLogCardsProps) {
   return (
     <ul aria-label="Coat records" className="space-y-3">
-      {coats.map((coat) => {
+      {logEntries(coats, denibs).map((entry) => {
+        if (entry.kind === 'denib') {
+          const { denib } = entry;
+          return (
+            <li key={`denib-${denib.id}`} aria-label={`Denib ${denib.id}`} className="rounded-panel border-2 border-dashed border-maple-500 bg-maple-100 p-4">
+              <p className="text-lg font-bold">
+                <span className="mr-2 rounded-panel bg-maple-700 px-2 py-0.5 text-sm text-white">Denib</span>
+                {formatShopDateTime(denib.abradedAt, timeZone)}
+              </p>
+              <p className="font-semibold">{denibWords(denib)}</p>
+              {denib.notes && <p>{denib.notes}</p>}
+              <p className="mt-1 text-maple-800">{denib.recordedByName}</p>
+            </li>
+          );
+        }
+        const { coat } = entry;
         const replaced = coat.supersededById !== null;
         return (
           <li key={coat.id} aria-label={`Coat ${coat.id}${replaced ? ', replaced' : ''}`} className={`rounded-panel border-2 p-4 ${replaced ? 'border-maple-300 bg-maple-100 text-maple-700' : 'border-maple-300 bg-white'}`}>
@@ -35,9 +53,10 @@ export function CoatLogCards({ coats, units, timeZone, onCorrect }: CoatLogCards
                 <p key={w.code}>
                   <span aria-hidden="true">⚠ </span>
                   {w.message}
-                  {w.acknowledgedReason && <span className="block pl-5 text-sm">Reason: {w.acknowledgedReason}</span>}
+                  {!sharedReason(coat) && w.acknowledgedReason && <span className="block pl-5 text-sm">Reason: {w.acknowledgedReason}</span>}
                 </p>
               ))}
+              {sharedReason(coat) && <p className="text-sm font-medium">Reason for the stops: {sharedReason(coat)}</p>}
             </div>
             <p className="mt-1 text-maple-800">
               {coat.recordedByName} · {versionWords(coat)}

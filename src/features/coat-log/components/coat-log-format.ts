@@ -28,6 +28,13 @@ export function warningWords(coat: Coat): string[] {
   return coat.warnings.map((w) => (w.acknowledgedReason ? `${w.message} Reason: ${w.acknowledgedReason}` : w.message));
 }
 
+/** One reason given for several stops (the coat form asks once): shown once rather than under each. */
+export function sharedReason(coat: Coat): string | null {
+  const reasons = [...new Set(coat.warnings.flatMap((w) => (w.acknowledgedReason ? [w.acknowledgedReason] : [])))];
+  const acknowledged = coat.warnings.filter((w) => w.acknowledgedReason).length;
+  return reasons.length === 1 && acknowledged > 1 ? reasons[0] : null;
+}
+
 export function versionWords(coat: Coat): string {
   return coat.replacesId === null ? `v${coat.version}` : `v${coat.version}, corrects #${coat.replacesId}`;
 }

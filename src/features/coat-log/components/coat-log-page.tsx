@@ -10,6 +10,7 @@ import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/sta
 import { errorMessage } from '../../../lib/error-messages';
 import type { CoatLogQuery } from '../api/coat-log-keys';
 import { getAllCoats, useCoats } from '../api/get-coats';
+import { usePageDenibs } from '../api/get-page-denibs';
 import { coatsToCsv, downloadCsv } from './coat-csv';
 import { CoatLogFilters, type CoatLogFilterValues } from './coat-log-filters';
 import { shopDayStart } from './coat-log-format';
@@ -36,6 +37,7 @@ interface CoatLogPageProps {
 export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZone }: CoatLogPageProps) {
   const query = toQuery(filters, timeZone);
   const coats = useCoats({ ...query, page, pageSize });
+  const denibs = usePageDenibs(query, page, pageSize, coats.data);
   const [correcting, setCorrecting] = useState<Coat | null>(null);
   const [exporting, setExporting] = useState(false);
 
@@ -56,7 +58,7 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
     <>
       <PageHeader
         title="Coat log"
-        description="The record of every coat: product, film, conditions, warnings and who sprayed it. Corrections add a new version; nothing is deleted."
+        description="The record of every coat and every denib between coats: product, film, conditions, warnings and who did it. Corrections add a new version; nothing is deleted."
         actions={
           <Button variant="secondary" onClick={exportCsv} pending={exporting} pendingText="Exporting…" disabled={!coats.data || coats.data.total === 0}>
             Export CSV
@@ -68,16 +70,16 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
         <LoadingState what="the coat log" />
       ) : coats.isError ? (
         <ErrorState error={coats.error} what="the coat log" onRetry={() => coats.refetch()} />
-      ) : coats.data.items.length === 0 ? (
+      ) : coats.data.items.length === 0 && denibs.length === 0 ? (
         <EmptyState title="No coats match">Coats appear here as sprayers record them in their spray sessions. Try wider filters.</EmptyState>
       ) : (
         <>
           {/* Eleven columns need a wide screen; below that each coat is a card. Only one of the two is ever displayed. */}
           <div className="hidden xl:block">
-            <CoatLogTable coats={coats.data.items} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+            <CoatLogTable coats={coats.data.items} denibs={denibs} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
           </div>
           <div className="xl:hidden">
-            <CoatLogCards coats={coats.data.items} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+            <CoatLogCards coats={coats.data.items} denibs={denibs} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
           </div>
           <Pagination page={page} pageSize={pageSize} total={coats.data.total} noun={filters.history ? 'coat versions' : 'coats'} onPage={(next) => onChange(filters, next)} />
         </>

@@ -1,12 +1,16 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { Denib } from '../../../../shared/schemas/denib';
 import { formatQuantity } from '../../../../shared/units';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
-import { conditionWords, filmWords, partsWords, stepWords, versionWords } from './coat-log-format';
+import { denibWords, logEntries } from './coat-log-entries';
+import { conditionWords, filmWords, partsWords, sharedReason, stepWords, versionWords } from './coat-log-format';
 
 interface CoatLogTableProps {
   coats: Coat[];
+  /** Denibs that fall among these coats, shown in line as their own kind of row. */
+  denibs: Denib[];
   units: UnitSystem;
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
@@ -16,16 +20,20 @@ const headings = ['When (shop time)', 'Product, step, parts', 'Film', 'Condition
 
 function Warnings({ coat }: { coat: Coat }) {
   if (coat.warnings.length === 0) return <span className="text-maple-700">None</span>;
+  const shared = sharedReason(coat);
   return (
-    <ul className="min-w-44 space-y-1">
-      {coat.warnings.map((w) => (
-        <li key={w.code}>
-          <span aria-hidden="true">⚠ </span>
-          {w.message}
-          {w.acknowledgedReason && <span className="block text-sm text-maple-800">Reason: {w.acknowledgedReason}</span>}
-        </li>
-      ))}
-    </ul>
+    <>
+      <ul className="min-w-44 space-y-1">
+        {coat.warnings.map((w) => (
+          <li key={w.code}>
+            <span aria-hidden="true">⚠ </span>
+            {w.message}
+            {!shared && w.acknowledgedReason && <span className="block text-sm text-maple-800">Reason: {w.acknowledgedReason}</span>}
+          </li>
+        ))}
+      </ul>
+      {shared && <p className="mt-1 text-sm font-medium text-maple-800">Reason for the stops: {shared}</p>}
+    </>
   );
 }
 
@@ -39,12 +47,28 @@ function Version({ coat }: { coat: Coat }) {
   );
 }
 
-/** One row per coat version; a replaced version is struck through and names the record that corrects it. */
-export function CoatLogTable({ coats, units, timeZone, onCorrect }: CoatLogTableProps) {
+function DenibRow({ denib, timeZone }: { denib: Denib; timeZone: string }) {
+  return (
+    <tr aria-label={`Denib ${denib.id}`} className="border-b border-dashed border-maple-400 bg-maple-100 align-top last:border-b-0">
+      <th scope="row" className="px-3 py-2 font-semibold">
+        <span className="rounded-panel bg-maple-700 px-2 py-0.5 text-sm text-white">Denib</span>
+        <span className="block whitespace-nowrap font-normal">{formatShopDateTime(denib.abradedAt, timeZone)}</span>
+      </th>
+      <td colSpan={4} className="px-3 py-2">
+        {denibWords(denib)}
+        {denib.notes && <span className="block text-sm">{denib.notes}</span>}
+      </td>
+      <td className="px-3 py-2">{denib.recordedByName}</td>
+    </tr>
+  );
+}
+
+/** One row per coat version, and the denibs between them; a replaced version is struck through and names the record that corrects it. */
+export function CoatLogTable({ coats, denibs, units, timeZone, onCorrect }: CoatLogTableProps) {
   return (
     <div role="region" aria-label="Coat records" tabIndex={0} className="overflow-x-auto rounded-panel border border-maple-300 bg-white">
       <table className="w-full border-collapse text-left">
-        <caption className="sr-only">Coat records, newest first</caption>
+        <caption className="sr-only">Coat records and denibs, newest first</caption>
         <thead className="bg-maple-100">
           <tr>
             {headings.map((h) => (
@@ -55,7 +79,9 @@ export function CoatLogTable({ coats, units, timeZone, onCorrect }: CoatLogTable
           </tr>
         </thead>
         <tbody>
-          {coats.map((coat) => {
+          {logEntries(coats, denibs).map((entry) => {
+            if (entry.kind === 'denib') return <DenibRow key={`denib-${entry.denib.id}`} denib={entry.denib} timeZone={timeZone} />;
+            const { coat } = entry;
             const replaced = coat.supersededById !== null;
             const struck = replaced ? 'line-through' : '';
             return (

@@ -83,7 +83,15 @@ function JobFormFields({ job, onDone, finishSystems }: JobFormProps & { finishSy
         />
         <InputField label="Colour" hint="e.g. a colour card name or the customer’s sample." error={errors.colour?.message} registration={register('colour')} />
         <InputField label="Sheen" hint="e.g. Satin 30, Matt 10." error={errors.sheen?.message} registration={register('sheen')} />
-        {job && <SelectField label="State" options={jobStateOptions} error={errors.state?.message} registration={register('state')} />}
+        {job && (
+          <SelectField
+            label="State"
+            options={jobStateOptions}
+            hint="Boothwright moves the job on as coats land and parts are collected. A state you choose goes in the activity log; delivered and cancelled stay until a lead changes them."
+            error={errors.state?.message}
+            registration={register('state')}
+          />
+        )}
         <FieldShell label="Notes" error={errors.notes?.message} className="sm:col-span-2">
           {(control) => <textarea rows={3} className={inputClasses} {...control} {...register('notes')} />}
         </FieldShell>

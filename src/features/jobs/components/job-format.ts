@@ -1,13 +1,31 @@
-import { jobStates, type Job, type JobState } from '../../../../shared/schemas/job';
+import { jobStates, liveJobStates, type Job, type JobState } from '../../../../shared/schemas/job';
 
 export const jobStateLabels: Record<JobState, string> = {
   open: 'Open',
   'in-finish': 'In finish',
-  finished: 'Finished',
+  ready: 'Ready',
+  delivered: 'Delivered',
   cancelled: 'Cancelled',
 };
 
+/** What each state means, for the state filter and the job form. */
+export const jobStateHints: Record<JobState, string> = {
+  open: 'No coat yet',
+  'in-finish': 'Coats going on or drying',
+  ready: 'Every part can be handled',
+  delivered: 'Every part collected',
+  cancelled: 'Set by a lead',
+};
+
 export const jobStateOptions = jobStates.map((state) => ({ value: state, label: jobStateLabels[state] }));
+
+/** The list filter: one state, or every job not yet delivered or cancelled. */
+export type JobStateFilter = JobState | 'active' | '';
+export const jobStateFilterOptions: { value: JobStateFilter; label: string }[] = [
+  { value: '', label: 'Any state' },
+  { value: 'active', label: 'Not delivered yet (open, in finish, ready)' },
+  ...jobStates.map((state) => ({ value: state, label: `${jobStateLabels[state]}${state === 'delivered' ? ' (closed)' : ''}: ${jobStateHints[state].toLowerCase()}` })),
+];
 
 const dayMs = 86_400_000;
 const toUtcDay = (isoDate: string) => Date.parse(`${isoDate}T00:00:00Z`);
@@ -27,11 +45,11 @@ export interface DueWords {
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
-/** The due date and how it stands against the shop's today; finished and cancelled jobs cannot be late. */
+/** The due date and how it stands against the shop's today; delivered and cancelled jobs cannot be late. */
 export function dueWords(job: Pick<Job, 'dueDate' | 'state'>, shopToday: string): DueWords {
   const days = Math.round((toUtcDay(job.dueDate) - toUtcDay(shopToday)) / dayMs);
   const date = formatDueDate(job.dueDate);
-  const live = job.state === 'open' || job.state === 'in-finish';
+  const live = liveJobStates.includes(job.state);
   if (!live || Number.isNaN(days)) return { date, relation: '', overdue: false };
   if (days < 0) return { date, relation: `Overdue by ${plural(-days, 'day')}`, overdue: true };
   if (days === 0) return { date, relation: 'Due today', overdue: false };

@@ -53,6 +53,7 @@ export function JobOverview({ job, units, shopToday, canWrite, actions }: JobOve
         </Detail>
         <Detail term="State">
           <JobStateBadge state={job.state} />
+          <span className="block text-sm text-maple-700">{job.stateSetBy === 'lead' ? 'Set by a lead' : 'Follows its parts’ coats and collections'}</span>
         </Detail>
         <Detail term="Finish system">{job.finishSystemName ?? <span className="text-maple-700">None chosen yet</span>}</Detail>
         <Detail term="Colour and sheen">

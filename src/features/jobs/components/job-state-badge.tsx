@@ -4,7 +4,8 @@ import { jobStateLabels } from './job-format';
 const tones: Record<JobState, string> = {
   open: 'border-maple-400 bg-white text-maple-900',
   'in-finish': 'border-lacquer-400 bg-lacquer-50 text-lacquer-900',
-  finished: 'border-verdict-go bg-white text-verdict-go',
+  ready: 'border-verdict-go bg-white text-verdict-go',
+  delivered: 'border-maple-500 bg-maple-100 text-maple-900',
   cancelled: 'border-maple-300 bg-maple-100 text-maple-700 line-through decoration-1',
 };
 

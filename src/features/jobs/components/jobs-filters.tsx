@@ -1,12 +1,11 @@
 import { useEffect, useId, useState } from 'react';
-import type { JobState } from '../../../../shared/schemas/job';
 import { inputClasses } from '../../../components/ui/field';
-import { jobStateOptions } from './job-format';
+import { jobStateFilterOptions, type JobStateFilter } from './job-format';
 
 interface JobsFiltersProps {
   q: string;
-  state: JobState | '';
-  onChange: (filters: { q: string; state: JobState | '' }) => void;
+  state: JobStateFilter;
+  onChange: (filters: { q: string; state: JobStateFilter }) => void;
 }
 
 /** Search as you type, but only ask the server once typing pauses. */
@@ -36,9 +35,8 @@ export function JobsFilters({ q, state, onChange }: JobsFiltersProps) {
         <label htmlFor={stateId} className="mb-1 block font-medium">
           State
         </label>
-        <select id={stateId} className={inputClasses} value={state} onChange={(event) => onChange({ q: text.trim(), state: event.target.value as JobState | '' })}>
-          <option value="">Any state</option>
-          {jobStateOptions.map((option) => (
+        <select id={stateId} className={inputClasses} value={state} onChange={(event) => onChange({ q: text.trim(), state: event.target.value as JobStateFilter })}>
+          {jobStateFilterOptions.map((option) => (
             <option key={option.value} value={option.value}>
               {option.label}
             </option>

@@ -1,13 +1,14 @@
 import { useCallback, useState, type ReactNode } from 'react';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import type { UnitSystem } from '../../../../shared/schemas/common';
-import { jobStateSchema, type JobState } from '../../../../shared/schemas/job';
+import { jobStateSchema } from '../../../../shared/schemas/job';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { useJobs } from '../api/get-jobs';
+import type { JobStateFilter } from './job-format';
 import { JobForm } from './job-form';
 import { JobsFilters } from './jobs-filters';
 import { JobsTable } from './jobs-table';
@@ -26,8 +27,9 @@ interface JobsPageProps {
 function useJobFilters() {
   const [params, setParams] = useSearchParams();
   const q = params.get('q') ?? '';
-  const parsedState = jobStateSchema.safeParse(params.get('state'));
-  const state: JobState | '' = parsedState.success ? parsedState.data : '';
+  const raw = params.get('state');
+  const parsedState = jobStateSchema.safeParse(raw);
+  const state: JobStateFilter = raw === 'active' ? 'active' : parsedState.success ? parsedState.data : '';
   const page = Math.max(1, Number(params.get('page')) || 1);
   const set = useCallback(
     (next: { q?: string; state?: string; page?: number }) =>

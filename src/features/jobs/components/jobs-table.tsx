@@ -20,7 +20,7 @@ export function JobsTable({ jobs, units, shopToday }: { jobs: Job[]; units: Unit
       column.accessor('reference', {
         header: 'Reference',
         cell: ({ row }) => (
-          <Link to={`/jobs/${row.original.id}`} className="inline-flex min-h-touch items-center text-lacquer-800 underline underline-offset-4 hover:text-lacquer-600">
+          <Link to={`/jobs/${row.original.id}`} className="inline-flex min-h-touch items-center whitespace-nowrap text-lacquer-800 underline underline-offset-4 hover:text-lacquer-600">
             {row.original.reference}
           </Link>
         ),

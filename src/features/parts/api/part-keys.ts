@@ -5,4 +5,5 @@ export const partKeys = {
   details: () => [...partKeys.all, 'detail'] as const,
   detail: (id: number) => [...partKeys.details(), id] as const,
   byTag: (tag: string) => [...partKeys.all, 'tag', tag] as const,
+  history: (id: number) => [...partKeys.all, 'history', id] as const,
 };

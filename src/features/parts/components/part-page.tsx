@@ -18,6 +18,10 @@ interface PartPageProps {
   /** The part's job in a line, with a link to it; supplied by the route. */
   job: ReactNode;
   onSaved: () => void;
+  /** The state as worked out now (it moves on with the clock); the stored one until that is known. */
+  stateNow?: string;
+  /** What the part needs next and when it is ready, shown above its facts; supplied by the route. */
+  status?: ReactNode;
 }
 
 function Fact({ term, children }: { term: string; children: ReactNode }) {
@@ -30,7 +34,7 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
 }
 
 /** What a scanned rack tag opens: large, plain facts for someone at the rack with gloves on. */
-export function PartPage({ part, units, canWrite, racks, job, onSaved }: PartPageProps) {
+export function PartPage({ part, units, canWrite, racks, job, onSaved, stateNow, status }: PartPageProps) {
   const [editing, setEditing] = useState(false);
   return (
     <>
@@ -46,9 +50,10 @@ export function PartPage({ part, units, canWrite, racks, job, onSaved }: PartPag
           </Button>
         )}
       </div>
+      {status}
       <dl className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         <Fact term="State">
-          <PartStateBadge state={part.state} />
+          <PartStateBadge state={stateNow ?? part.state} />
         </Fact>
         <Fact term="Rack and shelf">{rackPlace(part)}</Fact>
         <Fact term="Size">{partSize(part)}</Fact>

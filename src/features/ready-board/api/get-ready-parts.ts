@@ -1,15 +1,12 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { readyPartSchema } from '../../../../shared/schemas/ready';
+import { readyListSchema } from '../../../../shared/schemas/ready';
 import { apiClient } from '../../../lib/api-client';
 import { livePollMs } from '../../../lib/use-live-updates';
 import { readyKeys, type ReadyQuery } from './ready-keys';
 
-const readyListSchema = z.object({ items: z.array(readyPartSchema) });
-
-export async function getReadyParts(query: ReadyQuery, signal?: AbortSignal) {
-  const { items } = await apiClient.get('/api/ready', readyListSchema, { query: { ...query }, signal });
-  return items;
+/** The parts and, for each of their jobs, when the whole job is ready to handle and to pack. */
+export function getReadyParts(query: ReadyQuery, signal?: AbortSignal) {
+  return apiClient.get('/api/ready', readyListSchema, { query: { ...query }, signal });
 }
 
 /**

@@ -2,6 +2,8 @@
 export interface ReadyQuery {
   jobId?: number;
   rackId?: number;
+  /** How long collected parts stay listed; the server's week unless a filter asks to see collected parts. */
+  collectedDays?: number;
 }
 
 export const readyKeys = {

@@ -1,33 +1,19 @@
 import { missedWindowScuffGrit } from '../../../../shared/finishing/readiness';
-import { calendarDateIn } from '../../../../shared/time';
-import { formatMinutes } from '../../../lib/durations';
-import { formatShopClock } from '../../../lib/shop-time';
+import { shopMoment, timeUntil } from '../../../lib/ready-time-words';
 import type { BoardPart } from './readiness';
 
-/** Time left as a board shows it, to the minute and rounded up, so "0 min" never shows while still waiting. */
-export function timeUntil(iso: string, now: Date): string {
-  return formatMinutes(Math.max(1, Math.ceil((Date.parse(iso) - now.getTime()) / 60_000)));
-}
-
-/** "10:42" today in the shop, "3 Dec 10:42" on another day. */
-export function shopMoment(iso: string, now: Date, timeZone: string): string {
-  const at = new Date(iso);
-  const clock = formatShopClock(at, timeZone);
-  if (calendarDateIn(at, timeZone) === calendarDateIn(now, timeZone)) return clock;
-  const day = new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short' }).format(at);
-  return `${day} ${clock}`;
-}
+export { shopMoment, timeUntil };
 
 export function coatWords(part: BoardPart): string {
   if (part.coatsTotal === 0) return 'No finish system';
   if (part.coatsDone === 0) return `No coats yet (${part.coatsTotal} to go)`;
-  return `Coat ${part.coatsDone} of ${part.coatsTotal}`;
+  return `${part.coatsDone} of ${part.coatsTotal} coats on`;
 }
 
 /** The server names an abrade step "Abrade P320"; in the shop between coats that is a denib. */
 function denibWords(nextStep: string | null): string {
-  const grit = /^Abrade (.+)$/.exec(nextStep ?? '')?.[1];
-  return grit ? `Denib ${grit} needed` : 'Denib needed';
+  const grit = /^Abrade (.+)$/.exec(nextStep ?? '')?.[1] ?? missedWindowScuffGrit;
+  return `Denib ${grit} needed`;
 }
 
 const ahead = (iso: string | null, now: Date): iso is string => iso !== null && Date.parse(iso) > now.getTime();
@@ -39,20 +25,45 @@ function milestone(iso: string | null, label: { before: string; since: string },
 }
 
 const handle = { before: 'Handle', since: 'Ready to handle' };
-// Between coats a part can be moved once touch-dry enough to handle, but it is not finished.
-const handleBetweenCoats = { before: 'Handle', since: 'Can be moved' };
 const pack = { before: 'Pack', since: 'Ready to pack' };
 const cure = { before: 'Full cure', since: 'Fully cured' };
 
-/** What the next coat waits for, for a part between coats. */
-function nextCoatLines(part: BoardPart, now: Date, timeZone: string): string[] {
+const nextCoat = (part: BoardPart) => `coat ${Math.min(part.coatsDone + 1, part.coatsTotal)} of ${part.coatsTotal}`;
+
+/** What a part between coats needs next, as its headline: never a handle time while coats remain. */
+function nextWords(part: BoardPart): string {
+  if (part.windowMissed || part.abradeRequired) return `${part.windowMissed ? `Denib ${missedWindowScuffGrit} needed` : denibWords(part.nextStep)}, then ${nextCoat(part)}`;
+  const coat = nextCoat(part);
+  return `${coat.charAt(0).toUpperCase()}${coat.slice(1)} next`;
+}
+
+/** When the window for the next coat opens and closes, and whether a denib is on record since the last coat. */
+function windowLines(part: BoardPart, now: Date, timeZone: string): string[] {
   const { nextWindowOpensAt: opens, nextWindowClosesAt: closes } = part;
-  if (part.windowMissed && closes) return [`Recoat window closed at ${shopMoment(closes, now, timeZone)}`, `Denib ${missedWindowScuffGrit} needed before the next coat`];
-  const lines = part.abradeRequired ? [denibWords(part.nextStep)] : part.nextStep ? [`Next: ${part.nextStep.toLowerCase()}`] : [];
-  if (ahead(opens, now)) lines.push(`Next coat from ${shopMoment(opens, now, timeZone)} (in ${timeUntil(opens, now)})`);
-  else if (closes) lines.push(`Recoat window open until ${shopMoment(closes, now, timeZone)} (${timeUntil(closes, now)} left)`);
-  else if (opens) lines.push('Ready for the next coat');
+  if (part.windowMissed && closes) return [`Recoat window closed at ${shopMoment(closes, now, timeZone)}`];
+  const lines = part.denibbedAt ? [`Denibbed at ${shopMoment(part.denibbedAt, now, timeZone)}`] : [];
+  if (ahead(opens, now)) lines.push(`Window opens ${shopMoment(opens, now, timeZone)} (in ${timeUntil(opens, now)})`);
+  else if (closes) lines.push(`Window open until ${shopMoment(closes, now, timeZone)} (${timeUntil(closes, now)} left)`);
+  else if (opens) lines.push('Window open, no closing time');
   return lines;
+}
+
+/** When the part will be ready to handle once its remaining coats are on: an estimate, said so. */
+function expectedLine(part: BoardPart, now: Date, timeZone: string): string | null {
+  if (!part.expectedHandleAt || part.coatsRemaining === 0) return null;
+  const coats = `${part.coatsRemaining} ${part.coatsRemaining === 1 ? 'coat' : 'coats'} to go`;
+  return `Ready to handle from about ${shopMoment(part.expectedHandleAt, now, timeZone)} (estimate, ${coats})`;
+}
+
+/** Between coats a part may be moved to another rack once dry enough, but it is not ready. */
+function movableLine(part: BoardPart, now: Date, timeZone: string): string | null {
+  if (!part.handleAt) return null;
+  return ahead(part.handleAt, now) ? `Can be moved between racks from ${shopMoment(part.handleAt, now, timeZone)}` : `Can be moved between racks since ${shopMoment(part.handleAt, now, timeZone)}`;
+}
+
+function collectedLines(part: BoardPart, now: Date, timeZone: string): { headline: string; details: string[] } {
+  const from = part.collectedFrom ? [`Taken from ${part.collectedFrom.name}${part.collectedFrom.shelf != null ? `, shelf ${part.collectedFrom.shelf}` : ''}`] : [];
+  return { headline: part.collectedAt ? `Collected ${shopMoment(part.collectedAt, now, timeZone)}` : 'Collected from the rack', details: from };
 }
 
 /** The headline and the smaller lines under it, all in words. */
@@ -61,9 +72,10 @@ export function partLines(part: BoardPart, now: Date, timeZone: string): { headl
   const present = (lines: (string | null)[]) => lines.filter((line): line is string => line !== null);
   switch (part.shownState) {
     case 'waiting':
-      return { headline: 'Not sprayed yet', details: part.nextStep ? [`First: ${part.nextStep.toLowerCase()}`] : [] };
+      if (part.coatsTotal === 0) return { headline: 'Not sprayed yet', details: [] };
+      return { headline: 'Not sprayed yet', details: present([part.abradeRequired ? `First: ${denibWords(part.nextStep).toLowerCase()}` : `First: ${nextCoat(part)}`, expectedLine(part, now, timeZone)]) };
     case 'in-finish':
-      return { headline: 'Between coats', details: present([...nextCoatLines(part, now, timeZone), at(part.handleAt, handleBetweenCoats)]) };
+      return { headline: nextWords(part), details: present([...windowLines(part, now, timeZone), movableLine(part, now, timeZone), expectedLine(part, now, timeZone)]) };
     case 'drying':
       return { headline: at(part.handleAt, handle) ?? 'Drying', details: present([at(part.packAt, pack), at(part.fullCureAt, cure)]) };
     case 'ready-to-handle':
@@ -73,6 +85,6 @@ export function partLines(part: BoardPart, now: Date, timeZone: string): { headl
     case 'cured':
       return { headline: at(part.fullCureAt, cure) ?? 'Fully cured', details: [] };
     case 'collected':
-      return { headline: 'Collected from the rack', details: [] };
+      return collectedLines(part, now, timeZone);
   }
 }

@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
-import type { ReadyPart } from '../../../../shared/schemas/ready';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { ReadyJob, ReadyPart } from '../../../../shared/schemas/ready';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
@@ -18,6 +19,8 @@ import { useCollectWithUndo } from './use-collect-with-undo';
 
 interface BoardBodyProps {
   items: ReadyPart[];
+  jobs: ReadyJob[];
+  units: UnitSystem;
   filters: BoardFilters;
   onFilters: (filters: BoardFilters) => void;
   now: Date;
@@ -25,7 +28,7 @@ interface BoardBodyProps {
   canCollect: boolean;
 }
 
-function BoardBody({ items, filters, onFilters, now, timeZone, canCollect }: BoardBodyProps) {
+function BoardBody({ items, jobs, units, filters, onFilters, now, timeZone, canCollect }: BoardBodyProps) {
   const { markCollected, pendingId } = useCollectWithUndo();
   const parts = useMemo(() => items.map((part) => toBoardPart(part, now)), [items, now]);
   const shown = parts.filter(matchesState(filters.state));
@@ -36,7 +39,18 @@ function BoardBody({ items, filters, onFilters, now, timeZone, canCollect }: Boa
     <div className="space-y-5">
       <ReadyAnnouncer counts={countStates(shown)} />
       {groups.map((group) => (
-        <ReadyGroup key={group.key} group={group} groupBy={filters.group} now={now} timeZone={timeZone} onCollect={onCollect} collectingId={pendingId} collapsible={groups.length > 1} />
+        <ReadyGroup
+          key={group.key}
+          group={group}
+          groupBy={filters.group}
+          job={filters.group === 'job' ? jobs.find((job) => job.jobId === group.parts[0].jobId) : undefined}
+          units={units}
+          now={now}
+          timeZone={timeZone}
+          onCollect={onCollect}
+          collectingId={pendingId}
+          collapsible={groups.length > 1}
+        />
       ))}
     </div>
   );
@@ -70,16 +84,20 @@ function BoardEmpty({ parts, filters, onFilters }: { parts: BoardPart[]; filters
   );
 }
 
-export function ReadyBoardPage({ timeZone, canCollect }: { timeZone: string; canCollect: boolean }) {
+// Asked to show collected parts, the board reaches back a month rather than the usual week.
+const collectedShownDays = 30;
+
+export function ReadyBoardPage({ timeZone, units, canCollect }: { timeZone: string; units: UnitSystem; canCollect: boolean }) {
   const [filters, setFilters] = useBoardFilters();
-  const ready = useReadyParts({ jobId: filters.jobId, rackId: filters.rackId });
+  const showsCollected = filters.state === 'any' || filters.state === 'collected';
+  const ready = useReadyParts({ jobId: filters.jobId, rackId: filters.rackId, ...(showsCollected ? { collectedDays: collectedShownDays } : {}) });
   const { jobs, racks } = useReadyChoices();
-  const now = useBoardClock(upcomingInstants(ready.data ?? []), () => void ready.refetch());
+  const now = useBoardClock(upcomingInstants(ready.data?.items ?? []), () => void ready.refetch());
   return (
     <>
       <PageHeader
         title="Ready board"
-        description="Every part, by job or by rack: its coats so far, the next recoat window, and when it can be handled, packed and is fully cured."
+        description="Every part, by job or by rack: its coats so far, what is next, and when it can be handled and packed. Each job says when the whole job will be ready."
         actions={
           <Link to="/ready/wall" className={buttonClasses('secondary')}>
             Wall screen
@@ -89,7 +107,7 @@ export function ReadyBoardPage({ timeZone, canCollect }: { timeZone: string; can
       <ReadyFilters filters={filters} jobs={jobs} racks={racks} onChange={setFilters} />
       <LiveNote className="mt-3 mb-4 text-sm" failing={ready.isError} updatedAt={ready.dataUpdatedAt} timeZone={timeZone} />
       {ready.data ? (
-        <BoardBody items={ready.data} filters={filters} onFilters={setFilters} now={now} timeZone={timeZone} canCollect={canCollect} />
+        <BoardBody items={ready.data.items} jobs={ready.data.jobs} units={units} filters={filters} onFilters={setFilters} now={now} timeZone={timeZone} canCollect={canCollect} />
       ) : ready.isError ? (
         <ErrorState error={ready.error} what="the ready board" onRetry={() => ready.refetch()} />
       ) : (

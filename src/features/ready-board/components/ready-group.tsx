@@ -1,4 +1,7 @@
 import { useId, useState } from 'react';
+import type { UnitSystem } from '../../../../shared/schemas/common';
+import type { ReadyJob } from '../../../../shared/schemas/ready';
+import { jobReadyLines } from '../../../lib/ready-time-words';
 import { Button } from '../../../components/ui/button';
 import type { BoardGroup, GroupBy } from './board-groups';
 import { countStates, countWords, type BoardPart } from './readiness';
@@ -10,6 +13,9 @@ const firstShown = 12;
 interface ReadyGroupProps {
   group: BoardGroup;
   groupBy: GroupBy;
+  /** The group's job as a whole, when grouped by job: when it will be ready to handle and pack. */
+  job?: ReadyJob;
+  units: UnitSystem;
   now: Date;
   timeZone: string;
   onCollect?: (part: BoardPart) => void;
@@ -18,7 +24,21 @@ interface ReadyGroupProps {
   collapsible: boolean;
 }
 
-export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectingId, collapsible }: ReadyGroupProps) {
+function JobReadyTime({ job, now, timeZone, units }: { job: ReadyJob; now: Date; timeZone: string; units: UnitSystem }) {
+  const { headline, details } = jobReadyLines(job, now, timeZone, units);
+  return (
+    <div className="mb-3 rounded-panel border border-lacquer-300 bg-white px-3 py-2" aria-label={`When ${job.jobReference} is ready`} role="group">
+      <p className="font-semibold text-lacquer-900">{headline}</p>
+      {details.map((line) => (
+        <p key={line} className="text-sm text-maple-800">
+          {line}
+        </p>
+      ))}
+    </div>
+  );
+}
+
+export function ReadyGroup({ group, groupBy, job, units, now, timeZone, onCollect, collectingId, collapsible }: ReadyGroupProps) {
   const [showAll, setShowAll] = useState(false);
   const headingId = useId();
   const listId = useId();
@@ -34,6 +54,7 @@ export function ReadyGroup({ group, groupBy, now, timeZone, onCollect, collectin
           {group.parts.length} {group.parts.length === 1 ? 'part' : 'parts'}: {countWords(countStates(group.parts)).join(', ')}
         </p>
       </div>
+      {job && <JobReadyTime job={job} now={now} timeZone={timeZone} units={units} />}
       <ul id={listId} className="grid gap-3 md:grid-cols-2 2xl:grid-cols-3">
         {shown.map((part) => (
           <ReadyPartCard key={part.id} part={part} now={now} timeZone={timeZone} groupBy={groupBy} onCollect={onCollect} collecting={collectingId === part.id} />

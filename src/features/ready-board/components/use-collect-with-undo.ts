@@ -15,9 +15,9 @@ export function useCollectWithUndo() {
   const undo = async (part: BoardPart) => {
     try {
       await uncollect.mutateAsync(part.id);
-      // The server freed the shelf on collecting and does not put the part back on it.
+      // The server puts the part back on the rack and shelf it was taken from, if that rack still exists.
       toast.success(`${part.label} is back on the board as not collected.`, {
-        description: part.rack ? `It is no longer recorded on ${part.rack.name}; set its rack again on the part’s page if it is still there.` : undefined,
+        description: part.rack ? `It is recorded on ${part.rack.name}${part.rack.shelf != null ? `, shelf ${part.rack.shelf}` : ''} again.` : undefined,
       });
     } catch (error) {
       toast.error(`Could not undo: ${errorMessage(error)}`);

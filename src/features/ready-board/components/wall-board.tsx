@@ -40,8 +40,9 @@ function WallJobs({ summary }: { summary: WallSummary }) {
 export function WallBoard({ timeZone }: { timeZone: string }) {
   // Polls in the background too: a wall screen is often an unfocused window.
   const ready = useReadyParts({}, { inBackground: true });
-  const now = useBoardClock(upcomingInstants(ready.data ?? []), () => void ready.refetch());
-  const summary = useMemo(() => summariseForWall((ready.data ?? []).map((part) => toBoardPart(part, now)), nextCount), [ready.data, now]);
+  const items = ready.data?.items;
+  const now = useBoardClock(upcomingInstants(items ?? []), () => void ready.refetch());
+  const summary = useMemo(() => summariseForWall((items ?? []).map((part) => toBoardPart(part, now)), nextCount), [items, now]);
   return (
     <div className="min-h-dvh bg-maple-50 p-4 text-maple-900 sm:p-8">
       <header className="mb-6 flex flex-wrap items-end justify-between gap-4 border-b-4 border-maple-900 pb-4">

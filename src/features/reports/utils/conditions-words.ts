@@ -1,5 +1,6 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { ConditionsReport } from '../../../../shared/schemas/report';
+import { surfaceMarginWords } from '../../../../shared/finishing/conditions';
 import { formatQuantity } from '../../../../shared/units';
 
 type Coat = ConditionsReport['coatsOutside'][number];
@@ -35,7 +36,7 @@ export function outsideReasonWords(coat: Coat, limit: Limit | undefined, minMarg
       case 'rh-too-high':
         return `Humidity too high: ${Math.round(coat.relativeHumidityPct)} %${limit?.maxRelativeHumidityPct ? ` (maximum ${limit.maxRelativeHumidityPct} %)` : ''}`;
       case 'dew-point-margin':
-        return `Too close to the dew point: ${formatQuantity(coat.dewPointMarginC, 'temperatureDifference', units)} above it (at least ${formatQuantity(minMarginC, 'temperatureDifference', units)})`;
+        return `${coat.dewPointMarginC < 0 ? 'Below' : 'Too close to'} the dew point: surface ${surfaceMarginWords(coat.dewPointMarginC, units)} (needs at least ${formatQuantity(minMarginC, 'temperatureDifference', units)} above)`;
     }
   });
 }

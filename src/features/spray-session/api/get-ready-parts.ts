@@ -1,10 +1,7 @@
 import { queryOptions, useQueries, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { readyPartSchema, type ReadyPart } from '../../../../shared/schemas/ready';
+import { readyListSchema, type ReadyPart } from '../../../../shared/schemas/ready';
 import { apiClient } from '../../../lib/api-client';
 import { spraySessionKeys, type ReadyFilter } from './spray-session-keys';
-
-const readyListSchema = z.object({ items: z.array(readyPartSchema) });
 
 export async function getReadyParts(filter: ReadyFilter, signal?: AbortSignal) {
   const { items } = await apiClient.get('/api/ready', readyListSchema, { query: filter, signal });
@@ -19,10 +16,10 @@ export function useReadyParts(filter: ReadyFilter | null) {
   return useQuery({ ...readyPartsQueryOptions(filter ?? { jobId: 0 }), enabled: filter !== null });
 }
 
-/** The readiness of every part of the jobs given, by part id. */
-export function useReadyByJobs(jobIds: number[]): Map<number, ReadyPart> {
+/** The readiness of every part of the jobs given, by part id, and whether some of it is still loading. */
+export function useReadyByJobs(jobIds: number[]): { ready: Map<number, ReadyPart>; pending: boolean } {
   return useQueries({
     queries: jobIds.map((jobId) => readyPartsQueryOptions({ jobId })),
-    combine: (results) => new Map(results.flatMap((r) => r.data ?? []).map((part) => [part.id, part])),
+    combine: (results) => ({ ready: new Map(results.flatMap((r) => r.data ?? []).map((part) => [part.id, part])), pending: results.some((r) => r.isPending) }),
   });
 }

@@ -17,6 +17,7 @@ export const spraySessionKeys = {
   detail: (id: number) => [...spraySessionKeys.details(), id] as const,
   mixes: (id: number) => [...spraySessionKeys.detail(id), 'mixes'] as const,
   coats: (id: number) => [...spraySessionKeys.detail(id), 'coats'] as const,
+  denibs: (id: number) => [...spraySessionKeys.detail(id), 'denibs'] as const,
   booth: (id: number) => [...spraySessionKeys.all, 'booth', id] as const,
   racks: () => [...spraySessionKeys.all, 'racks'] as const,
   jobs: () => [...spraySessionKeys.all, 'jobs'] as const,

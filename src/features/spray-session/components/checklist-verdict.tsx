@@ -1,5 +1,6 @@
 import type { ChecklistEvaluation } from '../../../../shared/finishing/checklist';
 import type { UnitSystem } from '../../../../shared/schemas/common';
+import { surfaceMarginWords } from '../../../../shared/finishing/conditions';
 import { formatQuantity } from '../../../../shared/units';
 import { verdictBorder, VerdictBadge } from './verdict-badge';
 
@@ -37,8 +38,8 @@ export function ChecklistVerdict({ evaluation, missing, dew, units }: ChecklistV
               <dd className="inline font-bold">{formatQuantity(dew.dewPointC, 'temperature', units)}</dd>
             </div>
             <div>
-              <dt className="inline text-maple-700">Surface above dew point </dt>
-              <dd className="inline font-bold">{formatQuantity(dew.surfaceMarginC, 'temperatureDifference', units)}</dd>
+              <dt className="inline text-maple-700">Surface </dt>
+              <dd className="inline font-bold">{surfaceMarginWords(dew.surfaceMarginC, units)}</dd>
             </div>
           </dl>
         )}

@@ -2,7 +2,7 @@ import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { formatQuantity } from '../../../../shared/units';
-import { useNow } from '../hooks/use-now';
+import { useNow } from '../../../lib/use-now';
 import { shopWhen } from '../utils/session-format';
 import { CoatTimes } from './coat-times';
 import { Countdown } from './countdown';

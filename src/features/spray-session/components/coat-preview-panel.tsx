@@ -13,12 +13,12 @@ interface CoatPreviewPanelProps {
   thinningPct: number;
   units: UnitSystem;
   timeZone: string;
-  reasons: Record<string, string>;
-  reasonErrors: Record<string, string>;
-  onReason: (code: string, reason: string) => void;
+  reason: string;
+  reasonError: string | null;
+  onReason: (reason: string) => void;
 }
 
-export function CoatPreviewPanel({ preview, product, step, thinningPct, units, timeZone, reasons, reasonErrors, onReason }: CoatPreviewPanelProps) {
+export function CoatPreviewPanel({ preview, product, step, thinningPct, units, timeZone, reason, reasonError, onReason }: CoatPreviewPanelProps) {
   if (preview.problem || !preview.record || !product) return <p className="rounded-panel border border-dashed border-maple-400 bg-white p-3 text-lg text-maple-800">{preview.problem}</p>;
   const { record } = preview;
   return (
@@ -28,7 +28,7 @@ export function CoatPreviewPanel({ preview, product, step, thinningPct, units, t
         If sprayed now: flash-off until {shopWhen(record.flashOffEndsAt.toISOString(), timeZone)}, recoat from {shopWhen(record.recoatOpensAt.toISOString(), timeZone)}, handle from{' '}
         {shopWhen(record.handleAt.toISOString(), timeZone)}.
       </p>
-      <CoatWarnings warnings={preview.warnings} reasons={reasons} errors={reasonErrors} onReason={onReason} />
+      <CoatWarnings warnings={preview.warnings} reason={reason} error={reasonError} onReason={onReason} />
     </section>
   );
 }

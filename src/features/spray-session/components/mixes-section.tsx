@@ -4,7 +4,7 @@ import type { Product } from '../../../../shared/schemas/product';
 import { Button } from '../../../components/ui/button';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { useMixes } from '../api/get-mixes';
-import { useNow } from '../hooks/use-now';
+import { useNow } from '../../../lib/use-now';
 import { MixCard } from './mix-card';
 import { MixForm } from './mix-form';
 

@@ -2,11 +2,13 @@ import type { Booth } from '../../../../shared/schemas/booth';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import type { useSessionCoats } from '../api/get-session-coats';
+import { useSessionDenibs } from '../api/get-session-denibs';
 import type { usePendingCoats } from '../hooks/use-pending-coats';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { ChecklistSection } from './checklist-section';
 import { ClearancePanel } from './clearance-panel';
 import { CoatEntrySection } from './coat-entry-section';
+import { DenibSection } from './denib-section';
 import { MixesSection } from './mixes-section';
 import { RecordedChecklist } from './recorded-checklist';
 import { SessionCoats } from './session-coats';
@@ -26,11 +28,13 @@ interface SessionStageProps {
 /** What the session page shows at each step of the session: checks, spraying, clearing, done. */
 export function SessionStage({ session, booth, plan, coats, pendingCoats, roles, units, timeZone }: SessionStageProps) {
   const { state } = session;
+  const denibs = useSessionDenibs(session.id);
   const labels = new Map(plan.parts.map((part) => [part.id, part.label]));
   const mixProducts = plan.sprayed.length ? plan.sprayed : [...plan.products.values()];
   const coatsList = (
     <SessionCoats
       coats={coats}
+      denibs={denibs.data?.items ?? []}
       pending={pendingCoats.pending}
       onResend={() => void pendingCoats.resend()}
       onDiscard={pendingCoats.discard}
@@ -52,11 +56,14 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
     />
   );
 
+  const denib = <DenibSection sessionId={session.id} plan={plan} canRecord={roles.canRecord} />;
+
   if (state === 'cancelled') return <p className="rounded-panel border-2 border-verdict-stop bg-white p-4 text-lg font-semibold">This session was cancelled. Nothing can be recorded on it.</p>;
   if (state === 'planned' || state === 'checking') {
     return (
       <>
         <ChecklistSection session={session} booth={booth} plan={plan} canRun={roles.canRun} canOverride={roles.canOverride} units={units} timeZone={timeZone} />
+        {denib}
         {mixes}
       </>
     );
@@ -65,7 +72,10 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
     return (
       <>
         {session.checklist && <RecordedChecklist checklist={session.checklist} timeZone={timeZone} />}
-        {roles.canRecord && <CoatEntrySection session={session} plan={plan} sessionCoats={coats.data?.items ?? []} queue={pendingCoats.add} units={units} timeZone={timeZone} />}
+        {denib}
+        {roles.canRecord && (
+          <CoatEntrySection session={session} plan={plan} sessionCoats={coats.data?.items ?? []} coatsPending={coats.isPending} queue={pendingCoats.add} units={units} timeZone={timeZone} />
+        )}
         {coatsList}
         {mixes}
         {roles.canRun && <StopSpraying sessionId={session.id} booth={booth} />}
@@ -80,6 +90,7 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
         <p className="rounded-panel border-2 border-verdict-go bg-white p-4 text-lg font-semibold">This session is done. Its coats are below and in the coat log.</p>
       )}
       {coatsList}
+      {denib}
       {mixes}
     </>
   );

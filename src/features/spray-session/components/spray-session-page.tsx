@@ -9,6 +9,7 @@ import { useSpraySession } from '../api/get-spray-session';
 import { usePendingCoats } from '../hooks/use-pending-coats';
 import { useSessionPlan } from '../hooks/use-session-plan';
 import { CautionsPanel } from './cautions-panel';
+import { OfflineNote } from './offline-note';
 import { SessionHeader } from './session-header';
 import { SessionStage } from './session-stage';
 
@@ -36,6 +37,7 @@ function LoadedSession({ session, viewer, units, timeZone }: PageProps & { sessi
   return (
     <div className="mx-auto max-w-6xl">
       <SessionHeader session={session} timeZone={timeZone} partCount={partCount} />
+      <OfflineNote />
       {!mayRun && session.state !== 'done' && session.state !== 'cancelled' && (
         <p className="mb-4 rounded-panel border border-maple-400 bg-maple-100 p-3">
           You are looking at this session; {session.sprayerName ?? 'the assigned sprayer'} runs it. Ask the finishing lead to change the sprayer if it should be you.

@@ -27,11 +27,12 @@ function startingConditions(session: SpraySession, reading: Reading | null) {
 }
 
 /** The coat form's state and what follows from it: the parts' finish system, the step, its product, mixes and lots. */
-export function useCoatForm(session: SpraySession, plan: SessionPlan, planned: PickedPart[], mixes: Mix[], reading: Reading | null) {
+/** `due` are the planned parts whose next coat is this session's step: the form starts with them chosen. */
+export function useCoatForm(session: SpraySession, plan: SessionPlan, planned: PickedPart[], due: number[], mixes: Mix[], reading: Reading | null) {
   const [known, setKnown] = useState(() => new Map(planned.map((part) => [part.id, part])));
   const form = useForm<CoatEntryInput, unknown, CoatEntry>({
     resolver: zodResolver(coatEntrySchema),
-    defaultValues: { partIds: planned.map((p) => p.id), stepPosition: null, wetFilmUm: null, thinningPct: 0, lotId: null, mixId: null, notes: '', reworkReason: null, ...startingConditions(session, reading) },
+    defaultValues: { partIds: due, stepPosition: null, wetFilmUm: null, thinningPct: 0, lotId: null, mixId: null, notes: '', reworkReason: null, ...startingConditions(session, reading) },
   });
   const values = useWatch({ control: form.control });
   const chosen = (values.partIds ?? []).flatMap((id) => (id === undefined ? [] : (known.get(id) ?? [])));
@@ -67,5 +68,11 @@ export function useCoatForm(session: SpraySession, plan: SessionPlan, planned: P
     setValue('partIds', ids, { shouldValidate: form.formState.isSubmitted });
   };
 
-  return { form, values, known, chosen, choose, work, steps, step, product, productMixes, mixedSystems: systems.size > 1 };
+  /** After a coat is recorded: the parts still due (not those just coated), and the step worked out again for them. */
+  const startNext = (recorded: number[]) => {
+    setValue('stepPosition', null);
+    setValue('partIds', due.filter((id) => !recorded.includes(id)));
+  };
+
+  return { form, values, known, chosen, choose, startNext, work, steps, step, product, productMixes, mixedSystems: systems.size > 1 };
 }

@@ -4,7 +4,7 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import { useRacks } from '../api/get-racks';
 import { dryingTempOf, previewCoat, previousWindowOf } from '../utils/coat-preview';
 import type { useCoatForm } from './use-coat-form';
-import { useNow } from './use-now';
+import { useNow } from '../../../lib/use-now';
 
 export interface CoatPreview {
   record: CoatRecord | null;

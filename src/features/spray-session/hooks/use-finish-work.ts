@@ -9,14 +9,14 @@ import type { FinishWork } from '../utils/session-plan';
 const unique = (ids: number[]) => [...new Set(ids)].sort((a, b) => a - b);
 
 /** For the jobs given: each job's finish system, the data sheets of its coat steps and where each part stands. */
-export function useFinishWork(jobIds: number[]): FinishWork & { jobs: Map<number, Job>; pending: boolean; error: unknown } {
+export function useFinishWork(jobIds: number[]): FinishWork & { jobs: Map<number, Job>; pending: boolean; readyPending: boolean; error: unknown } {
   const wantedJobs = unique(jobIds);
   const { jobs, pending: jobsPending } = useSessionJobs(wantedJobs);
   const systemIds = unique(jobs.flatMap((job) => (job.finishSystemId === null ? [] : [job.finishSystemId])));
   const { systems, pending: systemsPending } = useFinishSystems(systemIds);
   const productIds = unique(systems.flatMap((system) => system.steps.flatMap((step) => (step.kind === 'coat' ? [step.productId] : []))));
   const { products, pending: productsPending, error } = useProducts(productIds);
-  const ready = useReadyByJobs(wantedJobs);
+  const { ready, pending: readyPending } = useReadyByJobs(wantedJobs);
 
   const jobKey = jobs.map((j) => `${j.id}:${j.finishSystemId}`).join();
   const systemKey = systems.map((s) => `${s.id}:${s.updatedAt}`).join();
@@ -31,5 +31,5 @@ export function useFinishWork(jobIds: number[]): FinishWork & { jobs: Map<number
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [jobKey, systemKey, productKey],
   );
-  return { ...maps, ready, pending: jobsPending || systemsPending || productsPending, error };
+  return { ...maps, ready, readyPending, pending: jobsPending || systemsPending || productsPending, error };
 }

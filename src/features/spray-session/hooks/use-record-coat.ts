@@ -12,6 +12,11 @@ export type RecordOutcome = { kind: 'saved'; coat: Coat } | { kind: 'queued' } |
 export function useRecordCoat(sessionId: number, queue: (body: PendingCoat['body'], label: string) => void) {
   const createCoat = useCreateCoat(sessionId);
   const record = async (body: Required<Omit<CreateCoatInput, 'idempotencyKey'>> & { idempotencyKey: string }, label: string): Promise<RecordOutcome> => {
+    // The browser already knows there is no connection: keep the coat here rather than wait for a send to fail.
+    if (!navigator.onLine) {
+      queue(body, label);
+      return { kind: 'queued' };
+    }
     try {
       const { coat } = await createCoat.mutateAsync(body);
       return { kind: 'saved', coat };

@@ -4,23 +4,34 @@ import { acknowledgementSchema } from '../../../../shared/schemas/coat';
 
 type Acknowledgement = { code: string; reason: string };
 
-/** The sprayer's reason for each stop on a coat; checked with the same schema the server uses. */
+/**
+ * The sprayer's one reason for going ahead despite every stop on the coat, checked with the
+ * schema the server uses and sent with each stop's code: one answer, not a form per warning.
+ */
 export function useStopReasons(warnings: CoatWarning[]) {
-  const [reasons, setReasons] = useState<Record<string, string>>({});
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [reason, setReason] = useState('');
+  const [error, setError] = useState<string | null>(null);
+  const stops = warnings.filter((w) => w.verdict === 'stop');
 
-  /** The acknowledgements to send, or null (with the errors shown) while a stop has no good reason. */
+  /** The acknowledgements to send, or null (with the error shown) while a stop has no good reason. */
   const check = (): Acknowledgement[] | null => {
-    const results = warnings.filter((w) => w.verdict === 'stop').map((w) => ({ code: w.code, result: acknowledgementSchema.safeParse({ code: w.code, reason: reasons[w.code] ?? '' }) }));
-    setErrors(Object.fromEntries(results.flatMap(({ code, result }) => (result.success ? [] : [[code, result.error.issues[0].message]]))));
-    const acknowledged = results.flatMap(({ result }) => (result.success ? [result.data] : []));
-    return acknowledged.length === results.length ? acknowledged : null;
+    if (stops.length === 0) {
+      setError(null);
+      return [];
+    }
+    const result = acknowledgementSchema.shape.reason.safeParse(reason);
+    setError(result.success ? null : result.error.issues[0].message);
+    return result.success ? stops.map((w) => ({ code: w.code, reason: result.data })) : null;
   };
 
-  const setReason = (code: string, reason: string) => setReasons((current) => ({ ...current, [code]: reason }));
   const clear = () => {
-    setReasons({});
-    setErrors({});
+    setReason('');
+    setError(null);
   };
-  return { reasons, errors, setReason, check, clear };
+  // Typing answers the message; it is checked again on the next record.
+  const change = (next: string) => {
+    setReason(next);
+    setError(null);
+  };
+  return { reason, error, setReason: change, check, clear, stopCount: stops.length };
 }

@@ -15,8 +15,10 @@ type Window = { opensAt: Date; closesAt: Date | null };
  * already-closed window stands for that so the same "missed" stop shows as the server gives.
  */
 export function previousWindowOf(partIds: number[], ready: Map<number, ReadyPart>, sessionCoats: Coat[]): Window | null {
+  // A coat whose parts were all denibbed since is no longer what the next coat waits on: the denib re-opened the window.
+  const denibbedSince = (coat: Coat) => partIds.every((id) => !coat.partIds.includes(id) || (ready.get(id)?.denibbedAt ?? '') > coat.sprayedAt);
   const windows: Window[] = sessionCoats
-    .filter((coat) => coat.partIds.some((id) => partIds.includes(id)))
+    .filter((coat) => coat.partIds.some((id) => partIds.includes(id)) && !denibbedSince(coat))
     .map((coat) => ({ opensAt: new Date(coat.recoatOpensAt), closesAt: coat.recoatClosesAt ? new Date(coat.recoatClosesAt) : null }));
   for (const id of partIds) {
     const part = ready.get(id);

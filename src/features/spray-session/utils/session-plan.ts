@@ -1,3 +1,4 @@
+import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { FinishStep, FinishSystem } from '../../../../shared/schemas/finish-system';
 import type { Part } from '../../../../shared/schemas/part';
@@ -51,4 +52,22 @@ export function plannedProducts(parts: Part[], steps: Map<number, number | null>
     if (step?.kind === 'coat') ids.add(step.productId);
   }
   return [...ids].flatMap((id) => work.products.get(id) ?? []);
+}
+
+/**
+ * The planned parts the coat form starts with: those whose next coat is the step planned for them
+ * here. A part that has just had that step in this session, or is further on, is left for the
+ * sprayer to add by hand.
+ */
+export function partsDueNow(session: SpraySession, parts: Part[], work: FinishWork, sessionCoats: Pick<Coat, 'partIds' | 'stepPosition'>[]): number[] {
+  const coatedHere = new Map<number, Set<number | null>>();
+  for (const coat of sessionCoats) for (const id of coat.partIds) coatedHere.set(id, (coatedHere.get(id) ?? new Set()).add(coat.stepPosition));
+  const due = session.items.filter((item) => {
+    const part = parts.find((p) => p.id === item.partId);
+    const next = part ? nextCoatPosition(work.systemByJob.get(part.jobId), work.ready.get(part.id)) : null;
+    if (next === null) return false;
+    const here = coatedHere.get(item.partId);
+    return item.stepPosition === null ? !here?.size : item.stepPosition === next && !here?.has(next);
+  });
+  return [...new Set(due.map((item) => item.partId))];
 }

@@ -13,8 +13,11 @@ describe('dueWords', () => {
     expect(dueWords({ dueDate: '2026-02-27', state: 'open' }, today)).toMatchObject({ relation: 'Overdue by 11 days', overdue: true });
     expect(dueWords({ dueDate: '2026-03-09', state: 'open' }, today).relation).toBe('Overdue by 1 day');
   });
-  it('never calls a finished or cancelled job late', () => {
-    for (const state of ['finished', 'cancelled'] as const) expect(dueWords({ dueDate: '2026-01-01', state }, today)).toMatchObject({ relation: '', overdue: false });
+  it('never calls a delivered or cancelled job late', () => {
+    for (const state of ['delivered', 'cancelled'] as const) expect(dueWords({ dueDate: '2026-01-01', state }, today)).toMatchObject({ relation: '', overdue: false });
+  });
+  it('calls a ready job late while it is not delivered', () => {
+    expect(dueWords({ dueDate: '2026-03-09', state: 'ready' }, today)).toMatchObject({ relation: 'Overdue by 1 day', overdue: true });
   });
   it('keeps the calendar day whatever the device’s zone', () => expect(formatDueDate('2026-03-29')).toBe('Sun, 29 Mar 2026'));
 });

@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { groupByJob } from '../../../../src/features/ready-board/components/board-groups';
 import { stateAt, toBoardPart } from '../../../../src/features/ready-board/components/readiness';
-import { partLines, timeUntil } from '../../../../src/features/ready-board/components/readiness-words';
+import { coatWords, partLines, timeUntil } from '../../../../src/features/ready-board/components/readiness-words';
+import { groupByRack } from '../../../../src/features/ready-board/components/board-groups';
+import { jobReadyLines } from '../../../../src/lib/ready-time-words';
 import { summariseForWall } from '../../../../src/features/ready-board/components/wall-summary';
 
 const zone = 'Europe/London';
@@ -26,6 +28,13 @@ function part(fields: Partial<ReadyPart>): ReadyPart {
     packAt: '2026-12-02T16:00:00.000Z',
     fullCureAt: '2026-12-09T10:00:00.000Z',
     rack: { id: 1, name: 'Rack A', shelf: 3 },
+    coatsRemaining: 0,
+    nextCoatAt: null,
+    expectedHandleAt: '2026-12-02T10:42:00.000Z',
+    expectedPackAt: '2026-12-02T16:00:00.000Z',
+    denibbedAt: null,
+    collectedAt: null,
+    collectedFrom: null,
     ...fields,
   };
 }
@@ -60,12 +69,38 @@ describe('partLines', () => {
     const summer = part({ handleAt: '2026-07-01T09:42:00Z', packAt: null, fullCureAt: null });
     expect(partLines(toBoardPart(summer, at('2026-07-01T10:00:00Z')), at('2026-07-01T10:00:00Z'), zone).headline).toBe('Ready to handle since 10:42');
   });
-  it('names the denib and the window for a part between coats, and a window that closed since the last answer', () => {
-    const between = part({ state: 'in-finish', coatsDone: 1, nextStep: 'Abrade P320', abradeRequired: true, nextWindowOpensAt: '2026-12-02T11:00:00Z', nextWindowClosesAt: '2026-12-02T20:00:00Z', handleAt: '2026-12-02T12:00:00Z' });
+  it('says what is next for a part between coats, never a handle time, and a window that closed since the last answer', () => {
+    const between = part({
+      state: 'in-finish',
+      coatsDone: 1,
+      coatsRemaining: 2,
+      nextStep: 'Abrade P320',
+      abradeRequired: true,
+      nextWindowOpensAt: '2026-12-02T11:00:00Z',
+      nextWindowClosesAt: '2026-12-02T20:00:00Z',
+      handleAt: '2026-12-02T12:00:00Z',
+      expectedHandleAt: '2026-12-03T09:15:00Z',
+    });
     const now = at('2026-12-02T10:30:00Z');
-    expect(partLines(toBoardPart(between, now), now, zone).details).toEqual(['Denib P320 needed', 'Next coat from 11:00 (in 30 min)', 'Handle in 1 h 30 min']);
+    const lines = partLines(toBoardPart(between, now), now, zone);
+    expect(lines).toEqual({
+      headline: 'Denib P320 needed, then coat 2 of 3',
+      details: ['Window opens 11:00 (in 30 min)', 'Can be moved between racks from 12:00', 'Ready to handle from about tomorrow 09:15 (estimate, 2 coats to go)'],
+    });
+    expect([lines.headline, ...lines.details].join(' ')).not.toMatch(/Handle in/);
     const late = at('2026-12-02T20:00:00Z');
-    expect(partLines(toBoardPart(between, late), late, zone).details.slice(0, 2)).toEqual(['Recoat window closed at 20:00', 'Denib P320 needed before the next coat']);
+    expect(partLines(toBoardPart(between, late), late, zone)).toMatchObject({ headline: 'Denib P320 needed, then coat 2 of 3', details: expect.arrayContaining(['Recoat window closed at 20:00']) });
+  });
+  it('names the next coat once the denib is on record, with a window that no longer closes', () => {
+    const denibbed = part({ state: 'in-finish', coatsDone: 1, coatsRemaining: 2, nextStep: 'Coat at 40 µm dry', nextWindowOpensAt: '2026-12-02T11:00:00Z', denibbedAt: '2026-12-02T11:05:00Z', handleAt: null, expectedHandleAt: null });
+    const now = at('2026-12-02T11:10:00Z');
+    expect(partLines(toBoardPart(denibbed, now), now, zone)).toEqual({ headline: 'Coat 2 of 3 next', details: ['Denibbed at 11:05', 'Window open, no closing time'] });
+    expect(coatWords(toBoardPart(denibbed, now))).toBe('1 of 3 coats on');
+  });
+  it('says when and where from a collected part was taken, and files it under that rack', () => {
+    const gone = toBoardPart(part({ state: 'collected', rack: null, collectedAt: '2026-12-02T10:50:00Z', collectedFrom: { id: 7, name: 'Rack B', shelf: 4 } }), at('2026-12-02T11:00:00Z'));
+    expect(partLines(gone, at('2026-12-02T11:00:00Z'), zone)).toEqual({ headline: 'Collected 10:50', details: ['Taken from Rack B, shelf 4'] });
+    expect(groupByRack([gone]).map((g) => g.title)).toEqual(['Rack B']);
   });
 });
 
@@ -87,5 +122,25 @@ describe('grouping', () => {
     expect(summary.activeJobs.map((j) => [j.reference, j.counts])).toEqual([['LJ-26-105', { 'ready-to-handle': 1, drying: 1 }]]);
     expect(summary.waitingJobs).toEqual([{ reference: 'LJ-26-101', parts: 1 }]);
     expect(summary.nextReady.map((p) => p.label)).toEqual(['Door 2']);
+  });
+});
+
+describe('jobReadyLines', () => {
+  const job = { jobId: 5, jobReference: 'LJ-26-105', handleAt: '2026-12-03T09:15:00Z', packAt: '2026-12-03T17:00:00Z', coatsRemaining: 4, partsCounted: 2, partsCollected: 0, partsUnknown: 0, projected: true, dryingTempC: 20 };
+  it('gives the whole job’s handle and pack times, and says an estimate is one', () => {
+    expect(jobReadyLines(job, at('2026-12-02T10:00:00Z'), zone, 'metric')).toEqual({
+      headline: 'Whole job ready to handle from about tomorrow 09:15 (in 23 h 15 min)',
+      details: [
+        'Whole job ready to pack from about tomorrow 17:00 (in 31 h)',
+        '4 coats still to go on. Estimate: each coat as soon as its recoat window opens (or at its booked session), drying at 20.0 °C, the shop’s expected drying temperature.',
+      ],
+    });
+  });
+  it('speaks plainly once every coat is on, and when nothing is left or known', () => {
+    const done = { ...job, coatsRemaining: 0, projected: false };
+    expect(jobReadyLines(done, at('2026-12-03T10:00:00Z'), zone, 'metric').headline).toBe('Whole job ready to handle since 09:15');
+    expect(jobReadyLines(done, at('2026-12-03T08:00:00Z'), zone, 'metric').headline).toBe('Whole job ready to handle at 09:15 (in 1 h 15 min)');
+    expect(jobReadyLines({ ...job, partsCounted: 0, partsCollected: 3 }, at('2026-12-03T08:00:00Z'), zone, 'metric').headline).toBe('Every part has been collected');
+    expect(jobReadyLines({ ...job, partsUnknown: 1, handleAt: null }, at('2026-12-03T08:00:00Z'), zone, 'metric').headline).toBe('Ready time not known yet');
   });
 });

@@ -108,10 +108,12 @@ describe('words for the reports', () => {
     expect(outsideReasonWords(coat, limit(2, 15, 75), 3, 'metric')).toEqual([
       'Air too cold: 12.5 °C (minimum 15.0 °C)',
       'Humidity too high: 82 % (maximum 75 %)',
-      'Too close to the dew point: 2.2 °C above it (at least 3.0 °C)',
+      'Too close to the dew point: surface 2.2 °C above the dew point (needs at least 3.0 °C above)',
     ]);
     // A margin is a temperature difference: 3 °C is 5.4 °F, with no 32° offset.
-    expect(outsideReasonWords({ ...coat, reasons: ['dew-point-margin'] }, undefined, 3, 'us')[0]).toBe('Too close to the dew point: 4.0 °F above it (at least 5.4 °F)');
+    expect(outsideReasonWords({ ...coat, reasons: ['dew-point-margin'] }, undefined, 3, 'us')[0]).toBe('Too close to the dew point: surface 4.0 °F above the dew point (needs at least 5.4 °F above)');
+    // A surface colder than the dew point is said to be below it.
+    expect(outsideReasonWords({ ...coat, dewPointMarginC: -1.5, reasons: ['dew-point-margin'] }, undefined, 3, 'metric')[0]).toBe('Below the dew point: surface 1.5 °C below the dew point (needs at least 3.0 °C above)');
   });
 });
 

@@ -1,0 +1,31 @@
+import { z } from 'zod';
+import { listSchema } from '../../shared/schemas/common';
+import { createDenibSchema, denibQuerySchema, denibSchema } from '../../shared/schemas/denib';
+import { defineRoute, type ApiRoute } from '../registry/route';
+
+/**
+ * Denibs are written and read like coats: a sprayer on the spray sessions assigned to them, a lead
+ * or owner on any; each site's denibs are those of its booths' spray sessions.
+ */
+export const denibRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'post',
+    path: '/api/denibs',
+    summary: 'Record a denib between coats (append-only; parts at the spray session’s site; a sprayer on their own sessions)',
+    access: 'coats:write',
+    sites: 'site',
+    body: createDenibSchema,
+    response: { status: 201, schema: z.object({ denib: denibSchema }) },
+    handler: async ({ body }, { services, runner }) => ({ denib: await services.denibs.create(body, runner) }),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/denibs',
+    summary: 'Denib records of the caller’s site, newest first (?partId, spraySessionId, jobId, from, to)',
+    access: 'coats:read',
+    sites: 'site',
+    query: denibQuerySchema,
+    response: { status: 200, schema: listSchema(denibSchema) },
+    handler: ({ query }, { services }) => services.denibs.list(query),
+  }),
+];

@@ -1,0 +1,62 @@
+import { In, Not } from 'typeorm';
+import type { PartBooking } from '../../shared/finishing/job-ready-time';
+import { partReadiness, type FinishStep, type PartReadiness, type ReadinessInput } from '../../shared/finishing/readiness';
+import type { SiteData } from '../data/site-data';
+import type { CoatEntity } from '../db/entities/coat.entity';
+import type { PartEntity } from '../db/entities/part.entity';
+import { currentCoatsByPart, denibTimesByPart, stepsByJob, toPartCoats } from './part-coats';
+
+export interface PartFacts {
+  steps: FinishStep[];
+  coats: CoatEntity[];
+  input: ReadinessInput;
+}
+
+/**
+ * What the readiness maths needs for each part: its finish system, current coats, denibs and
+ * collection. These are facts about the part, so every coat and denib counts whichever site did
+ * it; callers show the result only for parts their scope sees.
+ */
+export async function partFactsOf(data: SiteData, parts: PartEntity[], now: Date): Promise<Map<number, PartFacts>> {
+  const whole = data.acrossSites;
+  const ids = parts.map((p) => p.id);
+  // One after another: inside a transaction on PostgreSQL the manager has a single connection.
+  const coats = await currentCoatsByPart(whole, ids);
+  const denibs = await denibTimesByPart(whole, ids);
+  const steps = await stepsByJob(whole, parts);
+  return new Map(
+    parts.map((part) => {
+      const system = steps.get(part.jobId) ?? [];
+      const partCoats = coats.get(part.id) ?? [];
+      const collectedAt = part.collectedAt ? new Date(part.collectedAt) : null;
+      const input = { steps: system, coats: toPartCoats(partCoats, system), abradedAt: denibs.get(part.id) ?? [], collectedAt, now };
+      return [part.id, { steps: system, coats: partCoats, input }];
+    }),
+  );
+}
+
+/** Readiness of each part at `now`, from its current coats, its denibs and its job's finish system. */
+export async function readinessOf(data: SiteData, parts: PartEntity[], now: Date): Promise<Map<number, PartReadiness>> {
+  const facts = await partFactsOf(data, parts, now);
+  return new Map([...facts].map(([id, fact]) => [id, partReadiness(fact.input)]));
+}
+
+/**
+ * Spray sessions still to run (or running) that plan each part, as the ready-time maths reads
+ * them: only their start and step, whichever site booked them, so a part's expected time is the
+ * same wherever it is read.
+ */
+export async function bookingsByPart(data: SiteData, partIds: number[]): Promise<Map<number, PartBooking[]>> {
+  const byPart = new Map<number, PartBooking[]>();
+  if (partIds.length === 0) return byPart;
+  const whole = data.acrossSites;
+  const items = await whole.spraySessionItems.find({ where: { partId: In(partIds) } });
+  const sessionIds = [...new Set(items.map((i) => i.spraySessionId))];
+  const sessions = sessionIds.length ? await whole.spraySessions.find({ where: { id: In(sessionIds), state: Not(In(['done', 'cancelled', 'clearing'])) } }) : [];
+  const startById = new Map(sessions.map((s) => [s.id, new Date(s.startAt)]));
+  for (const item of items) {
+    const startAt = startById.get(item.spraySessionId);
+    if (startAt) byPart.set(item.partId, [...(byPart.get(item.partId) ?? []), { startAt, stepIndex: item.stepPosition }]);
+  }
+  return byPart;
+}

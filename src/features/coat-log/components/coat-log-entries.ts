@@ -1,0 +1,13 @@
+import type { Coat } from '../../../../shared/schemas/coat';
+import type { Denib } from '../../../../shared/schemas/denib';
+
+export type LogEntry = { kind: 'coat'; at: string; coat: Coat } | { kind: 'denib'; at: string; denib: Denib };
+
+/** Coats and the denibs between them, newest first, as the log lists them. */
+export function logEntries(coats: Coat[], denibs: Denib[]): LogEntry[] {
+  const entries: LogEntry[] = [...coats.map((coat) => ({ kind: 'coat' as const, at: coat.sprayedAt, coat })), ...denibs.map((denib) => ({ kind: 'denib' as const, at: denib.abradedAt, denib }))];
+  // Stable for equal times: a denib recorded at the same minute as a coat lists after it (it came first).
+  return entries.sort((a, b) => Date.parse(b.at) - Date.parse(a.at));
+}
+
+export const denibWords = (denib: Denib) => `Denib ${denib.grit} · ${denib.partIds.length === 1 ? '1 part' : `${denib.partIds.length} parts`}`;
