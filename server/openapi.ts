@@ -18,6 +18,7 @@ import { readyPartSchema } from '../shared/schemas/ready';
 import { createSiteSchema, siteSchema, updateSiteSchema } from '../shared/schemas/site';
 import { areaSprayedReportSchema, boothUseReportSchema, conditionsReportSchema, materialReportSchema, reworkReportSchema, solventReportSchema } from '../shared/schemas/report';
 import { createSpraySessionSchema, spraySessionSchema, updateSpraySessionSchema } from '../shared/schemas/spray-session';
+import { sprayerListSchema } from '../shared/schemas/sprayer';
 
 interface Operation {
   method: 'get' | 'post' | 'patch';
@@ -72,6 +73,7 @@ const operations: Operation[] = [
   { method: 'get', path: '/api/spray-sessions', summary: 'Spray sessions overlapping from–to', permission: 'spray-sessions:read', response: listSchema(spraySessionSchema) },
   { method: 'post', path: '/api/spray-sessions', summary: 'Book booth time (409 when it overlaps)', permission: 'spray-sessions:write', body: createSpraySessionSchema, response: wrap('spraySession', spraySessionSchema), status: 201 },
   { method: 'patch', path: '/api/spray-sessions/{id}', summary: 'Move, resize or progress a session', permission: 'spray-sessions:run', body: updateSpraySessionSchema, response: wrap('spraySession', spraySessionSchema) },
+  { method: 'get', path: '/api/sprayers', summary: 'Active sprayers and leads who can be given a session (?boothId: that booth’s site)', permission: 'spray-sessions:read', response: sprayerListSchema },
   { method: 'post', path: '/api/coats', summary: 'Record a coat', permission: 'coats:write', body: createCoatSchema, response: wrap('coat', coatSchema), status: 201 },
   { method: 'get', path: '/api/coats', summary: 'The coat log', permission: 'coats:read', response: listSchema(coatSchema) },
   { method: 'post', path: '/api/coats/{id}/corrections', summary: 'Correct a coat (a new version)', permission: 'coats:write', body: correctCoatSchema, response: wrap('coat', coatSchema), status: 201 },

@@ -1,5 +1,5 @@
 import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
-import { autoPlan, type Plan, type PlanJob, type PlanStep } from '../../shared/finishing/auto-plan';
+import { autoPlan, type BookedStep, type Plan, type PlanJob, type PlanStep, type RecordedCoat } from '../../shared/finishing/auto-plan';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import { BoothEntity } from '../db/entities/booth.entity';
 import { everySite, type SiteScope } from '../lib/site-scope';
@@ -9,35 +9,50 @@ import { ProductEntity } from '../db/entities/product.entity';
 import { RackEntity } from '../db/entities/rack.entity';
 import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { systemClock, type Clock } from '../lib/clock';
+import { bookedStepsOf, type BookedPartStep } from './booked-steps';
 import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
 import { currentRackLoad, footprintM2 } from './rack-space';
 import type { SettingsService } from './settings';
 
+type JobContext = { system: FinishStep[]; products: Map<number, ProductEntity>; now: Date };
 
-/** One job's remaining steps, planned from its least advanced part (the whole batch moves together). */
-async function planJobInput(manager: EntityManager, job: JobEntity, system: FinishStep[], products: Map<number, ProductEntity>): Promise<PlanJob | null> {
-  const parts = await manager.findBy(PartEntity, { jobId: job.id, collectedAt: IsNull() });
-  const coats = await currentCoatsByPart(manager, parts.map((p) => p.id));
-  const open = parts.filter((p) => nextCoatStep(system, coats.get(p.id) ?? []) !== null);
-  if (open.length === 0) return null;
-  const lastDone = (p: PartEntity) => Math.max(-1, ...(coats.get(p.id) ?? []).map((c) => c.stepPosition ?? -1));
-  const laggard = open.reduce((a, b) => (lastDone(b) < lastDone(a) ? b : a));
-  const latest = [...(coats.get(laggard.id) ?? [])].sort((a, b) => b.sprayedAt.localeCompare(a.sprayedAt))[0];
-  const remaining = system.slice(lastDone(laggard) + 1).map((step, i): PlanStep => {
-    const position = lastDone(laggard) + 1 + i;
+function planSteps(system: FinishStep[], products: Map<number, ProductEntity>): PlanStep[] {
+  return system.map((step, position): PlanStep => {
     if (step.kind === 'abrade') return { position, kind: 'abrade', grit: step.grit };
     const product = products.get(step.productId)!;
     return { position, kind: 'coat', productName: product.name, dryingTimes: product.dryingTimes };
   });
+}
+
+/** Live bookings grouped by session and step, as the planner reads them. */
+function groupBooked(booked: BookedPartStep[]): BookedStep[] {
+  const groups = new Map<string, BookedStep>();
+  for (const b of booked) {
+    const key = `${b.sessionId}:${b.stepPosition}`;
+    const group = groups.get(key) ?? { stepPosition: b.stepPosition, start: b.start, end: b.end, partIds: [] };
+    group.partIds.push(b.partId);
+    groups.set(key, group);
+  }
+  return [...groups.values()];
+}
+
+/** A job as it stands: each part's coats on record and the steps live sessions already plan on it. */
+async function planJobInput(manager: EntityManager, job: JobEntity, { system, products, now }: JobContext): Promise<PlanJob | null> {
+  const parts = await manager.findBy(PartEntity, { jobId: job.id, collectedAt: IsNull() });
+  const coats = await currentCoatsByPart(manager, parts.map((p) => p.id));
+  if (!parts.some((p) => nextCoatStep(system, coats.get(p.id) ?? []) !== null)) return null;
+  const booked = await bookedStepsOf(manager, parts, { coats, steps: new Map([[job.id, system]]), now });
+  const recorded = (p: PartEntity): RecordedCoat[] =>
+    (coats.get(p.id) ?? []).flatMap((c) =>
+      c.stepPosition === null ? [] : [{ stepPosition: c.stepPosition, recoatOpensAt: new Date(c.recoatOpensAt), recoatClosesAt: c.recoatClosesAt ? new Date(c.recoatClosesAt) : null, packAt: new Date(c.packAt) }],
+    );
   return {
     id: job.id,
     reference: job.reference,
     dueDate: job.dueDate,
-    partIds: open.map((p) => p.id),
-    areaM2: open.reduce((sum, p) => sum + p.coatedAreaM2, 0),
-    footprintM2: open.reduce((sum, p) => sum + footprintM2(p), 0),
-    remaining,
-    lastWindow: latest ? { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt ? new Date(latest.recoatClosesAt) : null } : null,
+    steps: planSteps(system, products),
+    parts: parts.map((p) => ({ id: p.id, areaM2: p.coatedAreaM2, footprintM2: footprintM2(p), coats: recorded(p) })),
+    booked: groupBooked(booked),
   };
 }
 
@@ -53,7 +68,7 @@ export function createPlannerService(dataSource: DataSource, settings: SettingsS
       const steps = await stepsByJob(manager, allParts as PartEntity[]);
       const productIds = [...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : []));
       const products = new Map((await manager.findBy(ProductEntity, { id: In(productIds) })).map((p) => [p.id, p]));
-      const planJobs = (await Promise.all(jobs.map((job) => planJobInput(manager, job, steps.get(job.id) ?? [], products)))).filter((j): j is PlanJob => j !== null);
+      const planJobs = (await Promise.all(jobs.map((job) => planJobInput(manager, job, { system: steps.get(job.id) ?? [], products, now })))).filter((j): j is PlanJob => j !== null);
       const horizonEnd = new Date(now.getTime() + horizonDays * 86_400_000).toISOString();
       const [booths, racks, sessions, rackLoad] = await Promise.all([
         manager.find(BoothEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId }, order: { id: 'ASC' } }),

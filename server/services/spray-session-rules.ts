@@ -58,9 +58,3 @@ export function assertOpen(slot: Slot, booth: BoothEntity, timeZone: string, ove
     throw new AppError('outside_opening_hours', `${problem}. A lead may book it anyway with a reason.`, { start: problem, 'override.reason': 'Give a reason to book outside opening hours' });
   }
 }
-
-export async function assertSprayer(manager: EntityManager, sprayerId: number | null | undefined): Promise<void> {
-  if (!sprayerId) return;
-  const user = await manager.findOneBy(UserEntity, { id: sprayerId });
-  if (!user || user.disabled) throw new AppError('validation_failed', 'That sprayer does not exist or is disabled', { sprayerId: 'Choose an active user' });
-}

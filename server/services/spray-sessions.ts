@@ -11,7 +11,6 @@ import { BoothEntity } from '../db/entities/booth.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
 import { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { UserEntity } from '../db/entities/user.entity';
 import { inTransaction } from '../db/transaction';
 import { AppError, notFound } from '../lib/app-error';
 import { everySite, inScope, type SiteScope } from '../lib/site-scope';
@@ -20,38 +19,10 @@ import { recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
 import type { SettingsService } from './settings';
 import { assertRackSpace } from './rack-space';
-import { assertNoClash, assertOpen, assertSprayer } from './spray-session-rules';
+import { assertNoClash, assertOpen } from './spray-session-rules';
+import { assertSprayerFor } from './sprayers';
+import { toSpraySessionDtos } from './spray-session-dto';
 import { changeState, recordChecklist, type SessionActor } from './spray-session-progress';
-
-async function toDtos(manager: EntityManager, sessions: SpraySessionEntity[]): Promise<SpraySession[]> {
-  const ids = sessions.map((s) => s.id);
-  const boothIds = [...new Set(sessions.map((s) => s.boothId))];
-  const userIds = [...new Set(sessions.map((s) => s.sprayerId).filter((id): id is number => id !== null))];
-  const [items, booths, users] = await Promise.all([
-    ids.length ? manager.find(SpraySessionItemEntity, { where: { spraySessionId: In(ids) }, order: { id: 'ASC' } }) : [],
-    boothIds.length ? manager.find(BoothEntity, { where: { id: In(boothIds) }, select: { id: true, name: true } }) : [],
-    userIds.length ? manager.find(UserEntity, { where: { id: In(userIds) }, select: { id: true, name: true } }) : [],
-  ]);
-  const boothName = new Map(booths.map((b) => [b.id, b.name]));
-  const userName = new Map(users.map((u) => [u.id, u.name]));
-  return sessions.map((s) => ({
-    id: s.id,
-    boothId: s.boothId,
-    boothName: boothName.get(s.boothId) ?? '',
-    start: s.startAt,
-    end: s.endAt,
-    sprayerId: s.sprayerId,
-    sprayerName: s.sprayerId === null ? null : (userName.get(s.sprayerId) ?? null),
-    state: s.state,
-    notes: s.notes,
-    items: items.filter((i) => i.spraySessionId === s.id).map((i) => ({ partId: i.partId, stepPosition: i.stepPosition })),
-    overrideReason: s.overrideReason,
-    checklist: s.checklist,
-    clearingStartedAt: s.clearingStartedAt,
-    createdAt: s.createdAt,
-    updatedAt: s.updatedAt,
-  }));
-}
 
 async function writeItems(manager: EntityManager, sessionId: number, items: { partId: number; stepPosition: number | null }[]): Promise<void> {
   const partIds = [...new Set(items.map((i) => i.partId))];
@@ -74,7 +45,7 @@ async function boothOrFail(manager: EntityManager, boothId: number, scope: SiteS
 async function insertSession(manager: EntityManager, fields: SessionFields, actor: Actor, timezone: string, now: string, scope: SiteScope): Promise<SpraySessionEntity> {
   const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
   const booth = await boothOrFail(manager, fields.boothId, scope);
-  await assertSprayer(manager, fields.sprayerId);
+  await assertSprayerFor(manager, fields.sprayerId, booth);
   assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
   await assertNoClash(manager, slot, booth, timezone);
   await assertRackSpace(manager, fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
@@ -95,8 +66,11 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
     return session;
   }
 
+  const workContext = async () => ({ planningTempC: (await settings.get()).planningDryingTempC, now: clock.now() });
+  const toDtos = async (sessions: SpraySessionEntity[]) => toSpraySessionDtos(dataSource.manager, sessions, await workContext());
+
   async function getWith(manager: EntityManager, id: number, scope: SiteScope = everySite): Promise<SpraySession> {
-    return (await toDtos(manager, [await sessionOrFail(manager, id, scope)]))[0];
+    return (await toDtos([await sessionOrFail(manager, id, scope)]))[0];
   }
 
   return {
@@ -113,7 +87,7 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
       if (query.boothId) qb.andWhere('s.booth_id = :boothId', { boothId: query.boothId });
       qb.orderBy('s.start_at', 'ASC').addOrderBy('s.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
-      return { items: await toDtos(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
+      return { items: await toDtos(rows), total, page: query.page, pageSize: query.pageSize };
     },
 
     get: (id: number, scope: SiteScope = everySite) => getWith(dataSource.manager, id, scope),
@@ -121,7 +95,8 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
     async create(input: CreateSpraySessionInput, actor: Actor, scope: SiteScope = everySite): Promise<SpraySession> {
       const fields = createSpraySessionSchema.parse(input);
       const { timezone } = await settings.get();
-      const created = await inTransaction(dataSource, async (manager) => getWith(manager, (await insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope)).id));
+      const session = await inTransaction(dataSource, (manager) => insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope));
+      const [created] = await toDtos([session]);
       events.publish({ type: 'spray-session.changed', id: created.id });
       return created;
     },
@@ -130,11 +105,12 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
     async createAll(inputs: CreateSpraySessionInput[], actor: Actor, scope: SiteScope = everySite): Promise<SpraySession[]> {
       const all = inputs.map((input) => createSpraySessionSchema.parse(input));
       const { timezone } = await settings.get();
-      const created = await inTransaction(dataSource, async (manager) => {
-        const sessions: SpraySessionEntity[] = [];
-        for (const fields of all) sessions.push(await insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope));
-        return toDtos(manager, sessions);
+      const sessions = await inTransaction(dataSource, async (manager) => {
+        const booked: SpraySessionEntity[] = [];
+        for (const fields of all) booked.push(await insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope));
+        return booked;
       });
+      const created = await toDtos(sessions);
       for (const session of created) events.publish({ type: 'spray-session.changed', id: session.id });
       return created;
     },
@@ -142,7 +118,7 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
     async update(id: number, patch: UpdateSpraySessionInput, actor: SessionActor, scope: SiteScope = everySite): Promise<SpraySession> {
       const { timezone } = await settings.get();
       const now = clock.now().toISOString();
-      const updated = await inTransaction(dataSource, async (manager) => {
+      const saved = await inTransaction(dataSource, async (manager) => {
         const session = await sessionOrFail(manager, id, scope);
         const slot = {
           id,
@@ -155,7 +131,7 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
         const booth = await boothOrFail(manager, slot.boothId, scope);
         const moved = slot.boothId !== session.boothId || slot.startAt !== session.startAt || slot.endAt !== session.endAt || slot.sprayerId !== session.sprayerId;
         if (moved) {
-          await assertSprayer(manager, slot.sprayerId);
+          await assertSprayerFor(manager, slot.sprayerId, booth);
           assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
         }
         if ((moved || patch.state === 'planned') && (patch.state ?? session.state) !== 'cancelled') await assertNoClash(manager, slot, booth, timezone);
@@ -167,8 +143,9 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
         if (patch.items) await writeItems(manager, id, patch.items);
         const summary = `Changed spray session ${id} on ${booth.name}${patch.state ? ` (now ${patch.state})` : ''}`;
         await recordAudit(manager, actor, { action: 'update', entity: 'spray-session', entityId: id, summary, changes: { ...patch } }, new Date(now));
-        return getWith(manager, id);
+        return session;
       });
+      const [updated] = await toDtos([saved]);
       events.publish({ type: 'spray-session.changed', id });
       return updated;
     },
