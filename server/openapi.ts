@@ -19,6 +19,7 @@ import { createSiteSchema, siteSchema, updateSiteSchema } from '../shared/schema
 import { areaSprayedReportSchema, boothUseReportSchema, conditionsReportSchema, materialReportSchema, reworkReportSchema, solventReportSchema } from '../shared/schemas/report';
 import { createSpraySessionSchema, spraySessionSchema, updateSpraySessionSchema } from '../shared/schemas/spray-session';
 import { sprayerListSchema } from '../shared/schemas/sprayer';
+import { todayResponseSchema } from '../shared/schemas/today';
 
 interface Operation {
   method: 'get' | 'post' | 'patch';
@@ -74,6 +75,7 @@ const operations: Operation[] = [
   { method: 'post', path: '/api/spray-sessions', summary: 'Book booth time (409 when it overlaps)', permission: 'spray-sessions:write', body: createSpraySessionSchema, response: wrap('spraySession', spraySessionSchema), status: 201 },
   { method: 'patch', path: '/api/spray-sessions/{id}', summary: 'Move, resize or progress a session', permission: 'spray-sessions:run', body: updateSpraySessionSchema, response: wrap('spraySession', spraySessionSchema) },
   { method: 'get', path: '/api/sprayers', summary: 'Active sprayers and leads who can be given a session (?boothId: that booth’s site)', permission: 'spray-sessions:read', response: sprayerListSchema },
+  { method: 'get', path: '/api/today', summary: 'The day’s board for the caller’s role: a lead’s sessions, unassigned work, closing windows, denibs, jobs at risk and stale sensors; a sprayer’s sessions with their next step (?siteId for an admin)', permission: 'today:read', response: todayResponseSchema },
   { method: 'post', path: '/api/coats', summary: 'Record a coat', permission: 'coats:write', body: createCoatSchema, response: wrap('coat', coatSchema), status: 201 },
   { method: 'get', path: '/api/coats', summary: 'The coat log', permission: 'coats:read', response: listSchema(coatSchema) },
   { method: 'post', path: '/api/coats/{id}/corrections', summary: 'Correct a coat (a new version)', permission: 'coats:write', body: correctCoatSchema, response: wrap('coat', coatSchema), status: 201 },

@@ -79,6 +79,7 @@ function coatsOf(known: Known, items: ResolvedItem[]): SessionCoat[] {
       stepPosition: item.step!,
       coatNumber: coatSteps.indexOf(item.step!) + 1,
       coatsTotal: coatSteps.length,
+      productId: step.productId,
       productName: known.products.get(step.productId)?.name ?? 'Unknown product',
       partCount: 0,
       sprayedCount: 0,

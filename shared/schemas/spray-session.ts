@@ -81,6 +81,7 @@ export const sessionCoatSchema = z.object({
   /** Which coat of the finish system this is (1-based), and how many coats it has. */
   coatNumber: z.number().int(),
   coatsTotal: z.number().int(),
+  productId: z.number().int(),
   productName: z.string(),
   partCount: z.number().int(),
   sprayedCount: z.number().int(),

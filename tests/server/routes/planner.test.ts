@@ -98,7 +98,7 @@ describe('proposals start from what is booked and what is sprayed', () => {
     expect(done.sort((a: number, b: number) => a - b)).toEqual([...sprayed].sort((a, b) => a - b));
     expect(session.work).toMatchObject({ partCount: 80, sprayedCount: 40, jobs: [{ id: drawers, reference: 'LJ-26-102', colour: 'Natural' }] });
     expect(session.work.coats).toEqual([
-      { jobId: drawers, jobReference: 'LJ-26-102', colour: 'Natural', stepPosition: 0, coatNumber: 1, coatsTotal: 2, productName: 'Kestrel Sanding Sealer NC', partCount: 80, sprayedCount: 40 },
+      { jobId: drawers, jobReference: 'LJ-26-102', colour: 'Natural', stepPosition: 0, coatNumber: 1, coatsTotal: 2, productId: sealerId, productName: 'Kestrel Sanding Sealer NC', partCount: 80, sprayedCount: 40 },
     ]);
 
     await lead.agent.patch(`/api/spray-sessions/${sealerSession.id}`).set('x-csrf-token', lead.csrf).send({ state: 'cancelled' }).expect(200);
