@@ -21,7 +21,6 @@ function PlannerWithSettings() {
     <PlannerPage
       settings={{ timezone, setupMin, cleanDownMin }}
       viewer={viewer}
-      canListUsers={can(user.role, 'users:read')}
       siteId={scope.siteId}
       siteSwitcher={<SiteSwitcher scope={scope} />}
     />
