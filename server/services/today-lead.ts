@@ -75,6 +75,21 @@ export async function partsBetweenCoats(manager: EntityManager, jobs: JobEntity[
   return { recoatClosing: recoatClosing.sort((a, b) => a.closesAt.localeCompare(b.closesAt)), denibWaiting };
 }
 
+/** Jobs not yet handed over: some part still uncollected, or no parts yet. A job whose parts are all collected is delivered, whatever its state says. */
+export async function jobsInWork(manager: EntityManager, jobs: JobEntity[]): Promise<JobEntity[]> {
+  if (jobs.length === 0) return [];
+  const rows: { jobId: number; total: string | number; open: string | number }[] = await manager
+    .createQueryBuilder(PartEntity, 'p')
+    .select('p.job_id', 'jobId')
+    .addSelect('COUNT(*)', 'total')
+    .addSelect('SUM(CASE WHEN p.collected_at IS NULL THEN 1 ELSE 0 END)', 'open')
+    .where('p.job_id IN (:...ids)', { ids: jobs.map((j) => j.id) })
+    .groupBy('p.job_id')
+    .getRawMany();
+  const delivered = new Set(rows.filter((r) => Number(r.total) > 0 && Number(r.open) === 0).map((r) => Number(r.jobId)));
+  return jobs.filter((j) => !delivered.has(j.id));
+}
+
 /** Jobs past their due date, or whose earliest plan (on their own, in free booth time) packs after it. */
 export async function jobsAtRisk(planner: PlannerService, jobs: JobEntity[], context: { today: string; timeZone: string; scope: SiteScope }): Promise<LeadBoard['jobsAtRisk']> {
   const finishes = await planner.earliestFinishes(jobs, 28, context.scope);

@@ -10,7 +10,7 @@ import { everySite, type SiteScope } from '../lib/site-scope';
 import type { PlannerService } from './planner';
 import type { SettingsService } from './settings';
 import { createSprayerService } from './sprayers';
-import { jobsAtRisk, partsBetweenCoats, staleSensors } from './today-lead';
+import { jobsAtRisk, jobsInWork, partsBetweenCoats, staleSensors } from './today-lead';
 import { sessionsIn, toTodaySessions } from './today-sessions';
 
 export interface TodayViewer {
@@ -45,7 +45,7 @@ export function createTodayService(dataSource: DataSource, settings: SettingsSer
     const [entities, booths, jobs] = await Promise.all([
       sessionsIn(manager, { from: day.startOf(0), to: day.startOf(2), siteId: scope.siteId }),
       manager.find(BoothEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId }, order: { id: 'ASC' } }),
-      manager.find(JobEntity, { where: { state: In(workingStates) }, order: { dueDate: 'ASC', id: 'ASC' } }),
+      manager.find(JobEntity, { where: { state: In(workingStates) }, order: { dueDate: 'ASC', id: 'ASC' } }).then((found) => jobsInWork(manager, found)),
     ]);
     const [sessions, people, between, risks, sensors] = await Promise.all([
       toTodaySessions(manager, entities, day.context),

@@ -75,7 +75,13 @@ describe('GET /api/today for a lead', () => {
   });
 
   it('names the jobs at risk of missing their due date, and why', async () => {
+    const painted = (await lead.agent.get('/api/finish-systems')).body.items.find((s: { name: string }) => s.name === 'Painted MDF, 2K PU satin').id;
+    await jobWithParts('TD-4', '2027-01-01', painted);
+    // Past its due date but every part collected: delivered, so not at risk.
+    for (const partId of await jobWithParts('TD-5', '2027-01-01', painted)) await post(lead, `/api/parts/${partId}/collect`, {}).expect(200);
     const risks = (await board(lead)).jobsAtRisk;
+    expect(risks.find((r: { jobReference: string }) => r.jobReference === 'TD-4')).toMatchObject({ reason: 'overdue', words: 'Overdue: it was due 2027-01-01' });
+    expect(risks.map((r: { jobReference: string }) => r.jobReference)).not.toContain('TD-5');
     // TD-2 is due today with three coats and their drying still ahead; TD-1 and TD-3 have time.
     expect(risks.find((r: { jobReference: string }) => r.jobReference === 'TD-2')).toMatchObject({ reason: 'finishes-late', dueDate: '2027-01-04' });
     expect(risks.map((r: { jobReference: string }) => r.jobReference)).not.toContain('TD-1');

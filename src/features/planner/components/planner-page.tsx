@@ -18,12 +18,14 @@ interface PlannerPageProps {
   /** An admin looking at one site (left out: every site), and the switcher that chooses it. */
   siteId?: number;
   siteSwitcher?: ReactNode;
+  /** The day to open on; today when not given. */
+  initialDay?: string;
 }
 
 /** The booth planner: a week or day of spray sessions per booth, booked and moved by the lead. */
-export function PlannerPage({ settings, viewer, siteId, siteSwitcher }: PlannerPageProps) {
+export function PlannerPage({ settings, viewer, siteId, siteSwitcher, initialDay }: PlannerPageProps) {
   const timeZone = settings.timezone;
-  const [day, setDay] = useState(() => calendarDateIn(new Date(), timeZone));
+  const [day, setDay] = useState(() => initialDay ?? calendarDateIn(new Date(), timeZone));
   const [booking, setBooking] = useState<BookingTarget | null>(null);
   const [opened, setOpened] = useState<PlannerSession | undefined>(undefined);
   const [autoPlanning, setAutoPlanning] = useState(false);
