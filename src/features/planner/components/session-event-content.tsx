@@ -5,8 +5,9 @@ import { coatHeadline, coatMaterial, partsWords } from '../../../lib/session-wor
 import type { PlannerSession } from '../api/get-spray-sessions';
 import { sprayerWords, stateChipColours } from '../utils/session-events';
 
-/** The recoat-window shading shown while a session is dragged. */
+/** The recoat-window shading shown while a session is dragged; named once, where each stretch begins. */
 function WindowLabel({ arg }: { arg: EventContentArg }) {
+  if (!arg.isStart) return null;
   return <p className="px-1 pt-0.5 text-[0.7rem] leading-tight font-semibold">{arg.event.title}</p>;
 }
 
