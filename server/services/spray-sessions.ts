@@ -129,11 +129,11 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
         };
         if (Date.parse(slot.endAt) <= Date.parse(slot.startAt)) throw new AppError('validation_failed', 'The end must be after the start', { end: 'The end must be after the start' });
         const booth = await boothOrFail(manager, slot.boothId, scope);
-        const moved = slot.boothId !== session.boothId || slot.startAt !== session.startAt || slot.endAt !== session.endAt || slot.sprayerId !== session.sprayerId;
-        if (moved) {
-          await assertSprayerFor(manager, slot.sprayerId, booth);
-          assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
-        }
+        const retimed = slot.boothId !== session.boothId || slot.startAt !== session.startAt || slot.endAt !== session.endAt;
+        const moved = retimed || slot.sprayerId !== session.sprayerId;
+        if (moved) await assertSprayerFor(manager, slot.sprayerId, booth);
+        // Giving a session to someone else leaves its hours alone: a booking already made outside them stands.
+        if (retimed) assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
         if ((moved || patch.state === 'planned') && (patch.state ?? session.state) !== 'cancelled') await assertNoClash(manager, slot, booth, timezone);
         Object.assign(session, { ...slot, notes: patch.notes ?? session.notes, updatedAt: now });
         if (patch.override) session.overrideReason = patch.override.reason;

@@ -76,3 +76,14 @@ describe('assigning the sprayer of a session', () => {
     await patch(sprayer, `/api/spray-sessions/${booked.body.spraySession.id}`, { sprayerId: 3 }).expect(403);
   });
 });
+
+describe('assigning the sprayer of a session booked outside opening hours', () => {
+  it('keeps the booking’s reason: only moving it asks again', async () => {
+    // 2027-03-06 is a Saturday: booth 1 is closed, so the booking needed a reason.
+    const saturday = { boothId: 1, start: '2027-03-06T09:00:00Z', end: '2027-03-06T10:00:00Z', override: { reason: 'Rush order, overtime agreed' } };
+    const id = (await post(lead, '/api/spray-sessions', saturday).expect(201)).body.spraySession.id;
+    await patch(lead, `/api/spray-sessions/${id}`, { sprayerId: 3 }).expect(200);
+    const moved = await patch(lead, `/api/spray-sessions/${id}`, { start: '2027-03-06T11:00:00Z', end: '2027-03-06T12:00:00Z' }).expect(409);
+    expect(moved.body.error.code).toBe('outside_opening_hours');
+  });
+});
