@@ -91,8 +91,18 @@ function coatsOf(known: Known, items: ResolvedItem[]): SessionCoat[] {
   return [...groups.values()];
 }
 
+/**
+ * Of several live bookings of the previous coat, the one this session follows: the last to end
+ * before it starts, else (booked the wrong way round) the first.
+ */
+function bookingBefore(bookings: BookedPartStep[], session: SpraySessionEntity): BookedPartStep | undefined {
+  const others = bookings.filter((b) => b.sessionId !== session.id).sort((a, b) => a.end.getTime() - b.end.getTime());
+  const start = new Date(session.startAt);
+  return others.filter((b) => b.end <= start).at(-1) ?? others[0];
+}
+
 /** The window a part's previous coat leaves for `step`: on record, else projected from its live booking. */
-function previousWindow(known: Known, sessionId: number, item: ResolvedItem): (RecoatWindow & { projected: boolean }) | null {
+function previousWindow(known: Known, session: SpraySessionEntity, item: ResolvedItem): (RecoatWindow & { projected: boolean }) | null {
   const system = item.jobId === null ? [] : (known.steps.get(item.jobId) ?? []);
   if (item.step === null) return null;
   const before = system.slice(0, item.step).flatMap((s, i) => (s.kind === 'coat' ? [i] : [])).at(-1);
@@ -101,7 +111,7 @@ function previousWindow(known: Known, sessionId: number, item: ResolvedItem): (R
   const keyed = system.slice(before + 1, item.step).some((s) => s.kind === 'abrade');
   const coat = (known.coats.get(item.partId) ?? []).filter((c) => c.stepPosition === before).sort((a, b) => b.sprayedAt.localeCompare(a.sprayedAt))[0];
   if (coat) return { opensAt: new Date(coat.recoatOpensAt), closesAt: coat.recoatClosesAt && !keyed ? new Date(coat.recoatClosesAt) : null, projected: false };
-  const booking = known.booked.get(bookingKey(item.partId, before))?.find((b) => b.sessionId !== sessionId);
+  const booking = bookingBefore(known.booked.get(bookingKey(item.partId, before)) ?? [], session);
   const step = system[before];
   const product = step.kind === 'coat' ? known.products.get(step.productId) : undefined;
   if (!booking || !product) return null;
@@ -112,7 +122,7 @@ function previousWindow(known: Known, sessionId: number, item: ResolvedItem): (R
 function workOf(known: Known, session: SpraySessionEntity, items: ResolvedItem[]): SessionWork {
   const coats = coatsOf(known, items);
   const jobIds = [...new Set(items.flatMap((i) => (i.jobId === null ? [] : [i.jobId])))];
-  const windows = items.filter((i) => !i.sprayedAt).flatMap((i) => previousWindow(known, session.id, i) ?? []);
+  const windows = items.filter((i) => !i.sprayedAt).flatMap((i) => previousWindow(known, session, i) ?? []);
   const shared = sharedRecoatWindow(windows);
   return {
     partCount: new Set(items.map((i) => i.partId)).size,

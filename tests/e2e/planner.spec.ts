@@ -1,47 +1,13 @@
-import type { Locator, Page } from '@playwright/test';
 import { expect, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
+import { booth, boothCalendar, calendarEvent, drag, openBookingForm, summerWeek } from './planner-helpers';
 
-/**
- * A Tuesday in July or August (British Summer Time, UTC+1) of a far year picked at random, so a
- * rerun on the same database books free days. The browser sits in New York, so a time that shows
- * right can only come from the shop's zone (Europe/London), not the device's.
- */
-function summerTuesday(): { tuesday: string; wednesday: string; thursday: string; saturday: string } {
-  const year = new Date().getFullYear() + 2 + Math.floor(Math.random() * 500);
-  const firstOfJuly = new Date(Date.UTC(year, 6, 1));
-  const week = Math.floor(Math.random() * 8);
-  const tuesday = new Date(Date.UTC(year, 6, 1 + ((2 - firstOfJuly.getUTCDay() + 7) % 7) + week * 7));
-  const day = (n: number) => new Date(tuesday.getTime() + n * 86_400_000).toISOString().slice(0, 10);
-  return { tuesday: day(0), wednesday: day(1), thursday: day(2), saturday: day(4) };
-}
-
-const { tuesday, wednesday, thursday, saturday } = summerTuesday();
-const booth = 'Booth 1 (cross-draft)';
-const sprayRoom = 'Back spray room';
+// The browser sits in New York, so a time that shows right can only come from the shop's zone
+// (Europe/London), not the device's.
+const { tuesday, saturday } = summerWeek();
 
 test.use({ timezoneId: 'America/New_York' });
 test.describe.configure({ mode: 'serial' });
-
-async function openBookingForm(page: Page, start: string, end: string): Promise<Locator> {
-  await page.getByRole('button', { name: 'Book a session' }).click();
-  const dialog = page.getByRole('dialog', { name: 'Book a spray session' });
-  await dialog.getByLabel('Booth').selectOption({ label: booth });
-  await dialog.getByLabel('Starts').fill(start);
-  await dialog.getByLabel('Ends').fill(end);
-  return dialog;
-}
-
-const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-
-/** One booth's time grid: the planner draws a grid per booth. */
-function boothCalendar(page: Page, name = booth): Locator {
-  return page.getByRole('region', { name: new RegExp(`^Calendar, .*, ${escapeRegExp(name)}$`) });
-}
-
-function calendarEvent(page: Page, text: string, name = booth): Locator {
-  return boothCalendar(page, name).locator('.fc-timegrid-event', { hasText: text });
-}
 
 test.describe('booth planner', () => {
   test('a lead books a session from the form and sees it at 09:00 shop time, whatever the device’s zone', async ({ page }) => {
@@ -139,85 +105,6 @@ test.describe('booth planner', () => {
     await expect(summary).toContainText('These are reminders, not a risk assessment.');
     await expect(summary.getByRole('button', { name: 'Cancel session' })).toHaveCount(0);
     await expect(summary.getByRole('button', { name: 'Change booking' })).toHaveCount(0);
-  });
-});
-
-/** Presses on a booth's free time at `from` (HH:MM) on `date` and drags down to `to`, as a lead books by hand. */
-async function dragAcrossFreeTime(page: Page, calendar: Locator, date: string, from: string, to: string) {
-  const start = calendar.locator(`.fc-timegrid-slot-lane[data-time="${from}:00"]`);
-  await start.scrollIntoViewIfNeeded();
-  const column = (await calendar.locator(`.fc-timegrid-col[data-date="${date}"]`).boundingBox())!;
-  const top = (await start.boundingBox())!;
-  const bottom = (await calendar.locator(`.fc-timegrid-slot-lane[data-time="${to}:00"]`).boundingBox())!;
-  await drag(page, { x: column.x + column.width / 2, y: top.y + 4 }, { x: column.x + column.width / 2, y: bottom.y - 4 });
-}
-
-async function bookThroughForm(page: Page, expected: { booth: string; start: string; end: string }, job: { label: string; parts: number }, sprayer?: string) {
-  const dialog = page.getByRole('dialog', { name: 'Book a spray session' });
-  await expect(dialog.getByLabel('Booth')).toHaveValue(await boothId(page, expected.booth));
-  await expect(dialog.getByLabel('Starts')).toHaveValue(expected.start);
-  await expect(dialog.getByLabel('Ends')).toHaveValue(expected.end);
-  await dialog.getByLabel('Job').selectOption({ label: job.label });
-  await dialog.getByRole('button', { name: `Choose all ${job.parts} parts` }).click();
-  if (sprayer) await dialog.getByLabel('Sprayer').selectOption({ label: sprayer });
-  await dialog.getByRole('button', { name: 'Book session' }).click();
-  await expect(dialog).toBeHidden();
-}
-
-async function boothId(page: Page, name: string): Promise<string> {
-  const { items } = (await (await page.request.get('/api/booths')).json()) as { items: { id: number; name: string }[] };
-  return String(items.find((b) => b.name === name)!.id);
-}
-
-test.describe('booking by dragging across free time', () => {
-  test('at 1366 px in the week view: the form opens on that booth and time, offers the site’s sprayers, and the block says what it sprays', async ({ page }) => {
-    await page.setViewportSize({ width: 1366, height: 900 });
-    await signIn(page, 'lead', '/planner');
-    await page.getByLabel('Go to day').fill(wednesday);
-    await dragAcrossFreeTime(page, boothCalendar(page), wednesday, '09:00', '10:30');
-    const dialog = page.getByRole('dialog', { name: 'Book a spray session' });
-    // The lead chooses among the site's active sprayers and leads, not only themself.
-    const choices = dialog.getByLabel('Sprayer').locator('option');
-    await expect(choices).toHaveText(['Not assigned yet', 'Dev Okafor (me)', 'Mina Castell']);
-    await bookThroughForm(page, { booth, start: `${wednesday}T09:00`, end: `${wednesday}T10:30` }, { label: 'LJ-26-101 · Hartfield Kitchen Co.', parts: 42 }, 'Mina Castell');
-    const block = calendarEvent(page, 'LJ-26-101').filter({ hasText: /^09:00 - 10:30/ });
-    await expect(block).toContainText('LJ-26-101 · coat 1 of 3');
-    await expect(block).toContainText('Kestrel 2K PU Primer White · Sage grey (customer sample 14)');
-    await expect(block).toContainText('42 parts');
-    await expect(block).toContainText('Mina Castell');
-
-    // The spray room at the same hour: each booth keeps its own lane, so neither block is squeezed to half a day.
-    await dragAcrossFreeTime(page, boothCalendar(page, sprayRoom), wednesday, '09:00', '10:30');
-    await bookThroughForm(page, { booth: sprayRoom, start: `${wednesday}T09:00`, end: `${wednesday}T10:30` }, { label: 'LJ-26-104 · St Brannock School', parts: 18 });
-    const roomBlock = calendarEvent(page, 'LJ-26-104', sprayRoom);
-    await expect(roomBlock).toContainText(sprayRoom);
-    for (const [calendar, shown] of [[boothCalendar(page), block], [boothCalendar(page, sprayRoom), roomBlock]] as const) {
-      const column = (await calendar.locator(`.fc-timegrid-col[data-date="${wednesday}"]`).boundingBox())!;
-      expect((await shown.boundingBox())!.width).toBeGreaterThan(column.width * 0.85);
-    }
-    await page.screenshot({ path: '/tmp/shots/planner-drag-booked-1366.png', fullPage: true });
-  });
-
-  test('at 1024 px in the day view: dragging in a booth’s column books that booth', async ({ page }) => {
-    await page.setViewportSize({ width: 1024, height: 768 });
-    await signIn(page, 'lead', '/planner');
-    await page.getByRole('button', { name: 'Day', exact: true }).click();
-    await page.getByLabel('Go to day').fill(thursday);
-    await dragAcrossFreeTime(page, boothCalendar(page, sprayRoom), thursday, '11:00', '12:00');
-    await bookThroughForm(page, { booth: sprayRoom, start: `${thursday}T11:00`, end: `${thursday}T12:00` }, { label: 'LJ-26-103 · Penhallow Interiors', parts: 18 });
-    await expect(calendarEvent(page, 'LJ-26-103', sprayRoom)).toContainText('11:00 - 12:00');
-    await page.screenshot({ path: '/tmp/shots/planner-day-1024.png', fullPage: true });
-  });
-
-  test('on a 390 px phone the planner falls back to the day view, and dragging still books', async ({ page }) => {
-    await page.setViewportSize({ width: 390, height: 844 });
-    await signIn(page, 'lead', '/planner');
-    await expect(page.getByText('Day view on a narrow screen')).toBeVisible();
-    await page.getByLabel('Go to day').fill(thursday);
-    await dragAcrossFreeTime(page, boothCalendar(page), thursday, '08:00', '09:00');
-    await bookThroughForm(page, { booth, start: `${thursday}T08:00`, end: `${thursday}T09:00` }, { label: 'LJ-26-102 · Morrow & Daughters Cabinetmakers', parts: 80 });
-    await expect(calendarEvent(page, 'LJ-26-102')).toContainText('08:00 - 09:00');
-    await page.screenshot({ path: '/tmp/shots/planner-phone-390.png', fullPage: true });
   });
 });
 
@@ -331,12 +218,3 @@ test.describe('booth planner, dragging', () => {
     await expect(event).toContainText('Mina Castell');
   });
 });
-
-async function drag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }) {
-  await page.mouse.move(from.x, from.y);
-  await page.mouse.down();
-  // A few small steps first: the calendar only starts a drag once the pointer has moved.
-  await page.mouse.move(from.x + 4, from.y + 4, { steps: 4 });
-  await page.mouse.move(to.x, to.y, { steps: 12 });
-  await page.mouse.up();
-}

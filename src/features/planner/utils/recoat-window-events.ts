@@ -24,6 +24,10 @@ export function recoatWindowSource(session: PlannerSession, timeZone: string): E
   if (!window) return null;
   const opens = Date.parse(window.opensAt);
   const closes = window.closesAt ? Date.parse(window.closesAt) : null;
+  // Far enough either way to cover the weeks around both the window and the session itself.
+  const start = Date.parse(session.start);
+  const earliest = Math.min(opens, start) - reachMs;
+  const latest = Math.max(closes ?? opens, start) + reachMs;
   const from = window.projected ? ' (from the booked coat before)' : '';
   const shade = (start: number, end: number, title: string, colour: string, kind: string) => ({
     start,
@@ -35,9 +39,9 @@ export function recoatWindowSource(session: PlannerSession, timeZone: string): E
     extendedProps: { recoat: true },
   });
   const events = [
-    shade(opens - reachMs, opens, `Too soon: recoat opens ${dayAndTime(opens, timeZone)}${from}`, '#b4232a', 'too-soon'),
-    shade(opens, closes ?? opens + reachMs, closes ? `Recoat window until ${dayAndTime(closes, timeZone)}${from}` : `Recoat window from ${dayAndTime(opens, timeZone)}, no closing time${from}`, '#1c7c3c', 'open'),
+    shade(earliest, opens, `Too soon: recoat opens ${dayAndTime(opens, timeZone)}${from}`, '#b4232a', 'too-soon'),
+    shade(opens, closes ?? latest, closes ? `Recoat window until ${dayAndTime(closes, timeZone)}${from}` : `Recoat window from ${dayAndTime(opens, timeZone)}, no closing time${from}`, '#1c7c3c', 'open'),
   ];
-  if (closes) events.push(shade(closes, closes + reachMs, `Window closed ${dayAndTime(closes, timeZone)}: denib first`, '#a35a00', 'closed'));
+  if (closes) events.push(shade(closes, latest, `Window closed ${dayAndTime(closes, timeZone)}: denib first`, '#a35a00', 'closed'));
   return { id: recoatSourceId, events };
 }
