@@ -1,6 +1,6 @@
 import { In, IsNull, Not, type EntityManager } from 'typeorm';
 import type { PartReadiness } from '../../shared/finishing/readiness';
-import { jobRisk, sensorIsStale } from '../../shared/finishing/day-board';
+import { jobRisk, riskHorizonDays, sensorIsStale } from '../../shared/finishing/day-board';
 import type { LeadBoard } from '../../shared/schemas/today';
 import { calendarDateIn } from '../../shared/time';
 import { BoothEntity } from '../db/entities/booth.entity';
@@ -92,7 +92,7 @@ export async function jobsInWork(manager: EntityManager, jobs: JobEntity[]): Pro
 
 /** Jobs past their due date, or whose earliest plan (on their own, in free booth time) packs after it. */
 export async function jobsAtRisk(planner: PlannerService, jobs: JobEntity[], context: { today: string; timeZone: string; scope: SiteScope }): Promise<LeadBoard['jobsAtRisk']> {
-  const finishes = await planner.earliestFinishes(jobs, 28, context.scope);
+  const finishes = await planner.earliestFinishes(jobs, riskHorizonDays, context.scope);
   return jobs.flatMap((job) => {
     const plan = finishes.get(job.id);
     const readyToPackOn = plan?.finishesAt ? calendarDateIn(plan.finishesAt, context.timeZone) : null;

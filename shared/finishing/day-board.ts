@@ -47,6 +47,9 @@ export function sessionNextStep(input: NextStepInput): NextStep {
   return { kind: 'start-spraying', words: 'Checklist done: start spraying', at: null };
 }
 
+/** How far ahead a job's earliest plan is looked for when judging whether it is at risk. */
+export const riskHorizonDays = 28;
+
 export type JobRiskReason = 'overdue' | 'finishes-late' | 'cannot-plan';
 export type JobRisk = { reason: JobRiskReason; words: string };
 
@@ -67,7 +70,7 @@ export type JobRiskInput = {
 export function jobRisk({ dueDate, today, readyToPackOn, coatsLeft }: JobRiskInput): JobRisk | null {
   if (dueDate < today) return { reason: 'overdue', words: `Overdue: it was due ${dueDate}` };
   if (!coatsLeft) return null;
-  if (readyToPackOn === null) return { reason: 'cannot-plan', words: 'No free booth time fits its coats before the planning horizon' };
+  if (readyToPackOn === null) return { reason: 'cannot-plan', words: `Its remaining coats do not fit into the next ${riskHorizonDays} days of booth time as it is booked now` };
   if (readyToPackOn > dueDate) return { reason: 'finishes-late', words: `Ready to pack ${readyToPackOn} at the earliest, after the due date` };
   return null;
 }

@@ -11,10 +11,10 @@ function DaySummary({ board }: { board: LeadBoardData }) {
   const today = board.sessions.filter((s) => s.date === board.today);
   const unassigned = board.sessions.filter((s) => s.sprayerId === null && (s.state === 'planned' || s.state === 'checking'));
   const facts = [
-    plural(today.length, 'session today', 'sessions today'),
-    unassigned.length ? plural(unassigned.length, 'session without a sprayer', 'sessions without a sprayer') : 'every session has a sprayer',
-    plural(board.recoatClosing.length, 'recoat window closing', 'recoat windows closing'),
-    plural(board.jobsAtRisk.length, 'job at risk', 'jobs at risk'),
+    today.length ? plural(today.length, 'session today', 'sessions today') : 'No sessions booked today',
+    ...(unassigned.length ? [plural(unassigned.length, 'session without a sprayer', 'sessions without a sprayer')] : board.sessions.length ? ['every session has a sprayer'] : []),
+    board.recoatClosing.length ? plural(board.recoatClosing.length, 'recoat window closing', 'recoat windows closing') : 'no recoat window closes today',
+    board.jobsAtRisk.length ? plural(board.jobsAtRisk.length, 'job at risk', 'jobs at risk') : 'no job at risk',
   ];
   return (
     <p role="status" className="rounded-panel border border-lacquer-200 bg-lacquer-50 px-4 py-3 text-lg">
