@@ -1,4 +1,4 @@
-import { Navigate } from 'react-router-dom';
+import { Navigate, useLocation } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { useShopSettings } from '../../features/settings/api/get-settings';
@@ -21,6 +21,8 @@ function TodayBoard() {
 /** Everyone lands here; an assembler's day is the ready board, so they go straight to it. */
 export function TodayRoute() {
   const user = useSessionUser();
-  if (!can(user.role, 'today:read')) return <Navigate to="/ready" replace />;
+  const location = useLocation();
+  // Keyed by the visit: signing in can land here twice in a row, and a second landing must send them on again.
+  if (!can(user.role, 'today:read')) return <Navigate key={location.key} to="/ready" replace />;
   return <TodayBoard />;
 }
