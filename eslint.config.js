@@ -52,6 +52,32 @@ export default tseslint.config(
     rules: { 'no-restricted-syntax': 'off' },
   },
   {
+    // Services reach the database only through SiteData, so no query can forget the user's site.
+    files: ['server/services/**/*.ts'],
+    ignores: ['server/services/pg-event-bus.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [{ name: 'typeorm', importNames: ['DataSource', 'EntityManager', 'Repository'], message: 'Services take a SiteData (server/data/site-data.ts), never the DataSource or a raw EntityManager.' }],
+          patterns: [
+            { group: ['**/db/entities/*'], allowTypeImports: true, message: 'Read and write rows through SiteData (data.booths, data.coats, …), which applies the site scope; import entities as types only.' },
+            { group: ['**/db/transaction', '**/db/data-source'], message: 'Use data.transaction(…) from SiteData.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['server/routes/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['typeorm', '**/db/**', '**/data/**'], message: 'Routes never touch the database: declare the route in the registry and call a service.' }] },
+      ],
+    },
+  },
+  {
     files: ['tests/**/*.{ts,tsx,mjs}', 'bench/**/*.{ts,mjs}', '*.config.{ts,js}', 'scripts/**/*.{ts,mjs}'],
     languageOptions: { globals: globals.node },
   },

@@ -1,89 +1,38 @@
 import { Router } from 'express';
-import type passport from 'passport';
-import type { DataSource } from 'typeorm';
-import { createBoothSchema, updateBoothSchema } from '../shared/schemas/booth';
-import { createSiteSchema, updateSiteSchema } from '../shared/schemas/site';
-import { createFinishSystemSchema, updateFinishSystemSchema } from '../shared/schemas/finish-system';
-import { createRackSchema, updateRackSchema } from '../shared/schemas/rack';
-import type { AppConfig } from './config/env';
-import type { Clock } from './lib/clock';
+import { openSiteData } from './data/site-data';
+import { everySite } from './lib/site-scope';
 import { requireCsrf } from './middleware/csrf';
 import { apiNotFound } from './middleware/error-handler';
 import { sensorAuth } from './middleware/sensor-auth';
-import { coatRoutes } from './routes/coats';
-import { eventRoutes, readingRoutes, readyRoutes, sensorTokenRoutes } from './routes/live';
-import type { NotificationRuntime } from './mail/notifications-runtime';
-import { notificationRoutes } from './routes/notifications';
-import { plannerRoutes } from './routes/planner';
-import { reportRoutes } from './routes/reports';
-import { sessionCautionRoutes } from './routes/session-cautions';
-import { spraySessionRoutes } from './routes/spray-sessions';
-import { todayRoutes } from './routes/today';
-import { createCoatService } from './services/coats';
-import type { EventBus } from './services/events';
-import { createMixService } from './services/mixes';
-import { createPlannerService } from './services/planner';
+import { apiRoutes } from './registry/api-routes';
+import { mountRoutes, type RegistryDeps } from './registry/mount';
 import { createReadingService } from './services/readings';
-import { createReadyService } from './services/ready';
-import { createReportService } from './services/reports';
-import { createSpraySessionService } from './services/spray-sessions';
-import { createTodayService } from './services/today';
-import { authRoutes } from './routes/auth';
-import { jobRoutes, partRoutes } from './routes/jobs';
-import { masterDataRoutes } from './routes/master-data';
-import { fileRoutes, productRoutes } from './routes/products';
-import { auditRoutes, settingsRoutes } from './routes/settings';
-import { userRoutes } from './routes/users';
-import { createBoothService } from './services/booths';
-import { createEstimateService } from './services/estimates';
-import { createFileStorage } from './services/file-storage';
-import { createFileService } from './services/files';
-import { createFinishSystemService } from './services/finish-systems';
-import { createJobService } from './services/jobs';
-import { createPartImportService } from './services/part-import';
-import { createPartService } from './services/parts';
-import { createProductService } from './services/products';
-import { createRackService } from './services/racks';
-import { createSettingsService } from './services/settings';
-import { createSiteService } from './services/sites';
-import { createUserService } from './services/users';
 
-/** Every /api route behind sign-in and CSRF, wired to its service. */
-export function buildApiRouter(dataSource: DataSource, config: AppConfig, clock: Clock, auth: passport.PassportStatic, events: EventBus, notifications?: NotificationRuntime): Router {
-  const api = Router();
-  const readings = createReadingService(dataSource, events, clock);
-  api.use(sensorAuth(readings), requireCsrf);
-  const users = createUserService(dataSource, clock);
-  const settings = createSettingsService(dataSource, clock);
-  const files = createFileService(dataSource, createFileStorage(config), clock);
-  const parts = createPartService(dataSource, clock, events);
+/** The routes answered before the sign-in session is read: health and the API document. */
+export function buildBareApiRouter(deps: RegistryDeps): Router {
+  const router = Router();
+  mountRoutes(
+    router,
+    apiRoutes.filter((route) => route.bare),
+    deps,
+  );
+  return router;
+}
 
-  api.use('/auth', authRoutes(auth, users, config.loginRateLimit));
-  api.use('/users', userRoutes(users));
-  api.use('/sites', masterDataRoutes({ resource: 'site', read: 'sites:read', write: 'sites:write', createSchema: createSiteSchema, updateSchema: updateSiteSchema, service: createSiteService(dataSource, clock) }));
-  api.use('/booths', masterDataRoutes({ resource: 'booth', read: 'booths:read', write: 'booths:write', createSchema: createBoothSchema, updateSchema: updateBoothSchema, service: createBoothService(dataSource, clock) }));
-  api.use('/racks', masterDataRoutes({ resource: 'rack', read: 'racks:read', write: 'racks:write', createSchema: createRackSchema, updateSchema: updateRackSchema, service: createRackService(dataSource, clock) }));
-  api.use('/settings', settingsRoutes(settings));
-  api.use('/audit', auditRoutes(dataSource));
-  api.use('/products', productRoutes(createProductService(dataSource, files, settings, clock)));
-  api.use('/files', fileRoutes(files));
-  api.use('/finish-systems', masterDataRoutes({ resource: 'finishSystem', read: 'finish-systems:read', write: 'finish-systems:write', createSchema: createFinishSystemSchema, updateSchema: updateFinishSystemSchema, service: createFinishSystemService(dataSource, clock) }));
-  const estimates = createEstimateService(dataSource);
-  api.use('/jobs', jobRoutes(createJobService(dataSource, clock), parts, createPartImportService(dataSource, parts), estimates));
-  api.use('/parts', partRoutes(parts));
-  const spraySessions = createSpraySessionService(dataSource, settings, events, clock);
-  api.use(sessionCautionRoutes(dataSource));
-  api.use('/spray-sessions', spraySessionRoutes(spraySessions, createMixService(dataSource, clock)));
-  const planner = createPlannerService(dataSource, settings, clock);
-  api.use('/planner', plannerRoutes(planner, spraySessions));
-  api.use('/today', todayRoutes(createTodayService(dataSource, settings, planner, clock)));
-  api.use('/coats', coatRoutes(createCoatService(dataSource, settings, events, clock)));
-  api.use('/ready', readyRoutes(createReadyService(dataSource, clock)));
-  api.use('/readings', readingRoutes(readings));
-  api.use('/booths', sensorTokenRoutes(readings));
-  api.use('/events', eventRoutes(events));
-  api.use('/reports', reportRoutes(createReportService(dataSource, settings, estimates)));
-  api.use(notificationRoutes(notifications));
-  api.use(apiNotFound);
-  return api;
+/**
+ * Every other /api route, mounted from the registry behind, in this order: a booth sensor's
+ * bearer token, the CSRF check, then each route's own sign-in limit, access check and upload.
+ */
+export function buildApiRouter(deps: RegistryDeps): Router {
+  const router = Router();
+  // A token names its booth whatever the site, so it is looked up across every site.
+  const sensors = createReadingService(openSiteData(deps.dataSource, everySite), deps.services.events, deps.services.clock);
+  router.use(sensorAuth(sensors.boothForToken), requireCsrf);
+  mountRoutes(
+    router,
+    apiRoutes.filter((route) => !route.bare),
+    deps,
+  );
+  router.use(apiNotFound);
+  return router;
 }

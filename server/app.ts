@@ -5,21 +5,22 @@ import express, { type Express } from 'express';
 import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
-import { buildApiRouter } from './api';
+import { buildApiRouter, buildBareApiRouter } from './api';
 import { configurePassport } from './auth/passport';
 import type { AppConfig } from './config/env';
 import { systemClock, type Clock } from './lib/clock';
 import { errorHandler } from './middleware/error-handler';
 import { securityHeaders } from './middleware/security';
-import { sessionMiddleware } from './middleware/session';
-import { buildOpenApiDocument } from './openapi';
+import { signInSessionMiddleware } from './middleware/sign-in-session';
+import type { RegistryDeps } from './registry/mount';
 import { EventBus } from './services/events';
+import { createFileStorage } from './services/file-storage';
 import type { NotificationRuntime } from './mail/notifications-runtime';
 
 export interface AppDeps {
   dataSource: DataSource;
   config: AppConfig;
-  sessionSecret: string;
+  signInSecret: string;
   clock?: Clock;
   logger?: Logger;
   /** The change feed behind GET /api/events; tests pass their own to listen in. */
@@ -40,16 +41,12 @@ export function createApp(deps: AppDeps): Express {
   app.use(securityHeaders(config.trustProxy));
   app.use(pinoHttp({ logger, genReqId: (req) => (req.headers['x-request-id'] as string) || randomUUID(), autoLogging: config.env !== 'test' }));
 
-  app.get('/api/health', (_req, res) => {
-    res.json({ ok: true });
-  });
-  app.get('/api/openapi.json', (_req, res) => {
-    res.json(buildOpenApiDocument());
-  });
-
   const auth = configurePassport(dataSource);
-  app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware(dataSource, deps.sessionSecret, config.trustProxy), auth.initialize(), auth.session());
-  app.use('/api', buildApiRouter(dataSource, config, clock, auth, deps.events ?? new EventBus(), deps.notifications));
+  const services = { clock, events: deps.events ?? new EventBus(), storage: createFileStorage(config), notifications: deps.notifications };
+  const registry: RegistryDeps = { dataSource, config, services, auth };
+  app.use('/api', buildBareApiRouter(registry));
+  app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.signInSecret, config.trustProxy), auth.initialize(), auth.session());
+  app.use('/api', buildApiRouter(registry));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
   app.use(errorHandler);

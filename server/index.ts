@@ -4,7 +4,7 @@ import { createApp } from './app';
 import { startNotifications } from './mail/notifications-runtime';
 import { startEventBus } from './services/pg-event-bus';
 import { loadConfig } from './config/env';
-import { resolveSessionSecret } from './config/session-secret';
+import { resolveSignInSecret } from './config/sign-in-secret';
 import { openDataSource } from './db/data-source';
 import { demoSignInLines, demoUsers } from './db/seed';
 import { UserEntity } from './db/entities/user.entity';
@@ -15,10 +15,10 @@ async function main(): Promise<void> {
   const dataSource = await openDataSource(config.database, { migrate: true });
   // Several instances on PostgreSQL must share SESSION_SECRET; one machine can keep its own beside the data.
   const dataDir = config.database.kind === 'sqlite' ? path.dirname(path.resolve(config.database.path)) : path.resolve('data');
-  const sessionSecret = resolveSessionSecret(config.sessionSecret, dataDir);
+  const signInSecret = resolveSignInSecret(config.signInSecret, dataDir);
   const notifications = await startNotifications(dataSource, config, logger, { schedule: true });
   const changeFeed = await startEventBus(dataSource, config, logger);
-  const app = createApp({ dataSource, config, sessionSecret, logger, events: changeFeed.events, notifications, clientDir: path.resolve(config.clientDir) });
+  const app = createApp({ dataSource, config, signInSecret, logger, events: changeFeed.events, notifications, clientDir: path.resolve(config.clientDir) });
   const server = app.listen(config.port, config.host, () => {
     void announce(config.port, dataSource);
   });

@@ -1,5 +1,6 @@
 import 'express-session';
 import type { SessionUser } from '../shared/schemas/auth';
+import type { SensorBooth } from './services/readings';
 
 declare module 'express-session' {
   interface SessionData {
@@ -12,8 +13,8 @@ declare global {
     // eslint-disable-next-line @typescript-eslint/no-empty-object-type
     interface User extends SessionUser {}
     interface Request {
-      /** Set when a booth's sensor posts with its bearer token instead of a session. */
-      sensorBooth?: number;
+      /** Set when a booth's sensor posts with its bearer token instead of a sign-in. */
+      sensorBooth?: SensorBooth;
     }
   }
 }

@@ -1,4 +1,6 @@
 import type { DataSource } from 'typeorm';
+import { openSiteData } from '../../server/data/site-data';
+import { everySite } from '../../server/lib/site-scope';
 import type { DryingRow } from '../../shared/finishing/drying-row-schema';
 import type { FinishStepInput } from '../../shared/schemas/finish-system';
 import { openDataSource } from '../../server/db/data-source';
@@ -48,16 +50,16 @@ const benchSystems: { name: string; steps: ({ product: string; dryFilmUm: number
 ];
 
 async function addBoothSprayersAndSystems(dataSource: DataSource): Promise<void> {
-  await createBoothService(dataSource).create(
+  await createBoothService(openSiteData(dataSource, everySite)).create(
     { name: 'Booth 3 (down-draft)', kind: 'down-draft', volumeM3: 90, extractionM3PerH: 27000, mixingFactorK: 3, openFaceAreaM2: 15, minFaceVelocityMps: 0.4, sprayRateM2PerH: 20, openingHours: defaultOpeningHours },
     systemActor,
   );
-  const users = createUserService(dataSource);
+  const users = createUserService(openSiteData(dataSource, everySite));
   for (const [email, name] of [['sprayer2@larchmere.test', 'Ola Brennan'], ['sprayer3@larchmere.test', 'Sam Dwyer']]) {
     await users.create({ email, name, role: 'sprayer', password: demoPassword }, systemActor);
   }
   const products = new Map((await dataSource.query('SELECT id, name FROM products') as { id: number; name: string }[]).map((p) => [p.name, p.id]));
-  const systems = createFinishSystemService(dataSource);
+  const systems = createFinishSystemService(openSiteData(dataSource, everySite));
   for (const system of benchSystems) {
     const steps: FinishStepInput[] = system.steps.map((s) => ('grit' in s ? { kind: 'abrade', grit: s.grit } : { kind: 'coat', productId: products.get(s.product)!, dryFilmUm: s.dryFilmUm }));
     await systems.create({ name: system.name, description: 'Made by npm run bench.', steps }, systemActor);

@@ -1,4 +1,6 @@
 import { openDataSource } from '../../server/db/data-source';
+import { openSiteData } from '../../server/data/site-data';
+import { everySite } from '../../server/lib/site-scope';
 import type { Mailer } from '../../server/mail/mailer';
 import { createNotificationService } from '../../server/services/notifications';
 import { createSettingsService } from '../../server/services/settings';
@@ -14,7 +16,7 @@ const alreadySent: Mailer = { send: async () => undefined, close: () => undefine
 export async function settleNotifications(databasePath: string, now: Date): Promise<number> {
   const dataSource = await openDataSource({ kind: 'sqlite', path: databasePath }, { migrate: false });
   try {
-    const service = createNotificationService(dataSource, createSettingsService(dataSource), alreadySent, { recoatWarningHours: 2 });
+    const service = createNotificationService(openSiteData(dataSource, everySite), createSettingsService(openSiteData(dataSource, everySite)), alreadySent, { recoatWarningHours: 2 });
     let total = 0;
     for (let sent = -1; sent !== 0; ) {
       sent = (await service.tick(now)).sent;

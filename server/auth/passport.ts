@@ -2,7 +2,7 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { DataSource } from 'typeorm';
 import { UserEntity } from '../db/entities/user.entity';
-import { toSessionUser } from '../services/users';
+import { toSignedInUser } from '../services/users';
 import { hashPassword, verifyPassword } from './passwords';
 
 
@@ -20,7 +20,7 @@ export function configurePassport(dataSource: DataSource): passport.PassportStat
         .then(async (user) => {
           const ok = await verifyPassword(user?.passwordHash ?? (await decoy()), password);
           if (!user || !ok || user.disabled) return done(null, false);
-          return done(null, toSessionUser(user));
+          return done(null, toSignedInUser(user));
         })
         .catch(done);
     }),
@@ -30,7 +30,7 @@ export function configurePassport(dataSource: DataSource): passport.PassportStat
   instance.deserializeUser((id: number, done) => {
     users
       .findOneBy({ id })
-      .then((user) => done(null, user && !user.disabled ? toSessionUser(user) : false))
+      .then((user) => done(null, user && !user.disabled ? toSignedInUser(user) : false))
       .catch(done);
   });
   return instance as unknown as passport.PassportStatic;

@@ -66,7 +66,7 @@ export interface AppConfig {
   host: string;
   database: DatabaseConfig;
   /** Unset means: use (or create) a random secret kept beside the data, see session-secret.ts. */
-  sessionSecret: string | undefined;
+  signInSecret: string | undefined;
   /** Cookies get `secure` when the app sits behind an HTTPS proxy. */
   trustProxy: boolean;
   logLevel: string;
@@ -96,7 +96,7 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     port: env.PORT,
     host: env.HOST,
     database: env.DATABASE_URL ? { kind: 'postgres', url: env.DATABASE_URL } : { kind: 'sqlite', path: env.DATABASE_PATH },
-    sessionSecret: env.SESSION_SECRET,
+    signInSecret: env.SESSION_SECRET,
     trustProxy: env.TRUST_PROXY,
     logLevel: env.LOG_LEVEL,
     uploadDir: env.UPLOAD_DIR,

@@ -1,4 +1,6 @@
 import { TZDate } from '@date-fns/tz';
+import { openSiteData } from '../data/site-data';
+import { everySite } from '../lib/site-scope';
 import { addDays, startOfWeek } from 'date-fns';
 import type { DataSource } from 'typeorm';
 import { dewPointC } from '../../shared/finishing/conditions';
@@ -66,8 +68,8 @@ interface HistoryContext {
 }
 
 async function createPastJobs(dataSource: DataSource, weeksBack: Date): Promise<{ steps: PendingStep[][]; partIds: number[] }> {
-  const jobs = createJobService(dataSource);
-  const parts = createPartService(dataSource);
+  const jobs = createJobService(openSiteData(dataSource, everySite));
+  const parts = createPartService(openSiteData(dataSource, everySite));
   const systems = new Map((await dataSource.getRepository(FinishSystemEntity).find()).map((s) => [s.name, s.id]));
   const steps: PendingStep[][] = [];
   const allParts: number[] = [];
@@ -85,7 +87,7 @@ async function createPastJobs(dataSource: DataSource, weeksBack: Date): Promise<
   return { steps, partIds: allParts };
 }
 
-async function bookSession(ctx: HistoryContext, booth: BoothEntity, day: TZDate): Promise<SpraySessionEntity> {
+async function bookSpraySession(ctx: HistoryContext, booth: BoothEntity, day: TZDate): Promise<SpraySessionEntity> {
   const at = (hour: number, minute = 0) => new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), hour, minute, ctx.timeZone).toISOString();
   const iso = (s: string) => new Date(s).toISOString();
   return ctx.dataSource.getRepository(SpraySessionEntity).save({
@@ -94,7 +96,7 @@ async function bookSession(ctx: HistoryContext, booth: BoothEntity, day: TZDate)
   });
 }
 
-async function mixFor(ctx: HistoryContext, session: SpraySessionEntity, step: PendingStep, at: Date): Promise<number> {
+async function mixFor(ctx: HistoryContext, spraySession: SpraySessionEntity, step: PendingStep, at: Date): Promise<number> {
   const product = ctx.products.get(step.productId)!;
   // What the step needs through an HVLP gun (65 % transfer), plus the 5–30 % a real pot leaves over.
   const needed = litresNeeded({ areaM2: step.areaM2, coats: 1, dryFilmUm: step.dryFilmUm, volumeSolidsPct: product.volumeSolidsPct, transferEfficiencyPct: 65 });
@@ -105,7 +107,7 @@ async function mixFor(ctx: HistoryContext, session: SpraySessionEntity, step: Pe
   const thinner = (mixed * product.thinnerMinPct) / 100;
   const iso = at.toISOString();
   const mix = await ctx.dataSource.getRepository(MixEntity).save({
-    spraySessionId: session.id, productId: step.productId, lotIds: [], baseL: base, hardenerL: hardener, thinnerL: thinner, mixedAt: iso, tempC: 19,
+    spraySessionId: spraySession.id, productId: step.productId, lotIds: [], baseL: base, hardenerL: hardener, thinnerL: thinner, mixedAt: iso, tempC: 19,
     inductionEndsAt: iso, potLifeEndsAt: null, potLifeWarningAt: null, recordedById: ctx.sprayer.id, recordedByName: ctx.sprayer.name,
   });
   return mix.id;
@@ -126,11 +128,11 @@ function wetFilmFor(ctx: HistoryContext, step: PendingStep): { thinningPct: numb
   return { thinningPct: product.thinnerMinPct, wetFilmUm: Math.round((target * (0.95 + ctx.random() * 0.15)) / 5) * 5 };
 }
 
-async function sprayStep(ctx: HistoryContext, session: SpraySessionEntity, step: PendingStep, at: Date, week: number, coats: ReturnType<typeof createCoatService>) {
-  const mixId = await mixFor(ctx, session, step, new Date(at.getTime() - 10 * 60_000));
+async function sprayStep(ctx: HistoryContext, spraySession: SpraySessionEntity, step: PendingStep, at: Date, week: number, coats: ReturnType<typeof createCoatService>) {
+  const mixId = await mixFor(ctx, spraySession, step, new Date(at.getTime() - 10 * 60_000));
   ctx.clock.at = new Date(at.getTime() + 5 * 60_000);
   const conditions = conditionsAt(ctx, week);
-  const { coat } = await coats.create({ spraySessionId: session.id, partIds: step.partIds, productId: step.productId, sprayedAt: at.toISOString(), ...conditions, ...wetFilmFor(ctx, step), mixId, stepPosition: step.position }, ctx.sprayer);
+  const { coat } = await coats.create({ spraySessionId: spraySession.id, partIds: step.partIds, productId: step.productId, sprayedAt: at.toISOString(), ...conditions, ...wetFilmFor(ctx, step), mixId, stepPosition: step.position }, ctx.sprayer);
   return coat;
 }
 
@@ -143,20 +145,20 @@ async function addReadings(ctx: HistoryContext, booth: BoothEntity, day: TZDate,
   await ctx.dataSource.getRepository(ReadingEntity).insert(rows);
 }
 
-async function respray(ctx: HistoryContext, coats: ReturnType<typeof createCoatService>, session: SpraySessionEntity, step: PendingStep, at: Date, week: number) {
+async function respray(ctx: HistoryContext, coats: ReturnType<typeof createCoatService>, spraySession: SpraySessionEntity, step: PendingStep, at: Date, week: number) {
   const sprayedAt = new Date(at.getTime() + 60 * 60_000);
   ctx.clock.at = new Date(sprayedAt.getTime() + 5 * 60_000);
-  const input = { spraySessionId: session.id, partIds: step.partIds.slice(0, 2), productId: step.productId, sprayedAt: sprayedAt.toISOString(), ...conditionsAt(ctx, week), ...wetFilmFor(ctx, step), stepPosition: step.position };
+  const input = { spraySessionId: spraySession.id, partIds: step.partIds.slice(0, 2), productId: step.productId, sprayedAt: sprayedAt.toISOString(), ...conditionsAt(ctx, week), ...wetFilmFor(ctx, step), stepPosition: step.position };
   await coats.create({ ...input, reworkReason: 'dust-or-debris', notes: 'Two parts re-sprayed: dust in the film.' }, ctx.sprayer);
 }
 
 /**
- * Eight weeks of finished work before this week: a session on Mondays, Wednesdays and Fridays,
+ * Eight weeks of finished work before this week: a spray session on Mondays, Wednesdays and Fridays,
  * pots mixed, coats logged through the coat service (so every time and warning is computed as
  * in the booth), sensor readings, a correction and two re-sprays. Parts end collected.
  */
 export async function seedDemoHistory(dataSource: DataSource, options: { now?: Date; weeks?: number } = {}): Promise<void> {
-  const settings = createSettingsService(dataSource);
+  const settings = createSettingsService(openSiteData(dataSource, everySite));
   const { timezone } = await settings.get();
   const weeks = options.weeks ?? 8;
   const thisMonday = startOfWeek(new TZDate((options.now ?? new Date()).getTime(), timezone), { weekStartsOn: 1 });
@@ -170,23 +172,23 @@ export async function seedDemoHistory(dataSource: DataSource, options: { now?: D
     products: new Map((await dataSource.getRepository(ProductEntity).find()).map((p) => [p.id, p])),
   };
   if (ctx.booths.length === 0) return;
-  const coats = createCoatService(dataSource, settings, new EventBus(), clock);
+  const coats = createCoatService(openSiteData(dataSource, everySite), settings, new EventBus(), clock);
   const { steps, partIds } = await createPastJobs(dataSource, firstMonday);
-  // Each job goes through in consecutive sessions, as a shop runs a batch, one step a session.
+  // Each job goes through in consecutive sessions, as a shop runs a batch, one step a spray session.
   const queue = steps.flat();
-  let sessionCount = 0;
+  let spraySessionCount = 0;
   for (let week = 0; week < weeks && queue.length > 0; week++) {
     for (const weekday of [0, 2, 4]) {
       const step = queue.shift();
       if (!step) break;
-      const booth = ctx.booths[sessionCount++ % ctx.booths.length];
+      const booth = ctx.booths[spraySessionCount++ % ctx.booths.length];
       const day = addDays(firstMonday, week * 7 + weekday);
-      const session = await bookSession(ctx, booth, day);
+      const spraySession = await bookSpraySession(ctx, booth, day);
       await addReadings(ctx, booth, day, week);
-      const at = new Date(Date.parse(session.sprayingStartedAt!) + 30 * 60_000);
-      const coat = await sprayStep(ctx, session, step, at, week, coats);
-      if (sessionCount === 4) await coats.correct(coat.id, { wetFilmUm: (coat.wetFilmUm ?? 100) + 10, reason: 'Wet film typed wrong' }, ctx.sprayer);
-      if (sessionCount === 7 || sessionCount === 16) await respray(ctx, coats, session, step, at, week);
+      const at = new Date(Date.parse(spraySession.sprayingStartedAt!) + 30 * 60_000);
+      const coat = await sprayStep(ctx, spraySession, step, at, week, coats);
+      if (spraySessionCount === 4) await coats.correct(coat.id, { wetFilmUm: (coat.wetFilmUm ?? 100) + 10, reason: 'Wet film typed wrong' }, ctx.sprayer);
+      if (spraySessionCount === 7 || spraySessionCount === 16) await respray(ctx, coats, spraySession, step, at, week);
     }
   }
   const collectedAt = thisMonday.toISOString();

@@ -7,7 +7,7 @@ import { PartEntity } from './entities/part.entity';
 import { ProductLotEntity } from './entities/product-lot.entity';
 import { ProductEntity } from './entities/product.entity';
 import { RackEntity } from './entities/rack.entity';
-import { SessionEntity } from './entities/session.entity';
+import { SignInSessionEntity } from './entities/sign-in-session.entity';
 import { ShopSettingsEntity } from './entities/shop-settings.entity';
 import { SiteEntity } from './entities/site.entity';
 import { StoredFileEntity } from './entities/stored-file.entity';
@@ -22,7 +22,7 @@ import { SpraySessionEntity } from './entities/spray-session.entity';
 
 export const entities = [
   UserEntity,
-  SessionEntity,
+  SignInSessionEntity,
   BoothEntity,
   RackEntity,
   AuditEntryEntity,

@@ -1,4 +1,6 @@
 import type { DataSource } from 'typeorm';
+import { openSiteData } from '../data/site-data';
+import { everySite } from '../lib/site-scope';
 import type { FinishStepInput } from '../../shared/schemas/finish-system';
 import { calendarDateIn } from '../../shared/time';
 import { systemActor } from '../services/audit';
@@ -16,8 +18,8 @@ import { demoProducts } from './demo-products';
 const dayMs = 24 * 60 * 60 * 1000;
 
 async function seedProducts(dataSource: DataSource, storage: FileStorage | string): Promise<Map<string, number>> {
-  const settings = createSettingsService(dataSource);
-  const products = createProductService(dataSource, createFileService(dataSource, storage), settings);
+  const settings = createSettingsService(openSiteData(dataSource, everySite));
+  const products = createProductService(openSiteData(dataSource, everySite), createFileService(openSiteData(dataSource, everySite), storage), settings);
   const ids = new Map<string, number>();
   const today = Date.now();
   for (const [index, input] of demoProducts.entries()) {
@@ -40,7 +42,7 @@ async function seedProducts(dataSource: DataSource, storage: FileStorage | strin
 }
 
 async function seedFinishSystems(dataSource: DataSource, productIds: Map<string, number>): Promise<Map<string, number>> {
-  const systems = createFinishSystemService(dataSource);
+  const systems = createFinishSystemService(openSiteData(dataSource, everySite));
   const ids = new Map<string, number>();
   for (const system of demoFinishSystems) {
     const steps: FinishStepInput[] = system.steps.map((s) => ('grit' in s ? { kind: 'abrade', grit: s.grit } : { kind: 'coat', productId: productIds.get(s.product)!, dryFilmUm: s.dryFilmUm }));
@@ -51,8 +53,8 @@ async function seedFinishSystems(dataSource: DataSource, productIds: Map<string,
 }
 
 async function seedJobs(dataSource: DataSource, systemIds: Map<string, number>, timezone: string): Promise<void> {
-  const jobs = createJobService(dataSource);
-  const parts = createPartService(dataSource);
+  const jobs = createJobService(openSiteData(dataSource, everySite));
+  const parts = createPartService(openSiteData(dataSource, everySite));
   for (const { job, parts: jobParts } of demoJobs) {
     const { dueInDays, finishSystem, ...fields } = job;
     const created = await jobs.create({ ...fields, dueDate: calendarDateIn(new Date(Date.now() + dueInDays * dayMs), timezone), finishSystemId: systemIds.get(finishSystem)! }, systemActor);

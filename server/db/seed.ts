@@ -1,4 +1,6 @@
 import type { DataSource } from 'typeorm';
+import { openSiteData } from '../data/site-data';
+import { everySite } from '../lib/site-scope';
 import { defaultOpeningHours, type CreateBoothInput } from '../../shared/schemas/booth';
 import type { CreateRackInput } from '../../shared/schemas/rack';
 import type { CreateUserInput } from '../../shared/schemas/user';
@@ -38,12 +40,12 @@ const demoRacks: CreateRackInput[] = [
 /** `storage` (when S3 is configured) takes the demo data sheet instead of `uploadDir`. */
 export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string; storage?: FileStorage }): Promise<{ seeded: boolean }> {
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return { seeded: false };
-  const users = createUserService(dataSource);
+  const users = createUserService(openSiteData(dataSource, everySite));
   for (const user of demoUsers) await users.create(user, systemActor);
-  await createSettingsService(dataSource).update({ shopName: 'Larchmere Joinery', timezone: 'Europe/London', defaultUnits: 'metric', yearlySolventThresholdKg: 150 }, systemActor);
-  const booths = createBoothService(dataSource);
+  await createSettingsService(openSiteData(dataSource, everySite)).update({ shopName: 'Larchmere Joinery', timezone: 'Europe/London', defaultUnits: 'metric', yearlySolventThresholdKg: 150 }, systemActor);
+  const booths = createBoothService(openSiteData(dataSource, everySite));
   for (const booth of demoBooths) await booths.create(booth, systemActor);
-  const racks = createRackService(dataSource);
+  const racks = createRackService(openSiteData(dataSource, everySite));
   for (const rack of demoRacks) await racks.create(rack, systemActor);
   await seedMasterData(dataSource, options.storage ?? options.uploadDir, 'Europe/London');
   return { seeded: true };

@@ -1,6 +1,5 @@
-import type { Request } from 'express';
 import { seesAllSites } from '../../shared/permissions';
-import { siteFilterSchema } from '../../shared/schemas/site';
+import type { SessionUser } from '../../shared/schemas/auth';
 import { AppError } from './app-error';
 
 /** Which sites one request may see and change. */
@@ -16,15 +15,17 @@ export interface SiteScope {
 /** Every site: for the system itself (seed, scheduler, tests that act as no one). */
 export const everySite: SiteScope = { siteId: null, homeSiteId: 1, allSites: true };
 
-/** From the signed-in user, and for an admin an optional `?siteId=` to look at one site. */
-export function siteScopeOf(req: Request): SiteScope {
-  const user = req.user;
+/** One site only: a booth's sensor, or anyone who is not an admin. */
+export const oneSite = (siteId: number): SiteScope => ({ siteId, homeSiteId: siteId, allSites: false });
+
+/**
+ * From the signed-in user: an admin sees every site, or the one named by `?siteId=` on a route
+ * that takes it; everyone else is held to their own site whatever they ask for.
+ */
+export function siteScopeFor(user: Pick<SessionUser, 'role' | 'siteId'> | null | undefined, requestedSiteId?: number): SiteScope {
   if (!user) return everySite;
-  if (seesAllSites(user.role)) {
-    const { siteId } = siteFilterSchema.parse(req.query);
-    return { siteId: siteId ?? null, homeSiteId: user.siteId, allSites: true };
-  }
-  return { siteId: user.siteId, homeSiteId: user.siteId, allSites: false };
+  if (seesAllSites(user.role)) return { siteId: requestedSiteId ?? null, homeSiteId: user.siteId, allSites: true };
+  return oneSite(user.siteId);
 }
 
 export function inScope(scope: SiteScope, siteId: number): boolean {

@@ -5,6 +5,8 @@ import type { AppConfig } from '../config/env';
 import { advisoryLocks, withAdvisoryLock } from '../db/advisory-lock';
 import { createNotificationService, type NotificationService } from '../services/notifications';
 import { createSettingsService } from '../services/settings';
+import { openSiteData } from '../data/site-data';
+import { everySite } from '../lib/site-scope';
 import { startFakeSmtp, type FakeSmtp } from './fake-smtp';
 import { createMailer } from './mailer';
 
@@ -23,7 +25,9 @@ export async function startNotifications(dataSource: DataSource, config: AppConf
   });
   if (mailbox) logger.info({ port: mailbox.port }, 'no SMTP_URL: e-mail goes to the development mailbox (Settings → Mailbox)');
   const mailer = createMailer(config.smtpUrl ? { url: config.smtpUrl } : { port: mailbox!.port }, config.mailFrom);
-  const service = createNotificationService(dataSource, createSettingsService(dataSource), mailer, { recoatWarningHours: config.recoatWarningHours });
+  // The scheduler decides for every site; each rule sends a site's news to that site's people.
+  const data = openSiteData(dataSource, everySite);
+  const service = createNotificationService(data, createSettingsService(data), mailer, { recoatWarningHours: config.recoatWarningHours });
   // protect: a slow tick is never overlapped by the next one, so nothing is sent twice by this process.
   const job = options.schedule ? new Cron(config.notificationSchedule, { protect: true }, () => scheduledTick(dataSource, service, logger)) : null;
   return {

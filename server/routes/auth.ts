@@ -1,66 +1,66 @@
-import { Router, type NextFunction, type Request, type Response } from 'express';
-import rateLimit from 'express-rate-limit';
-import type passport from 'passport';
-import { loginSchema, type SessionUser } from '../../shared/schemas/auth';
+import { csrfResponseSchema, loginSchema, userResponseSchema } from '../../shared/schemas/auth';
 import { updateMeSchema } from '../../shared/schemas/user';
+import { authenticate, logIn, logOut } from '../auth/sign-in';
 import { AppError } from '../lib/app-error';
-import { actorOf } from '../lib/actor';
 import { csrfToken } from '../middleware/csrf';
-import { requireSignIn } from '../middleware/permissions';
-import type { UserService } from '../services/users';
+import { answered, defineRoute, type ApiRoute } from '../registry/route';
 
-function authenticate(auth: passport.PassportStatic, req: Request, res: Response, next: NextFunction): Promise<SessionUser | false> {
-  return new Promise((resolve, reject) => {
-    auth.authenticate('local', (error: unknown, user: SessionUser | false) => (error ? reject(error) : resolve(user)))(req, res, next);
-  });
-}
-
-function logIn(req: Request, user: SessionUser): Promise<void> {
-  // Passport regenerates the session id (no fixation); keepSessionInfo carries the CSRF token over.
-  return new Promise((resolve, reject) => req.logIn(user, { session: true, keepSessionInfo: true }, (error) => (error ? reject(error) : resolve())));
-}
-
-export function authRoutes(auth: passport.PassportStatic, users: UserService, loginLimit: number): Router {
-  const router = Router();
-  const loginLimiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: loginLimit,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError('too_many_requests', 'Too many failed sign-ins; wait 15 minutes and try again')),
-  });
-
-  router.get('/csrf', (req, res) => {
-    res.json({ token: csrfToken(req) });
-  });
-
-  router.post('/login', loginLimiter, async (req, res, next) => {
-    req.body = loginSchema.parse(req.body);
-    const user = await authenticate(auth, req, res, next);
-    if (!user) throw new AppError('unauthenticated', 'E-mail or password is wrong, or the account is disabled');
-    await logIn(req, user);
-    res.json({ user });
-  });
-
-  router.post('/logout', (req, res, next) => {
-    req.logout({ keepSessionInfo: false }, (error) => {
-      if (error) return next(error);
-      req.session.destroy(() => {
-        res.clearCookie('bw.sid');
-        res.status(204).end();
-      });
-    });
-  });
-
-  router.get('/me', requireSignIn, (req, res) => {
-    res.json({ user: req.user });
-  });
-
-  router.patch('/me', requireSignIn, async (req, res) => {
-    const patch = updateMeSchema.parse(req.body);
-    res.json({ user: await users.updateSelf(req.user!.id, patch, actorOf(req)) });
-  });
-
-  return router;
-}
+export const authRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/auth/csrf',
+    summary: 'CSRF token for mutating requests',
+    access: 'public',
+    sites: 'own',
+    response: { status: 200, schema: csrfResponseSchema },
+    handler: (_input, { req }) => ({ token: csrfToken(req) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/auth/login',
+    summary: 'Sign in (failed attempts are limited per address)',
+    access: 'public',
+    sites: 'own',
+    limit: 'sign-in',
+    body: loginSchema,
+    response: { status: 200, schema: userResponseSchema },
+    handler: async (_input, { auth, req, res }) => {
+      const user = await authenticate(auth, req, res);
+      if (!user) throw new AppError('unauthenticated', 'E-mail or password is wrong, or the account is disabled');
+      await logIn(req, user);
+      return { user };
+    },
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/auth/logout',
+    summary: 'Sign out (harmless when not signed in)',
+    access: 'public',
+    sites: 'own',
+    response: { status: 204 },
+    handler: async (_input, { req, res }) => {
+      await logOut(req, res);
+      res.status(204).end();
+      return answered;
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/auth/me',
+    summary: 'The signed-in user',
+    access: 'signed-in',
+    sites: 'own',
+    response: { status: 200, schema: userResponseSchema },
+    handler: (_input, { user }) => ({ user }),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/auth/me',
+    summary: 'Change own name, units or e-mail choices',
+    access: 'signed-in',
+    sites: 'own',
+    body: updateMeSchema,
+    response: { status: 200, schema: userResponseSchema },
+    handler: async ({ body }, { services, user, actor }) => ({ user: await services.users.updateSelf(user!.id, body, actor) }),
+  }),
+];

@@ -1,31 +1,54 @@
-import { Router } from 'express';
-import { correctCoatSchema, coatQuerySchema, createCoatSchema } from '../../shared/schemas/coat';
-import { idParamsSchema } from '../../shared/schemas/common';
-import { runnerOf } from '../lib/actor';
-import { requirePermission } from '../middleware/permissions';
-import type { CoatService } from '../services/coats';
+import { z } from 'zod';
+import { coatQuerySchema, coatSchema, correctCoatSchema, createCoatSchema } from '../../shared/schemas/coat';
+import { idParamsSchema, listSchema } from '../../shared/schemas/common';
+import { defineRoute, Reply, type ApiRoute } from '../registry/route';
 
-export function coatRoutes(coats: CoatService): Router {
-  const router = Router();
+const coatEnvelope = z.object({ coat: coatSchema });
 
-  router.post('/', requirePermission('coats:write'), async (req, res) => {
-    const { coat, replayed } = await coats.create(createCoatSchema.parse(req.body), runnerOf(req));
-    // A replay of an idempotency key answers with the record already made, never a second one.
-    res.status(replayed ? 200 : 201).json({ coat, replayed });
-  });
-
-  router.get('/', requirePermission('coats:read'), async (req, res) => {
-    res.json(await coats.list(coatQuerySchema.parse(req.query)));
-  });
-
-  router.get('/:id', requirePermission('coats:read'), async (req, res) => {
-    res.json({ coat: await coats.get(idParamsSchema.parse(req.params).id) });
-  });
-
-  router.post('/:id/corrections', requirePermission('coats:write'), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    res.status(201).json({ coat: await coats.correct(id, correctCoatSchema.parse(req.body), runnerOf(req)) });
-  });
-
-  return router;
-}
+/** The coat log is each site's: coats belong to their spray session's booth's site. */
+export const coatRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'post',
+    path: '/api/coats',
+    summary: 'Record a coat (a replayed idempotency key answers 200 with the record already made)',
+    access: 'coats:write',
+    sites: 'site',
+    body: createCoatSchema,
+    response: { status: 201, otherStatuses: [200], schema: coatEnvelope.extend({ replayed: z.boolean() }) },
+    handler: async ({ body }, { services, runner }) => {
+      const { coat, replayed } = await services.coats.create(body, runner);
+      return new Reply(replayed ? 200 : 201, { coat, replayed });
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/coats',
+    summary: 'The coat log, newest first (?spraySessionId, partId, jobId, productId, from, to, history)',
+    access: 'coats:read',
+    sites: 'site',
+    query: coatQuerySchema,
+    response: { status: 200, schema: listSchema(coatSchema) },
+    handler: ({ query }, { services }) => services.coats.list(query),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/coats/:id',
+    summary: 'One coat record',
+    access: 'coats:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: coatEnvelope },
+    handler: async ({ params }, { services }) => ({ coat: await services.coats.get(params.id) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/coats/:id/corrections',
+    summary: 'Correct a coat: a new version that supersedes it (the record itself never changes)',
+    access: 'coats:write',
+    sites: 'site',
+    params: idParamsSchema,
+    body: correctCoatSchema,
+    response: { status: 201, schema: coatEnvelope },
+    handler: async ({ params, body }, { services, runner }) => ({ coat: await services.coats.correct(params.id, body, runner) }),
+  }),
+];

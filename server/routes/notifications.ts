@@ -1,17 +1,25 @@
-import { Router } from 'express';
-import { AppError } from '../lib/app-error';
-import type { NotificationRuntime } from '../mail/notifications-runtime';
-import { requirePermission, requireSignIn } from '../middleware/permissions';
+import { z } from 'zod';
+import { listSchema } from '../../shared/schemas/common';
+import { mailboxMessageSchema, notificationSchema } from '../../shared/schemas/notification';
+import { defineRoute, type ApiRoute } from '../registry/route';
 
-export function notificationRoutes(runtime: NotificationRuntime | undefined): Router {
-  const router = Router();
-  router.get('/notifications', requireSignIn, async (req, res) => {
-    res.json({ items: runtime ? await runtime.service.recentFor(req.user!.id) : [] });
-  });
-  // The development mailbox: what the fake SMTP server received. Absent when real SMTP is set.
-  router.get('/mailbox', requirePermission('users:read'), (_req, res) => {
-    if (!runtime?.mailbox) throw new AppError('not_found', 'There is no development mailbox: e-mail goes out through SMTP_URL');
-    res.json({ items: runtime.mailbox.messages, total: runtime.mailbox.messages.length, page: 1, pageSize: runtime.mailbox.messages.length });
-  });
-  return router;
-}
+export const notificationRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/notifications',
+    summary: 'The signed-in user’s recent e-mail notifications',
+    access: 'signed-in',
+    sites: 'own',
+    response: { status: 200, schema: z.object({ items: z.array(notificationSchema) }) },
+    handler: async (_input, { services, user }) => ({ items: await services.notifications.recentFor(user!.id) }),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/mailbox',
+    summary: 'The development mailbox: what the local fake SMTP server received (404 when real SMTP is set)',
+    access: 'users:read',
+    sites: 'own',
+    response: { status: 200, schema: listSchema(mailboxMessageSchema) },
+    handler: (_input, { services }) => services.notifications.mailbox(),
+  }),
+];

@@ -1,31 +1,28 @@
-import { Router } from 'express';
-import { acceptPlanSchema, planRequestSchema } from '../../shared/schemas/planner';
-import { actorOf } from '../lib/actor';
-import { siteScopeOf } from '../lib/site-scope';
-import { requirePermission } from '../middleware/permissions';
-import type { PlannerService } from '../services/planner';
-import type { SpraySessionService } from '../services/spray-sessions';
+import { z } from 'zod';
+import { acceptPlanResponseSchema, acceptPlanSchema, planRequestSchema, planSchema } from '../../shared/schemas/planner';
+import { siteFilterFields } from '../../shared/schemas/site';
+import { defineRoute, type ApiRoute } from '../registry/route';
 
-export function plannerRoutes(planner: PlannerService, sessions: SpraySessionService): Router {
-  const router = Router();
-
-  // A proposal only: nothing is booked until the lead accepts it.
-  router.post('/proposals', requirePermission('spray-sessions:write'), async (req, res) => {
-    const { jobIds, horizonDays } = planRequestSchema.parse(req.body);
-    const plan = await planner.propose(jobIds, horizonDays, siteScopeOf(req));
-    const iso = (d: Date | null) => (d ? d.toISOString() : null);
-    res.json({
-      plan: {
-        sessions: plan.sessions.map((s) => ({ ...s, start: s.start.toISOString(), end: s.end.toISOString() })),
-        jobs: plan.jobs.map((j) => ({ ...j, finishesAt: iso(j.finishesAt) })),
-      },
-    });
-  });
-
-  router.post('/accept', requirePermission('spray-sessions:write'), async (req, res) => {
-    const { sessions: wanted } = acceptPlanSchema.parse(req.body);
-    res.status(201).json({ items: await sessions.createAll(wanted, actorOf(req), siteScopeOf(req)) });
-  });
-
-  return router;
-}
+export const plannerRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'post',
+    path: '/api/planner/proposals',
+    summary: 'Propose booth time for jobs’ remaining coats at the caller’s site (an admin ?siteId); books nothing',
+    access: 'spray-sessions:write',
+    sites: 'site',
+    query: z.object(siteFilterFields),
+    body: planRequestSchema,
+    response: { status: 200, schema: z.object({ plan: planSchema }) },
+    handler: async ({ body }, { services }) => ({ plan: await services.planner.propose(body.jobIds, body.horizonDays) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/planner/accept',
+    summary: 'Book every session of an accepted plan, or none of them',
+    access: 'spray-sessions:write',
+    sites: 'site',
+    body: acceptPlanSchema,
+    response: { status: 201, schema: acceptPlanResponseSchema },
+    handler: async ({ body }, { services, actor }) => ({ items: await services.spraySessions.createAll(body.sessions, actor) }),
+  }),
+];

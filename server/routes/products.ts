@@ -1,56 +1,74 @@
-import { pipeline } from 'node:stream/promises';
-import { Router } from 'express';
 import { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
-import { createLotSchema, createProductSchema, documentKindSchema, productListQuerySchema, updateProductSchema } from '../../shared/schemas/product';
-import { actorOf } from '../lib/actor';
-import { requirePermission, requireSignIn } from '../middleware/permissions';
-import { singleUpload } from '../middleware/upload';
-import { maxUploadBytes, type FileService } from '../services/files';
-import type { ProductService } from '../services/products';
+import { createLotSchema, createProductSchema, documentKindSchema, lotSchema, productListQuerySchema, productListSchema, productSchema, updateProductSchema } from '../../shared/schemas/product';
+import { defineRoute, type ApiRoute } from '../registry/route';
+import { maxUploadBytes } from '../services/files';
 
-export function productRoutes(products: ProductService): Router {
-  const router = Router();
+const productEnvelope = z.object({ product: productSchema });
 
-  router.get('/', requirePermission('products:read'), async (req, res) => {
-    res.json(await products.list(productListQuerySchema.parse(req.query)));
-  });
-
-  router.post('/', requirePermission('products:write'), async (req, res) => {
-    res.status(201).json({ product: await products.create(createProductSchema.parse(req.body), actorOf(req)) });
-  });
-
-  router.get('/:id', requirePermission('products:read'), async (req, res) => {
-    res.json({ product: await products.get(idParamsSchema.parse(req.params).id) });
-  });
-
-  router.patch('/:id', requirePermission('products:write'), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    res.json({ product: await products.update(id, updateProductSchema.parse(req.body), actorOf(req)) });
-  });
-
-  router.post('/:id/lots', requirePermission('products:write'), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    res.status(201).json({ lot: await products.addLot(id, createLotSchema.parse(req.body), actorOf(req)) });
-  });
-
-  router.post('/:id/documents', requirePermission('products:write'), singleUpload(maxUploadBytes), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    const { kind } = z.object({ kind: documentKindSchema }).parse(req.body ?? {});
-    res.status(201).json({ product: await products.attachDocument(id, kind, req.file, actorOf(req)) });
-  });
-
-  return router;
-}
-
-export function fileRoutes(files: FileService): Router {
-  const router = Router();
-  router.get('/:id', requireSignIn, async (req, res) => {
-    const { file, content } = await files.open(idParamsSchema.parse(req.params).id);
-    res.attachment(file.originalName).type(file.mimeType).set('Cache-Control', 'private, no-store');
-    if (content.sizeBytes !== undefined) res.set('Content-Length', String(content.sizeBytes));
-    // The headers are gone once bytes flow: a failure now can only cut the download short.
-    await pipeline(content.body, res).catch((error: Error) => req.log.warn({ err: error, fileId: file.id }, 'file download cut short'));
-  });
-  return router;
-}
+/** Data sheets, their lots and documents are the group's: every site sprays from the same sheets. */
+export const productRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/products',
+    summary: 'Search data sheets',
+    access: 'products:read',
+    sites: 'group',
+    query: productListQuerySchema,
+    response: { status: 200, schema: productListSchema },
+    handler: ({ query }, { services }) => services.products.list(query),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/products',
+    summary: 'Add a data sheet',
+    access: 'products:write',
+    sites: 'group',
+    body: createProductSchema,
+    response: { status: 201, schema: productEnvelope },
+    handler: async ({ body }, { services, actor }) => ({ product: await services.products.create(body, actor) }),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/products/:id',
+    summary: 'One data sheet',
+    access: 'products:read',
+    sites: 'group',
+    params: idParamsSchema,
+    response: { status: 200, schema: productEnvelope },
+    handler: async ({ params }, { services }) => ({ product: await services.products.get(params.id) }),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/products/:id',
+    summary: 'Change a data sheet',
+    access: 'products:write',
+    sites: 'group',
+    params: idParamsSchema,
+    body: updateProductSchema,
+    response: { status: 200, schema: productEnvelope },
+    handler: async ({ params, body }, { services, actor }) => ({ product: await services.products.update(params.id, body, actor) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/products/:id/lots',
+    summary: 'Record a lot',
+    access: 'products:write',
+    sites: 'group',
+    params: idParamsSchema,
+    body: createLotSchema,
+    response: { status: 201, schema: z.object({ lot: lotSchema }) },
+    handler: async ({ params, body }, { services, actor }) => ({ lot: await services.products.addLot(params.id, body, actor) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/products/:id/documents',
+    summary: 'Attach a technical (tds) or safety (sds) data sheet PDF',
+    access: 'products:write',
+    sites: 'group',
+    params: idParamsSchema,
+    multipart: { fields: z.object({ kind: documentKindSchema }), file: { maxBytes: maxUploadBytes, description: 'The data sheet, a PDF' } },
+    response: { status: 201, schema: productEnvelope },
+    handler: async ({ params, form, file }, { services, actor }) => ({ product: await services.products.attachDocument(params.id, form.kind, file, actor) }),
+  }),
+];

@@ -1,34 +1,61 @@
-import { Router, type Request, type Response } from 'express';
-import { siteScopeOf } from '../lib/site-scope';
 import type { z } from 'zod';
-import { areaSprayedQuerySchema, boothUseQuerySchema, conditionsQuerySchema, materialQuerySchema, reportRangeQuerySchema } from '../../shared/schemas/report';
-import { requirePermission } from '../middleware/permissions';
+import {
+  areaSprayedQuerySchema,
+  areaSprayedReportSchema,
+  boothUseQuerySchema,
+  boothUseReportSchema,
+  conditionsQuerySchema,
+  conditionsReportSchema,
+  materialQuerySchema,
+  materialReportSchema,
+  reportRangeQuerySchema,
+  reworkReportSchema,
+  solventReportSchema,
+} from '../../shared/schemas/report';
+import { answered, defineRoute, type ApiRoute } from '../registry/route';
 import type { ReportService } from '../services/reports';
 import { reportCsv } from '../services/reports/csv-tables';
 
-/** JSON `{ report }`, or the report's table as a CSV download when `format=csv`. */
-function send<R>(res: Response, name: string, format: 'json' | 'csv', report: R, csv: (r: R) => string, range: { from: string; to: string }) {
-  if (format === 'json') return void res.json({ report });
-  res.attachment(`boothwright-${name}-${range.from}-to-${range.to}.csv`).type('text/csv').send(csv(report));
+type ReportQuery = { from: string; to: string; format: 'json' | 'csv' };
+
+interface ReportRoute {
+  name: keyof ReportService & keyof typeof reportCsv;
+  path: string;
+  summary: string;
+  query: z.ZodObject;
+  /** The `{ report }` envelope. */
+  schema: z.ZodType;
 }
 
-function reportRoute<S extends z.ZodType<{ from: string; to: string; format: 'json' | 'csv'; siteId?: number }>, R>(name: string, schema: S, run: (q: z.infer<S>) => Promise<R>, csv: (r: R) => string) {
-  return async (req: Request, res: Response) => {
-    const query = schema.parse(req.query);
-    // A lead's reports are their site's whatever they ask; an admin's are the site named, or all.
-    const siteId = siteScopeOf(req).siteId ?? undefined;
-    send(res, name, query.format, await run({ ...query, siteId }), csv, query);
-  };
+/**
+ * One report: JSON `{ report }`, or its table as a CSV download with `format=csv`. Every report
+ * takes `from` and `to` (shop dates, both included); its site is the scope's (an admin ?siteId).
+ */
+function reportRoute(r: ReportRoute): ApiRoute {
+  return defineRoute({
+    method: 'get',
+    path: `/api/reports/${r.path}`,
+    summary: r.summary,
+    access: 'reports:read',
+    sites: 'site',
+    query: r.query,
+    response: { status: 200, schema: r.schema, description: '`{ report }`, or the report’s table as text/csv with format=csv' },
+    handler: async ({ query }, { services, res }) => {
+      const q = query as ReportQuery;
+      const report = await (services.reports[r.name] as (query: unknown) => Promise<unknown>)(query);
+      if (q.format === 'json') return { report };
+      const csv = reportCsv[r.name] as (report: unknown) => string;
+      res.attachment(`boothwright-${r.path}-${q.from}-to-${q.to}.csv`).type('text/csv').send(csv(report));
+      return answered;
+    },
+  });
 }
 
-export function reportRoutes(reports: ReportService): Router {
-  const router = Router();
-  router.use(requirePermission('reports:read'));
-  router.get('/booth-use', reportRoute('booth-use', boothUseQuerySchema, reports.boothUse, reportCsv.boothUse));
-  router.get('/area-sprayed', reportRoute('area-sprayed', areaSprayedQuerySchema, reports.areaSprayed, reportCsv.areaSprayed));
-  router.get('/conditions', reportRoute('conditions', conditionsQuerySchema, reports.conditions, reportCsv.conditions));
-  router.get('/solvent', reportRoute('solvent', reportRangeQuerySchema, reports.solvent, reportCsv.solvent));
-  router.get('/material', reportRoute('material', materialQuerySchema, reports.material, reportCsv.material));
-  router.get('/rework', reportRoute('rework', reportRangeQuerySchema, reports.rework, reportCsv.rework));
-  return router;
-}
+export const reportRoutes: ApiRoute[] = [
+  reportRoute({ name: 'boothUse', path: 'booth-use', summary: 'Hours booked and sprayed per booth per week (?boothId)', query: boothUseQuerySchema, schema: boothUseReportSchema }),
+  reportRoute({ name: 'areaSprayed', path: 'area-sprayed', summary: 'Area sprayed per week (?groupBy=product-kind|job)', query: areaSprayedQuerySchema, schema: areaSprayedReportSchema }),
+  reportRoute({ name: 'conditions', path: 'conditions', summary: 'Booth conditions against product limits (?boothId)', query: conditionsQuerySchema, schema: conditionsReportSchema }),
+  reportRoute({ name: 'solvent', path: 'solvent', summary: 'Litres mixed and VOC per month with the yearly total', query: reportRangeQuerySchema, schema: solventReportSchema }),
+  reportRoute({ name: 'material', path: 'material', summary: 'Litres used against the estimate per job and product (?jobId)', query: materialQuerySchema, schema: materialReportSchema }),
+  reportRoute({ name: 'rework', path: 'rework', summary: 'Coats corrected or re-sprayed by reason per month', query: reportRangeQuerySchema, schema: reworkReportSchema }),
+];

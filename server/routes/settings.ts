@@ -1,30 +1,28 @@
-import { Router } from 'express';
-import { pageQuerySchema } from '../../shared/schemas/common';
-import { updateShopSettingsSchema } from '../../shared/schemas/settings';
-import { actorOf } from '../lib/actor';
-import { requirePermission } from '../middleware/permissions';
-import { listAudit } from '../services/audit';
-import type { SettingsService } from '../services/settings';
-import type { DataSource } from 'typeorm';
+import { z } from 'zod';
+import { shopSettingsSchema, updateShopSettingsSchema } from '../../shared/schemas/settings';
+import { defineRoute, type ApiRoute } from '../registry/route';
 
-export function settingsRoutes(settings: SettingsService): Router {
-  const router = Router();
+const settingsEnvelope = z.object({ settings: shopSettingsSchema });
 
-  router.get('/', requirePermission('settings:read'), async (_req, res) => {
-    res.json({ settings: await settings.get() });
-  });
-
-  router.patch('/', requirePermission('settings:write'), async (req, res) => {
-    res.json({ settings: await settings.update(updateShopSettingsSchema.parse(req.body), actorOf(req)) });
-  });
-
-  return router;
-}
-
-export function auditRoutes(dataSource: DataSource): Router {
-  const router = Router();
-  router.get('/', requirePermission('audit:read'), async (req, res) => {
-    res.json(await listAudit(dataSource.manager, pageQuerySchema.parse(req.query)));
-  });
-  return router;
-}
+/** The shop's settings are the group's (one timezone and one set of planning defaults). */
+export const settingsRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/settings',
+    summary: 'Shop settings',
+    access: 'settings:read',
+    sites: 'group',
+    response: { status: 200, schema: settingsEnvelope },
+    handler: async (_input, { services }) => ({ settings: await services.settings.get() }),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/settings',
+    summary: 'Change shop settings',
+    access: 'settings:write',
+    sites: 'group',
+    body: updateShopSettingsSchema,
+    response: { status: 200, schema: settingsEnvelope },
+    handler: async ({ body }, { services, actor }) => ({ settings: await services.settings.update(body, actor) }),
+  }),
+];

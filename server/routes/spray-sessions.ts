@@ -1,53 +1,87 @@
-import { Router } from 'express';
+import { z } from 'zod';
 import { can } from '../../shared/permissions';
-import { idParamsSchema } from '../../shared/schemas/common';
-import { createSpraySessionSchema, spraySessionQuerySchema, updateSpraySessionSchema } from '../../shared/schemas/spray-session';
-import { AppError } from '../lib/app-error';
-import { actorOf, runnerOf } from '../lib/actor';
-import { siteScopeOf } from '../lib/site-scope';
-import { requirePermission } from '../middleware/permissions';
-import type { MixService } from '../services/mixes';
-import type { SpraySessionService } from '../services/spray-sessions';
-import { createMixSchema } from '../../shared/schemas/checklist';
+import { createMixSchema, mixSchema } from '../../shared/schemas/checklist';
+import { idParamsSchema, listSchema } from '../../shared/schemas/common';
+import { createSpraySessionSchema, spraySessionCautionsSchema, spraySessionQuerySchema, spraySessionSchema, updateSpraySessionSchema } from '../../shared/schemas/spray-session';
+import { defineRoute, type ApiRoute } from '../registry/route';
 
-// What a sprayer may change on a session assigned to them: its progress, not its booking.
-const runnerFields = new Set(['state', 'notes', 'checklist']);
+const spraySessionEnvelope = z.object({ spraySession: spraySessionSchema });
 
-export function spraySessionRoutes(sessions: SpraySessionService, mixes: MixService): Router {
-  const router = Router();
-
-  router.get('/:id/mixes', requirePermission('spray-sessions:read'), async (req, res) => {
-    res.json({ items: await mixes.list(idParamsSchema.parse(req.params).id) });
-  });
-
-  router.post('/:id/mixes', requirePermission('coats:write'), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    res.status(201).json({ mix: await mixes.create(id, createMixSchema.parse(req.body), runnerOf(req)) });
-  });
-
-  router.get('/', requirePermission('spray-sessions:read'), async (req, res) => {
-    res.json(await sessions.list(spraySessionQuerySchema.parse(req.query), siteScopeOf(req)));
-  });
-
-  router.post('/', requirePermission('spray-sessions:write'), async (req, res) => {
-    res.status(201).json({ spraySession: await sessions.create(createSpraySessionSchema.parse(req.body), actorOf(req), siteScopeOf(req)) });
-  });
-
-  router.get('/:id', requirePermission('spray-sessions:read'), async (req, res) => {
-    res.json({ spraySession: await sessions.get(idParamsSchema.parse(req.params).id, siteScopeOf(req)) });
-  });
-
-  router.patch('/:id', requirePermission('spray-sessions:run'), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    const patch = updateSpraySessionSchema.parse(req.body);
-    if (!can(req.user!.role, 'spray-sessions:write')) {
-      const session = await sessions.get(id, siteScopeOf(req));
-      const onlyProgress = Object.keys(patch).every((key) => runnerFields.has(key));
-      if (session.sprayerId !== req.user!.id || !onlyProgress) throw new AppError('forbidden', 'Sprayers may only move their own sessions through their steps; ask the finishing lead to rebook');
-    }
-    const actor = { ...actorOf(req), mayOverride: can(req.user!.role, 'spray-sessions:write') };
-    res.json({ spraySession: await sessions.update(id, patch, actor, siteScopeOf(req)) });
-  });
-
-  return router;
-}
+/** Spray sessions belong to their booth's site, and so do their pots and cautions. */
+export const spraySessionRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/spray-sessions',
+    summary: 'Spray sessions overlapping from–to (?boothId; an admin ?siteId)',
+    access: 'spray-sessions:read',
+    sites: 'site',
+    query: spraySessionQuerySchema,
+    response: { status: 200, schema: listSchema(spraySessionSchema) },
+    handler: ({ query }, { services }) => services.spraySessions.list(query),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/spray-sessions',
+    summary: 'Book booth time (409 when it overlaps; the sprayer must work at the booth’s site)',
+    access: 'spray-sessions:write',
+    sites: 'site',
+    body: createSpraySessionSchema,
+    response: { status: 201, schema: spraySessionEnvelope },
+    handler: async ({ body }, { services, actor }) => ({ spraySession: await services.spraySessions.create(body, actor) }),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/spray-sessions/:id',
+    summary: 'One spray session',
+    access: 'spray-sessions:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: spraySessionEnvelope },
+    handler: async ({ params }, { services }) => ({ spraySession: await services.spraySessions.get(params.id) }),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/spray-sessions/:id',
+    summary: 'Move, resize or progress a session (a sprayer: only the state, notes and checklist of their own)',
+    access: 'spray-sessions:run',
+    sites: 'site',
+    params: idParamsSchema,
+    body: updateSpraySessionSchema,
+    response: { status: 200, schema: spraySessionEnvelope },
+    handler: async ({ params, body }, { services, actor, user }) => {
+      const spraySessionActor = { ...actor, mayOverride: can(user?.role, 'spray-sessions:write') };
+      return { spraySession: await services.spraySessions.update(params.id, body, spraySessionActor) };
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/spray-sessions/:id/cautions',
+    summary: 'Respiratory, ventilation and clearance cautions for the session’s products and booth',
+    access: 'spray-sessions:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: spraySessionCautionsSchema },
+    handler: ({ params }, { services }) => services.cautions.forSpraySession(params.id),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/spray-sessions/:id/mixes',
+    summary: 'The pots mixed for a session, newest first',
+    access: 'spray-sessions:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: z.object({ items: z.array(mixSchema) }) },
+    handler: async ({ params }, { services }) => ({ items: await services.mixes.list(params.id) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/spray-sessions/:id/mixes',
+    summary: 'Record a pot: quantities, induction and pot life at the mixing temperature',
+    access: 'coats:write',
+    sites: 'site',
+    params: idParamsSchema,
+    body: createMixSchema,
+    response: { status: 201, schema: z.object({ mix: mixSchema }) },
+    handler: async ({ params, body }, { services, runner }) => ({ mix: await services.mixes.create(params.id, body, runner) }),
+  }),
+];

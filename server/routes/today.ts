@@ -1,17 +1,16 @@
-import { Router } from 'express';
-import { todayQuerySchema } from '../../shared/schemas/today';
-import { siteScopeOf } from '../lib/site-scope';
-import { requirePermission } from '../middleware/permissions';
-import type { TodayService } from '../services/today';
+import { todayQuerySchema, todayResponseSchema } from '../../shared/schemas/today';
+import { defineRoute, type ApiRoute } from '../registry/route';
 
-export function todayRoutes(today: TodayService): Router {
-  const router = Router();
-
-  // The day's board in one call, shaped by the caller's role and held to their site.
-  router.get('/', requirePermission('today:read'), async (req, res) => {
-    todayQuerySchema.parse(req.query);
-    res.json({ today: await today.board({ id: req.user!.id, role: req.user!.role }, siteScopeOf(req)) });
-  });
-
-  return router;
-}
+export const todayRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/today',
+    summary:
+      'The day’s board for the caller’s role at their site: a lead’s sessions, unassigned work, closing windows, denibs, jobs at risk and stale sensors; a sprayer’s sessions with their next step (an admin ?siteId)',
+    access: 'today:read',
+    sites: 'site',
+    query: todayQuerySchema,
+    response: { status: 200, schema: todayResponseSchema },
+    handler: async (_input, { services, user }) => ({ today: await services.today.board({ id: user!.id, role: user!.role }) }),
+  }),
+];

@@ -1,26 +1,41 @@
-import { Router } from 'express';
-import { idParamsSchema, pageQuerySchema } from '../../shared/schemas/common';
-import { createUserSchema, updateUserSchema } from '../../shared/schemas/user';
-import { actorOf } from '../lib/actor';
-import { siteScopeOf } from '../lib/site-scope';
-import { requirePermission } from '../middleware/permissions';
-import type { UserService } from '../services/users';
+import { z } from 'zod';
+import { idParamsSchema, listSchema, pageFields } from '../../shared/schemas/common';
+import { siteFilterFields } from '../../shared/schemas/site';
+import { createUserSchema, updateUserSchema, userSchema } from '../../shared/schemas/user';
+import { defineRoute, type ApiRoute } from '../registry/route';
 
-export function userRoutes(users: UserService): Router {
-  const router = Router();
+const userEnvelope = z.object({ user: userSchema });
 
-  router.get('/', requirePermission('users:read'), async (req, res) => {
-    res.json(await users.list(pageQuerySchema.parse(req.query)));
-  });
-
-  router.post('/', requirePermission('users:write'), async (req, res) => {
-    res.status(201).json({ user: await users.create(createUserSchema.parse(req.body), actorOf(req), siteScopeOf(req).homeSiteId) });
-  });
-
-  router.patch('/:id', requirePermission('users:write'), async (req, res) => {
-    const { id } = idParamsSchema.parse(req.params);
-    res.json({ user: await users.update(id, updateUserSchema.parse(req.body), actorOf(req)) });
-  });
-
-  return router;
-}
+export const userRoutes: ApiRoute[] = [
+  defineRoute({
+    method: 'get',
+    path: '/api/users',
+    summary: 'List users (every site, or one with ?siteId)',
+    access: 'users:read',
+    sites: 'site',
+    query: z.object({ ...pageFields(50, 200), ...siteFilterFields }),
+    response: { status: 200, schema: listSchema(userSchema) },
+    handler: ({ query }, { services }) => services.users.list(query),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/users',
+    summary: 'Add a user (to the admin’s own site unless siteId names another)',
+    access: 'users:write',
+    sites: 'site',
+    body: createUserSchema,
+    response: { status: 201, schema: userEnvelope },
+    handler: async ({ body }, { services, actor }) => ({ user: await services.users.create(body, actor) }),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/users/:id',
+    summary: 'Change a user',
+    access: 'users:write',
+    sites: 'site',
+    params: idParamsSchema,
+    body: updateUserSchema,
+    response: { status: 200, schema: userEnvelope },
+    handler: async ({ params, body }, { services, actor }) => ({ user: await services.users.update(params.id, body, actor) }),
+  }),
+];

@@ -1,7 +1,6 @@
-import type { EntityManager } from 'typeorm';
 import type { AuditEntry } from '../../shared/schemas/audit';
 import type { List, PageQuery } from '../../shared/schemas/common';
-import { AuditEntryEntity } from '../db/entities/audit-entry.entity';
+import type { SiteData } from '../data/site-data';
 import { paginate } from '../lib/paginate';
 
 export interface Actor {
@@ -17,25 +16,30 @@ export interface AuditInput {
   entityId: string | number | null;
   summary: string;
   changes?: Record<string, unknown> | null;
+  /** The site the change is about (a booth's, a rack's, a session's); left out for group-wide things. */
+  siteId?: number | null;
 }
 
 /** Call inside the transaction that makes the change, so the trail and the data never disagree. */
-export async function recordAudit(manager: EntityManager, actor: Actor, input: AuditInput, at: Date): Promise<void> {
-  await manager.save(AuditEntryEntity, {
-    at: at.toISOString(),
-    userId: actor.id,
-    userName: actor.name,
-    action: input.action,
-    entity: input.entity,
-    entityId: input.entityId === null ? null : String(input.entityId),
-    summary: input.summary,
-    changes: input.changes ?? null,
-  });
+export async function recordAudit(tx: SiteData, actor: Actor, input: AuditInput, at: Date): Promise<void> {
+  await tx.audit.save(
+    tx.audit.create({
+      at: at.toISOString(),
+      userId: actor.id,
+      userName: actor.name,
+      action: input.action,
+      entity: input.entity,
+      entityId: input.entityId === null ? null : String(input.entityId),
+      summary: input.summary,
+      changes: input.changes ?? null,
+      siteId: input.siteId ?? null,
+    }),
+  );
 }
 
-
-export function listAudit(manager: EntityManager, query: PageQuery): Promise<List<AuditEntry>> {
-  return paginate(manager.getRepository(AuditEntryEntity), query, { order: { id: 'DESC' } }, (row) => ({
+/** The trail newest first: the group's entries and those of the sites the reader sees. */
+export function listAudit(data: SiteData, query: PageQuery): Promise<List<AuditEntry>> {
+  return paginate(data.audit, query, { order: { id: 'DESC' } }, (row) => ({
     id: row.id,
     at: row.at,
     userId: row.userId,

@@ -1,10 +1,10 @@
-import { In, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { SpraySessionState } from '../../shared/schemas/spray-session';
+import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
-import { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { nextCoatStep } from './part-coats';
 
 /** One step of one part booked in a live session. */
@@ -28,18 +28,19 @@ export function isLiveBooking(session: Pick<SpraySessionEntity, 'state' | 'endAt
 }
 
 /**
- * The steps live sessions plan on these parts and have not sprayed yet. An item without a step
- * means the part's next coat step, read from its coats on record.
+ * The steps live sessions plan on these parts and have not sprayed yet, in the sessions `data`
+ * sees (pass `data.acrossSites` when a booking anywhere counts). An item without a step means the
+ * part's next coat step, read from its coats on record.
  */
 export async function bookedStepsOf(
-  manager: EntityManager,
+  data: SiteData,
   parts: PartEntity[],
   context: { coats: Map<number, CoatEntity[]>; steps: Map<number, FinishStep[]>; now: Date },
 ): Promise<BookedPartStep[]> {
   if (parts.length === 0) return [];
-  const items = await manager.find(SpraySessionItemEntity, { where: { partId: In(parts.map((p) => p.id)) } });
+  const items = await data.spraySessionItems.find({ where: { partId: In(parts.map((p) => p.id)) } });
   const sessionIds = [...new Set(items.map((i) => i.spraySessionId))];
-  const sessions = sessionIds.length ? await manager.findBy(SpraySessionEntity, { id: In(sessionIds) }) : [];
+  const sessions = sessionIds.length ? await data.spraySessions.findBy({ id: In(sessionIds) }) : [];
   const live = new Map(sessions.filter((s) => isLiveBooking(s, context.now)).map((s) => [s.id, s]));
   const jobOf = new Map(parts.map((p) => [p.id, p.jobId]));
   return items.flatMap((item) => {

@@ -1,7 +1,7 @@
-import type { DataSource } from 'typeorm';
 import { effectiveClearance, faceVelocityMps } from '../../shared/finishing/booth-air';
 import { createBoothSchema, type Booth } from '../../shared/schemas/booth';
-import { BoothEntity } from '../db/entities/booth.entity';
+import type { BoothEntity } from '../db/entities/booth.entity';
+import type { SiteData } from '../data/site-data';
 import { systemClock, type Clock } from '../lib/clock';
 import { createCrudService } from './crud-service';
 
@@ -35,14 +35,14 @@ export function toBoothDto(booth: BoothEntity): Booth {
   };
 }
 
-export function createBoothService(dataSource: DataSource, clock: Clock = systemClock) {
-  return createCrudService(dataSource, clock, {
-    entity: BoothEntity,
+export function createBoothService(data: SiteData, clock: Clock = systemClock) {
+  return createCrudService(data, clock, {
+    table: (d) => d.booths,
     noun: 'booth',
     createSchema: createBoothSchema,
     order: { name: 'ASC', id: 'ASC' },
     toDto: toBoothDto,
-    siteScoped: true,
+    siteOwned: true,
   });
 }
 

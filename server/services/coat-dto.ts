@@ -1,17 +1,16 @@
-import { In, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import type { Coat } from '../../shared/schemas/coat';
-import { CoatPartEntity } from '../db/entities/coat-part.entity';
-import { CoatEntity } from '../db/entities/coat.entity';
-import { ProductEntity } from '../db/entities/product.entity';
+import type { SiteData } from '../data/site-data';
+import type { CoatEntity } from '../db/entities/coat.entity';
 
 /** Coat DTOs for a page of coat rows: parts, product names and successors in three queries. */
-export async function toCoatDtos(manager: EntityManager, coats: CoatEntity[]): Promise<Coat[]> {
+export async function toCoatDtos(data: SiteData, coats: CoatEntity[]): Promise<Coat[]> {
   const ids = coats.map((c) => c.id);
   if (ids.length === 0) return [];
   const [links, products, successors] = await Promise.all([
-    manager.find(CoatPartEntity, { where: { coatId: In(ids) } }),
-    manager.find(ProductEntity, { where: { id: In([...new Set(coats.map((c) => c.productId))]) }, select: { id: true, name: true } }),
-    manager.find(CoatEntity, { where: { replacesId: In(ids) }, select: { id: true, replacesId: true } }),
+    data.coatParts.find({ where: { coatId: In(ids) } }),
+    data.products.find({ where: { id: In([...new Set(coats.map((c) => c.productId))]) }, select: { id: true, name: true } }),
+    data.coats.find({ where: { replacesId: In(ids) }, select: { id: true, replacesId: true } }),
   ]);
   const productName = new Map(products.map((p) => [p.id, p.name]));
   const successor = new Map(successors.map((s) => [s.replacesId!, s.id]));

@@ -1,54 +1,57 @@
-import { In, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import { computeCoatRecord, type CoatRecord, type CoatWarning } from '../../shared/finishing/coat-record';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { CreateCoatInput } from '../../shared/schemas/coat';
 import { calendarDateIn } from '../../shared/time';
+import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
-import { MixEntity } from '../db/entities/mix.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { ProductLotEntity } from '../db/entities/product-lot.entity';
-import { ProductEntity } from '../db/entities/product.entity';
-import { RackEntity } from '../db/entities/rack.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import type { PartEntity } from '../db/entities/part.entity';
 import { AppError } from '../lib/app-error';
 import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
+import { partsSeenBy } from './part-sites';
 
 export type CoatFields = Omit<Required<CreateCoatInput>, 'idempotencyKey'>;
 
 /** Heated racks dry faster: use the coolest heated rack when every part sits on one, else the booth air. */
-async function dryingTemperature(manager: EntityManager, parts: PartEntity[], fields: CoatFields): Promise<number> {
+async function dryingTemperature(tx: SiteData, parts: PartEntity[], fields: CoatFields): Promise<number> {
   if (fields.dryingTempC !== null) return fields.dryingTempC;
   const rackIds = [...new Set(parts.map((p) => p.rackId))];
   if (rackIds.includes(null)) return fields.airTempC;
-  const racks = await manager.findBy(RackEntity, { id: In(rackIds as number[]) });
+  const racks = await tx.racks.findBy({ id: In(rackIds as number[]) });
   const heated = racks.map((r) => r.dryingTempC);
   return heated.every((t): t is number => t !== null) ? Math.min(...heated) : fields.airTempC;
 }
 
-async function loadReferences(manager: EntityManager, fields: CoatFields) {
-  const [session, product, parts] = await Promise.all([
-    manager.findOneBy(SpraySessionEntity, { id: fields.spraySessionId }),
-    manager.findOneBy(ProductEntity, { id: fields.productId }),
-    manager.findBy(PartEntity, { id: In(fields.partIds) }),
+/** The spray session must be one of the scope's; a part on another site's rack is not its booth's to coat. */
+async function loadReferences(tx: SiteData, fields: CoatFields) {
+  const [spraySession, product, parts] = await Promise.all([
+    tx.spraySessions.findOneBy({ id: fields.spraySessionId }),
+    tx.products.findOneBy({ id: fields.productId }),
+    tx.parts.findBy({ id: In(fields.partIds) }),
   ]);
-  if (!session) throw new AppError('validation_failed', 'That spray session does not exist', { spraySessionId: 'Choose a spray session' });
-  if (session.state === 'cancelled') throw new AppError('conflict', `Spray session ${session.id} was cancelled; log the coat on the session that ran`);
+  if (!spraySession) throw new AppError('validation_failed', 'That spray session does not exist', { spraySessionId: 'Choose a spray session' });
+  if (spraySession.state === 'cancelled') throw new AppError('conflict', `Spray session ${spraySession.id} was cancelled; log the coat on the session that ran`);
   if (!product) throw new AppError('validation_failed', 'That product does not exist', { productId: 'Choose a product' });
   if (parts.length !== new Set(fields.partIds).size) throw new AppError('validation_failed', 'One or more parts do not exist', { partIds: 'Choose parts that exist' });
-  return { session, product, parts };
+  const booth = await tx.booths.findOneBy({ id: spraySession.boothId });
+  const placed = parts.filter((p) => p.rackId !== null);
+  if (booth && (await partsSeenBy(tx.forSite(booth.siteId), placed)).size !== placed.length) {
+    throw new AppError('validation_failed', 'One or more parts stand on a rack of another site', { partIds: 'Choose parts at this site' });
+  }
+  return { spraySession, product, parts, siteId: booth?.siteId ?? null };
 }
 
-async function lotExpired(manager: EntityManager, fields: CoatFields, timeZone: string): Promise<boolean> {
+async function lotExpired(tx: SiteData, fields: CoatFields, timeZone: string): Promise<boolean> {
   if (fields.lotId === null) return false;
-  const lot = await manager.findOneBy(ProductLotEntity, { id: fields.lotId });
+  const lot = await tx.lots.findOneBy({ id: fields.lotId });
   if (!lot || lot.productId !== fields.productId) throw new AppError('validation_failed', 'That lot is not a lot of this product', { lotId: 'Choose a lot of the product sprayed' });
   return lot.expiresOn !== null && lot.expiresOn < calendarDateIn(new Date(fields.sprayedAt), timeZone);
 }
 
 /** A coat from a pot still standing, or past its pot life, is recorded with a stop to acknowledge. */
-async function mixWarnings(manager: EntityManager, fields: CoatFields): Promise<CoatWarning[]> {
+async function mixWarnings(tx: SiteData, fields: CoatFields): Promise<CoatWarning[]> {
   if (fields.mixId === null) return [];
-  const mix = await manager.findOneBy(MixEntity, { id: fields.mixId });
+  const mix = await tx.mixes.findOneBy({ id: fields.mixId });
   if (!mix || mix.productId !== fields.productId) throw new AppError('validation_failed', 'That mix is not a mix of this product', { mixId: 'Choose a mix of the product sprayed' });
   const sprayedAt = new Date(fields.sprayedAt).toISOString();
   if (mix.potLifeEndsAt && sprayedAt > mix.potLifeEndsAt) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot was past its pot life when this coat went on.' }];
@@ -62,10 +65,13 @@ function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: 
   return { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt && !abraded ? new Date(latest.recoatClosesAt) : null };
 }
 
-/** Works out the step, the target film, the previous window and every computed value of a coat. */
-export async function prepareCoat(manager: EntityManager, fields: CoatFields, timeZone: string): Promise<{ record: CoatRecord; stepPosition: number | null; dryingTempC: number }> {
-  const { product, parts } = await loadReferences(manager, fields);
-  const [coats, steps] = await Promise.all([currentCoatsByPart(manager, parts.map((p) => p.id)), stepsByJob(manager, parts)]);
+/**
+ * Works out the step, the target film, the previous window and every computed value of a coat.
+ * The step and the previous window come from the parts' whole history, whichever site coated them.
+ */
+export async function prepareCoat(tx: SiteData, fields: CoatFields, timeZone: string): Promise<{ record: CoatRecord; stepPosition: number | null; dryingTempC: number; siteId: number | null }> {
+  const { product, parts, siteId } = await loadReferences(tx, fields);
+  const [coats, steps] = await Promise.all([currentCoatsByPart(tx.acrossSites, parts.map((p) => p.id)), stepsByJob(tx, parts)]);
   const first = parts[0];
   const system = steps.get(first.jobId) ?? [];
   const firstCoats = coats.get(first.id) ?? [];
@@ -74,7 +80,7 @@ export async function prepareCoat(manager: EntityManager, fields: CoatFields, ti
   const sprayedAt = new Date(fields.sprayedAt);
   const earlier = [...coats.values()].flat().filter((c) => c.sprayedAt < sprayedAt.toISOString());
   const latest = earlier.sort((a, b) => b.sprayedAt.localeCompare(a.sprayedAt))[0];
-  const dryingTempC = await dryingTemperature(manager, parts, fields);
+  const dryingTempC = await dryingTemperature(tx, parts, fields);
   const record = computeCoatRecord({
     product,
     sprayedAt,
@@ -85,13 +91,13 @@ export async function prepareCoat(manager: EntityManager, fields: CoatFields, ti
     thinningPct: fields.thinningPct,
     wetFilmUm: fields.wetFilmUm,
     targetDryFilmUm: step?.kind === 'coat' ? step.dryFilmUm : null,
-    lotExpired: await lotExpired(manager, fields, timeZone),
+    lotExpired: await lotExpired(tx, fields, timeZone),
     previousWindow: latest ? previousWindow(latest, system, stepPosition) : null,
     timeZone,
   });
-  record.warnings.push(...(await mixWarnings(manager, fields)));
+  record.warnings.push(...(await mixWarnings(tx, fields)));
   if (step?.kind === 'coat' && step.productId !== fields.productId) {
     record.warnings.push({ code: 'product-not-in-step', verdict: 'caution', message: 'This product is not the one the finish system names for this step.' });
   }
-  return { record, stepPosition, dryingTempC };
+  return { record, stepPosition, dryingTempC, siteId };
 }

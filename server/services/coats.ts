@@ -1,13 +1,11 @@
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import { createCoatSchema, type Coat, type CoatQuery, type CorrectCoatInput, type CreateCoatInput } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
-import { CoatPartEntity } from '../db/entities/coat-part.entity';
-import { CoatEntity, type StoredWarning } from '../db/entities/coat.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { inTransaction } from '../db/transaction';
+import type { SiteData } from '../data/site-data';
+import type { CoatEntity, StoredWarning } from '../db/entities/coat.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
-import { assertRunsSession, type SessionRunner } from './session-runner';
+import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session-runner';
 import { toCoatDtos } from './coat-dto';
 import { prepareCoat, type CoatFields } from './coat-inputs';
 import type { EventBus } from './events';
@@ -27,23 +25,25 @@ function withAcknowledgements(warnings: StoredWarning[], fields: CoatFields): St
 }
 
 /** Stores each part's state for lists and job progress; the ready board recomputes it live. */
-async function refreshPartStates(manager: EntityManager, partIds: number[], now: Date): Promise<void> {
-  const parts = await manager.findBy(PartEntity, { id: In(partIds) });
-  const readiness = await readinessOf(manager, parts, now);
+async function refreshPartStates(tx: SiteData, partIds: number[], now: Date): Promise<void> {
+  const parts = await tx.parts.findBy({ id: In(partIds) });
+  const readiness = await readinessOf(tx, parts, now);
   for (const part of parts) {
     const state = readiness.get(part.id)!.state;
-    if (state !== part.state) await manager.update(PartEntity, { id: part.id }, { state, updatedAt: now.toISOString() });
+    if (state !== part.state) await tx.parts.update({ id: part.id }, { state, updatedAt: now.toISOString() });
   }
 }
 
-export function createCoatService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
-  async function write(manager: EntityManager, fields: CoatFields, version: Version, actor: SessionRunner): Promise<CoatEntity> {
-    await assertRunsSession(manager, fields.spraySessionId, actor);
+/** The coat log: a site's coats are those of its booths' spray sessions. */
+export function createCoatService(data: SiteData, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
+  /** Writes one coat version; answers it with its site, for the change feed. */
+  async function write(tx: SiteData, fields: CoatFields, version: Version, actor: SpraySessionRunner): Promise<{ coat: CoatEntity; siteId: number | null }> {
+    await assertRunsSpraySession(tx, fields.spraySessionId, actor);
     const { timezone } = await settings.get();
-    const { record, stepPosition, dryingTempC } = await prepareCoat(manager, fields, timezone);
+    const { record, stepPosition, dryingTempC, siteId } = await prepareCoat(tx, fields, timezone);
     const iso = (d: Date) => d.toISOString();
-    const coat = await manager.save(
-      manager.create(CoatEntity, {
+    const coat = await tx.coats.save(
+      tx.coats.create({
         spraySessionId: fields.spraySessionId,
         productId: fields.productId,
         lotId: fields.lotId,
@@ -75,53 +75,59 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
         ...version,
       }),
     );
-    await manager.insert(CoatPartEntity, [...new Set(fields.partIds)].map((partId) => ({ coatId: coat.id, partId })));
-    await refreshPartStates(manager, fields.partIds, clock.now());
-    return coat;
+    await tx.coatParts.insert([...new Set(fields.partIds)].map((partId) => ({ coatId: coat.id, partId })));
+    await refreshPartStates(tx, fields.partIds, clock.now());
+    return { coat, siteId };
   }
 
-  async function dto(manager: EntityManager, coat: CoatEntity): Promise<Coat> {
-    return (await toCoatDtos(manager, [coat]))[0];
+  async function written(tx: SiteData, fields: CoatFields, version: Version, actor: SpraySessionRunner): Promise<{ coat: Coat; siteId: number | null }> {
+    const { coat, siteId } = await write(tx, fields, version, actor);
+    return { coat: await dto(tx, coat), siteId };
+  }
+
+  async function dto(tx: SiteData, coat: CoatEntity): Promise<Coat> {
+    return (await toCoatDtos(tx, [coat]))[0];
   }
 
   return {
     /** A resent coat with a known idempotency key returns the first record instead of a second one. */
-    async create(input: CreateCoatInput, actor: SessionRunner): Promise<{ coat: Coat; replayed: boolean }> {
+    async create(input: CreateCoatInput, actor: SpraySessionRunner): Promise<{ coat: Coat; replayed: boolean }> {
       const { idempotencyKey, ...fields } = createCoatSchema.parse(input);
       if (idempotencyKey) {
-        const existing = await dataSource.getRepository(CoatEntity).findOneBy({ idempotencyKey });
-        if (existing) return { coat: await dto(dataSource.manager, existing), replayed: true };
+        const existing = await data.acrossSites.coats.findOneBy({ idempotencyKey });
+        if (existing && !(await data.coats.existsBy({ id: existing.id }))) throw new AppError('conflict', 'This idempotency key belongs to another record', { idempotencyKey: 'Send a new key' });
+        if (existing) return { coat: await dto(data, existing), replayed: true };
       }
-      const coat = await inTransaction(dataSource, async (manager) => dto(manager, await write(manager, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor)));
-      events.publish({ type: 'coat.created', id: coat.id, partIds: coat.partIds });
+      const { coat, siteId } = await data.transaction((tx) => written(tx, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor));
+      events.publish({ type: 'coat.created', id: coat.id, partIds: coat.partIds, siteId });
       return { coat, replayed: false };
     },
 
-    async correct(id: number, input: CorrectCoatInput, actor: SessionRunner): Promise<Coat> {
+    async correct(id: number, input: CorrectCoatInput, actor: SpraySessionRunner): Promise<Coat> {
       const { reason, ...changes } = input;
-      const coat = await inTransaction(dataSource, async (manager) => {
-        const old = await manager.findOneBy(CoatEntity, { id });
+      const { coat, siteId } = await data.transaction(async (tx) => {
+        const old = await tx.coats.findOneBy({ id });
         if (!old) throw notFound('Coat record');
-        const newer = await manager.findOneBy(CoatEntity, { replacesId: id });
+        const newer = await tx.acrossSites.coats.findOneBy({ replacesId: id });
         if (newer) throw new AppError('conflict', `Coat record ${id} was already corrected by record ${newer.id}; correct that one`);
-        const [current] = await toCoatDtos(manager, [old]);
+        const [current] = await toCoatDtos(tx, [old]);
         const merged = createCoatSchema.parse({ ...current, acknowledgements: [], idempotencyKey: null, ...changes });
         const { idempotencyKey: _key, ...fields } = merged;
-        return dto(manager, await write(manager, fields, { replacesId: id, version: old.version + 1, correctionReason: reason, idempotencyKey: null }, actor));
+        return written(tx, fields, { replacesId: id, version: old.version + 1, correctionReason: reason, idempotencyKey: null }, actor);
       });
-      events.publish({ type: 'coat.created', id: coat.id, partIds: coat.partIds });
+      events.publish({ type: 'coat.created', id: coat.id, partIds: coat.partIds, siteId });
       return coat;
     },
 
     async get(id: number): Promise<Coat> {
-      const coat = await dataSource.getRepository(CoatEntity).findOneBy({ id });
+      const coat = await data.coats.findOneBy({ id });
       if (!coat) throw notFound('Coat record');
-      return dto(dataSource.manager, coat);
+      return dto(data, coat);
     },
 
     async list(query: CoatQuery): Promise<List<Coat>> {
-      const qb = dataSource.getRepository(CoatEntity).createQueryBuilder('c');
-      if (!query.history) qb.leftJoin(CoatEntity, 'n', 'n.replaces_id = c.id').andWhere('n.id IS NULL');
+      const qb = data.coats.select('c');
+      if (!query.history) qb.leftJoin('coats', 'n', 'n.replaces_id = c.id').andWhere('n.id IS NULL');
       if (query.spraySessionId) qb.andWhere('c.spray_session_id = :s', { s: query.spraySessionId });
       if (query.productId) qb.andWhere('c.product_id = :p', { p: query.productId });
       if (query.partId) qb.andWhere('c.id IN (SELECT cp.coat_id FROM coat_parts cp WHERE cp.part_id = :part)', { part: query.partId });
@@ -130,7 +136,7 @@ export function createCoatService(dataSource: DataSource, settings: SettingsServ
       if (query.to) qb.andWhere('c.sprayed_at < :to', { to: new Date(query.to).toISOString() });
       qb.orderBy('c.sprayed_at', 'DESC').addOrderBy('c.id', 'DESC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
-      return { items: await toCoatDtos(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
+      return { items: await toCoatDtos(data, rows), total, page: query.page, pageSize: query.pageSize };
     },
   };
 }

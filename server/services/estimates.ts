@@ -1,28 +1,25 @@
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
 import { estimateMaterial, type MaterialEstimate } from '../../shared/finishing/estimate';
 import { sprayMethods } from '../../shared/finishing/material';
 import type { EstimateQuery } from '../../shared/schemas/job';
-import { FinishStepEntity } from '../db/entities/finish-step.entity';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { ProductEntity } from '../db/entities/product.entity';
+import type { SiteData } from '../data/site-data';
 import { AppError, notFound } from '../lib/app-error';
 
-export function createEstimateService(dataSource: DataSource) {
+/** Material for a whole job: jobs and their parts are the group's, wherever they are sprayed. */
+export function createEstimateService(data: SiteData) {
   return {
     /** Litres, mix, VOC and cost of every coat step of the job's finish system over all its parts. */
     async forJob(jobId: number, query: EstimateQuery): Promise<MaterialEstimate & { method: string }> {
-      const job = await dataSource.getRepository(JobEntity).findOneBy({ id: jobId });
+      const job = await data.jobs.findOneBy({ id: jobId });
       if (!job) throw notFound('Job');
       if (!job.finishSystemId) throw new AppError('conflict', `Job ${job.reference} has no finish system yet; choose one to estimate material`);
-      const { area } = (await dataSource
-        .getRepository(PartEntity)
-        .createQueryBuilder('p')
+      const { area } = (await data.parts
+        .select('p')
         .select('COALESCE(SUM(p.coated_area_m2), 0)', 'area')
         .where('p.job_id = :jobId', { jobId })
         .getRawOne<{ area: string | number }>()) ?? { area: 0 };
-      const steps = await dataSource.getRepository(FinishStepEntity).find({ where: { finishSystemId: job.finishSystemId, kind: 'coat' }, order: { position: 'ASC' } });
-      const products = await dataSource.getRepository(ProductEntity).findBy({ id: In(steps.map((s) => s.productId!)) });
+      const steps = await data.finishSteps.find({ where: { finishSystemId: job.finishSystemId, kind: 'coat' }, order: { position: 'ASC' } });
+      const products = await data.products.findBy({ id: In(steps.map((s) => s.productId!)) });
       const byId = new Map(products.map((p) => [p.id, p]));
       const transferEfficiencyPct = query.transferEfficiencyPct ?? sprayMethods[query.method].transferEfficiencyPct;
       const estimate = estimateMaterial({

@@ -1,10 +1,11 @@
 import { EventEmitter } from 'node:events';
 
+/** `siteId` says whose change it is: a stream passes it only to users who see that site (null: the whole group's). */
 export type ChangeEvent =
-  | { type: 'coat.created'; id: number; partIds: number[] }
-  | { type: 'spray-session.changed'; id: number }
-  | { type: 'part.changed'; id: number }
-  | { type: 'reading.created'; id: number; boothId: number | null; rackId: number | null };
+  | { type: 'coat.created'; id: number; partIds: number[]; siteId: number | null }
+  | { type: 'spray-session.changed'; id: number; siteId: number | null }
+  | { type: 'part.changed'; id: number; siteId: number | null }
+  | { type: 'reading.created'; id: number; boothId: number | null; rackId: number | null; siteId: number | null };
 
 /** In-process change feed for the live views; one per app. */
 export class EventBus {

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
-import type { DataSource, EntityManager } from 'typeorm';
 import type { FileRef } from '../../shared/schemas/product';
-import { StoredFileEntity } from '../db/entities/stored-file.entity';
+import type { SiteData } from '../data/site-data';
+import type { StoredFileEntity } from '../db/entities/stored-file.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { LocalDiskStorage, type FileStorage, type StoredContent } from './file-storage';
@@ -34,18 +34,18 @@ export function toFileRef(file: StoredFileEntity): FileRef {
   return { id: file.id, originalName: file.originalName, sizeBytes: file.sizeBytes, uploadedAt: file.uploadedAt };
 }
 
-/** `storage` may be a folder name: the local disk storage there. */
-export function createFileService(dataSource: DataSource, storage: FileStorage | string, clock: Clock = systemClock) {
+/** Uploaded data sheets belong to products, which the whole group shares. `storage` may be a folder name: the local disk storage there. */
+export function createFileService(data: SiteData, storage: FileStorage | string, clock: Clock = systemClock) {
   const store = typeof storage === 'string' ? new LocalDiskStorage(storage) : storage;
 
   return {
     /** Writes the bytes under a generated name and records them; call inside the caller's transaction. */
-    async storePdf(manager: EntityManager, upload: Upload | undefined, uploadedBy: number | null): Promise<StoredFileEntity> {
+    async storePdf(tx: SiteData, upload: Upload | undefined, uploadedBy: number | null): Promise<StoredFileEntity> {
       if (!upload) throw new AppError('validation_failed', 'Choose a PDF file to upload', { file: 'Choose a PDF file' });
       if (!isPdf(upload.buffer)) throw new AppError('validation_failed', 'That file is not a PDF', { file: 'Only PDF files are accepted' });
       const storedName = `${randomUUID()}.pdf`;
       await store.put(storedName, upload.buffer, 'application/pdf');
-      const file = manager.create(StoredFileEntity, {
+      const file = tx.files.create({
         originalName: cleanOriginalName(upload.originalname),
         storedName,
         mimeType: 'application/pdf',
@@ -53,12 +53,12 @@ export function createFileService(dataSource: DataSource, storage: FileStorage |
         uploadedBy,
         uploadedAt: clock.now().toISOString(),
       });
-      return manager.save(file);
+      return tx.files.save(file);
     },
 
     /** The record and its bytes, wherever they are stored. */
     async open(id: number): Promise<{ file: StoredFileEntity; content: StoredContent }> {
-      const file = await dataSource.getRepository(StoredFileEntity).findOneBy({ id });
+      const file = await data.files.findOneBy({ id });
       if (!file) throw notFound('File');
       const content = await store.open(file.storedName);
       if (!content) throw new AppError('not_found', 'The file is recorded but missing from the file storage');

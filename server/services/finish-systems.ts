@@ -1,5 +1,4 @@
-import { inTransaction } from '../db/transaction';
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import {
   createFinishSystemSchema,
@@ -8,9 +7,9 @@ import {
   type FinishSystem,
   type UpdateFinishSystemInput,
 } from '../../shared/schemas/finish-system';
-import { FinishStepEntity } from '../db/entities/finish-step.entity';
-import { FinishSystemEntity } from '../db/entities/finish-system.entity';
-import { ProductEntity } from '../db/entities/product.entity';
+import type { SiteData } from '../data/site-data';
+import type { FinishStepEntity } from '../db/entities/finish-step.entity';
+import type { FinishSystemEntity } from '../db/entities/finish-system.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { recordAudit, type Actor } from './audit';
@@ -21,11 +20,11 @@ function toStepDto(step: FinishStepEntity, productNames: Map<number, string>) {
 }
 
 /** Systems with their ordered steps and product names, in three queries whatever the count. */
-export async function loadFinishSystems(manager: EntityManager, systems: FinishSystemEntity[]): Promise<FinishSystem[]> {
+export async function loadFinishSystems(data: SiteData, systems: FinishSystemEntity[]): Promise<FinishSystem[]> {
   const ids = systems.map((s) => s.id);
-  const steps = ids.length ? await manager.find(FinishStepEntity, { where: { finishSystemId: In(ids) }, order: { position: 'ASC' } }) : [];
+  const steps = ids.length ? await data.finishSteps.find({ where: { finishSystemId: In(ids) }, order: { position: 'ASC' } }) : [];
   const productIds = [...new Set(steps.map((s) => s.productId).filter((id): id is number => id !== null))];
-  const products = productIds.length ? await manager.find(ProductEntity, { where: { id: In(productIds) }, select: { id: true, name: true } }) : [];
+  const products = productIds.length ? await data.products.find({ where: { id: In(productIds) }, select: { id: true, name: true } }) : [];
   const names = new Map(products.map((p) => [p.id, p.name]));
   return systems.map((system) => {
     const own = steps.filter((s) => s.finishSystemId === system.id).map((s) => toStepDto(s, names));
@@ -33,16 +32,15 @@ export async function loadFinishSystems(manager: EntityManager, systems: FinishS
   });
 }
 
-async function writeSteps(manager: EntityManager, finishSystemId: number, steps: FinishStepInput[]): Promise<void> {
+async function writeSteps(tx: SiteData, finishSystemId: number, steps: FinishStepInput[]): Promise<void> {
   const productIds = [...new Set(steps.flatMap((s) => (s.kind === 'coat' ? [s.productId] : [])))];
-  const found = await manager.countBy(ProductEntity, { id: In(productIds) });
+  const found = await tx.products.countBy({ id: In(productIds) });
   if (found !== productIds.length) {
     const index = steps.findIndex((s) => s.kind === 'coat');
     throw new AppError('validation_failed', 'A step names a product that does not exist', { [`steps.${index}.productId`]: 'Choose a product from the data sheets' });
   }
-  await manager.delete(FinishStepEntity, { finishSystemId });
-  await manager.insert(
-    FinishStepEntity,
+  await tx.finishSteps.delete({ finishSystemId });
+  await tx.finishSteps.insert(
     steps.map((step, position) => ({
       finishSystemId,
       position,
@@ -54,44 +52,45 @@ async function writeSteps(manager: EntityManager, finishSystemId: number, steps:
   );
 }
 
-export function createFinishSystemService(dataSource: DataSource, clock: Clock = systemClock) {
-  async function getWith(manager: EntityManager, id: number): Promise<FinishSystem> {
-    const system = await manager.findOneBy(FinishSystemEntity, { id });
+/** Finish systems are the group's, like the data sheets they name. */
+export function createFinishSystemService(data: SiteData, clock: Clock = systemClock) {
+  async function getWith(tx: SiteData, id: number): Promise<FinishSystem> {
+    const system = await tx.finishSystems.findOneBy({ id });
     if (!system) throw notFound('Finish system');
-    return (await loadFinishSystems(manager, [system]))[0];
+    return (await loadFinishSystems(tx, [system]))[0];
   }
 
   return {
     async list(query: PageQuery): Promise<List<FinishSystem>> {
-      const [rows, total] = await dataSource.getRepository(FinishSystemEntity).findAndCount({ order: { name: 'ASC', id: 'ASC' }, skip: (query.page - 1) * query.pageSize, take: query.pageSize });
-      return { items: await loadFinishSystems(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
+      const [rows, total] = await data.finishSystems.findAndCount({ order: { name: 'ASC', id: 'ASC' }, skip: (query.page - 1) * query.pageSize, take: query.pageSize });
+      return { items: await loadFinishSystems(data, rows), total, page: query.page, pageSize: query.pageSize };
     },
 
-    get: (id: number) => getWith(dataSource.manager, id),
+    get: (id: number) => getWith(data, id),
 
     async create(input: CreateFinishSystemInput, actor: Actor): Promise<FinishSystem> {
       const { steps, ...fields } = createFinishSystemSchema.parse(input);
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const system = await manager.save(manager.create(FinishSystemEntity, { ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
-        await writeSteps(manager, system.id, steps);
-        await recordAudit(manager, actor, { action: 'create', entity: 'finish-system', entityId: system.id, summary: `Added finish system ${system.name}` }, now);
-        return getWith(manager, system.id);
+      return data.transaction(async (tx) => {
+        const system = await tx.finishSystems.save(tx.finishSystems.create({ ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        await writeSteps(tx, system.id, steps);
+        await recordAudit(tx, actor, { action: 'create', entity: 'finish-system', entityId: system.id, summary: `Added finish system ${system.name}` }, now);
+        return getWith(tx, system.id);
       });
     },
 
     async update(id: number, patch: UpdateFinishSystemInput, actor: Actor): Promise<FinishSystem> {
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const system = await manager.findOneBy(FinishSystemEntity, { id });
+      return data.transaction(async (tx) => {
+        const system = await tx.finishSystems.findOneBy({ id });
         if (!system) throw notFound('Finish system');
         const { steps, ...fields } = patch;
         Object.assign(system, fields, { updatedAt: now.toISOString() });
-        await manager.save(system);
-        if (steps) await writeSteps(manager, id, steps);
+        await tx.finishSystems.save(system);
+        if (steps) await writeSteps(tx, id, steps);
         const summary = `Changed finish system ${system.name}${steps ? ` (now ${steps.length} steps)` : ''}`;
-        await recordAudit(manager, actor, { action: 'update', entity: 'finish-system', entityId: id, summary, changes: { ...fields, ...(steps ? { steps } : {}) } }, now);
-        return getWith(manager, id);
+        await recordAudit(tx, actor, { action: 'update', entity: 'finish-system', entityId: id, summary, changes: { ...fields, ...(steps ? { steps } : {}) } }, now);
+        return getWith(tx, id);
       });
     },
   };

@@ -1,9 +1,7 @@
-import { inTransaction } from '../db/transaction';
-import type { DataSource, EntityManager } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
 import { createJobSchema, type CreateJobInput, type Job, type JobListQuery, type UpdateJobInput } from '../../shared/schemas/job';
-import { FinishSystemEntity } from '../db/entities/finish-system.entity';
-import { JobEntity } from '../db/entities/job.entity';
+import type { SiteData } from '../data/site-data';
+import type { JobEntity } from '../db/entities/job.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
@@ -20,12 +18,12 @@ interface JobRow {
 }
 
 /** Part counts, progress and area for a page of jobs, grouped in the database. */
-async function jobFigures(manager: EntityManager, ids: number[]): Promise<Map<number, JobRow>> {
+async function jobFigures(data: SiteData, ids: number[]): Promise<Map<number, JobRow>> {
   if (ids.length === 0) return new Map();
-  const rows = await manager
-    .createQueryBuilder(JobEntity, 'j')
+  const rows = await data.jobs
+    .select('j')
     .leftJoin('parts', 'p', 'p.job_id = j.id')
-    .leftJoin(FinishSystemEntity, 'fs', 'fs.id = j.finish_system_id')
+    .leftJoin('finish_systems', 'fs', 'fs.id = j.finish_system_id')
     .select('j.id', 'id')
     .addSelect('fs.name', 'finishSystemName')
     .addSelect('COUNT(p.id)', 'partCount')
@@ -63,62 +61,63 @@ function toJobDto(job: JobEntity, figures: JobRow | undefined): Job {
   };
 }
 
-async function assertFinishSystem(manager: EntityManager, id: number | null | undefined): Promise<void> {
-  if (id && !(await manager.existsBy(FinishSystemEntity, { id }))) {
+async function assertFinishSystem(tx: SiteData, id: number | null | undefined): Promise<void> {
+  if (id && !(await tx.finishSystems.existsBy({ id }))) {
     throw new AppError('validation_failed', 'That finish system does not exist', { finishSystemId: 'Choose a finish system' });
   }
 }
 
-async function assertReferenceFree(manager: EntityManager, reference: string | undefined, exceptId?: number): Promise<void> {
+async function assertReferenceFree(tx: SiteData, reference: string | undefined, exceptId?: number): Promise<void> {
   if (!reference) return;
-  const existing = await manager.findOneBy(JobEntity, { reference });
+  const existing = await tx.jobs.findOneBy({ reference });
   if (existing && existing.id !== exceptId) throw new AppError('conflict', `Job reference ${reference} is already used`, { reference: 'Already used by another job' });
 }
 
-export function createJobService(dataSource: DataSource, clock: Clock = systemClock) {
-  async function getWith(manager: EntityManager, id: number): Promise<Job> {
-    const job = await manager.findOneBy(JobEntity, { id });
+/** Jobs are the group's work orders: every site sees the same job book. */
+export function createJobService(data: SiteData, clock: Clock = systemClock) {
+  async function getWith(tx: SiteData, id: number): Promise<Job> {
+    const job = await tx.jobs.findOneBy({ id });
     if (!job) throw notFound('Job');
-    return toJobDto(job, (await jobFigures(manager, [id])).get(id));
+    return toJobDto(job, (await jobFigures(tx, [id])).get(id));
   }
 
   return {
     async list(query: JobListQuery): Promise<List<Job>> {
-      const qb = dataSource.getRepository(JobEntity).createQueryBuilder('j');
+      const qb = data.jobs.select('j');
       if (query.q) qb.andWhere('(LOWER(j.customer) LIKE :q OR LOWER(j.reference) LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
       if (query.state) qb.andWhere('j.state = :state', { state: query.state });
       qb.orderBy('j.due_date', 'ASC').addOrderBy('j.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
-      const figures = await jobFigures(dataSource.manager, rows.map((r) => r.id));
+      const figures = await jobFigures(data, rows.map((r) => r.id));
       return { items: rows.map((r) => toJobDto(r, figures.get(r.id))), total, page: query.page, pageSize: query.pageSize };
     },
 
-    get: (id: number) => getWith(dataSource.manager, id),
+    get: (id: number) => getWith(data, id),
 
     async create(input: CreateJobInput, actor: Actor): Promise<Job> {
       const fields = createJobSchema.parse(input);
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        await assertFinishSystem(manager, fields.finishSystemId);
-        await assertReferenceFree(manager, fields.reference);
-        const job = await manager.save(manager.create(JobEntity, { ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
-        await recordAudit(manager, actor, { action: 'create', entity: 'job', entityId: job.id, summary: `Added job ${job.reference} for ${job.customer}` }, now);
-        return getWith(manager, job.id);
+      return data.transaction(async (tx) => {
+        await assertFinishSystem(tx, fields.finishSystemId);
+        await assertReferenceFree(tx, fields.reference);
+        const job = await tx.jobs.save(tx.jobs.create({ ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        await recordAudit(tx, actor, { action: 'create', entity: 'job', entityId: job.id, summary: `Added job ${job.reference} for ${job.customer}` }, now);
+        return getWith(tx, job.id);
       });
     },
 
     async update(id: number, patch: UpdateJobInput, actor: Actor): Promise<Job> {
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const job = await manager.findOneBy(JobEntity, { id });
+      return data.transaction(async (tx) => {
+        const job = await tx.jobs.findOneBy({ id });
         if (!job) throw notFound('Job');
-        await assertFinishSystem(manager, patch.finishSystemId);
-        await assertReferenceFree(manager, patch.reference, id);
+        await assertFinishSystem(tx, patch.finishSystemId);
+        await assertReferenceFree(tx, patch.reference, id);
         const changes = changedFields(job, patch);
         Object.assign(job, patch, { updatedAt: now.toISOString() });
-        await manager.save(job);
-        await recordAudit(manager, actor, { action: 'update', entity: 'job', entityId: id, summary: `Changed job ${job.reference}`, changes }, now);
-        return getWith(manager, id);
+        await tx.jobs.save(job);
+        await recordAudit(tx, actor, { action: 'update', entity: 'job', entityId: id, summary: `Changed job ${job.reference}`, changes }, now);
+        return getWith(tx, id);
       });
     },
   };

@@ -1,15 +1,13 @@
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
 import { mixQuantities } from '../../shared/finishing/material';
 import { mixTimes } from '../../shared/finishing/pot-life';
 import { createMixSchema, type CreateMixInput, type Mix } from '../../shared/schemas/checklist';
-import { MixEntity } from '../db/entities/mix.entity';
-import { ProductLotEntity } from '../db/entities/product-lot.entity';
-import { ProductEntity } from '../db/entities/product.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { inTransaction } from '../db/transaction';
+import type { SiteData } from '../data/site-data';
+import type { MixEntity } from '../db/entities/mix.entity';
+import type { ProductEntity } from '../db/entities/product.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
-import { assertRunsSession, type SessionRunner } from './session-runner';
+import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session-runner';
 
 /** Pot life on a data sheet is quoted at its reference temperature: the row nearest 20 °C. */
 export function potLifeReferenceTempC(product: ProductEntity): number {
@@ -21,24 +19,25 @@ function toMixDto(mix: MixEntity, productName: string): Mix {
   return { id, spraySessionId, productId, productName, lotIds, baseL, hardenerL, thinnerL, totalL: baseL + hardenerL + thinnerL, mixedAt, tempC, inductionEndsAt, potLifeEndsAt, potLifeWarningAt, recordedByName };
 }
 
-export function createMixService(dataSource: DataSource, clock: Clock = systemClock) {
+/** Pots mixed for a spray session: its site's record, like the session's coats. */
+export function createMixService(data: SiteData, clock: Clock = systemClock) {
   return {
-    async create(spraySessionId: number, input: CreateMixInput, actor: SessionRunner): Promise<Mix> {
+    async create(spraySessionId: number, input: CreateMixInput, actor: SpraySessionRunner): Promise<Mix> {
       const fields = createMixSchema.parse(input);
-      return inTransaction(dataSource, async (manager) => {
-        if (!(await manager.existsBy(SpraySessionEntity, { id: spraySessionId }))) throw notFound('Spray session');
-        await assertRunsSession(manager, spraySessionId, actor);
-        const product = await manager.findOneBy(ProductEntity, { id: fields.productId });
+      return data.transaction(async (tx) => {
+        if (!(await tx.spraySessions.existsBy({ id: spraySessionId }))) throw notFound('Spray session');
+        await assertRunsSpraySession(tx, spraySessionId, actor);
+        const product = await tx.products.findOneBy({ id: fields.productId });
         if (!product) throw new AppError('validation_failed', 'That product does not exist', { productId: 'Choose a product' });
-        const lots = fields.lotIds.length ? await manager.findBy(ProductLotEntity, { id: In(fields.lotIds) }) : [];
+        const lots = fields.lotIds.length ? await tx.lots.findBy({ id: In(fields.lotIds) }) : [];
         if (lots.length !== fields.lotIds.length || lots.some((l) => l.productId !== product.id)) throw new AppError('validation_failed', 'Choose lots of this product', { lotIds: 'Choose lots of this product' });
         const quantities = mixQuantities({ wantedL: fields.wantedL, ratio: { base: product.mixBaseParts, hardener: product.mixHardenerParts }, thinningPct: fields.thinningPct, thinnerBasis: 'on-mix' });
         const mixedAt = new Date(fields.mixedAt ?? clock.now());
         const times = product.potLifeMin
           ? mixTimes({ mixedAt, inductionMin: product.inductionMin, potLifeMin: product.potLifeMin, refTempC: potLifeReferenceTempC(product), tempC: fields.tempC })
           : null;
-        const mix = await manager.save(
-          manager.create(MixEntity, {
+        const mix = await tx.mixes.save(
+          tx.mixes.create({
             spraySessionId,
             productId: product.id,
             lotIds: fields.lotIds,
@@ -59,8 +58,9 @@ export function createMixService(dataSource: DataSource, clock: Clock = systemCl
     },
 
     async list(spraySessionId: number): Promise<Mix[]> {
-      const mixes = await dataSource.getRepository(MixEntity).find({ where: { spraySessionId }, order: { mixedAt: 'DESC' } });
-      const products = await dataSource.getRepository(ProductEntity).find({ where: { id: In(mixes.map((m) => m.productId)) }, select: { id: true, name: true } });
+      if (!(await data.spraySessions.existsBy({ id: spraySessionId }))) throw notFound('Spray session');
+      const mixes = await data.mixes.find({ where: { spraySessionId }, order: { mixedAt: 'DESC' } });
+      const products = await data.products.find({ where: { id: In(mixes.map((m) => m.productId)) }, select: { id: true, name: true } });
       return mixes.map((m) => toMixDto(m, products.find((p) => p.id === m.productId)?.name ?? ''));
     },
   };

@@ -1,12 +1,10 @@
-import { In, LessThanOrEqual, MoreThan, type EntityManager } from 'typeorm';
+import { In, LessThanOrEqual, MoreThan } from 'typeorm';
+import { seesAllSites } from '../../shared/permissions';
 import { defaultNotifyPrefs, type NotificationKind } from '../../shared/schemas/notification';
 import { calendarDateIn, wallClockIn } from '../../shared/time';
-import { CoatPartEntity } from '../db/entities/coat-part.entity';
-import { CoatEntity } from '../db/entities/coat.entity';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { UserEntity } from '../db/entities/user.entity';
+import type { SiteData } from '../data/site-data';
+import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import type { UserEntity } from '../db/entities/user.entity';
 import { readinessOf } from './ready';
 
 export interface DueNotification {
@@ -19,7 +17,8 @@ export interface DueNotification {
 }
 
 export interface RuleContext {
-  manager: EntityManager;
+  /** Every site: the scheduler decides for the whole group, and each e-mail goes to the site it is about. */
+  data: SiteData;
   now: Date;
   timeZone: string;
   dailyPlanHour: number;
@@ -30,21 +29,34 @@ export interface RuleContext {
 const dayMs = 86_400_000;
 const wants = (user: UserEntity, kind: NotificationKind) => !user.disabled && (user.notify ?? defaultNotifyPrefs(user.role))[kind];
 const at = (iso: string, ctx: RuleContext) => wallClockIn(new Date(iso), ctx.timeZone).time;
+/** An admin hears about every site; everyone else about their own. */
+const ofSite = (user: UserEntity, siteId: number | undefined) => seesAllSites(user.role) || user.siteId === siteId;
 
-/** Coats (current versions) whose `column` instant lies in (from, to], with their parts and jobs. */
+/** The site of each spray session's booth. */
+async function spraySessionSites(ctx: RuleContext, spraySessions: Pick<SpraySessionEntity, 'boothId'>[]): Promise<Map<number, number>> {
+  const boothIds = [...new Set(spraySessions.map((s) => s.boothId))];
+  const booths = boothIds.length ? await ctx.data.booths.findBy({ id: In(boothIds) }) : [];
+  return new Map(booths.map((b) => [b.id, b.siteId]));
+}
+
+/** Coats (current versions) whose `column` instant lies in (from, to], with their parts, jobs and site. */
 async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClosesAt', from: Date, to: Date) {
-  const coats = await ctx.manager
-    .createQueryBuilder(CoatEntity, 'c')
-    .leftJoin(CoatEntity, 'n', 'n.replaces_id = c.id')
+  const sqlColumn = column === 'handleAt' ? 'handle_at' : 'recoat_closes_at';
+  const coats = await ctx.data.coats
+    .select('c')
+    .leftJoin('coats', 'n', 'n.replaces_id = c.id')
     .where('n.id IS NULL')
-    .andWhere(`c.${column === 'handleAt' ? 'handle_at' : 'recoat_closes_at'} > :from AND c.${column === 'handleAt' ? 'handle_at' : 'recoat_closes_at'} <= :to`, { from: from.toISOString(), to: to.toISOString() })
+    .andWhere(`c.${sqlColumn} > :from AND c.${sqlColumn} <= :to`, { from: from.toISOString(), to: to.toISOString() })
     .getMany();
-  const links = coats.length ? await ctx.manager.findBy(CoatPartEntity, { coatId: In(coats.map((c) => c.id)) }) : [];
-  const parts = links.length ? await ctx.manager.findBy(PartEntity, { id: In(links.map((l) => l.partId)) }) : [];
-  const jobs = parts.length ? await ctx.manager.findBy(JobEntity, { id: In([...new Set(parts.map((p) => p.jobId))]) }) : [];
+  const links = coats.length ? await ctx.data.coatParts.findBy({ coatId: In(coats.map((c) => c.id)) }) : [];
+  const parts = links.length ? await ctx.data.parts.findBy({ id: In(links.map((l) => l.partId)) }) : [];
+  const jobs = parts.length ? await ctx.data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }) : [];
+  const spraySessions = coats.length ? await ctx.data.spraySessions.findBy({ id: In([...new Set(coats.map((c) => c.spraySessionId))]) }) : [];
+  const boothSite = await spraySessionSites(ctx, spraySessions);
+  const siteOfSession = new Map(spraySessions.map((s) => [s.id, boothSite.get(s.boothId)]));
   return coats.map((coat) => {
     const own = parts.filter((p) => links.some((l) => l.coatId === coat.id && l.partId === p.id));
-    return { coat, parts: own, job: jobs.find((j) => j.id === own[0]?.jobId) };
+    return { coat, parts: own, job: jobs.find((j) => j.id === own[0]?.jobId), siteId: siteOfSession.get(coat.spraySessionId) };
   });
 }
 
@@ -52,13 +64,13 @@ async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClos
 export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
   const found = await coatsWithParts(ctx, 'handleAt', new Date(ctx.now.getTime() - dayMs), ctx.now);
   const due: DueNotification[] = [];
-  for (const { coat, parts, job } of found) {
-    const readiness = await readinessOf(ctx.manager, parts, ctx.now);
+  for (const { coat, parts, job, siteId } of found) {
+    const readiness = await readinessOf(ctx.data, parts, ctx.now);
     const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
     if (!job || finished.length === 0) continue;
     const subject = `Ready to handle: ${job.reference} (${job.customer})`;
     const body = `${finished.length} part(s) of job ${job.reference} for ${job.customer} can be handled since ${at(coat.handleAt, ctx)}:\n${finished.map((p) => `- ${p.label}`).join('\n')}\n\nCheck the film before stacking; pack after ${at(coat.packAt, ctx)}.`;
-    for (const user of ctx.users.filter((u) => wants(u, 'parts-ready'))) due.push({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready', userId: user.id, subject, body, dueAt: coat.handleAt });
+    for (const user of ctx.users.filter((u) => wants(u, 'parts-ready') && ofSite(u, siteId))) due.push({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready', userId: user.id, subject, body, dueAt: coat.handleAt });
   }
   return due;
 }
@@ -67,21 +79,21 @@ export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
 export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]> {
   const found = await coatsWithParts(ctx, 'recoatClosesAt', ctx.now, new Date(ctx.now.getTime() + ctx.recoatWarningHours * 3_600_000));
   const due: DueNotification[] = [];
-  for (const { coat, parts, job } of found) {
-    const readiness = await readinessOf(ctx.manager, parts, ctx.now);
+  for (const { coat, parts, job, siteId } of found) {
+    const readiness = await readinessOf(ctx.data, parts, ctx.now);
     const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
     if (!job || waiting.length === 0) continue;
     const subject = `Recoat window closing ${at(coat.recoatClosesAt!, ctx)}: ${job.reference}`;
     const body = `${waiting.length} part(s) of ${job.reference} are waiting for their next coat. After ${at(coat.recoatClosesAt!, ctx)} they will need a P320 denib first:\n${waiting.map((p) => `- ${p.label}`).join('\n')}`;
-    for (const user of ctx.users.filter((u) => wants(u, 'recoat-closing'))) due.push({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing', userId: user.id, subject, body, dueAt: ctx.now.toISOString() });
+    for (const user of ctx.users.filter((u) => wants(u, 'recoat-closing') && ofSite(u, siteId))) due.push({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing', userId: user.id, subject, body, dueAt: ctx.now.toISOString() });
   }
   return due;
 }
 
 /** Each booking, move or cancellation of a sprayer's session in the last day, once per version. */
-export async function sessionChanges(ctx: RuleContext): Promise<DueNotification[]> {
-  const sessions = await ctx.manager.find(SpraySessionEntity, { where: { updatedAt: MoreThan(new Date(ctx.now.getTime() - dayMs).toISOString()) } });
-  return sessions.flatMap((s) => {
+export async function spraySessionChanges(ctx: RuleContext): Promise<DueNotification[]> {
+  const spraySessions = await ctx.data.spraySessions.find({ where: { updatedAt: MoreThan(new Date(ctx.now.getTime() - dayMs).toISOString()) } });
+  return spraySessions.flatMap((s) => {
     const user = ctx.users.find((u) => u.id === s.sprayerId);
     if (!user || !wants(user, 'session-changed') || ['spraying', 'clearing', 'done', 'checking'].includes(s.state)) return [];
     const what = s.state === 'cancelled' ? 'cancelled' : 'booked or moved';
@@ -90,19 +102,23 @@ export async function sessionChanges(ctx: RuleContext): Promise<DueNotification[
   });
 }
 
-/** Once a day, at the shop's set hour, the day's spray sessions. */
+/** Once a day, at the shop's set hour, the day's spray sessions of each user's site. */
 export async function dailyPlan(ctx: RuleContext): Promise<DueNotification[]> {
   const clock = wallClockIn(ctx.now, ctx.timeZone);
   if (Number(clock.time.slice(0, 2)) < ctx.dailyPlanHour) return [];
-  const sessions = await ctx.manager.find(SpraySessionEntity, {
+  const spraySessions = await ctx.data.spraySessions.find({
     where: { startAt: LessThanOrEqual(new Date(ctx.now.getTime() + dayMs).toISOString()), endAt: MoreThan(ctx.now.toISOString()) },
     order: { startAt: 'ASC' },
   });
-  const today = sessions.filter((s) => s.state !== 'cancelled' && calendarDateIn(new Date(s.startAt), ctx.timeZone) === clock.date);
-  const lines = today.length ? today.map((s) => `- ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}: session ${s.id} (booth ${s.boothId})`).join('\n') : 'No spray sessions are booked today.';
+  const today = spraySessions.filter((s) => s.state !== 'cancelled' && calendarDateIn(new Date(s.startAt), ctx.timeZone) === clock.date);
+  const boothSite = await spraySessionSites(ctx, today);
+  const linesFor = (user: UserEntity) => {
+    const own = today.filter((s) => ofSite(user, boothSite.get(s.boothId)));
+    return own.length ? own.map((s) => `- ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}: session ${s.id} (booth ${s.boothId})`).join('\n') : 'No spray sessions are booked today.';
+  };
   return ctx.users
     .filter((u) => wants(u, 'daily-plan'))
-    .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${clock.date}`, body: lines, dueAt: ctx.now.toISOString() }));
+    .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${clock.date}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
 }
 
-export const notificationRules = [partsReady, recoatClosing, sessionChanges, dailyPlan];
+export const notificationRules = [partsReady, recoatClosing, spraySessionChanges, dailyPlan];

@@ -1,7 +1,6 @@
-import { IsNull, type DataSource } from 'typeorm';
+import { IsNull } from 'typeorm';
 import type { Notification } from '../../shared/schemas/notification';
-import { NotificationEntity } from '../db/entities/notification.entity';
-import { UserEntity } from '../db/entities/user.entity';
+import type { SiteData } from '../data/site-data';
 import type { Mailer } from '../mail/mailer';
 import { notificationRules, type DueNotification } from './notification-rules';
 import type { SettingsService } from './settings';
@@ -13,28 +12,27 @@ export interface NotificationOptions {
 /**
  * Each tick decides what is due from the data itself (so a notification that fell due while
  * the server was down is found on the next tick), records it once under its dedupe key, then
- * sends every recorded one not yet sent.
+ * sends every recorded one not yet sent. It runs as the system, across every site (`data`).
  */
-export function createNotificationService(dataSource: DataSource, settings: SettingsService, mailer: Mailer, options: NotificationOptions) {
+export function createNotificationService(data: SiteData, settings: SettingsService, mailer: Mailer, options: NotificationOptions) {
   async function record(due: DueNotification[]): Promise<void> {
-    if (due.length === 0) return;
     // ON CONFLICT DO NOTHING on the unique key: deciding twice records once.
-    await dataSource.createQueryBuilder().insert().into(NotificationEntity).values(due.map((d) => ({ ...d, sentAt: null, lastError: null }))).orIgnore().execute();
+    await data.notifications.insertNew(due.map((d) => ({ ...d, sentAt: null, lastError: null })));
   }
 
   async function sendOwed(): Promise<number> {
-    const owed = await dataSource.getRepository(NotificationEntity).find({ where: { sentAt: IsNull() }, order: { id: 'ASC' }, take: 100 });
-    const users = new Map((await dataSource.getRepository(UserEntity).find()).map((u) => [u.id, u]));
+    const owed = await data.notifications.find({ where: { sentAt: IsNull() }, order: { id: 'ASC' }, take: 100 });
+    const users = new Map((await data.users.find()).map((u) => [u.id, u]));
     let sent = 0;
     for (const n of owed) {
       const user = users.get(n.userId);
       try {
         if (user && !user.disabled) await mailer.send({ to: `${user.name} <${user.email}>`, subject: n.subject, text: n.body });
         // Only the first marking counts, so a sent time is never moved and each send is counted once.
-        const marked = await dataSource.getRepository(NotificationEntity).update({ id: n.id, sentAt: IsNull() }, { sentAt: new Date().toISOString(), lastError: null });
-        if (marked.affected !== 0) sent++;
+        const marked = await data.notifications.update({ id: n.id, sentAt: IsNull() }, { sentAt: new Date().toISOString(), lastError: null });
+        if (marked !== 0) sent++;
       } catch (error) {
-        await dataSource.getRepository(NotificationEntity).update({ id: n.id }, { lastError: (error as Error).message.slice(0, 500) });
+        await data.notifications.update({ id: n.id }, { lastError: (error as Error).message.slice(0, 500) });
       }
     }
     return sent;
@@ -43,14 +41,14 @@ export function createNotificationService(dataSource: DataSource, settings: Sett
   return {
     async tick(now: Date): Promise<{ sent: number }> {
       const shop = await settings.get();
-      const users = await dataSource.getRepository(UserEntity).find();
-      const ctx = { manager: dataSource.manager, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users };
+      const users = await data.users.find();
+      const ctx = { data, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users };
       for (const rule of notificationRules) await record(await rule(ctx));
       return { sent: await sendOwed() };
     },
 
     async recentFor(userId: number): Promise<Notification[]> {
-      const rows = await dataSource.getRepository(NotificationEntity).find({ where: { userId }, order: { id: 'DESC' }, take: 50 });
+      const rows = await data.notifications.find({ where: { userId }, order: { id: 'DESC' }, take: 50 });
       return rows.map(({ id, kind, subject, body, dueAt, sentAt }) => ({ id, kind, subject, body, dueAt, sentAt }));
     },
   };

@@ -1,21 +1,23 @@
-import { In, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import type { FinishStep, PartCoat } from '../../shared/finishing/readiness';
-import { CoatPartEntity } from '../db/entities/coat-part.entity';
-import { CoatEntity } from '../db/entities/coat.entity';
-import { FinishStepEntity } from '../db/entities/finish-step.entity';
-import { JobEntity } from '../db/entities/job.entity';
+import type { SiteData } from '../data/site-data';
+import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 
-/** Current coat versions (not yet corrected) that covered any of the parts, by part id. */
-export async function currentCoatsByPart(manager: EntityManager, partIds: number[]): Promise<Map<number, CoatEntity[]>> {
+/**
+ * Current coat versions (not yet corrected) that covered any of the parts, by part id, as the
+ * data's scope sees them. A part's next step and readiness come from its whole history: pass
+ * `data.acrossSites` for those.
+ */
+export async function currentCoatsByPart(data: SiteData, partIds: number[]): Promise<Map<number, CoatEntity[]>> {
   const byPart = new Map<number, CoatEntity[]>(partIds.map((id) => [id, []]));
   if (partIds.length === 0) return byPart;
-  const links = await manager.find(CoatPartEntity, { where: { partId: In(partIds) } });
+  const links = await data.coatParts.find({ where: { partId: In(partIds) } });
   const coatIds = [...new Set(links.map((l) => l.coatId))];
   if (coatIds.length === 0) return byPart;
-  const coats = await manager
-    .createQueryBuilder(CoatEntity, 'c')
-    .leftJoin(CoatEntity, 'n', 'n.replaces_id = c.id')
+  const coats = await data.coats
+    .select('c')
+    .leftJoin('coats', 'n', 'n.replaces_id = c.id')
     .where('c.id IN (:...coatIds)', { coatIds })
     .andWhere('n.id IS NULL')
     .getMany();
@@ -28,11 +30,11 @@ export async function currentCoatsByPart(manager: EntityManager, partIds: number
 }
 
 /** Each job's finish-system steps, in order, for the parts given. */
-export async function stepsByJob(manager: EntityManager, parts: PartEntity[]): Promise<Map<number, FinishStep[]>> {
+export async function stepsByJob(data: SiteData, parts: Pick<PartEntity, 'jobId'>[]): Promise<Map<number, FinishStep[]>> {
   const jobIds = [...new Set(parts.map((p) => p.jobId))];
-  const jobs = jobIds.length ? await manager.findBy(JobEntity, { id: In(jobIds) }) : [];
+  const jobs = jobIds.length ? await data.jobs.findBy({ id: In(jobIds) }) : [];
   const systemIds = [...new Set(jobs.map((j) => j.finishSystemId).filter((id): id is number => id !== null))];
-  const steps = systemIds.length ? await manager.find(FinishStepEntity, { where: { finishSystemId: In(systemIds) }, order: { position: 'ASC' } }) : [];
+  const steps = systemIds.length ? await data.finishSteps.find({ where: { finishSystemId: In(systemIds) }, order: { position: 'ASC' } }) : [];
   return new Map(
     jobs.map((job) => [
       job.id,

@@ -1,7 +1,6 @@
 import { parse } from 'csv-parse/sync';
-import type { DataSource } from 'typeorm';
 import { createPartSchema, csvTemplateHeaders, type CreatePartInput, type ImportResult, type ImportRowError } from '../../shared/schemas/part';
-import { JobEntity } from '../db/entities/job.entity';
+import type { SiteData } from '../data/site-data';
 import { AppError, notFound } from '../lib/app-error';
 import type { Actor } from './audit';
 import type { PartService } from './parts';
@@ -33,13 +32,12 @@ function toCandidate(raw: Record<string, string>, mapping: Record<string, string
   return candidate;
 }
 
-export function createPartImportService(dataSource: DataSource, parts: PartService) {
+export function createPartImportService(data: SiteData, parts: PartService) {
   return {
-    /** Every row is checked; nothing is saved unless all are good and this is not a preview. */
+    /** Every row is checked; nothing is saved unless all are good and this is not a preview (a bad row is a 400 naming each row and field). */
     async importCsv(jobId: number, buffer: Buffer | undefined, mapping: Record<string, string>, preview: boolean, actor: Actor): Promise<ImportResult> {
       if (!buffer) throw new AppError('validation_failed', 'Choose a CSV file', { file: 'Choose a CSV file' });
-      const job = await dataSource.getRepository(JobEntity).findOneBy({ id: jobId });
-      if (!job) throw notFound('Job');
+      if (!(await data.jobs.existsBy({ id: jobId }))) throw notFound('Job');
       const rows = readCsv(buffer);
       const headers = rows.length ? Object.keys(rows[0]) : [];
       const errors: ImportRowError[] = [];
@@ -51,7 +49,11 @@ export function createPartImportService(dataSource: DataSource, parts: PartServi
       });
       if (rows.length === 0) errors.push({ row: 1, field: 'file', message: 'The file has no rows under its header' });
       const base = { rowCount: rows.length, preview: parsed.slice(0, 200) as ImportResult['preview'], errors, headers };
-      if (preview || errors.length) return { ...base, saved: false, items: [] };
+      if (preview) return { ...base, saved: false, items: [] };
+      if (errors.length) {
+        const fields = Object.fromEntries(errors.map((e) => [`rows.${e.row}.${e.field}`, e.message]));
+        throw new AppError('validation_failed', `${new Set(errors.map((e) => e.row)).size} rows need fixing; nothing was saved`, fields);
+      }
       const inputs = parsed.map(({ row: _row, ...fields }) => fields as CreatePartInput);
       return { ...base, saved: true, items: await parts.createMany(jobId, inputs, actor, 'Imported') };
     },

@@ -1,17 +1,16 @@
-import { inTransaction } from '../db/transaction';
 import { randomBytes } from 'node:crypto';
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import { coatedAreaM2, pieceAreaM2 } from '../../shared/finishing/area';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import { createPartSchema, type CreatePartInput, type Part, type UpdatePartInput } from '../../shared/schemas/part';
-import { AuditEntryEntity } from '../db/entities/audit-entry.entity';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { RackEntity } from '../db/entities/rack.entity';
+import type { SiteData } from '../data/site-data';
+import type { PartEntity } from '../db/entities/part.entity';
+import type { RackEntity } from '../db/entities/rack.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
+import { partSeenBy } from './part-sites';
 import { readinessOf } from './ready';
 
 // Unambiguous characters only: a tag may be typed in by hand when a camera cannot read it.
@@ -23,7 +22,9 @@ export function newTag(): string {
 // 1 mm² is 1e-6 m²: round away float noise, not precision.
 const round = (value: number) => Math.round(value * 1e6) / 1e6;
 
-export function toPartDto(part: PartEntity, rackNames: Map<number, string>): Part {
+/** A part's rack place is shown only when the rack is one the reader's site sees. */
+export function toPartDto(part: PartEntity, racks: Map<number, Pick<RackEntity, 'name'>>): Part {
+  const rack = part.rackId === null ? undefined : racks.get(part.rackId);
   return {
     id: part.id,
     jobId: part.jobId,
@@ -35,9 +36,9 @@ export function toPartDto(part: PartEntity, rackNames: Map<number, string>): Par
     quantity: part.quantity,
     faces: part.faces,
     edges: part.edges,
-    rackId: part.rackId,
-    rackName: part.rackId === null ? null : (rackNames.get(part.rackId) ?? null),
-    shelf: part.shelf,
+    rackId: rack ? part.rackId : null,
+    rackName: rack?.name ?? null,
+    shelf: rack ? part.shelf : null,
     pieceAreaM2: round(pieceAreaM2(part)),
     coatedAreaM2: round(part.coatedAreaM2),
     tag: part.tag,
@@ -47,75 +48,91 @@ export function toPartDto(part: PartEntity, rackNames: Map<number, string>): Par
   };
 }
 
-async function rackNamesFor(manager: EntityManager, parts: PartEntity[]): Promise<Map<number, string>> {
+/** The racks the parts stand on, as far as the scope sees them. */
+async function racksFor(data: SiteData, parts: Pick<PartEntity, 'rackId'>[]): Promise<Map<number, RackEntity>> {
   const ids = [...new Set(parts.map((p) => p.rackId).filter((id): id is number => id !== null))];
-  const racks = ids.length ? await manager.findBy(RackEntity, { id: In(ids) }) : [];
-  return new Map(racks.map((r) => [r.id, r.name]));
+  const racks = ids.length ? await data.racks.findBy({ id: In(ids) }) : [];
+  return new Map(racks.map((r) => [r.id, r]));
 }
 
-/** The rack must exist and the shelf must be one it has. */
-async function assertRackPlace(manager: EntityManager, rackId: number | null | undefined, shelf: number | null | undefined): Promise<void> {
-  if (!rackId) return;
-  const rack = await manager.findOneBy(RackEntity, { id: rackId });
+/** The rack must be one of the scope's and the shelf one it has. */
+async function assertRackPlace(tx: SiteData, rackId: number | null | undefined, shelf: number | null | undefined): Promise<RackEntity | null> {
+  if (!rackId) return null;
+  const rack = await tx.racks.findOneBy({ id: rackId });
   if (!rack) throw new AppError('validation_failed', 'That rack does not exist', { rackId: 'Choose a rack' });
   if (shelf && shelf > rack.shelves) throw new AppError('validation_failed', `${rack.name} has ${rack.shelves} shelves`, { shelf: `Choose a shelf from 1 to ${rack.shelves}` });
+  return rack;
 }
 
-function newPartEntity(manager: EntityManager, jobId: number, fields: ReturnType<typeof createPartSchema.parse>, now: string): PartEntity {
-  return manager.create(PartEntity, { ...fields, jobId, coatedAreaM2: coatedAreaM2(fields), tag: newTag(), state: 'waiting', createdAt: now, updatedAt: now });
+/** A part placed at another site is that site's to move, change or collect. */
+async function partToChange(tx: SiteData, id: number): Promise<PartEntity> {
+  const part = await tx.parts.findOneBy({ id });
+  if (!part) throw notFound('Part');
+  if (!(await partSeenBy(tx, part))) throw new AppError('forbidden', 'This part is at another site; ask that site to move or change it');
+  return part;
+}
+
+function newPartEntity(tx: SiteData, jobId: number, fields: ReturnType<typeof createPartSchema.parse>, now: string): PartEntity {
+  return tx.parts.create({ ...fields, jobId, coatedAreaM2: coatedAreaM2(fields), tag: newTag(), state: 'waiting', createdAt: now, updatedAt: now });
 }
 
 /** Where the part stood before its last collection, from the trail; nowhere if it has a place again or the rack is gone. */
-async function placeBeforeCollection(manager: EntityManager, part: PartEntity): Promise<{ rackId: number | null; shelf: number | null }> {
+async function placeBeforeCollection(tx: SiteData, part: PartEntity): Promise<{ rackId: number | null; shelf: number | null }> {
   if (part.rackId !== null || part.collectedAt === null) return { rackId: part.rackId, shelf: part.shelf };
-  const entry = await manager.findOne(AuditEntryEntity, { where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
+  const entry = await tx.audit.findOne({ where: { entity: 'part', entityId: String(part.id), action: 'collect' }, order: { id: 'DESC' } });
   const changes = (entry?.changes ?? {}) as { rackId?: { from?: number | null }; shelf?: { from?: number | null } };
   const rackId = changes.rackId?.from ?? null;
-  if (rackId === null || !(await manager.existsBy(RackEntity, { id: rackId }))) return { rackId: null, shelf: null };
+  if (rackId === null || !(await tx.racks.existsBy({ id: rackId }))) return { rackId: null, shelf: null };
   return { rackId, shelf: changes.shelf?.from ?? null };
 }
 
-export function createPartService(dataSource: DataSource, clock: Clock = systemClock, events?: EventBus) {
+export function createPartService(data: SiteData, clock: Clock = systemClock, events?: EventBus) {
   // After the transaction commits, so a board that refetches sees the change.
   const published = (part: Part): Part => {
-    events?.publish({ type: 'part.changed', id: part.id });
+    events?.publish({ type: 'part.changed', id: part.id, siteId: null });
     return part;
   };
 
-  async function dto(manager: EntityManager, part: PartEntity): Promise<Part> {
-    return toPartDto(part, await rackNamesFor(manager, [part]));
+  async function dto(tx: SiteData, part: PartEntity): Promise<Part> {
+    return toPartDto(part, await racksFor(tx, [part]));
+  }
+
+  async function jobOrFail(tx: SiteData, jobId: number) {
+    const job = await tx.jobs.findOneBy({ id: jobId });
+    if (!job) throw notFound('Job');
+    return job;
   }
 
   return {
     async listForJob(jobId: number, query: PageQuery): Promise<List<Part>> {
-      if (!(await dataSource.getRepository(JobEntity).existsBy({ id: jobId }))) throw notFound('Job');
-      const [rows, total] = await dataSource.getRepository(PartEntity).findAndCount({ where: { jobId }, order: { id: 'ASC' }, skip: (query.page - 1) * query.pageSize, take: query.pageSize });
-      const names = await rackNamesFor(dataSource.manager, rows);
-      return { items: rows.map((p) => toPartDto(p, names)), total, page: query.page, pageSize: query.pageSize };
+      await jobOrFail(data, jobId);
+      const [rows, total] = await data.parts.findAndCount({ where: { jobId }, order: { id: 'ASC' }, skip: (query.page - 1) * query.pageSize, take: query.pageSize });
+      const racks = await racksFor(data, rows);
+      return { items: rows.map((p) => toPartDto(p, racks)), total, page: query.page, pageSize: query.pageSize };
     },
 
     async get(id: number): Promise<Part> {
-      const part = await dataSource.getRepository(PartEntity).findOneBy({ id });
+      const part = await data.parts.findOneBy({ id });
       if (!part) throw notFound('Part');
-      return dto(dataSource.manager, part);
+      return dto(data, part);
     },
 
     async getByTag(tag: string): Promise<Part> {
-      const part = await dataSource.getRepository(PartEntity).findOneBy({ tag: tag.trim().toUpperCase() });
+      const part = await data.parts.findOneBy({ tag: tag.trim().toUpperCase() });
       if (!part) throw new AppError('not_found', `No part has the tag ${tag}`);
-      return dto(dataSource.manager, part);
+      return dto(data, part);
     },
 
     async create(jobId: number, input: CreatePartInput, actor: Actor): Promise<Part> {
       const fields = createPartSchema.parse(input);
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const job = await manager.findOneBy(JobEntity, { id: jobId });
-        if (!job) throw notFound('Job');
-        await assertRackPlace(manager, fields.rackId, fields.shelf);
-        const part = await manager.save(newPartEntity(manager, jobId, fields, now.toISOString()));
-        await recordAudit(manager, actor, { action: 'create', entity: 'part', entityId: part.id, summary: `Added part ${part.label} × ${part.quantity} to job ${job.reference}` }, now);
-        return dto(manager, part);
+      return data.transaction(async (tx) => {
+        const job = await jobOrFail(tx, jobId);
+        const rack = await assertRackPlace(tx, fields.rackId, fields.shelf);
+        const part = await tx.parts.save(newPartEntity(tx, jobId, fields, now.toISOString()));
+        const summary = `Added part ${part.label} × ${part.quantity} to job ${job.reference}`;
+        await recordAudit(tx, actor, { action: 'create', entity: 'part', entityId: part.id, summary, siteId: rack?.siteId }, now);
+        return dto(tx, part);
       });
     },
 
@@ -123,14 +140,13 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
     async createMany(jobId: number, inputs: CreatePartInput[], actor: Actor, how = 'Added'): Promise<Part[]> {
       const rows = inputs.map((input) => createPartSchema.parse(input));
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const job = await manager.findOneBy(JobEntity, { id: jobId });
-        if (!job) throw notFound('Job');
-        for (const row of rows) await assertRackPlace(manager, row.rackId, row.shelf);
-        const stored = await manager.save(rows.map((row) => newPartEntity(manager, jobId, row, now.toISOString())), { chunk: 200 });
-        await recordAudit(manager, actor, { action: 'create', entity: 'part', entityId: null, summary: `${how} ${stored.length} parts to job ${job.reference}` }, now);
-        const names = await rackNamesFor(manager, stored);
-        return stored.map((p) => toPartDto(p, names));
+      return data.transaction(async (tx) => {
+        const job = await jobOrFail(tx, jobId);
+        for (const row of rows) await assertRackPlace(tx, row.rackId, row.shelf);
+        const stored = await tx.parts.saveMany(rows.map((row) => newPartEntity(tx, jobId, row, now.toISOString())), { chunk: 200 });
+        await recordAudit(tx, actor, { action: 'create', entity: 'part', entityId: null, summary: `${how} ${stored.length} parts to job ${job.reference}` }, now);
+        const racks = await racksFor(tx, stored);
+        return stored.map((p) => toPartDto(p, racks));
       });
     },
 
@@ -140,35 +156,37 @@ export function createPartService(dataSource: DataSource, clock: Clock = systemC
      */
     async setCollected(id: number, collected: boolean, actor: Actor): Promise<Part> {
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const part = await manager.findOneBy(PartEntity, { id });
-        if (!part) throw notFound('Part');
-        const place = collected ? { rackId: part.rackId, shelf: part.shelf } : await placeBeforeCollection(manager, part);
-        const rackName = place.rackId ? (await rackNamesFor(manager, [place as PartEntity])).get(place.rackId) : null;
-        Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null, ...place }, { updatedAt: now.toISOString() });
-        part.state = (await readinessOf(manager, [part], now)).get(part.id)!.state;
-        await manager.save(part);
-        const where = rackName ? `${collected ? ' from' : ' on'} ${rackName}${place.shelf ? ` shelf ${place.shelf}` : ''}` : '';
-        const summary = collected ? `Collected part ${part.label}${where}` : `Put part ${part.label} back as not collected${where}`;
-        const changes = collected ? { rackId: { from: place.rackId, to: null }, shelf: { from: place.shelf, to: null } } : undefined;
-        await recordAudit(manager, actor, { action: collected ? 'collect' : 'uncollect', entity: 'part', entityId: id, summary, changes }, now);
-        return dto(manager, part);
-      }).then(published);
+      return data
+        .transaction(async (tx) => {
+          const part = await partToChange(tx, id);
+          const place = collected ? { rackId: part.rackId, shelf: part.shelf } : await placeBeforeCollection(tx, part);
+          const rack = place.rackId === null ? undefined : (await racksFor(tx, [place])).get(place.rackId);
+          Object.assign(part, collected ? { collectedAt: now.toISOString(), rackId: null, shelf: null } : { collectedAt: null, ...place }, { updatedAt: now.toISOString() });
+          part.state = (await readinessOf(tx, [part], now)).get(part.id)!.state;
+          await tx.parts.save(part);
+          const where = rack ? `${collected ? ' from' : ' on'} ${rack.name}${place.shelf ? ` shelf ${place.shelf}` : ''}` : '';
+          const summary = collected ? `Collected part ${part.label}${where}` : `Put part ${part.label} back as not collected${where}`;
+          const changes = collected ? { rackId: { from: place.rackId, to: null }, shelf: { from: place.shelf, to: null } } : undefined;
+          await recordAudit(tx, actor, { action: collected ? 'collect' : 'uncollect', entity: 'part', entityId: id, summary, changes, siteId: rack?.siteId }, now);
+          return dto(tx, part);
+        })
+        .then(published);
     },
 
     async update(id: number, patch: UpdatePartInput, actor: Actor): Promise<Part> {
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const part = await manager.findOneBy(PartEntity, { id });
-        if (!part) throw notFound('Part');
-        await assertRackPlace(manager, patch.rackId ?? part.rackId, patch.shelf ?? part.shelf);
-        const changes = changedFields(part, patch);
-        Object.assign(part, patch, { updatedAt: now.toISOString() });
-        part.coatedAreaM2 = coatedAreaM2(part);
-        await manager.save(part);
-        await recordAudit(manager, actor, { action: 'update', entity: 'part', entityId: id, summary: `Changed part ${part.label}`, changes }, now);
-        return dto(manager, part);
-      }).then(published);
+      return data
+        .transaction(async (tx) => {
+          const part = await partToChange(tx, id);
+          const rack = await assertRackPlace(tx, patch.rackId ?? part.rackId, patch.shelf ?? part.shelf);
+          const changes = changedFields(part, patch);
+          Object.assign(part, patch, { updatedAt: now.toISOString() });
+          part.coatedAreaM2 = coatedAreaM2(part);
+          await tx.parts.save(part);
+          await recordAudit(tx, actor, { action: 'update', entity: 'part', entityId: id, summary: `Changed part ${part.label}`, changes, siteId: rack?.siteId }, now);
+          return dto(tx, part);
+        })
+        .then(published);
     },
   };
 }

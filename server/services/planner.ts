@@ -1,17 +1,16 @@
-import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
+import { In, IsNull, Not } from 'typeorm';
 import { autoPlan, type BookedStep, type JobPlan, type Plan, type PlanInput, type PlanJob, type PlanStep, type RecordedCoat } from '../../shared/finishing/auto-plan';
 import type { FinishStep } from '../../shared/finishing/readiness';
-import { BoothEntity } from '../db/entities/booth.entity';
-import { everySite, type SiteScope } from '../lib/site-scope';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { ProductEntity } from '../db/entities/product.entity';
-import { RackEntity } from '../db/entities/rack.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
+import type { Plan as PlanDto } from '../../shared/schemas/planner';
+import type { SiteData } from '../data/site-data';
+import type { JobEntity } from '../db/entities/job.entity';
+import type { PartEntity } from '../db/entities/part.entity';
+import type { ProductEntity } from '../db/entities/product.entity';
 import { systemClock, type Clock } from '../lib/clock';
 import { bookedStepsOf, type BookedPartStep } from './booked-steps';
 import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
-import { currentRackLoad, footprintM2 } from './rack-space';
+import { partsSeenBy } from './part-sites';
+import { currentRackLoad, footprintM2, rackCapacityM2 } from './rack-space';
 import type { SettingsService } from './settings';
 
 type JobContext = { system: FinishStep[]; products: Map<number, ProductEntity>; now: Date };
@@ -36,12 +35,23 @@ function groupBooked(booked: BookedPartStep[]): BookedStep[] {
   return [...groups.values()];
 }
 
-/** A job as it stands: each part's coats on record and the steps live sessions already plan on it. */
-async function planJobInput(manager: EntityManager, job: JobEntity, { system, products, now }: JobContext): Promise<PlanJob | null> {
-  const parts = await manager.findBy(PartEntity, { jobId: job.id, collectedAt: IsNull() });
-  const coats = await currentCoatsByPart(manager, parts.map((p) => p.id));
+/** The job's parts still to finish that the scope may plan: not collected, and not placed at another site. */
+async function plannableParts(data: SiteData, job: JobEntity): Promise<PartEntity[]> {
+  const parts = await data.parts.findBy({ jobId: job.id, collectedAt: IsNull() });
+  const seen = await partsSeenBy(data, parts);
+  return parts.filter((p) => seen.has(p.id));
+}
+
+/**
+ * A job as it stands: each part's coats on record and the steps live sessions already plan on it.
+ * Coats and bookings count wherever they were made (a part's history is one), so a step done or
+ * booked at another site is not proposed again.
+ */
+async function planJobInput(data: SiteData, job: JobEntity, { system, products, now }: JobContext): Promise<PlanJob | null> {
+  const parts = await plannableParts(data, job);
+  const coats = await currentCoatsByPart(data.acrossSites, parts.map((p) => p.id));
   if (!parts.some((p) => nextCoatStep(system, coats.get(p.id) ?? []) !== null)) return null;
-  const booked = await bookedStepsOf(manager, parts, { coats, steps: new Map([[job.id, system]]), now });
+  const booked = await bookedStepsOf(data.acrossSites, parts, { coats, steps: new Map([[job.id, system]]), now });
   const recorded = (p: PartEntity): RecordedCoat[] =>
     (coats.get(p.id) ?? []).flatMap((c) =>
       c.stepPosition === null ? [] : [{ stepPosition: c.stepPosition, recoatOpensAt: new Date(c.recoatOpensAt), recoatClosesAt: c.recoatClosesAt ? new Date(c.recoatClosesAt) : null, packAt: new Date(c.packAt) }],
@@ -56,23 +66,32 @@ async function planJobInput(manager: EntityManager, job: JobEntity, { system, pr
   };
 }
 
-export function createPlannerService(dataSource: DataSource, settings: SettingsService, clock: Clock = systemClock) {
-  /** Everything the auto-planner reads: the jobs as they stand and the booths, bookings and racks of the caller's site. */
-  async function planningInput(jobs: JobEntity[], horizonDays: number, scope: SiteScope): Promise<PlanInput> {
-    const manager = dataSource.manager;
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+function toPlanDto(plan: Plan): PlanDto {
+  return {
+    sessions: plan.sessions.map((s) => ({ ...s, start: s.start.toISOString(), end: s.end.toISOString() })),
+    jobs: plan.jobs.map((j) => ({ ...j, finishesAt: iso(j.finishesAt) })),
+  };
+}
+
+/** Jobs are the group's; the booths, racks and parts planned are those of the caller's site (every site for an admin who names none). */
+export function createPlannerService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
+  /** Everything the auto-planner reads: the jobs as they stand and the booths, bookings and racks of the scope. */
+  async function planningInput(jobs: JobEntity[], horizonDays: number): Promise<PlanInput> {
     const now = clock.now();
     const shop = await settings.get();
-    const allParts = await manager.find(PartEntity, { where: { jobId: In(jobs.map((j) => j.id)) }, select: { id: true, jobId: true } });
-    const steps = await stepsByJob(manager, allParts as PartEntity[]);
+    const allParts = await data.parts.find({ where: { jobId: In(jobs.map((j) => j.id)) }, select: { id: true, jobId: true } });
+    const steps = await stepsByJob(data, allParts);
     const productIds = [...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : []));
-    const products = new Map((await manager.findBy(ProductEntity, { id: In(productIds) })).map((p) => [p.id, p]));
-    const planJobs = (await Promise.all(jobs.map((job) => planJobInput(manager, job, { system: steps.get(job.id) ?? [], products, now })))).filter((j): j is PlanJob => j !== null);
+    const products = new Map((await data.products.findBy({ id: In(productIds) })).map((p) => [p.id, p]));
+    const planJobs = (await Promise.all(jobs.map((job) => planJobInput(data, job, { system: steps.get(job.id) ?? [], products, now })))).filter((j): j is PlanJob => j !== null);
     const horizonEnd = new Date(now.getTime() + horizonDays * 86_400_000).toISOString();
-    const [booths, racks, sessions, rackLoad] = await Promise.all([
-      manager.find(BoothEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId }, order: { id: 'ASC' } }),
-      manager.find(RackEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId } }),
-      manager.createQueryBuilder(SpraySessionEntity, 's').where("s.state <> 'cancelled'").andWhere('s.end_at > :now AND s.start_at < :end', { now: now.toISOString(), end: horizonEnd }).getMany(),
-      currentRackLoad(manager, now),
+    const [booths, rackCapacity, spraySessions, rackLoad] = await Promise.all([
+      data.booths.find({ order: { id: 'ASC' } }),
+      rackCapacityM2(data),
+      data.spraySessions.select('s').where("s.state <> 'cancelled'").andWhere('s.end_at > :now AND s.start_at < :end', { now: now.toISOString(), end: horizonEnd }).getMany(),
+      currentRackLoad(data, now),
     ]);
     return {
       now,
@@ -83,26 +102,26 @@ export function createPlannerService(dataSource: DataSource, settings: SettingsS
       cleanDownMin: shop.cleanDownMin,
       abradeMin: 30,
       booths,
-      busy: sessions.map((s) => ({ boothId: s.boothId, start: new Date(s.startAt), end: new Date(s.endAt) })),
-      rackCapacityM2: racks.reduce((sum, r) => sum + r.shelves * r.shelfAreaM2, 0),
+      busy: spraySessions.map((s) => ({ boothId: s.boothId, start: new Date(s.startAt), end: new Date(s.endAt) })),
+      rackCapacityM2: rackCapacity,
       rackLoad,
       jobs: planJobs,
     };
   }
 
   return {
-    /** Plans into the booths and racks of the caller's site (every site for an admin who names none). */
-    async propose(jobIds: number[] | undefined, horizonDays: number, scope: SiteScope = everySite): Promise<Plan> {
-      const jobs = await dataSource.manager.find(JobEntity, { where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['finished', 'cancelled'])) }, order: { dueDate: 'ASC' } });
-      return autoPlan(await planningInput(jobs, horizonDays, scope));
+    /** A proposal only: nothing is booked until the lead accepts it. */
+    async propose(jobIds: number[] | undefined, horizonDays: number): Promise<PlanDto> {
+      const jobs = await data.jobs.find({ where: jobIds?.length ? { id: In(jobIds) } : { state: Not(In(['finished', 'cancelled'])) }, order: { dueDate: 'ASC' } });
+      return toPlanDto(autoPlan(await planningInput(jobs, horizonDays)));
     },
 
     /**
      * Each job planned on its own, as if no other job waited for the booths: its earliest
-     * finish. Jobs with nothing left to spray are left out.
+     * finish. Jobs with nothing left to spray at the scope's site are left out.
      */
-    async earliestFinishes(jobs: JobEntity[], horizonDays: number, scope: SiteScope = everySite): Promise<Map<number, JobPlan>> {
-      const input = await planningInput(jobs, horizonDays, scope);
+    async earliestFinishes(jobs: JobEntity[], horizonDays: number): Promise<Map<number, JobPlan>> {
+      const input = await planningInput(jobs, horizonDays);
       return new Map(input.jobs.map((job) => [job.id, autoPlan({ ...input, jobs: [job] }).jobs[0]]));
     },
   };

@@ -1,5 +1,4 @@
-import { inTransaction } from '../db/transaction';
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
 import {
   createProductSchema,
@@ -11,9 +10,8 @@ import {
   type UpdateProductInput,
 } from '../../shared/schemas/product';
 import { calendarDateIn } from '../../shared/time';
-import { ProductLotEntity } from '../db/entities/product-lot.entity';
-import { ProductEntity } from '../db/entities/product.entity';
-import { StoredFileEntity } from '../db/entities/stored-file.entity';
+import type { SiteData } from '../data/site-data';
+import type { ProductEntity } from '../db/entities/product.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
@@ -21,51 +19,52 @@ import { toFileRef, type FileService, type Upload } from './files';
 import { toLotDto, toProductDto } from './product-dto';
 import type { SettingsService } from './settings';
 
-export function createProductService(dataSource: DataSource, files: FileService, settings: SettingsService, clock: Clock = systemClock) {
+/** Data sheets, their lots and documents are the group's: every site sprays from the same sheets. */
+export function createProductService(data: SiteData, files: FileService, settings: SettingsService, clock: Clock = systemClock) {
   async function today(): Promise<string> {
     return calendarDateIn(clock.now(), (await settings.get()).timezone);
   }
 
   /** Lots and files for many products in two queries, not one per product. */
-  async function hydrate(manager: EntityManager, products: ProductEntity[]): Promise<Product[]> {
+  async function hydrate(products: ProductEntity[]): Promise<Product[]> {
     const ids = products.map((p) => p.id);
     const fileIds = products.flatMap((p) => [p.tdsFileId, p.sdsFileId]).filter((id): id is number => id !== null);
     const [lots, storedFiles, date] = await Promise.all([
-      ids.length ? manager.find(ProductLotEntity, { where: { productId: In(ids) }, order: { createdAt: 'DESC' } }) : [],
-      fileIds.length ? manager.findBy(StoredFileEntity, { id: In(fileIds) }) : [],
+      ids.length ? data.lots.find({ where: { productId: In(ids) }, order: { createdAt: 'DESC' } }) : [],
+      fileIds.length ? data.files.findBy({ id: In(fileIds) }) : [],
       today(),
     ]);
     const fileById = new Map(storedFiles.map((f) => [f.id, toFileRef(f)]));
     return products.map((p) => toProductDto(p, lots.filter((l) => l.productId === p.id), fileById, date));
   }
 
-  async function findOrFail(manager: EntityManager, id: number): Promise<ProductEntity> {
-    const product = await manager.findOneBy(ProductEntity, { id });
+  async function findOrFail(tx: SiteData, id: number): Promise<ProductEntity> {
+    const product = await tx.products.findOneBy({ id });
     if (!product) throw notFound('Product');
     return product;
   }
 
   return {
     async list(query: ProductListQuery): Promise<List<Product>> {
-      const qb = dataSource.getRepository(ProductEntity).createQueryBuilder('p');
+      const qb = data.products.select('p');
       if (query.q) qb.where('(LOWER(p.name) LIKE :q OR LOWER(p.maker_ref) LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
       const sortColumn = { name: 'p.name', kind: 'p.kind', chemistry: 'p.chemistry', updatedAt: 'p.updated_at' }[query.sort];
       qb.orderBy(sortColumn, query.dir === 'asc' ? 'ASC' : 'DESC').addOrderBy('p.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
-      return { items: await hydrate(dataSource.manager, rows), total, page: query.page, pageSize: query.pageSize };
+      return { items: await hydrate(rows), total, page: query.page, pageSize: query.pageSize };
     },
 
     async get(id: number): Promise<Product> {
-      const [product] = await hydrate(dataSource.manager, [await findOrFail(dataSource.manager, id)]);
+      const [product] = await hydrate([await findOrFail(data, id)]);
       return product;
     },
 
     async create(input: CreateProductInput, actor: Actor): Promise<Product> {
       const fields = createProductSchema.parse(input);
       const now = clock.now();
-      const id = await inTransaction(dataSource, async (manager) => {
-        const product = await manager.save(manager.create(ProductEntity, { ...fields, tdsFileId: null, sdsFileId: null, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
-        await recordAudit(manager, actor, { action: 'create', entity: 'product', entityId: product.id, summary: `Added data sheet ${product.name}` }, now);
+      const id = await data.transaction(async (tx) => {
+        const product = await tx.products.save(tx.products.create({ ...fields, tdsFileId: null, sdsFileId: null, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        await recordAudit(tx, actor, { action: 'create', entity: 'product', entityId: product.id, summary: `Added data sheet ${product.name}` }, now);
         return product.id;
       });
       return this.get(id);
@@ -73,27 +72,27 @@ export function createProductService(dataSource: DataSource, files: FileService,
 
     async update(id: number, patch: UpdateProductInput, actor: Actor): Promise<Product> {
       const now = clock.now();
-      await inTransaction(dataSource, async (manager) => {
-        const product = await findOrFail(manager, id);
+      await data.transaction(async (tx) => {
+        const product = await findOrFail(tx, id);
         // Checks that span fields (thinner range, colder-is-slower) must hold for the product as it will be.
         createProductSchema.parse({ ...product, ...patch });
         const changes = changedFields(product, patch as Partial<ProductEntity>);
         Object.assign(product, patch, { updatedAt: now.toISOString() });
-        await manager.save(product);
-        await recordAudit(manager, actor, { action: 'update', entity: 'product', entityId: id, summary: `Changed data sheet ${product.name}`, changes }, now);
+        await tx.products.save(product);
+        await recordAudit(tx, actor, { action: 'update', entity: 'product', entityId: id, summary: `Changed data sheet ${product.name}`, changes }, now);
       });
       return this.get(id);
     },
 
     async addLot(productId: number, input: CreateLotInput & { expiresOn: string | null }, actor: Actor): Promise<Lot> {
       const now = clock.now();
-      const lot = await inTransaction(dataSource, async (manager) => {
-        const product = await findOrFail(manager, productId);
-        if (await manager.existsBy(ProductLotEntity, { productId, lotNumber: input.lotNumber })) {
+      const lot = await data.transaction(async (tx) => {
+        const product = await findOrFail(tx, productId);
+        if (await tx.lots.existsBy({ productId, lotNumber: input.lotNumber })) {
           throw new AppError('conflict', `Lot ${input.lotNumber} is already recorded for ${product.name}`, { lotNumber: 'Already recorded' });
         }
-        const saved = await manager.save(manager.create(ProductLotEntity, { productId, lotNumber: input.lotNumber, expiresOn: input.expiresOn, createdAt: now.toISOString() }));
-        await recordAudit(manager, actor, { action: 'create', entity: 'lot', entityId: saved.id, summary: `Added lot ${saved.lotNumber} of ${product.name}` }, now);
+        const saved = await tx.lots.save(tx.lots.create({ productId, lotNumber: input.lotNumber, expiresOn: input.expiresOn, createdAt: now.toISOString() }));
+        await recordAudit(tx, actor, { action: 'create', entity: 'lot', entityId: saved.id, summary: `Added lot ${saved.lotNumber} of ${product.name}` }, now);
         return saved;
       });
       return toLotDto(lot, await today());
@@ -101,15 +100,15 @@ export function createProductService(dataSource: DataSource, files: FileService,
 
     async attachDocument(productId: number, kind: 'tds' | 'sds', upload: Upload | undefined, actor: Actor): Promise<Product> {
       const now = clock.now();
-      await inTransaction(dataSource, async (manager) => {
-        const product = await findOrFail(manager, productId);
-        const file = await files.storePdf(manager, upload, actor.id);
+      await data.transaction(async (tx) => {
+        const product = await findOrFail(tx, productId);
+        const file = await files.storePdf(tx, upload, actor.id);
         if (kind === 'tds') product.tdsFileId = file.id;
         else product.sdsFileId = file.id;
         product.updatedAt = now.toISOString();
-        await manager.save(product);
+        await tx.products.save(product);
         const what = kind === 'tds' ? 'technical data sheet' : 'safety data sheet';
-        await recordAudit(manager, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
+        await recordAudit(tx, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
       });
       return this.get(productId);
     },

@@ -1,6 +1,6 @@
-import type { DataSource } from 'typeorm';
 import { createRackSchema, type Rack } from '../../shared/schemas/rack';
-import { RackEntity } from '../db/entities/rack.entity';
+import type { RackEntity } from '../db/entities/rack.entity';
+import type { SiteData } from '../data/site-data';
 import { systemClock, type Clock } from '../lib/clock';
 import { createCrudService } from './crud-service';
 
@@ -19,14 +19,14 @@ export function toRackDto(rack: RackEntity): Rack {
   };
 }
 
-export function createRackService(dataSource: DataSource, clock: Clock = systemClock) {
-  return createCrudService(dataSource, clock, {
-    entity: RackEntity,
+export function createRackService(data: SiteData, clock: Clock = systemClock) {
+  return createCrudService(data, clock, {
+    table: (d) => d.racks,
     noun: 'rack',
     createSchema: createRackSchema,
     order: { name: 'ASC', id: 'ASC' },
     toDto: toRackDto,
-    siteScoped: true,
+    siteOwned: true,
   });
 }
 

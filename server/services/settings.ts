@@ -1,7 +1,6 @@
-import { inTransaction } from '../db/transaction';
-import type { DataSource } from 'typeorm';
 import type { ShopSettings } from '../../shared/schemas/settings';
-import { ShopSettingsEntity } from '../db/entities/shop-settings.entity';
+import type { SiteData } from '../data/site-data';
+import type { ShopSettingsEntity } from '../db/entities/shop-settings.entity';
 import { systemClock, type Clock } from '../lib/clock';
 import { changedFields, recordAudit, type Actor } from './audit';
 
@@ -21,22 +20,23 @@ function toSettingsDto(row: ShopSettingsEntity): ShopSettings {
   return { shopName, timezone, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour };
 }
 
-export function createSettingsService(dataSource: DataSource, clock: Clock = systemClock) {
+/** The shop's settings are the group's: one timezone and one set of planning defaults for every site. */
+export function createSettingsService(data: SiteData, clock: Clock = systemClock) {
   return {
     async get(): Promise<ShopSettings> {
-      const row = await dataSource.getRepository(ShopSettingsEntity).findOneBy({ id: 1 });
+      const row = await data.settings.findOneBy({ id: 1 });
       return row ? toSettingsDto(row) : defaultShopSettings;
     },
 
     async update(patch: Partial<ShopSettings>, actor: Actor): Promise<ShopSettings> {
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        const existing = await manager.findOneBy(ShopSettingsEntity, { id: 1 });
-        const row = existing ?? manager.create(ShopSettingsEntity, { id: 1, ...defaultShopSettings });
+      return data.transaction(async (tx) => {
+        const existing = await tx.settings.findOneBy({ id: 1 });
+        const row = existing ?? tx.settings.create({ id: 1, ...defaultShopSettings });
         const changes = changedFields(row, patch);
         Object.assign(row, patch, { updatedAt: now.toISOString() });
-        await manager.save(row);
-        await recordAudit(manager, actor, { action: 'update', entity: 'settings', entityId: 1, summary: 'Changed shop settings', changes }, now);
+        await tx.settings.save(row);
+        await recordAudit(tx, actor, { action: 'update', entity: 'settings', entityId: 1, summary: 'Changed shop settings', changes }, now);
         return toSettingsDto(row);
       });
     },

@@ -1,11 +1,10 @@
-import type { DataSource } from 'typeorm';
 import { Not } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import { createSiteSchema, type CreateSiteInput, type Site, type UpdateSiteInput } from '../../shared/schemas/site';
-import { SiteEntity } from '../db/entities/site.entity';
+import type { SiteData } from '../data/site-data';
+import type { SiteEntity } from '../db/entities/site.entity';
 import { AppError } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
-import type { SiteScope } from '../lib/site-scope';
 import type { Actor } from './audit';
 import { createCrudService } from './crud-service';
 
@@ -14,16 +13,16 @@ export function toSiteDto(site: SiteEntity): Site {
 }
 
 /** Sites are listed to everyone (names for the booth and user forms); only an admin adds or renames one. */
-export function createSiteService(dataSource: DataSource, clock: Clock = systemClock) {
-  const crud = createCrudService(dataSource, clock, { entity: SiteEntity, noun: 'site', createSchema: createSiteSchema, order: { name: 'ASC', id: 'ASC' }, toDto: toSiteDto });
+export function createSiteService(data: SiteData, clock: Clock = systemClock) {
+  const crud = createCrudService(data, clock, { table: (d) => d.sites, noun: 'site', createSchema: createSiteSchema, order: { name: 'ASC', id: 'ASC' }, toDto: toSiteDto });
   async function nameFree(name: string | undefined, exceptId = 0): Promise<void> {
-    if (name && (await dataSource.getRepository(SiteEntity).existsBy({ name, id: Not(exceptId) }))) {
+    if (name && (await data.sites.existsBy({ name, id: Not(exceptId) }))) {
       throw new AppError('conflict', `There is already a site called ${name}`, { name: 'Already in use' });
     }
   }
   return {
-    list: (query: PageQuery, _scope: SiteScope) => crud.list(query),
-    get: (id: number, _scope: SiteScope) => crud.get(id),
+    list: (query: PageQuery) => crud.list(query),
+    get: (id: number) => crud.get(id),
     async create(input: CreateSiteInput, actor: Actor): Promise<Site> {
       await nameFree(createSiteSchema.parse(input).name);
       return crud.create(input, actor);
@@ -34,3 +33,5 @@ export function createSiteService(dataSource: DataSource, clock: Clock = systemC
     },
   };
 }
+
+export type SiteService = ReturnType<typeof createSiteService>;

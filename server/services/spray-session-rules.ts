@@ -1,8 +1,7 @@
-import type { EntityManager } from 'typeorm';
 import { openingHoursProblem } from '../../shared/finishing/opening-hours';
-import { BoothEntity } from '../db/entities/booth.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { UserEntity } from '../db/entities/user.entity';
+import type { SiteData } from '../data/site-data';
+import type { BoothEntity } from '../db/entities/booth.entity';
+import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { calendarDateIn } from '../../shared/time';
 import { AppError } from '../lib/app-error';
 
@@ -23,9 +22,10 @@ function span(startIso: string, endIso: string, timeZone: string): string {
   return `${clock(startIso, timeZone)}–${sameDay ? timeOnly(endIso, timeZone) : clock(endIso, timeZone)}`;
 }
 
-async function overlapping(manager: EntityManager, slot: Slot, column: 'booth_id' | 'sprayer_id', value: number): Promise<SpraySessionEntity | null> {
-  const qb = manager
-    .createQueryBuilder(SpraySessionEntity, 's')
+/** A clash is a fact of the booth and the person, whichever site's sessions it is with. */
+async function overlapping(tx: SiteData, slot: Slot, column: 'booth_id' | 'sprayer_id', value: number): Promise<SpraySessionEntity | null> {
+  const qb = tx.acrossSites.spraySessions
+    .select('s')
     .where(`s.${column} = :value`, { value })
     .andWhere("s.state <> 'cancelled'")
     .andWhere('s.start_at < :end AND s.end_at > :start', { start: slot.startAt, end: slot.endAt });
@@ -34,19 +34,19 @@ async function overlapping(manager: EntityManager, slot: Slot, column: 'booth_id
 }
 
 /** Never overridable: one booth, one session at a time; one sprayer, one booth at a time. */
-export async function assertNoClash(manager: EntityManager, slot: Slot, booth: BoothEntity, timeZone: string): Promise<void> {
-  if (manager.connection.options.type === 'postgres') {
+export async function assertNoClash(tx: SiteData, slot: Slot, booth: BoothEntity, timeZone: string): Promise<void> {
+  if (tx.sql.dialect === 'postgres') {
     // Serialise bookings of one booth across every app instance until this transaction ends.
-    await manager.query('SELECT pg_advisory_xact_lock(7301, $1)', [slot.boothId]);
+    await tx.sql.query('SELECT pg_advisory_xact_lock(7301, $1)', [slot.boothId]);
   }
-  const clash = await overlapping(manager, slot, 'booth_id', slot.boothId);
+  const clash = await overlapping(tx, slot, 'booth_id', slot.boothId);
   if (clash) {
     throw new AppError('conflict', `${booth.name} is already booked ${span(clash.startAt, clash.endAt, timeZone)} (spray session ${clash.id})`, { start: 'Overlaps another spray session of this booth' });
   }
   if (slot.sprayerId === null) return;
-  const busy = await overlapping(manager, slot, 'sprayer_id', slot.sprayerId);
+  const busy = await overlapping(tx, slot, 'sprayer_id', slot.sprayerId);
   if (busy) {
-    const sprayer = await manager.findOneBy(UserEntity, { id: slot.sprayerId });
+    const sprayer = await tx.forSite(booth.siteId).users.findOneBy({ id: slot.sprayerId });
     throw new AppError('conflict', `${sprayer?.name ?? 'The sprayer'} is already booked then (spray session ${busy.id}, ${clock(busy.startAt, timeZone)})`, { sprayerId: 'Already booked at that time' });
   }
 }

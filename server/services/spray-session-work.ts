@@ -1,11 +1,12 @@
-import { In, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import { projectedRecoatWindow, sharedRecoatWindow } from '../../shared/finishing/recoat-window';
 import type { FinishStep, RecoatWindow } from '../../shared/finishing/readiness';
 import { emptySessionWork, type SessionCoat, type SessionItemDto, type SessionWork } from '../../shared/schemas/spray-session';
+import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
-import { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { ProductEntity } from '../db/entities/product.entity';
+import type { JobEntity } from '../db/entities/job.entity';
+import type { PartEntity } from '../db/entities/part.entity';
+import type { ProductEntity } from '../db/entities/product.entity';
 import type { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { bookedStepsOf, type BookedPartStep } from './booked-steps';
@@ -40,13 +41,15 @@ function byPartAndStep(booked: BookedPartStep[]): Map<string, BookedPartStep[]> 
   return map;
 }
 
-async function readKnown(manager: EntityManager, partIds: number[], context: WorkContext): Promise<Known> {
-  const parts = await manager.findBy(PartEntity, { id: In(partIds) });
-  const [jobs, steps, coats] = await Promise.all([manager.findBy(JobEntity, { id: In([...new Set(parts.map((p) => p.jobId))]) }), stepsByJob(manager, parts), currentCoatsByPart(manager, partIds)]);
+/** A part's coats and bookings are facts of the part, whichever site they were at: they decide what is sprayed and the window. */
+async function readKnown(data: SiteData, partIds: number[], context: WorkContext): Promise<Known> {
+  const whole = data.acrossSites;
+  const parts = await data.parts.findBy({ id: In(partIds) });
+  const [jobs, steps, coats] = await Promise.all([data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }), stepsByJob(data, parts), currentCoatsByPart(whole, partIds)]);
   const productIds = [...new Set([...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : [])))];
   const [products, booked] = await Promise.all([
-    productIds.length ? manager.find(ProductEntity, { where: { id: In(productIds) }, select: { id: true, name: true, dryingTimes: true } }) : [],
-    bookedStepsOf(manager, parts, { coats, steps, now: context.now }),
+    productIds.length ? data.products.find({ where: { id: In(productIds) }, select: { id: true, name: true, dryingTimes: true } }) : [],
+    bookedStepsOf(whole, parts, { coats, steps, now: context.now }),
   ]);
   return { parts: new Map(parts.map((p) => [p.id, p])), jobs: new Map(jobs.map((j) => [j.id, j])), steps, products: new Map(products.map((p) => [p.id, p])), coats, booked: byPartAndStep(booked), planningTempC: context.planningTempC };
 }
@@ -137,9 +140,9 @@ function workOf(known: Known, session: SpraySessionEntity, items: ResolvedItem[]
 }
 
 /** Each session's items with what is sprayed, and what the session sprays in words. */
-export async function sessionsWork(manager: EntityManager, sessions: SpraySessionEntity[], items: SpraySessionItemEntity[], context: WorkContext): Promise<Map<number, { items: SessionItemDto[]; work: SessionWork }>> {
+export async function sessionsWork(data: SiteData, sessions: SpraySessionEntity[], items: SpraySessionItemEntity[], context: WorkContext): Promise<Map<number, { items: SessionItemDto[]; work: SessionWork }>> {
   const partIds = [...new Set(items.map((i) => i.partId))];
-  const known = partIds.length ? await readKnown(manager, partIds, context) : null;
+  const known = partIds.length ? await readKnown(data, partIds, context) : null;
   const bySession = new Map<number, SpraySessionItemEntity[]>();
   for (const item of items) {
     if (!bySession.has(item.spraySessionId)) bySession.set(item.spraySessionId, []);

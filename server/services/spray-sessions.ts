@@ -1,4 +1,4 @@
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
 import {
   createSpraySessionSchema,
@@ -7,76 +7,86 @@ import {
   type SpraySessionQuery,
   type UpdateSpraySessionInput,
 } from '../../shared/schemas/spray-session';
-import { BoothEntity } from '../db/entities/booth.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
-import { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { inTransaction } from '../db/transaction';
+import type { SiteData } from '../data/site-data';
+import type { BoothEntity } from '../db/entities/booth.entity';
+import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { AppError, notFound } from '../lib/app-error';
-import { everySite, inScope, type SiteScope } from '../lib/site-scope';
 import { systemClock, type Clock } from '../lib/clock';
 import { recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
-import type { SettingsService } from './settings';
+import { partsSeenBy } from './part-sites';
 import { assertRackSpace } from './rack-space';
+import type { SettingsService } from './settings';
+import { changeState, recordChecklist, type SpraySessionActor } from './spray-session-progress';
+import { toSpraySessionDtos } from './spray-session-dto';
 import { assertNoClash, assertOpen } from './spray-session-rules';
 import { assertSprayerFor } from './sprayers';
-import { toSpraySessionDtos } from './spray-session-dto';
-import { changeState, recordChecklist, type SessionActor } from './spray-session-progress';
 
-async function writeItems(manager: EntityManager, sessionId: number, items: { partId: number; stepPosition: number | null }[]): Promise<void> {
+/** Planned parts must exist, and a part placed at another site is not the booth's site's to plan. */
+async function writeItems(tx: SiteData, booth: BoothEntity, spraySessionId: number, items: { partId: number; stepPosition: number | null }[]): Promise<void> {
   const partIds = [...new Set(items.map((i) => i.partId))];
-  if (partIds.length && (await manager.countBy(PartEntity, { id: In(partIds) })) !== partIds.length) {
-    throw new AppError('validation_failed', 'A planned part does not exist', { items: 'Choose parts that exist' });
+  const parts = partIds.length ? await tx.parts.findBy({ id: In(partIds) }) : [];
+  if (parts.length !== partIds.length || (await partsSeenBy(tx.forSite(booth.siteId), parts)).size !== partIds.length) {
+    throw new AppError('validation_failed', 'A planned part does not exist or is at another site', { items: 'Choose parts that exist at this site' });
   }
-  await manager.delete(SpraySessionItemEntity, { spraySessionId: sessionId });
-  if (items.length) await manager.insert(SpraySessionItemEntity, items.map((i) => ({ spraySessionId: sessionId, partId: i.partId, stepPosition: i.stepPosition })));
+  await tx.spraySessionItems.delete({ spraySessionId });
+  await tx.spraySessionItems.insert(items.map((i) => ({ spraySessionId, partId: i.partId, stepPosition: i.stepPosition })));
 }
 
-type SessionFields = ReturnType<typeof createSpraySessionSchema.parse>;
+type SpraySessionFields = ReturnType<typeof createSpraySessionSchema.parse>;
+
+// What a sprayer may change on a session assigned to them: its progress, not its booking.
+const runnerFields = new Set(['state', 'notes', 'checklist']);
+
+/** Anyone who may not book (a sprayer) moves only their own sessions through their steps. */
+function assertRunnerMayChange(spraySession: SpraySessionEntity, patch: UpdateSpraySessionInput, actor: SpraySessionActor): void {
+  if (actor.mayOverride) return;
+  const onlyProgress = Object.keys(patch).every((key) => runnerFields.has(key));
+  if (spraySession.sprayerId !== actor.id || !onlyProgress) throw new AppError('forbidden', 'Sprayers may only move their own sessions through their steps; ask the finishing lead to rebook');
+}
 
 /** A booth of another site is, to a lead, a booth that does not exist. */
-async function boothOrFail(manager: EntityManager, boothId: number, scope: SiteScope): Promise<BoothEntity> {
-  const booth = await manager.findOneBy(BoothEntity, { id: boothId });
-  if (!booth || !inScope(scope, booth.siteId)) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
+async function boothOrFail(tx: SiteData, boothId: number): Promise<BoothEntity> {
+  const booth = await tx.booths.findOneBy({ id: boothId });
+  if (!booth) throw new AppError('validation_failed', 'That booth does not exist', { boothId: 'Choose a booth' });
   return booth;
 }
 
-async function insertSession(manager: EntityManager, fields: SessionFields, actor: Actor, timezone: string, now: string, scope: SiteScope): Promise<SpraySessionEntity> {
+async function insertSpraySession(tx: SiteData, fields: SpraySessionFields, actor: Actor, timezone: string, now: string): Promise<{ spraySession: SpraySessionEntity; siteId: number }> {
   const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
-  const booth = await boothOrFail(manager, fields.boothId, scope);
-  await assertSprayerFor(manager, fields.sprayerId, booth);
+  const booth = await boothOrFail(tx, fields.boothId);
+  await assertSprayerFor(tx, fields.sprayerId, booth);
   assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
-  await assertNoClash(manager, slot, booth, timezone);
-  await assertRackSpace(manager, fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
-  const session = await manager.save(
-    manager.create(SpraySessionEntity, { ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, sprayingStartedAt: null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
+  await assertNoClash(tx, slot, booth, timezone);
+  await assertRackSpace(tx.forSite(booth.siteId), fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
+  const spraySession = await tx.spraySessions.save(
+    tx.spraySessions.create({ ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, sprayingStartedAt: null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
   );
-  await writeItems(manager, session.id, fields.items);
+  await writeItems(tx, booth, spraySession.id, fields.items);
   const summary = `Booked ${booth.name} ${slot.startAt}–${slot.endAt}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;
-  await recordAudit(manager, actor, { action: 'create', entity: 'spray-session', entityId: session.id, summary }, new Date(now));
-  return session;
+  await recordAudit(tx, actor, { action: 'create', entity: 'spray-session', entityId: spraySession.id, summary, siteId: booth.siteId }, new Date(now));
+  return { spraySession, siteId: booth.siteId };
 }
 
-export function createSpraySessionService(dataSource: DataSource, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
-  async function sessionOrFail(manager: EntityManager, id: number, scope: SiteScope): Promise<SpraySessionEntity> {
-    const session = await manager.findOneBy(SpraySessionEntity, { id });
-    const booth = session && (await manager.findOneBy(BoothEntity, { id: session.boothId }));
-    if (!session || !booth || !inScope(scope, booth.siteId)) throw notFound('Spray session');
-    return session;
+export function createSpraySessionService(data: SiteData, settings: SettingsService, events: EventBus, clock: Clock = systemClock) {
+  async function spraySessionOrFail(tx: SiteData, id: number): Promise<SpraySessionEntity> {
+    const spraySession = await tx.spraySessions.findOneBy({ id });
+    if (!spraySession) throw notFound('Spray session');
+    return spraySession;
   }
 
-  const workContext = async () => ({ planningTempC: (await settings.get()).planningDryingTempC, now: clock.now() });
-  const toDtos = async (sessions: SpraySessionEntity[]) => toSpraySessionDtos(dataSource.manager, sessions, await workContext());
+  /** Sessions as the API sends them, with what each sprays and what is sprayed already. */
+  async function toDtos(tx: SiteData, spraySessions: SpraySessionEntity[]): Promise<SpraySession[]> {
+    return toSpraySessionDtos(tx, spraySessions, { planningTempC: (await settings.get()).planningDryingTempC, now: clock.now() });
+  }
 
-  async function getWith(manager: EntityManager, id: number, scope: SiteScope = everySite): Promise<SpraySession> {
-    return (await toDtos([await sessionOrFail(manager, id, scope)]))[0];
+  async function getWith(tx: SiteData, id: number): Promise<SpraySession> {
+    return (await toDtos(tx, [await spraySessionOrFail(tx, id)]))[0];
   }
 
   return {
-    async list(query: SpraySessionQuery, scope: SiteScope = everySite): Promise<List<SpraySession>> {
-      const qb = dataSource.getRepository(SpraySessionEntity).createQueryBuilder('s');
-      if (scope.siteId !== null) qb.andWhere('s.booth_id IN (SELECT b.id FROM booths b WHERE b.site_id = :siteId)', { siteId: scope.siteId });
+    async list(query: SpraySessionQuery): Promise<List<SpraySession>> {
+      const qb = data.spraySessions.select('s');
       // The time window as a subquery, so SQLite finds this week's sessions through the end_at index;
       // next to the ORDER BY it would walk the start_at index through every earlier session instead.
       const window = [...(query.from ? ['w.end_at > :from'] : []), ...(query.to ? ['w.start_at < :to'] : [])];
@@ -87,69 +97,72 @@ export function createSpraySessionService(dataSource: DataSource, settings: Sett
       if (query.boothId) qb.andWhere('s.booth_id = :boothId', { boothId: query.boothId });
       qb.orderBy('s.start_at', 'ASC').addOrderBy('s.id', 'ASC');
       const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
-      return { items: await toDtos(rows), total, page: query.page, pageSize: query.pageSize };
+      return { items: await toDtos(data, rows), total, page: query.page, pageSize: query.pageSize };
     },
 
-    get: (id: number, scope: SiteScope = everySite) => getWith(dataSource.manager, id, scope),
+    get: (id: number) => getWith(data, id),
 
-    async create(input: CreateSpraySessionInput, actor: Actor, scope: SiteScope = everySite): Promise<SpraySession> {
+    async create(input: CreateSpraySessionInput, actor: Actor): Promise<SpraySession> {
       const fields = createSpraySessionSchema.parse(input);
       const { timezone } = await settings.get();
-      const session = await inTransaction(dataSource, (manager) => insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope));
-      const [created] = await toDtos([session]);
-      events.publish({ type: 'spray-session.changed', id: created.id });
+      const { created, siteId } = await data.transaction(async (tx) => {
+        const inserted = await insertSpraySession(tx, fields, actor, timezone, clock.now().toISOString());
+        return { created: await getWith(tx, inserted.spraySession.id), siteId: inserted.siteId };
+      });
+      events.publish({ type: 'spray-session.changed', id: created.id, siteId });
       return created;
     },
 
     /** Books every session of an accepted plan, or none of them. */
-    async createAll(inputs: CreateSpraySessionInput[], actor: Actor, scope: SiteScope = everySite): Promise<SpraySession[]> {
+    async createAll(inputs: CreateSpraySessionInput[], actor: Actor): Promise<SpraySession[]> {
       const all = inputs.map((input) => createSpraySessionSchema.parse(input));
       const { timezone } = await settings.get();
-      const sessions = await inTransaction(dataSource, async (manager) => {
-        const booked: SpraySessionEntity[] = [];
-        for (const fields of all) booked.push(await insertSession(manager, fields, actor, timezone, clock.now().toISOString(), scope));
-        return booked;
+      const inserted = await data.transaction(async (tx) => {
+        const rows: { spraySession: SpraySessionEntity; siteId: number }[] = [];
+        for (const fields of all) rows.push(await insertSpraySession(tx, fields, actor, timezone, clock.now().toISOString()));
+        return { dtos: await toDtos(tx, rows.map((r) => r.spraySession)), siteIds: rows.map((r) => r.siteId) };
       });
-      const created = await toDtos(sessions);
-      for (const session of created) events.publish({ type: 'spray-session.changed', id: session.id });
-      return created;
+      inserted.dtos.forEach((spraySession, i) => events.publish({ type: 'spray-session.changed', id: spraySession.id, siteId: inserted.siteIds[i] }));
+      return inserted.dtos;
     },
 
-    async update(id: number, patch: UpdateSpraySessionInput, actor: SessionActor, scope: SiteScope = everySite): Promise<SpraySession> {
-      const { timezone } = await settings.get();
-      const now = clock.now().toISOString();
-      const saved = await inTransaction(dataSource, async (manager) => {
-        const session = await sessionOrFail(manager, id, scope);
-        const slot = {
-          id,
-          boothId: patch.boothId ?? session.boothId,
-          startAt: patch.start ? new Date(patch.start).toISOString() : session.startAt,
-          endAt: patch.end ? new Date(patch.end).toISOString() : session.endAt,
-          sprayerId: patch.sprayerId === undefined ? session.sprayerId : patch.sprayerId,
-        };
-        if (Date.parse(slot.endAt) <= Date.parse(slot.startAt)) throw new AppError('validation_failed', 'The end must be after the start', { end: 'The end must be after the start' });
-        const booth = await boothOrFail(manager, slot.boothId, scope);
-        const retimed = slot.boothId !== session.boothId || slot.startAt !== session.startAt || slot.endAt !== session.endAt;
-        const moved = retimed || slot.sprayerId !== session.sprayerId;
-        if (moved) await assertSprayerFor(manager, slot.sprayerId, booth);
-        // Giving a session to someone else leaves its hours alone: a booking already made outside them stands.
-        if (retimed) assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
-        if ((moved || patch.state === 'planned') && (patch.state ?? session.state) !== 'cancelled') await assertNoClash(manager, slot, booth, timezone);
-        Object.assign(session, { ...slot, notes: patch.notes ?? session.notes, updatedAt: now });
-        if (patch.override) session.overrideReason = patch.override.reason;
-        if (patch.checklist) session.checklist = await recordChecklist(manager, session, booth, patch.checklist, actor);
-        if (patch.state && patch.state !== session.state) changeState(session, patch.state, now);
-        await manager.save(session);
-        if (patch.items) await writeItems(manager, id, patch.items);
-        const summary = `Changed spray session ${id} on ${booth.name}${patch.state ? ` (now ${patch.state})` : ''}`;
-        await recordAudit(manager, actor, { action: 'update', entity: 'spray-session', entityId: id, summary, changes: { ...patch } }, new Date(now));
-        return session;
-      });
-      const [updated] = await toDtos([saved]);
-      events.publish({ type: 'spray-session.changed', id });
-      return updated;
-    },
+    update: (id: number, patch: UpdateSpraySessionInput, actor: SpraySessionActor) => update(id, patch, actor),
   };
+
+  async function update(id: number, patch: UpdateSpraySessionInput, actor: SpraySessionActor): Promise<SpraySession> {
+    const { timezone } = await settings.get();
+    const now = clock.now().toISOString();
+    const updated = await data.transaction(async (tx) => {
+      const spraySession = await spraySessionOrFail(tx, id);
+      assertRunnerMayChange(spraySession, patch, actor);
+      const slot = {
+        id,
+        boothId: patch.boothId ?? spraySession.boothId,
+        startAt: patch.start ? new Date(patch.start).toISOString() : spraySession.startAt,
+        endAt: patch.end ? new Date(patch.end).toISOString() : spraySession.endAt,
+        sprayerId: patch.sprayerId === undefined ? spraySession.sprayerId : patch.sprayerId,
+      };
+      if (Date.parse(slot.endAt) <= Date.parse(slot.startAt)) throw new AppError('validation_failed', 'The end must be after the start', { end: 'The end must be after the start' });
+      const booth = await boothOrFail(tx, slot.boothId);
+      const retimed = slot.boothId !== spraySession.boothId || slot.startAt !== spraySession.startAt || slot.endAt !== spraySession.endAt;
+      const moved = retimed || slot.sprayerId !== spraySession.sprayerId;
+      if (moved) await assertSprayerFor(tx, slot.sprayerId, booth);
+      // Giving a session to someone else leaves its hours alone: a booking already made outside them stands.
+      if (retimed) assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
+      if ((moved || patch.state === 'planned') && (patch.state ?? spraySession.state) !== 'cancelled') await assertNoClash(tx, slot, booth, timezone);
+      Object.assign(spraySession, { ...slot, notes: patch.notes ?? spraySession.notes, updatedAt: now });
+      if (patch.override) spraySession.overrideReason = patch.override.reason;
+      if (patch.checklist) spraySession.checklist = await recordChecklist(tx, spraySession, booth, patch.checklist, actor);
+      if (patch.state && patch.state !== spraySession.state) changeState(spraySession, patch.state, now);
+      await tx.spraySessions.save(spraySession);
+      if (patch.items) await writeItems(tx, booth, id, patch.items);
+      const summary = `Changed spray session ${id} on ${booth.name}${patch.state ? ` (now ${patch.state})` : ''}`;
+      await recordAudit(tx, actor, { action: 'update', entity: 'spray-session', entityId: id, summary, changes: { ...patch }, siteId: booth.siteId }, new Date(now));
+      return { dto: await getWith(tx, id), siteId: booth.siteId };
+    });
+    events.publish({ type: 'spray-session.changed', id, siteId: updated.siteId });
+    return updated.dto;
+  }
 }
 
 export type SpraySessionService = ReturnType<typeof createSpraySessionService>;

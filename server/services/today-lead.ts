@@ -1,17 +1,16 @@
-import { In, IsNull, Not, type EntityManager } from 'typeorm';
+import { In, IsNull, Not } from 'typeorm';
 import type { PartReadiness } from '../../shared/finishing/readiness';
 import { jobRisk, riskHorizonDays, sensorIsStale } from '../../shared/finishing/day-board';
 import type { LeadBoard } from '../../shared/schemas/today';
 import { calendarDateIn } from '../../shared/time';
-import { BoothEntity } from '../db/entities/booth.entity';
+import type { SiteData } from '../data/site-data';
 import type { JobEntity } from '../db/entities/job.entity';
-import { PartEntity } from '../db/entities/part.entity';
-import { ReadingEntity } from '../db/entities/reading.entity';
+import type { PartEntity } from '../db/entities/part.entity';
 import { bookedStepsOf } from './booked-steps';
 import { currentCoatsByPart, stepsByJob } from './part-coats';
+import { partsSeenBy } from './part-sites';
 import type { PlannerService } from './planner';
 import { readinessOf } from './ready';
-import type { SiteScope } from '../lib/site-scope';
 
 type Counted<T> = T & { parts: PartEntity[] };
 
@@ -28,18 +27,19 @@ function groupBy<T>(parts: PartEntity[], keyOf: (part: PartEntity) => string | n
 }
 
 /**
- * Parts of the open jobs that are between coats: whose recoat window closes before the shop day
- * ends (and whether their next coat is booked in time), and who must be denibbed first.
+ * The site's parts of the open jobs that are between coats: whose recoat window closes before the
+ * shop day ends (and whether their next coat is booked in time at the site), and who must be
+ * denibbed first.
  */
-export async function partsBetweenCoats(manager: EntityManager, jobs: JobEntity[], now: Date, endOfToday: Date): Promise<Pick<LeadBoard, 'recoatClosing' | 'denibWaiting'>> {
-  const parts = jobs.length ? await manager.findBy(PartEntity, { jobId: In(jobs.map((j) => j.id)), collectedAt: IsNull() }) : [];
-  const readiness = await readinessOf(manager, parts, now);
+export async function partsBetweenCoats(data: SiteData, work: JobsInWork, now: Date, endOfToday: Date): Promise<Pick<LeadBoard, 'recoatClosing' | 'denibWaiting'>> {
+  const { jobs, parts } = work;
+  const readiness = await readinessOf(data, parts, now);
   const jobOf = new Map(jobs.map((j) => [j.id, j]));
   const inFinish = parts.filter((p) => readiness.get(p.id)!.state === 'in-finish');
   const closing = (r: PartReadiness) => !r.abradeRequired && r.nextWindow?.closesAt && r.nextWindow.closesAt > now && r.nextWindow.closesAt <= endOfToday;
   const closingParts = inFinish.filter((p) => closing(readiness.get(p.id)!));
-  const [coats, steps] = await Promise.all([currentCoatsByPart(manager, closingParts.map((p) => p.id)), stepsByJob(manager, closingParts)]);
-  const booked = await bookedStepsOf(manager, closingParts, { coats, steps, now });
+  const [coats, steps] = await Promise.all([currentCoatsByPart(data.acrossSites, closingParts.map((p) => p.id)), stepsByJob(data, closingParts)]);
+  const booked = await bookedStepsOf(data, closingParts, { coats, steps, now });
 
   const recoatClosing = groupBy(
     closingParts,
@@ -75,24 +75,32 @@ export async function partsBetweenCoats(manager: EntityManager, jobs: JobEntity[
   return { recoatClosing: recoatClosing.sort((a, b) => a.closesAt.localeCompare(b.closesAt)), denibWaiting };
 }
 
-/** Jobs not yet handed over: some part still uncollected, or no parts yet. A job whose parts are all collected is delivered, whatever its state says. */
-export async function jobsInWork(manager: EntityManager, jobs: JobEntity[]): Promise<JobEntity[]> {
-  if (jobs.length === 0) return [];
-  const rows: { jobId: number; total: string | number; open: string | number }[] = await manager
-    .createQueryBuilder(PartEntity, 'p')
-    .select('p.job_id', 'jobId')
-    .addSelect('COUNT(*)', 'total')
-    .addSelect('SUM(CASE WHEN p.collected_at IS NULL THEN 1 ELSE 0 END)', 'open')
-    .where('p.job_id IN (:...ids)', { ids: jobs.map((j) => j.id) })
-    .groupBy('p.job_id')
-    .getRawMany();
-  const delivered = new Set(rows.filter((r) => Number(r.total) > 0 && Number(r.open) === 0).map((r) => Number(r.jobId)));
-  return jobs.filter((j) => !delivered.has(j.id));
+/** The jobs a site is working on, with their parts still at (or not yet placed off) the site. */
+export interface JobsInWork {
+  jobs: JobEntity[];
+  parts: PartEntity[];
+}
+
+/**
+ * Jobs the scope's site still works on: some uncollected part it sees (on its racks, last coated
+ * there, or not yet begun), or no parts yet. A job whose parts are all collected is delivered,
+ * whatever its state says; one whose parts are all at another site is that site's.
+ */
+export async function jobsInWork(data: SiteData, jobs: JobEntity[]): Promise<JobsInWork> {
+  if (jobs.length === 0) return { jobs: [], parts: [] };
+  const ids = jobs.map((j) => j.id);
+  const rows: { jobId: number }[] = await data.parts.select('p').select('DISTINCT p.job_id', 'jobId').where('p.job_id IN (:...ids)', { ids }).getRawMany();
+  const withParts = new Set(rows.map((r) => Number(r.jobId)));
+  const open = await data.parts.findBy({ jobId: In(ids), collectedAt: IsNull() });
+  const seen = await partsSeenBy(data, open);
+  const parts = open.filter((p) => seen.has(p.id));
+  const active = new Set(parts.map((p) => p.jobId));
+  return { jobs: jobs.filter((j) => !withParts.has(j.id) || active.has(j.id)), parts };
 }
 
 /** Jobs past their due date, or whose earliest plan (on their own, in free booth time) packs after it. */
-export async function jobsAtRisk(planner: PlannerService, jobs: JobEntity[], context: { today: string; timeZone: string; scope: SiteScope }): Promise<LeadBoard['jobsAtRisk']> {
-  const finishes = await planner.earliestFinishes(jobs, riskHorizonDays, context.scope);
+export async function jobsAtRisk(planner: PlannerService, jobs: JobEntity[], context: { today: string; timeZone: string }): Promise<LeadBoard['jobsAtRisk']> {
+  const finishes = await planner.earliestFinishes(jobs, riskHorizonDays);
   return jobs.flatMap((job) => {
     const plan = finishes.get(job.id);
     const readyToPackOn = plan?.finishesAt ? calendarDateIn(plan.finishesAt, context.timeZone) : null;
@@ -101,10 +109,10 @@ export async function jobsAtRisk(planner: PlannerService, jobs: JobEntity[], con
   });
 }
 
-/** Booths with a sensor whose readings have stopped coming. */
-export async function staleSensors(manager: EntityManager, siteId: number | null, now: Date): Promise<LeadBoard['staleSensors']> {
-  const booths = await manager.find(BoothEntity, { where: { sensorTokenHash: Not(IsNull()), ...(siteId === null ? {} : { siteId }) }, order: { id: 'ASC' } });
-  const latest = await Promise.all(booths.map((b) => manager.findOne(ReadingEntity, { where: { boothId: b.id, source: 'sensor' }, order: { at: 'DESC' } })));
+/** The scope's booths with a sensor whose readings have stopped coming. */
+export async function staleSensors(data: SiteData, now: Date): Promise<LeadBoard['staleSensors']> {
+  const booths = await data.booths.find({ where: { sensorTokenHash: Not(IsNull()) }, order: { id: 'ASC' } });
+  const latest = await Promise.all(booths.map((b) => data.readings.findOne({ where: { boothId: b.id, source: 'sensor' }, order: { at: 'DESC' } })));
   return booths.flatMap((booth, i) => {
     const at = latest[i]?.at ?? null;
     return sensorIsStale(at ? new Date(at) : null, now) ? [{ boothId: booth.id, boothName: booth.name, lastReadingAt: at }] : [];

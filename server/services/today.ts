@@ -1,15 +1,13 @@
 import { TZDate } from '@date-fns/tz';
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
 import { can, type Role } from '../../shared/permissions';
 import type { LeadBoard, SprayerBoard, TodayBoard } from '../../shared/schemas/today';
 import { calendarDateIn } from '../../shared/time';
-import { BoothEntity } from '../db/entities/booth.entity';
-import { JobEntity } from '../db/entities/job.entity';
+import type { SiteData } from '../data/site-data';
 import { systemClock, type Clock } from '../lib/clock';
-import { everySite, type SiteScope } from '../lib/site-scope';
 import type { PlannerService } from './planner';
 import type { SettingsService } from './settings';
-import { createSprayerService } from './sprayers';
+import type { SprayerService } from './sprayers';
 import { jobsAtRisk, jobsInWork, partsBetweenCoats, staleSensors } from './today-lead';
 import { sessionsIn, toTodaySessions } from './today-sessions';
 
@@ -27,10 +25,18 @@ function shopMidnight(date: string, timeZone: string, days = 0): Date {
   return new Date(new TZDate(y, m - 1, d + days, timeZone).getTime());
 }
 
-/** The day's working board, per role: the lead plans and unblocks, the sprayer sees what to do next. */
-export function createTodayService(dataSource: DataSource, settings: SettingsService, planner: PlannerService, clock: Clock = systemClock) {
-  const sprayers = createSprayerService(dataSource);
+/** What the board is made from besides the data: the shop settings, the planner and the sprayer list, all on the same scope. */
+export interface TodayDeps {
+  settings: SettingsService;
+  planner: PlannerService;
+  sprayers: SprayerService;
+}
 
+/**
+ * The day's working board, per role: the lead plans and unblocks, the sprayer sees what to do
+ * next. Everything on it is the scope's site's: its booths and sessions, its parts, its people.
+ */
+export function createTodayService(data: SiteData, { settings, planner, sprayers }: TodayDeps, clock: Clock = systemClock) {
   async function shopDay() {
     const shop = await settings.get();
     const now = clock.now();
@@ -39,20 +45,19 @@ export function createTodayService(dataSource: DataSource, settings: SettingsSer
     return { now, today, timeZone: shop.timezone, context, startOf: (days: number) => shopMidnight(today, shop.timezone, days) };
   }
 
-  async function leadBoard(scope: SiteScope): Promise<LeadBoard> {
+  async function leadBoard(): Promise<LeadBoard> {
     const day = await shopDay();
-    const manager = dataSource.manager;
-    const [entities, booths, jobs] = await Promise.all([
-      sessionsIn(manager, { from: day.startOf(0), to: day.startOf(2), siteId: scope.siteId }),
-      manager.find(BoothEntity, { where: scope.siteId === null ? {} : { siteId: scope.siteId }, order: { id: 'ASC' } }),
-      manager.find(JobEntity, { where: { state: In(workingStates) }, order: { dueDate: 'ASC', id: 'ASC' } }).then((found) => jobsInWork(manager, found)),
+    const [entities, booths, work] = await Promise.all([
+      sessionsIn(data, { from: day.startOf(0), to: day.startOf(2) }),
+      data.booths.find({ order: { id: 'ASC' } }),
+      data.jobs.find({ where: { state: In(workingStates) }, order: { dueDate: 'ASC', id: 'ASC' } }).then((found) => jobsInWork(data, found)),
     ]);
     const [sessions, people, between, risks, sensors] = await Promise.all([
-      toTodaySessions(manager, entities, day.context),
-      sprayers.list({}, scope),
-      partsBetweenCoats(manager, jobs, day.now, day.startOf(1)),
-      jobsAtRisk(planner, jobs, { today: day.today, timeZone: day.timeZone, scope }),
-      staleSensors(manager, scope.siteId, day.now),
+      toTodaySessions(data, entities, day.context),
+      sprayers.list(),
+      partsBetweenCoats(data, work, day.now, day.startOf(1)),
+      jobsAtRisk(planner, work.jobs, { today: day.today, timeZone: day.timeZone }),
+      staleSensors(data, day.now),
     ]);
     return {
       view: 'lead',
@@ -68,23 +73,22 @@ export function createTodayService(dataSource: DataSource, settings: SettingsSer
     };
   }
 
-  async function sprayerBoard(viewer: TodayViewer, scope: SiteScope): Promise<SprayerBoard> {
+  async function sprayerBoard(viewer: TodayViewer): Promise<SprayerBoard> {
     const day = await shopDay();
-    const manager = dataSource.manager;
-    const later = { from: day.startOf(1), to: day.startOf(60), siteId: scope.siteId, sprayerId: viewer.id };
+    const later = { from: day.startOf(1), to: day.startOf(60), sprayerId: viewer.id };
     const [mine, upcoming, unassigned] = await Promise.all([
-      sessionsIn(manager, { from: day.startOf(0), to: day.startOf(1), siteId: scope.siteId, sprayerId: viewer.id }),
-      sessionsIn(manager, later).then((found) => found.filter((s) => s.state === 'planned').slice(0, 1)),
-      sessionsIn(manager, { from: day.now, to: day.startOf(1), siteId: scope.siteId, sprayerId: null }),
+      sessionsIn(data, { from: day.startOf(0), to: day.startOf(1), sprayerId: viewer.id }),
+      sessionsIn(data, later).then((found) => found.filter((s) => s.state === 'planned').slice(0, 1)),
+      sessionsIn(data, { from: day.now, to: day.startOf(1), sprayerId: null }),
     ]);
-    const [mySessions, next] = await Promise.all([toTodaySessions(manager, mine, day.context), toTodaySessions(manager, upcoming, day.context)]);
+    const [mySessions, next] = await Promise.all([toTodaySessions(data, mine, day.context), toTodaySessions(data, upcoming, day.context)]);
     return { view: 'sprayer', generatedAt: day.now.toISOString(), today: day.today, mySessions, nextSession: next[0] ?? null, unassignedToday: unassigned.length };
   }
 
   return {
     /** Leads and admins get the planning board; anyone else who runs sessions gets their own day. */
-    board(viewer: TodayViewer, scope: SiteScope = everySite): Promise<TodayBoard> {
-      return can(viewer.role, 'spray-sessions:write') ? leadBoard(scope) : sprayerBoard(viewer, scope);
+    board(viewer: TodayViewer): Promise<TodayBoard> {
+      return can(viewer.role, 'spray-sessions:write') ? leadBoard() : sprayerBoard(viewer);
     },
   };
 }

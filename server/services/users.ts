@@ -1,68 +1,66 @@
-import { inTransaction } from '../db/transaction';
-import type { DataSource, EntityManager } from 'typeorm';
 import type { SessionUser } from '../../shared/schemas/auth';
-import { defaultNotifyPrefs } from '../../shared/schemas/notification';
 import type { List, PageQuery } from '../../shared/schemas/common';
+import { defaultNotifyPrefs } from '../../shared/schemas/notification';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
 import { createUserSchema } from '../../shared/schemas/user';
 import { hashPassword } from '../auth/passwords';
-import { SiteEntity } from '../db/entities/site.entity';
-import { UserEntity } from '../db/entities/user.entity';
+import type { SiteData } from '../data/site-data';
+import type { UserEntity } from '../db/entities/user.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { paginate } from '../lib/paginate';
+import { siteForWrite } from '../lib/site-scope';
 import { changedFields, recordAudit, type Actor } from './audit';
 
-export function toSessionUser(user: UserEntity): SessionUser {
+/** What the sign-in session carries about its user. */
+export function toSignedInUser(user: UserEntity): SessionUser {
   return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: user.notify ?? defaultNotifyPrefs(user.role) };
 }
 
 export function toUserDto(user: UserEntity): User {
-  return { ...toSessionUser(user), disabled: user.disabled, createdAt: user.createdAt };
+  return { ...toSignedInUser(user), disabled: user.disabled, createdAt: user.createdAt };
 }
 
-async function requireSite(manager: EntityManager, siteId: number): Promise<void> {
-  if (!(await manager.existsBy(SiteEntity, { id: siteId }))) throw new AppError('validation_failed', 'That site does not exist', { siteId: 'Choose a site' });
+async function requireSite(tx: SiteData, siteId: number): Promise<void> {
+  if (!(await tx.sites.existsBy({ id: siteId }))) throw new AppError('validation_failed', 'That site does not exist', { siteId: 'Choose a site' });
 }
 
-export function createUserService(dataSource: DataSource, clock: Clock = systemClock) {
-  const repo = () => dataSource.getRepository(UserEntity);
-
+export function createUserService(data: SiteData, clock: Clock = systemClock) {
   async function applyUpdate(id: number, patch: UpdateUserInput, actor: Actor, summary: string): Promise<UserEntity> {
     const now = clock.now();
     const { password, ...fields } = patch;
     const passwordHash = password ? await hashPassword(password) : undefined;
-    return inTransaction(dataSource, async (manager) => {
-      const user = await manager.findOneBy(UserEntity, { id });
+    return data.transaction(async (tx) => {
+      const user = await tx.users.findOneBy({ id });
       if (!user) throw notFound('User');
-      if (fields.siteId !== undefined) await requireSite(manager, fields.siteId);
+      if (fields.siteId !== undefined) await requireSite(tx, fields.siteId);
       const changes = changedFields(user, fields);
       if (passwordHash) changes.password = { from: '…', to: 'changed' };
       Object.assign(user, fields, passwordHash ? { passwordHash } : {}, { updatedAt: now.toISOString() });
-      await manager.save(user);
-      await recordAudit(manager, actor, { action: 'update', entity: 'user', entityId: id, summary: `${summary} ${user.email}`, changes }, now);
+      await tx.users.save(user);
+      await recordAudit(tx, actor, { action: 'update', entity: 'user', entityId: id, summary: `${summary} ${user.email}`, changes, siteId: user.siteId }, now);
       return user;
     });
   }
 
   return {
     list(query: PageQuery): Promise<List<User>> {
-      return paginate(repo(), query, { order: { name: 'ASC', id: 'ASC' } }, toUserDto);
+      return paginate(data.users, query, { order: { name: 'ASC', id: 'ASC' } }, toUserDto);
     },
 
-    /** `homeSiteId` is where the user goes when the input names no site: the creating admin's. */
-    async create(input: CreateUserInput, actor: Actor, homeSiteId = 1): Promise<User> {
-      const { password, siteId = homeSiteId, ...fields } = createUserSchema.parse(input);
+    /** Left out of the input, the new user joins the creating admin's own site. */
+    async create(input: CreateUserInput, actor: Actor): Promise<User> {
+      const { password, siteId: requested, ...fields } = createUserSchema.parse(input);
+      const siteId = siteForWrite(data.scope, requested);
       const passwordHash = await hashPassword(password);
       const now = clock.now();
-      return inTransaction(dataSource, async (manager) => {
-        if (await manager.existsBy(UserEntity, { email: fields.email })) {
+      return data.transaction(async (tx) => {
+        if (await tx.acrossSites.users.existsBy({ email: fields.email })) {
           throw new AppError('conflict', 'A user with this e-mail already exists', { email: 'Already in use' });
         }
-        await requireSite(manager, siteId);
-        const user = manager.create(UserEntity, { ...fields, siteId, passwordHash, disabled: false, createdAt: now.toISOString(), updatedAt: now.toISOString() });
-        await manager.save(user);
-        await recordAudit(manager, actor, { action: 'create', entity: 'user', entityId: user.id, summary: `Added user ${user.email} as ${user.role}` }, now);
+        await requireSite(tx, siteId);
+        const user = await tx.users.save(tx.users.create({ ...fields, siteId, passwordHash, disabled: false, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        await recordAudit(tx, actor, { action: 'create', entity: 'user', entityId: user.id, summary: `Added user ${user.email} as ${user.role}`, siteId }, now);
         return toUserDto(user);
       });
     },
@@ -76,7 +74,7 @@ export function createUserService(dataSource: DataSource, clock: Clock = systemC
     },
 
     async updateSelf(id: number, patch: UpdateMeInput, actor: Actor): Promise<SessionUser> {
-      return toSessionUser(await applyUpdate(id, patch, actor, 'Changed own preferences'));
+      return toSignedInUser(await applyUpdate(id, patch, actor, 'Changed own preferences'));
     },
   };
 }

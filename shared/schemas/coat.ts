@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { isoInstantSchema } from './common';
+import { idSchema, isoInstantSchema, pageFields, queryFlagSchema } from './common';
+import { siteFilterFields } from './site';
 
 export const acknowledgementSchema = z.object({
   code: z.string().min(1).max(60),
@@ -110,15 +111,15 @@ export const coatSchema = z.object({
 export type Coat = z.infer<typeof coatSchema>;
 
 export const coatQuerySchema = z.object({
-  spraySessionId: z.coerce.number().int().positive().optional(),
-  partId: z.coerce.number().int().positive().optional(),
-  jobId: z.coerce.number().int().positive().optional(),
-  productId: z.coerce.number().int().positive().optional(),
+  spraySessionId: idSchema.optional(),
+  partId: idSchema.optional(),
+  jobId: idSchema.optional(),
+  productId: idSchema.optional(),
   from: isoInstantSchema.optional(),
   to: isoInstantSchema.optional(),
   /** Current versions only unless asked for the whole history. */
-  history: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(500).default(50),
+  history: queryFlagSchema.default(false),
+  ...pageFields(50, 500),
+  ...siteFilterFields,
 });
 export type CoatQuery = z.infer<typeof coatQuerySchema>;

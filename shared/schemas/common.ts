@@ -2,18 +2,51 @@ import { z } from 'zod';
 
 /** Ids are 32-bit integer columns; a larger number names nothing and PostgreSQL would refuse it. */
 export const maxId = 2_147_483_647;
-export const idSchema = z.coerce.number().int().positive().max(maxId);
+
+/**
+ * An id as it comes in a path or a query string: plain decimal digits only, so "0x10", "1e3",
+ * " 7", "016" and "7.0" are refused instead of being read as some other row's id.
+ */
+export const idSchema = z
+  .string({ error: 'Give the id as a whole number' })
+  .regex(/^[1-9][0-9]{0,9}$/, 'An id is a whole number from 1, written in plain digits')
+  .transform(Number)
+  .pipe(z.number().max(maxId, 'No record has an id that large'));
 export const idParamsSchema = z.object({ id: idSchema });
+
+/** A whole number in a query string (page, page size), in plain decimal digits. */
+export function queryIntSchema(min: number, max: number) {
+  return z
+    .string({ error: 'Give a whole number' })
+    .regex(/^[0-9]{1,10}$/, 'Give a whole number in plain digits')
+    .transform(Number)
+    .pipe(z.number().min(min, `At least ${min}`).max(max, `At most ${max}`));
+}
+
+/** A decimal number in a query string ("72.5"), never hexadecimal or exponent forms. */
+export function queryNumberSchema(min: number, max: number) {
+  return z
+    .string({ error: 'Give a number' })
+    .regex(/^[0-9]{1,6}(\.[0-9]{1,6})?$/, 'Give a number such as 65 or 72.5')
+    .transform(Number)
+    .pipe(z.number().min(min, `At least ${min}`).max(max, `At most ${max}`));
+}
+
+/** `true` or `false` in a query string. */
+export const queryFlagSchema = z.enum(['true', 'false'], { error: 'Use true or false' }).transform((v) => v === 'true');
 
 /** ISO 8601 instant with an offset, as DESIGN.md §7 asks. */
 export const isoInstantSchema = z.iso.datetime({ offset: true });
 
-export const pageQuerySchema = z.object({
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(200).default(50),
-});
+/** `?page=&pageSize=` with the list's own largest page. */
+export function pageFields(defaultSize: number, maxSize: number) {
+  return { page: queryIntSchema(1, 1_000_000).default(1), pageSize: queryIntSchema(1, maxSize).default(defaultSize) };
+}
+
+export const pageQuerySchema = z.object(pageFields(50, 200));
 export type PageQuery = z.infer<typeof pageQuerySchema>;
 
+/** The §7 list shape: one page of items and the total. */
 export function listSchema<T extends z.ZodType>(item: T) {
   return z.object({
     items: z.array(item),

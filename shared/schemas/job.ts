@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { sprayMethodIds } from '../finishing/material';
+import { pageFields, queryNumberSchema } from './common';
 
 export const jobStates = ['open', 'in-finish', 'finished', 'cancelled'] as const;
 export const jobStateSchema = z.enum(jobStates, { error: 'Unknown job state' });
@@ -45,13 +46,43 @@ export type Job = z.infer<typeof jobSchema>;
 export const jobListQuerySchema = z.object({
   q: z.string().trim().max(80).optional(),
   state: jobStateSchema.optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+  ...pageFields(50, 200),
 });
 export type JobListQuery = z.infer<typeof jobListQuerySchema>;
 
 export const estimateQuerySchema = z.object({
   method: z.enum(sprayMethodIds, { error: 'Unknown spray method' }).default('hvlp'),
-  transferEfficiencyPct: z.coerce.number().min(1).max(100).optional(),
+  transferEfficiencyPct: queryNumberSchema(1, 100).optional(),
 });
 export type EstimateQuery = z.infer<typeof estimateQuerySchema>;
+
+const mixQuantitiesSchema = z.object({ baseL: z.number(), hardenerL: z.number(), thinnerL: z.number(), totalL: z.number() });
+
+/** A job's material estimate (shared/finishing/estimate.ts) with the spray method it assumed. */
+export const estimateSchema = z.object({
+  areaM2: z.number(),
+  transferEfficiencyPct: z.number(),
+  method: z.string(),
+  steps: z.array(
+    z.object({
+      position: z.number().int(),
+      productId: z.number().int(),
+      productName: z.string(),
+      dryFilmUm: z.number(),
+      mixedL: z.number(),
+      readyToSprayL: z.number(),
+      mix: mixQuantitiesSchema,
+      vocG: z.number().nullable(),
+      cost: z.number().nullable(),
+    }),
+  ),
+  totals: z.object({
+    mixedL: z.number(),
+    readyToSprayL: z.number(),
+    vocG: z.number(),
+    cost: z.number(),
+    stepsWithoutVoc: z.number().int(),
+    stepsWithoutPrice: z.number().int(),
+  }),
+});
+export type Estimate = z.infer<typeof estimateSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pageFields } from './common';
 
 export const partFaces = ['one', 'both'] as const;
 export const partFacesSchema = z.enum(partFaces, { error: 'Faces is one or both' });
@@ -66,6 +67,5 @@ export const csvTemplateHeaders = ['label', 'kind', 'lengthMm', 'widthMm', 'thic
 
 /** A job's parts come in large pages: a kitchen is a few hundred parts, and the tag sheet prints them all. */
 export const partListQuerySchema = z.object({
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(1000).default(500),
+  ...pageFields(500, 1000),
 });

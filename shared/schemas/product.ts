@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { dryingTableSchema, type DryingRow } from '../finishing/drying-row-schema';
-import { listSchema } from './common';
+import { listSchema, pageFields } from './common';
 
 export const productKinds = ['primer', 'sealer', 'undercoat', 'topcoat', 'stain', 'clear'] as const;
 export const productKindSchema = z.enum(productKinds, { error: 'Choose what kind of product this is' });
@@ -151,7 +151,6 @@ export const productListQuerySchema = z.object({
   q: z.string().trim().max(80).optional(),
   sort: z.enum(productSortFields).default('name'),
   dir: z.enum(['asc', 'desc']).default('asc'),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(200).default(25),
+  ...pageFields(25, 200),
 });
 export type ProductListQuery = z.infer<typeof productListQuerySchema>;

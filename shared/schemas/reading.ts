@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { isoInstantSchema } from './common';
+import { idSchema, isoInstantSchema, pageFields } from './common';
+import { siteFilterFields } from './site';
 
 export const createReadingSchema = z
   .object({
@@ -27,8 +28,8 @@ export const readingSchema = z.object({
 export type Reading = z.infer<typeof readingSchema>;
 
 export const readingQuerySchema = z.object({
-  boothId: z.coerce.number().int().positive().optional(),
-  rackId: z.coerce.number().int().positive().optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(500).default(50),
+  boothId: idSchema.optional(),
+  rackId: idSchema.optional(),
+  ...pageFields(50, 500),
+  ...siteFilterFields,
 });

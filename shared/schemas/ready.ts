@@ -1,9 +1,12 @@
 import { z } from 'zod';
 import { readinessStates } from '../finishing/readiness';
+import { idSchema } from './common';
+import { siteFilterFields } from './site';
 
 export const readyQuerySchema = z.object({
-  jobId: z.coerce.number().int().positive().optional(),
-  rackId: z.coerce.number().int().positive().optional(),
+  jobId: idSchema.optional(),
+  rackId: idSchema.optional(),
+  ...siteFilterFields,
   state: z.enum(readinessStates).optional(),
 });
 

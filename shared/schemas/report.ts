@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idSchema } from './common';
 
 export { reworkReasonLabels, reworkReasons, type ReworkReason } from './coat';
 
@@ -14,7 +15,7 @@ const rangeFields = {
   /** `csv` answers with a CSV file of the report's table instead of JSON. */
   format: z.enum(['json', 'csv']).default('json'),
   /** One site's figures; an admin may pick any site (or none for the whole group), everyone else gets their own. */
-  siteId: z.coerce.number().int().positive().optional(),
+  siteId: idSchema.optional(),
 };
 
 function checkRange(value: { from: string; to: string }, ctx: z.RefinementCtx) {
@@ -23,7 +24,7 @@ function checkRange(value: { from: string; to: string }, ctx: z.RefinementCtx) {
   else if (days >= maxReportDays) ctx.addIssue({ code: 'custom', path: ['to'], message: `A report covers at most ${maxReportDays} days; shorten the range` });
 }
 
-const optionalId = z.coerce.number().int().positive().optional();
+const optionalId = idSchema.optional();
 
 export const reportRangeQuerySchema = z.object(rangeFields).superRefine(checkRange);
 export type ReportRangeQuery = z.infer<typeof reportRangeQuerySchema>;
@@ -35,7 +36,7 @@ export const areaGroupings = ['product-kind', 'job'] as const;
 export const areaSprayedQuerySchema = z.object({ ...rangeFields, groupBy: z.enum(areaGroupings).default('product-kind') }).superRefine(checkRange);
 export type AreaSprayedQuery = z.infer<typeof areaSprayedQuerySchema>;
 
-export const conditionsQuerySchema = z.object({ ...rangeFields, boothId: z.coerce.number({ error: 'Choose a booth' }).int().positive() }).superRefine(checkRange);
+export const conditionsQuerySchema = z.object({ ...rangeFields, boothId: idSchema }).superRefine(checkRange);
 export type ConditionsQuery = z.infer<typeof conditionsQuerySchema>;
 
 export const materialQuerySchema = z.object({ ...rangeFields, jobId: optionalId }).superRefine(checkRange);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idSchema } from './common';
 
 /** A workshop of the group: booths, racks and people belong to one. */
 export const siteFieldsSchema = z.object({
@@ -20,4 +21,5 @@ export type Site = z.infer<typeof siteSchema>;
 export const siteIdSchema = z.number({ error: 'Choose a site' }).int().positive('Choose a site');
 
 /** `?siteId=` on lists and reports: an admin may pick a site; everyone else sees their own. */
-export const siteFilterSchema = z.object({ siteId: z.coerce.number().int().positive().optional() });
+export const siteFilterFields = { siteId: idSchema.optional() };
+export const siteFilterSchema = z.object(siteFilterFields);

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { checklistResultSchema, checklistSchema } from './checklist';
-import { isoInstantSchema } from './common';
+import { idSchema, isoInstantSchema, pageFields } from './common';
+import { siteFilterFields } from './site';
+import { chemistrySchema, hazardSchema } from './product';
 
 export const spraySessionStates = ['planned', 'checking', 'spraying', 'clearing', 'done', 'cancelled'] as const;
 export const spraySessionStateSchema = z.enum(spraySessionStates, { error: 'Unknown spray session state' });
@@ -57,9 +59,9 @@ export type UpdateSpraySessionInput = z.infer<typeof updateSpraySessionSchema>;
 export const spraySessionQuerySchema = z.object({
   from: isoInstantSchema.optional(),
   to: isoInstantSchema.optional(),
-  boothId: z.coerce.number().int().positive().optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(1000).default(500),
+  boothId: idSchema.optional(),
+  ...pageFields(500, 1000),
+  ...siteFilterFields,
 });
 export type SpraySessionQuery = z.infer<typeof spraySessionQuerySchema>;
 
@@ -128,3 +130,10 @@ export const spraySessionSchema = z.object({
   updatedAt: z.string(),
 });
 export type SpraySession = z.infer<typeof spraySessionSchema>;
+
+/** The safety cautions of one spray session, worked out on the server for every role. */
+export const spraySessionCautionsSchema = z.object({
+  products: z.array(z.object({ name: z.string(), chemistry: chemistrySchema, hazards: z.array(hazardSchema) })),
+  cautions: z.array(z.object({ code: z.string(), title: z.string(), message: z.string() })),
+});
+export type SpraySessionCautions = z.infer<typeof spraySessionCautionsSchema>;

@@ -25,7 +25,7 @@ export async function startTestApp(options: { seed?: boolean; clock?: Clock; log
   const config = { ...parseConfig({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: String(options.loginRateLimit ?? 50), UPLOAD_DIR: database.uploadDir }), database: database.config };
   const dataSource = await openDataSource(database.config, { migrate: true });
   if (options.seed !== false) await seedDemoShop(dataSource, { uploadDir: config.uploadDir });
-  const build = () => createApp({ dataSource, config, sessionSecret: testSecret, clock: options.clock });
+  const build = () => createApp({ dataSource, config, signInSecret: testSecret, clock: options.clock });
   return {
     app: build(),
     dataSource,

@@ -31,4 +31,8 @@ export class AuditEntryEntity {
 
   @Column({ type: 'simple-json', nullable: true })
   changes: Record<string, unknown> | null;
+
+  /** The site the entry is about; null for group-wide things (jobs, data sheets, settings). */
+  @Column({ type: 'integer', nullable: true })
+  siteId: number | null;
 }

@@ -1,7 +1,7 @@
-import type { DataSource } from 'typeorm';
+import type { SiteData } from '../../data/site-data';
 import type { AreaSprayedQuery, AreaSprayedReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, inSite, isCurrentCoat, num, round } from './sql';
+import { Statement, inSite, isCurrentCoat, num, round } from './sql';
 
 type Row = { week_start: string; group_key: unknown; group_label: string; coats: unknown; area_m2: unknown };
 
@@ -11,10 +11,10 @@ const grouping = {
 } as const;
 
 /** Coated area of every part each current coat covered, per week of the shop's calendar. */
-export async function areaSprayedReport(dataSource: DataSource, query: AreaSprayedQuery, timeZone: string): Promise<AreaSprayedReport> {
+export async function areaSprayedReport(data: SiteData, query: AreaSprayedQuery, timeZone: string): Promise<AreaSprayedReport> {
   const buckets = bucketsFor(query.from, query.to, timeZone, 'week');
   const range = shopRange(query.from, query.to, timeZone);
-  const sql = new Statement(dialectOf(dataSource));
+  const sql = new Statement(data.sql.dialect);
   const group = grouping[query.groupBy];
   const text = `
     WITH ${sql.bucketValues(buckets)},
@@ -31,7 +31,7 @@ export async function areaSprayedReport(dataSource: DataSource, query: AreaSpray
       ${group.join}
     GROUP BY b.label, ${group.key}, ${group.label}
     ORDER BY b.label, ${group.label}`;
-  const rows: Row[] = await dataSource.query(text, sql.params);
+  const rows: Row[] = await data.sql.query(text, sql.params);
   return {
     from: query.from,
     to: query.to,

@@ -1,8 +1,7 @@
-import type { DataSource } from 'typeorm';
+import type { SiteData } from '../../data/site-data';
 import type { BoothUseQuery, BoothUseReport } from '../../../shared/schemas/report';
-import { BoothEntity } from '../../db/entities/booth.entity';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, inSite, isCurrentCoat, num, round } from './sql';
+import { Statement, inSite, isCurrentCoat, num, round } from './sql';
 
 type Row = { week_start: string; booth_id: number; sessions: unknown; booked_hours: unknown; sprayed_hours: unknown };
 
@@ -10,10 +9,10 @@ type Row = { week_start: string; booth_id: number; sessions: unknown; booked_hou
  * Booked hours are the sessions' slots; sprayed hours run from the checklist letting spraying
  * start (or the first coat) to clearing (or the last coat). Sessions count in the week they start.
  */
-export async function boothUseReport(dataSource: DataSource, query: BoothUseQuery, timeZone: string): Promise<BoothUseReport> {
+export async function boothUseReport(data: SiteData, query: BoothUseQuery, timeZone: string): Promise<BoothUseReport> {
   const buckets = bucketsFor(query.from, query.to, timeZone, 'week');
   const range = shopRange(query.from, query.to, timeZone);
-  const sql = new Statement(dialectOf(dataSource));
+  const sql = new Statement(data.sql.dialect);
   const coatTime = (fn: 'MIN' | 'MAX') => `(SELECT ${fn}(c.sprayed_at) FROM coats c WHERE c.spray_session_id = ss.id AND ${isCurrentCoat('c')})`;
   const text = `
     WITH ${sql.bucketValues(buckets)},
@@ -31,8 +30,8 @@ export async function boothUseReport(dataSource: DataSource, query: BoothUseQuer
       SUM(CASE WHEN s.spray_to > s.spray_from THEN ${sql.hoursBetween('s.spray_from', 's.spray_to')} ELSE 0 END) AS sprayed_hours
     FROM s JOIN b ON s.start_at >= b.starts_at AND s.start_at < b.ends_at
     GROUP BY b.label, s.booth_id`;
-  const rows: Row[] = await dataSource.query(text, sql.params);
-  const booths = await dataSource.getRepository(BoothEntity).find({ where: { ...(query.boothId ? { id: query.boothId } : {}), ...(query.siteId ? { siteId: query.siteId } : {}) }, order: { name: 'ASC' } });
+  const rows: Row[] = await data.sql.query(text, sql.params);
+  const booths = await data.booths.find({ where: { ...(query.boothId ? { id: query.boothId } : {}), ...(query.siteId ? { siteId: query.siteId } : {}) }, order: { name: 'ASC' } });
   const found = new Map(rows.map((r) => [`${r.week_start}|${Number(r.booth_id)}`, r]));
   // Every booth gets every week, so an idle week shows as a zero rather than a gap.
   return {

@@ -1,11 +1,10 @@
-import type { DataSource } from 'typeorm';
+import type { SiteData } from '../../data/site-data';
 import { conditionMargins } from '../../../shared/finishing/conditions';
 import type { ConditionsQuery, ConditionsReport } from '../../../shared/schemas/report';
 import { outsideLimitReasons } from '../../../shared/schemas/report';
-import { BoothEntity } from '../../db/entities/booth.entity';
 import { notFound } from '../../lib/app-error';
 import { bucketsFor, shopRange, type Bucket } from './buckets';
-import { Statement, dialectOf, isCurrentCoat, num, round } from './sql';
+import { Statement, isCurrentCoat, num, round } from './sql';
 
 const marginC = conditionMargins.stopBelowC;
 const hourlyUpToDays = 7;
@@ -17,8 +16,8 @@ function boothCoats(sql: Statement, boothId: number, range: { startsAt: string; 
 }
 
 /** Air, RH and the worst dew-point margin per bucket, from sensor/typed readings and the coats' own records. */
-async function conditionPoints(dataSource: DataSource, boothId: number, buckets: Bucket[], range: { startsAt: string; endsAt: string }) {
-  const sql = new Statement(dialectOf(dataSource));
+async function conditionPoints(data: SiteData, boothId: number, buckets: Bucket[], range: { startsAt: string; endsAt: string }) {
+  const sql = new Statement(data.sql.dialect);
   const text = `
     WITH ${sql.bucketValues(buckets)},
     m AS (
@@ -30,15 +29,15 @@ async function conditionPoints(dataSource: DataSource, boothId: number, buckets:
     SELECT b.label AS at, COUNT(*) AS readings, AVG(m.air_temp_c) AS air, AVG(m.relative_humidity_pct) AS rh, MIN(m.margin) AS margin
     FROM m JOIN b ON m.at >= b.starts_at AND m.at < b.ends_at
     GROUP BY b.label ORDER BY b.label`;
-  const rows: { at: string; readings: unknown; air: unknown; rh: unknown; margin: unknown }[] = await dataSource.query(text, sql.params);
+  const rows: { at: string; readings: unknown; air: unknown; rh: unknown; margin: unknown }[] = await data.sql.query(text, sql.params);
   return rows.map((r) => ({ at: r.at, readings: num(r.readings), airTempC: round(num(r.air), 1), relativeHumidityPct: round(num(r.rh), 1), dewPointMarginC: round(num(r.margin), 1) }));
 }
 
-async function productLimits(dataSource: DataSource, boothId: number, range: { startsAt: string; endsAt: string }) {
-  const sql = new Statement(dialectOf(dataSource));
+async function productLimits(data: SiteData, boothId: number, range: { startsAt: string; endsAt: string }) {
+  const sql = new Statement(data.sql.dialect);
   const text = `SELECT DISTINCT pr.id, pr.name, pr.min_application_temp_c, pr.max_relative_humidity_pct
     FROM (${boothCoats(sql, boothId, range)}) bc JOIN products pr ON pr.id = bc.product_id ORDER BY pr.name`;
-  const rows: { id: unknown; name: string; min_application_temp_c: unknown; max_relative_humidity_pct: unknown }[] = await dataSource.query(text, sql.params);
+  const rows: { id: unknown; name: string; min_application_temp_c: unknown; max_relative_humidity_pct: unknown }[] = await data.sql.query(text, sql.params);
   const orNull = (v: unknown) => (v === null || v === undefined ? null : num(v));
   return rows.map((r) => ({ productId: num(r.id), productName: r.name, minApplicationTempC: orNull(r.min_application_temp_c), maxRelativeHumidityPct: orNull(r.max_relative_humidity_pct) }));
 }
@@ -51,15 +50,15 @@ const reasonTests: Record<(typeof outsideLimitReasons)[number], string> = {
   'dew-point-margin': `bc.surface_temp_c - bc.dew_point_c < ${marginC}`,
 };
 
-async function coatsOutside(dataSource: DataSource, boothId: number, range: { startsAt: string; endsAt: string }) {
-  const sql = new Statement(dialectOf(dataSource));
+async function coatsOutside(data: SiteData, boothId: number, range: { startsAt: string; endsAt: string }) {
+  const sql = new Statement(data.sql.dialect);
   const flags = outsideLimitReasons.map((reason, i) => `CASE WHEN ${reasonTests[reason]} THEN 1 ELSE 0 END AS f${i}`).join(', ');
   const text = `
     SELECT bc.id, bc.sprayed_at, bc.product_id, pr.name, bc.air_temp_c, bc.surface_temp_c, bc.relative_humidity_pct, bc.surface_temp_c - bc.dew_point_c AS margin, ${flags}
     FROM (${boothCoats(sql, boothId, range)}) bc JOIN products pr ON pr.id = bc.product_id
     WHERE ${outsideLimitReasons.map((r) => `(${reasonTests[r]})`).join(' OR ')}
     ORDER BY bc.sprayed_at, bc.id`;
-  const rows: Record<string, unknown>[] = await dataSource.query(text, sql.params);
+  const rows: Record<string, unknown>[] = await data.sql.query(text, sql.params);
   return rows.map((r) => ({
     coatId: num(r.id),
     sprayedAt: String(r.sprayed_at),
@@ -73,15 +72,15 @@ async function coatsOutside(dataSource: DataSource, boothId: number, range: { st
   }));
 }
 
-async function coatCount(dataSource: DataSource, boothId: number, range: { startsAt: string; endsAt: string }): Promise<number> {
-  const sql = new Statement(dialectOf(dataSource));
-  const [row]: { n: unknown }[] = await dataSource.query(`SELECT COUNT(*) AS n FROM (${boothCoats(sql, boothId, range)}) bc`, sql.params);
+async function coatCount(data: SiteData, boothId: number, range: { startsAt: string; endsAt: string }): Promise<number> {
+  const sql = new Statement(data.sql.dialect);
+  const [row]: { n: unknown }[] = await data.sql.query(`SELECT COUNT(*) AS n FROM (${boothCoats(sql, boothId, range)}) bc`, sql.params);
   return num(row?.n);
 }
 
 /** Hourly for a week or less, else per shop day. */
-export async function conditionsReport(dataSource: DataSource, query: ConditionsQuery, timeZone: string): Promise<ConditionsReport> {
-  const booth = await dataSource.getRepository(BoothEntity).findOneBy({ id: query.boothId });
+export async function conditionsReport(data: SiteData, query: ConditionsQuery, timeZone: string): Promise<ConditionsReport> {
+  const booth = await data.booths.findOneBy({ id: query.boothId });
   if (!booth || (query.siteId !== undefined && booth.siteId !== query.siteId)) throw notFound('Booth');
   const range = shopRange(query.from, query.to, timeZone);
   const days = (Date.parse(query.to) - Date.parse(query.from)) / 86_400_000 + 1;
@@ -95,11 +94,11 @@ export async function conditionsReport(dataSource: DataSource, query: Conditions
     boothId: booth.id,
     boothName: booth.name,
     bucket,
-    points: await conditionPoints(dataSource, booth.id, buckets, range),
-    limits: await productLimits(dataSource, booth.id, range),
+    points: await conditionPoints(data, booth.id, buckets, range),
+    limits: await productLimits(data, booth.id, range),
     minDewPointMarginC: marginC,
-    coatCount: await coatCount(dataSource, booth.id, range),
-    coatsOutside: await coatsOutside(dataSource, booth.id, range),
+    coatCount: await coatCount(data, booth.id, range),
+    coatsOutside: await coatsOutside(data, booth.id, range),
   };
 }
 

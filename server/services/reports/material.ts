@@ -1,10 +1,10 @@
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
+import type { SiteData } from '../../data/site-data';
+import type { JobEntity } from '../../db/entities/job.entity';
 import type { MaterialQuery, MaterialReport } from '../../../shared/schemas/report';
-import { JobEntity } from '../../db/entities/job.entity';
-import { ProductEntity } from '../../db/entities/product.entity';
 import type { EstimateService } from '../estimates';
 import { shopRange } from './buckets';
-import { Statement, dialectOf, inSite, isCurrentCoat, num, round } from './sql';
+import { Statement, inSite, isCurrentCoat, num, round } from './sql';
 
 type UsedRow = { job_id: unknown; product_id: unknown; used_l: unknown };
 
@@ -13,9 +13,9 @@ type UsedRow = { job_id: unknown; product_id: unknown; used_l: unknown };
  * product, not to a job, so each session's pots of a product are shared among the jobs its
  * coats of that product covered, in proportion to the coated area.
  */
-async function usedLitres(dataSource: DataSource, query: MaterialQuery, timeZone: string): Promise<UsedRow[]> {
+async function usedLitres(data: SiteData, query: MaterialQuery, timeZone: string): Promise<UsedRow[]> {
   const range = shopRange(query.from, query.to, timeZone);
-  const sql = new Statement(dialectOf(dataSource));
+  const sql = new Statement(data.sql.dialect);
   // Placeholders are written in text order: better-sqlite3 binds `?` by position.
   const jobFilter = () => (query.jobId ? `AND p.job_id = ${sql.param(query.jobId)}` : '');
   const text = `
@@ -45,13 +45,13 @@ async function usedLitres(dataSource: DataSource, query: MaterialQuery, timeZone
       JOIN mixed ON mixed.sid = share.sid AND mixed.pid = share.pid
     WHERE total.area > 0 AND share.jid IN (SELECT job_id FROM jobs_in_range)
     GROUP BY share.jid, share.pid`;
-  return dataSource.query(text, sql.params);
+  return data.sql.query(text, sql.params);
 }
 
-async function jobsInRange(dataSource: DataSource, query: MaterialQuery, timeZone: string): Promise<number[]> {
+async function jobsInRange(data: SiteData, query: MaterialQuery, timeZone: string): Promise<number[]> {
   const range = shopRange(query.from, query.to, timeZone);
-  const sql = new Statement(dialectOf(dataSource));
-  const rows: { job_id: unknown }[] = await dataSource.query(
+  const sql = new Statement(data.sql.dialect);
+  const rows: { job_id: unknown }[] = await data.sql.query(
     `SELECT DISTINCT p.job_id FROM coats c JOIN coat_parts cp ON cp.coat_id = c.id JOIN parts p ON p.id = cp.part_id
      WHERE c.sprayed_at >= ${sql.param(range.startsAt)} AND c.sprayed_at < ${sql.param(range.endsAt)} AND ${isCurrentCoat('c')}
      ${query.jobId ? `AND p.job_id = ${sql.param(query.jobId)}` : ''} ${inSite(sql, 'c.spray_session_id', query.siteId)}`,
@@ -70,17 +70,17 @@ async function estimatedLitres(estimates: EstimateService, job: JobEntity): Prom
 }
 
 /** Jobs with a coat in the range, each product's estimate beside the litres mixed for it. */
-export async function materialReport(dataSource: DataSource, estimates: EstimateService, query: MaterialQuery, timeZone: string): Promise<MaterialReport> {
-  const jobIds = await jobsInRange(dataSource, query, timeZone);
-  const used = new Map((await usedLitres(dataSource, query, timeZone)).map((r) => [`${num(r.job_id)}|${num(r.product_id)}`, num(r.used_l)]));
-  const jobs = await dataSource.getRepository(JobEntity).find({ where: { id: In(jobIds) }, order: { reference: 'ASC' } });
+export async function materialReport(data: SiteData, estimates: EstimateService, query: MaterialQuery, timeZone: string): Promise<MaterialReport> {
+  const jobIds = await jobsInRange(data, query, timeZone);
+  const used = new Map((await usedLitres(data, query, timeZone)).map((r) => [`${num(r.job_id)}|${num(r.product_id)}`, num(r.used_l)]));
+  const jobs = await data.jobs.find({ where: { id: In(jobIds) }, order: { reference: 'ASC' } });
   const cells: { jobId: number; productId: number; estimatedL: number; usedL: number }[] = [];
   for (const job of jobs) {
     const estimated = await estimatedLitres(estimates, job);
     const productIds = new Set([...estimated.keys(), ...[...used.keys()].filter((k) => k.startsWith(`${job.id}|`)).map((k) => Number(k.split('|')[1]))]);
     for (const productId of productIds) cells.push({ jobId: job.id, productId, estimatedL: estimated.get(productId) ?? 0, usedL: used.get(`${job.id}|${productId}`) ?? 0 });
   }
-  const products = new Map((await dataSource.getRepository(ProductEntity).findBy({ id: In([...new Set(cells.map((c) => c.productId))]) })).map((p) => [p.id, p.name]));
+  const products = new Map((await data.products.findBy({ id: In([...new Set(cells.map((c) => c.productId))]) })).map((p) => [p.id, p.name]));
   const jobById = new Map(jobs.map((j) => [j.id, j]));
   const rows = cells.map((c) => ({
     jobId: c.jobId,

@@ -1,7 +1,7 @@
-import type { DataSource } from 'typeorm';
+import type { SiteData } from '../../data/site-data';
 import type { ReportRangeQuery, ReworkReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, inSite, isCurrentCoat, num } from './sql';
+import { Statement, inSite, isCurrentCoat, num } from './sql';
 
 type Row = { month: string; kind: 'corrected' | 'repeated'; reason: string; n: unknown };
 
@@ -10,9 +10,9 @@ type Row = { month: string; kind: 'corrected' | 'repeated'; reason: string; n: u
  * coats of a step that one of their parts already had from an earlier current coat, or that the
  * sprayer marked as a re-spray, by the reason given.
  */
-export async function reworkReport(dataSource: DataSource, query: ReportRangeQuery, timeZone: string): Promise<ReworkReport> {
+export async function reworkReport(data: SiteData, query: ReportRangeQuery, timeZone: string): Promise<ReworkReport> {
   const range = shopRange(query.from, query.to, timeZone);
-  const sql = new Statement(dialectOf(dataSource));
+  const sql = new Statement(data.sql.dialect);
   const buckets = sql.bucketValues(bucketsFor(query.from, query.to, timeZone, 'month'));
   const inRange = (alias: string) => `${alias}.sprayed_at >= ${sql.param(range.startsAt)} AND ${alias}.sprayed_at < ${sql.param(range.endsAt)} ${inSite(sql, `${alias}.spray_session_id`, query.siteId)}`;
   const sprayedBefore = `EXISTS (
@@ -31,9 +31,9 @@ export async function reworkReport(dataSource: DataSource, query: ReportRangeQue
     FROM r JOIN b ON r.sprayed_at >= b.starts_at AND r.sprayed_at < b.ends_at
     GROUP BY b.label, r.kind, r.reason
     ORDER BY b.label, r.kind, r.reason`;
-  const rows: Row[] = await dataSource.query(text, sql.params);
+  const rows: Row[] = await data.sql.query(text, sql.params);
   const count = new Statement(sql.dialect);
-  const [total]: { n: unknown }[] = await dataSource.query(
+  const [total]: { n: unknown }[] = await data.sql.query(
     `SELECT COUNT(*) AS n FROM coats c WHERE c.sprayed_at >= ${count.param(range.startsAt)} AND c.sprayed_at < ${count.param(range.endsAt)} AND ${isCurrentCoat('c')} ${inSite(count, 'c.spray_session_id', query.siteId)}`,
     count.params,
   );

@@ -1,13 +1,13 @@
-import type { DataSource } from 'typeorm';
+import type { SiteData } from '../../data/site-data';
 import type { ReportRangeQuery, SolventReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, dialectOf, inSite, num, round } from './sql';
+import { Statement, inSite, num, round } from './sql';
 
 type Row = { month: string; litres: unknown; voc_g: unknown; litres_without_voc: unknown };
 
 /** Litres mixed per shop month, all components, and the VOC they carry (litres × VOC g/L as applied). */
-async function monthlyMixes(dataSource: DataSource, from: string, to: string, timeZone: string, siteId: number | undefined): Promise<Map<string, Row>> {
-  const sql = new Statement(dialectOf(dataSource));
+async function monthlyMixes(data: SiteData, from: string, to: string, timeZone: string, siteId: number | undefined): Promise<Map<string, Row>> {
+  const sql = new Statement(data.sql.dialect);
   const range = shopRange(from, to, timeZone);
   const litres = '(m.base_l + m.hardener_l + m.thinner_l)';
   const text = `
@@ -20,7 +20,7 @@ async function monthlyMixes(dataSource: DataSource, from: string, to: string, ti
       JOIN products pr ON pr.id = m.product_id
     WHERE m.mixed_at >= ${sql.param(range.startsAt)} AND m.mixed_at < ${sql.param(range.endsAt)} ${inSite(sql, 'm.spray_session_id', siteId)}
     GROUP BY b.label`;
-  const rows: Row[] = await dataSource.query(text, sql.params);
+  const rows: Row[] = await data.sql.query(text, sql.params);
   return new Map(rows.map((r) => [r.month, r]));
 }
 
@@ -29,9 +29,9 @@ async function monthlyMixes(dataSource: DataSource, from: string, to: string, ti
  * from the 1st of January of the range's first year so a range starting mid-year still shows
  * the year's true total.
  */
-export async function solventReport(dataSource: DataSource, query: ReportRangeQuery, timeZone: string, thresholdKg: number): Promise<SolventReport> {
+export async function solventReport(data: SiteData, query: ReportRangeQuery, timeZone: string, thresholdKg: number): Promise<SolventReport> {
   const yearStart = `${query.from.slice(0, 4)}-01-01`;
-  const byMonth = await monthlyMixes(dataSource, yearStart, query.to, timeZone, query.siteId);
+  const byMonth = await monthlyMixes(data, yearStart, query.to, timeZone, query.siteId);
   const rows: SolventReport['rows'] = [];
   let running = 0;
   for (const { label } of bucketsFor(yearStart, query.to, timeZone, 'month')) {

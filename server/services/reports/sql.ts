@@ -1,10 +1,4 @@
-import type { DataSource } from 'typeorm';
-
-export type Dialect = 'sqlite' | 'postgres';
-
-export function dialectOf(dataSource: DataSource): Dialect {
-  return dataSource.options.type === 'postgres' ? 'postgres' : 'sqlite';
-}
+import type { Dialect } from '../../data/site-data';
 
 /**
  * Collects parameters for one raw statement and writes the placeholders each driver expects
@@ -37,9 +31,9 @@ export class Statement {
 }
 
 /** Rows whose spray session ran in a booth of the site; nothing when the report covers every site. */
-export function inSite(sql: Statement, sessionIdColumn: string, siteId: number | undefined): string {
+export function inSite(sql: Statement, spraySessionIdColumn: string, siteId: number | undefined): string {
   if (siteId === undefined) return '';
-  return `AND ${sessionIdColumn} IN (SELECT st.id FROM spray_sessions st JOIN booths bs ON bs.id = st.booth_id WHERE bs.site_id = ${sql.param(siteId)})`;
+  return `AND ${spraySessionIdColumn} IN (SELECT st.id FROM spray_sessions st JOIN booths bs ON bs.id = st.booth_id WHERE bs.site_id = ${sql.param(siteId)})`;
 }
 
 /** A coat version that no correction has replaced. */

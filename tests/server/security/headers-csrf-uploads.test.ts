@@ -32,7 +32,7 @@ afterAll(async () => {
 
 /** Another app on the same database, as a differently configured deployment would be. */
 function appWith(config: Partial<AppConfig>, extra: { clientDir?: string; clock?: { now(): Date } } = {}): Express {
-  return createApp({ dataSource: ctx.dataSource, config: { ...ctx.config, ...config }, sessionSecret: testSecret, logger: pino({ level: 'silent' }), ...extra });
+  return createApp({ dataSource: ctx.dataSource, config: { ...ctx.config, ...config }, signInSecret: testSecret, logger: pino({ level: 'silent' }), ...extra });
 }
 
 const sessionCookie = (res: Response) => ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('bw.sid='));

@@ -1,5 +1,5 @@
 import type { Express } from 'express';
-import type { Permission, Role } from '../../../shared/permissions';
+import type { Role } from '../../../shared/permissions';
 import { pdfBytes, type Fixtures } from './fixtures';
 
 export const audiences = ['signedOut', 'admin', 'lead', 'sprayer', 'assembler'] as const;
@@ -17,12 +17,14 @@ export interface RequestSpec {
   ownAgent?: boolean;
 }
 
+/**
+ * How to call one route of the registry (server/registry/api-routes.ts) and what each audience
+ * gets. Which routes exist and what each needs come from the registry, not from here.
+ */
 export interface RouteRow {
   method: Method;
-  /** As the Express router registers it, without a trailing slash. */
+  /** As the registry declares it. */
   path: string;
-  /** What the route asks for; `public` answers everybody, `signed-in` any role. */
-  permission: Permission | 'public' | 'signed-in';
   /** The answer for each audience; anything but a 2xx for an allowed role says why in `note`. */
   expected: Record<Audience, number>;
   request(fx: Fixtures, audience: Audience): RequestSpec | Promise<RequestSpec>;
@@ -35,10 +37,9 @@ function s(signedOut: number, admin: number, lead: number, sprayer: number, asse
 }
 
 const all = (status: number) => s(status, status, status, status, status);
-const row = (method: Method, path: string, permission: RouteRow['permission'], expected: Record<Audience, number>, request: RouteRow['request'], note?: string): RouteRow => ({
+const row = (method: Method, path: string, expected: Record<Audience, number>, request: RouteRow['request'], note?: string): RouteRow => ({
   method,
   path,
-  permission,
   expected,
   request,
   note,
@@ -57,89 +58,89 @@ const reportRange = 'from=2027-05-01&to=2027-06-30';
 const csv = 'label,kind,lengthMm,widthMm,thicknessMm,quantity,faces,edges\nShelf 1,shelf,800,300,18,1,both,yes\n';
 
 export const routeTable: RouteRow[] = [
-  row('GET', '/api/health', 'public', all(200), get('/api/health')),
-  row('GET', '/api/openapi.json', 'public', all(200), get('/api/openapi.json')),
-  row('GET', '/api/auth/csrf', 'public', all(200), get('/api/auth/csrf')),
-  row('POST', '/api/auth/login', 'public', all(200), (_fx, who) => ({ url: '/api/auth/login', body: { email: demoEmails[who === 'signedOut' ? 'assembler' : who], password: 'finish-demo-2026' }, ownAgent: true })),
-  row('POST', '/api/auth/logout', 'public', all(204), () => ({ url: '/api/auth/logout', ownAgent: true }), 'Signing out twice is harmless, so it needs no sign-in.'),
-  row('GET', '/api/auth/me', 'signed-in', s(401, 200, 200, 200, 200), get('/api/auth/me')),
-  row('PATCH', '/api/auth/me', 'signed-in', s(401, 200, 200, 200, 200), () => ({ url: '/api/auth/me', body: { units: 'metric' } })),
-  row('GET', '/api/users', 'users:read', s(401, 200, 403, 403, 403), get('/api/users')),
-  row('POST', '/api/users', 'users:write', s(401, 201, 403, 403, 403), (fx) => ({ url: '/api/users', body: { email: `matrix.${fx.next()}@larchmere.test`, name: 'Matrix Person', role: 'assembler', password: 'matrix-password-1' } })),
-  row('PATCH', '/api/users/:id', 'users:write', s(401, 200, 403, 403, 403), (fx) => ({ url: `/api/users/${fx.spareUserId}`, body: { name: 'Spare Person' } })),
-  row('GET', '/api/sites', 'sites:read', s(401, 200, 200, 200, 200), get('/api/sites')),
-  row('POST', '/api/sites', 'sites:write', s(401, 201, 403, 403, 403), (fx) => ({ url: '/api/sites', body: { name: `Matrix site ${fx.next()}` } })),
-  row('GET', '/api/sites/:id', 'sites:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/sites/${fx.siteId}` })),
-  row('PATCH', '/api/sites/:id', 'sites:write', s(401, 200, 403, 403, 403), (fx) => ({ url: `/api/sites/${fx.siteId}`, body: { name: 'Security test site' } })),
-  row('GET', '/api/booths', 'booths:read', s(401, 200, 200, 200, 200), get('/api/booths')),
-  row('POST', '/api/booths', 'booths:write', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/booths', body: { name: `Matrix booth ${fx.next()}`, kind: 'open-face', volumeM3: 40, extractionM3PerH: 12000 } })),
-  row('GET', '/api/booths/:id', 'booths:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/booths/${fx.boothId}` })),
-  row('PATCH', '/api/booths/:id', 'booths:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/booths/${fx.freeBoothId}`, body: { sprayRateM2PerH: 20 } })),
-  row('POST', '/api/booths/:id/sensor-token', 'booths:write', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/booths/${fx.freeBoothId}/sensor-token` })),
-  row('GET', '/api/racks', 'racks:read', s(401, 200, 200, 200, 200), get('/api/racks')),
-  row('POST', '/api/racks', 'racks:write', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/racks', body: { name: `Matrix rack ${fx.next()}` } })),
-  row('GET', '/api/racks/:id', 'racks:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/racks/${fx.rackId}` })),
-  row('PATCH', '/api/racks/:id', 'racks:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/racks/${fx.rackId}`, body: { dryingTempC: 24 } })),
-  row('GET', '/api/settings', 'settings:read', s(401, 200, 200, 200, 200), get('/api/settings')),
-  row('PATCH', '/api/settings', 'settings:write', s(401, 200, 403, 403, 403), () => ({ url: '/api/settings', body: { shopName: 'Larchmere Joinery' } })),
-  row('GET', '/api/audit', 'audit:read', s(401, 200, 200, 403, 403), get('/api/audit')),
-  row('GET', '/api/products', 'products:read', s(401, 200, 200, 200, 403), get('/api/products')),
-  row('POST', '/api/products', 'products:write', s(401, 201, 201, 403, 403), (fx) => ({
+  row('GET', '/api/health', all(200), get('/api/health')),
+  row('GET', '/api/openapi.json', all(200), get('/api/openapi.json')),
+  row('GET', '/api/auth/csrf', all(200), get('/api/auth/csrf')),
+  row('POST', '/api/auth/login', all(200), (_fx, who) => ({ url: '/api/auth/login', body: { email: demoEmails[who === 'signedOut' ? 'assembler' : who], password: 'finish-demo-2026' }, ownAgent: true })),
+  row('POST', '/api/auth/logout', all(204), () => ({ url: '/api/auth/logout', ownAgent: true }), 'Signing out twice is harmless, so it needs no sign-in.'),
+  row('GET', '/api/auth/me', s(401, 200, 200, 200, 200), get('/api/auth/me')),
+  row('PATCH', '/api/auth/me', s(401, 200, 200, 200, 200), () => ({ url: '/api/auth/me', body: { units: 'metric' } })),
+  row('GET', '/api/users', s(401, 200, 403, 403, 403), get('/api/users')),
+  row('POST', '/api/users', s(401, 201, 403, 403, 403), (fx) => ({ url: '/api/users', body: { email: `matrix.${fx.next()}@larchmere.test`, name: 'Matrix Person', role: 'assembler', password: 'matrix-password-1' } })),
+  row('PATCH', '/api/users/:id', s(401, 200, 403, 403, 403), (fx) => ({ url: `/api/users/${fx.spareUserId}`, body: { name: 'Spare Person' } })),
+  row('GET', '/api/sites', s(401, 200, 200, 200, 200), get('/api/sites')),
+  row('POST', '/api/sites', s(401, 201, 403, 403, 403), (fx) => ({ url: '/api/sites', body: { name: `Matrix site ${fx.next()}` } })),
+  row('GET', '/api/sites/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/sites/${fx.siteId}` })),
+  row('PATCH', '/api/sites/:id', s(401, 200, 403, 403, 403), (fx) => ({ url: `/api/sites/${fx.siteId}`, body: { name: 'Security test site' } })),
+  row('GET', '/api/booths', s(401, 200, 200, 200, 200), get('/api/booths')),
+  row('POST', '/api/booths', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/booths', body: { name: `Matrix booth ${fx.next()}`, kind: 'open-face', volumeM3: 40, extractionM3PerH: 12000 } })),
+  row('GET', '/api/booths/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/booths/${fx.boothId}` })),
+  row('PATCH', '/api/booths/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/booths/${fx.freeBoothId}`, body: { sprayRateM2PerH: 20 } })),
+  row('POST', '/api/booths/:id/sensor-token', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/booths/${fx.freeBoothId}/sensor-token` })),
+  row('GET', '/api/racks', s(401, 200, 200, 200, 200), get('/api/racks')),
+  row('POST', '/api/racks', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/racks', body: { name: `Matrix rack ${fx.next()}` } })),
+  row('GET', '/api/racks/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/racks/${fx.rackId}` })),
+  row('PATCH', '/api/racks/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/racks/${fx.rackId}`, body: { dryingTempC: 24 } })),
+  row('GET', '/api/settings', s(401, 200, 200, 200, 200), get('/api/settings')),
+  row('PATCH', '/api/settings', s(401, 200, 403, 403, 403), () => ({ url: '/api/settings', body: { shopName: 'Larchmere Joinery' } })),
+  row('GET', '/api/audit', s(401, 200, 200, 403, 403), get('/api/audit')),
+  row('GET', '/api/products', s(401, 200, 200, 200, 403), get('/api/products')),
+  row('POST', '/api/products', s(401, 201, 201, 403, 403), (fx) => ({
     url: '/api/products',
     body: { name: `Matrix clear ${fx.next()}`, kind: 'clear', chemistry: 'water-borne', volumeSolidsPct: 35, dryingTimes: [dryingRow] },
   })),
-  row('GET', '/api/products/:id', 'products:read', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/products/${fx.productId}` })),
-  row('PATCH', '/api/products/:id', 'products:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/products/${fx.productId}`, body: { makerRef: 'KP-200' } })),
-  row('POST', '/api/products/:id/lots', 'products:write', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/products/${fx.productId}/lots`, body: { lotNumber: `M-${fx.next()}` } })),
-  row('POST', '/api/products/:id/documents', 'products:write', s(401, 201, 201, 403, 403), (fx) => ({
+  row('GET', '/api/products/:id', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/products/${fx.productId}` })),
+  row('PATCH', '/api/products/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/products/${fx.productId}`, body: { makerRef: 'KP-200' } })),
+  row('POST', '/api/products/:id/lots', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/products/${fx.productId}/lots`, body: { lotNumber: `M-${fx.next()}` } })),
+  row('POST', '/api/products/:id/documents', s(401, 201, 201, 403, 403), (fx) => ({
     url: `/api/products/${fx.productId}/documents`,
     form: { fields: { kind: 'sds' }, file: { name: 'sheet.pdf', content: pdfBytes } },
   })),
-  row('GET', '/api/files/:id', 'signed-in', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/files/${fx.fileId}` })),
-  row('GET', '/api/finish-systems', 'finish-systems:read', s(401, 200, 200, 200, 200), get('/api/finish-systems')),
-  row('POST', '/api/finish-systems', 'finish-systems:write', s(401, 201, 201, 403, 403), (fx) => ({
+  row('GET', '/api/files/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/files/${fx.fileId}` })),
+  row('GET', '/api/finish-systems', s(401, 200, 200, 200, 200), get('/api/finish-systems')),
+  row('POST', '/api/finish-systems', s(401, 201, 201, 403, 403), (fx) => ({
     url: '/api/finish-systems',
     body: { name: `Matrix system ${fx.next()}`, steps: [{ kind: 'coat', productId: fx.productId, dryFilmUm: 40 }] },
   })),
-  row('GET', '/api/finish-systems/:id', 'finish-systems:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/finish-systems/${fx.finishSystemId}` })),
-  row('PATCH', '/api/finish-systems/:id', 'finish-systems:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/finish-systems/${fx.finishSystemId}`, body: { description: 'For the security tests' } })),
-  row('GET', '/api/jobs', 'jobs:read', s(401, 200, 200, 200, 200), get('/api/jobs')),
-  row('POST', '/api/jobs', 'jobs:write', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/jobs', body: { customer: 'Matrix Ltd', reference: `MX-${fx.next()}`, dueDate: '2027-07-01' } })),
-  row('GET', '/api/jobs/parts-template.csv', 'jobs:read', s(401, 200, 200, 200, 200), get('/api/jobs/parts-template.csv')),
-  row('GET', '/api/jobs/:id', 'jobs:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}` })),
-  row('PATCH', '/api/jobs/:id', 'jobs:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}`, body: { sheen: 'Satin 30' } })),
-  row('GET', '/api/jobs/:id/estimate', 'jobs:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}/estimate` })),
-  row('GET', '/api/jobs/:id/parts', 'jobs:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts` })),
-  row('POST', '/api/jobs/:id/parts', 'jobs:write', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts`, body: { label: `Filler ${fx.next()}`, lengthMm: 700, widthMm: 60, thicknessMm: 18 } })),
-  row('POST', '/api/jobs/:id/parts/import', 'jobs:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts/import`, form: { fields: { preview: 'true' }, file: { name: 'cut.csv', content: Buffer.from(csv) } } }), 'A preview: 200 and nothing saved.'),
-  row('GET', '/api/parts/by-tag/:tag', 'jobs:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts/by-tag/${fx.partTag}` })),
-  row('GET', '/api/parts/:id', 'jobs:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts/${fx.partId}` })),
-  row('PATCH', '/api/parts/:id', 'jobs:write', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/parts/${fx.partId}`, body: { kind: 'panel' } })),
-  row('POST', '/api/parts/:id/collect', 'parts:collect', s(401, 200, 200, 403, 200), (fx) => ({ url: `/api/parts/${fx.partId}/collect` })),
-  row('DELETE', '/api/parts/:id/collect', 'parts:collect', s(401, 200, 200, 403, 200), (fx) => ({ url: `/api/parts/${fx.partId}/collect` })),
-  row('GET', '/api/sprayers', 'spray-sessions:read', s(401, 200, 200, 200, 200), get('/api/sprayers')),
-  row('GET', '/api/spray-sessions', 'spray-sessions:read', s(401, 200, 200, 200, 200), get('/api/spray-sessions')),
-  row('POST', '/api/spray-sessions', 'spray-sessions:write', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/spray-sessions', body: { boothId: fx.freeBoothId, ...fx.freeSlot() } })),
-  row('GET', '/api/spray-sessions/:id', 'spray-sessions:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}` })),
-  row('PATCH', '/api/spray-sessions/:id', 'spray-sessions:run', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}`, body: { notes: 'Masking checked' } }), 'The sprayer runs this session, so may change its notes.'),
-  row('GET', '/api/spray-sessions/:id/cautions', 'spray-sessions:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/cautions` })),
-  row('GET', '/api/spray-sessions/:id/mixes', 'spray-sessions:read', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/mixes` })),
-  row('POST', '/api/spray-sessions/:id/mixes', 'coats:write', s(401, 201, 201, 201, 403), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/mixes`, body: { productId: fx.productId, wantedL: 1, tempC: 20 } })),
-  row('POST', '/api/planner/proposals', 'spray-sessions:write', s(401, 200, 200, 403, 403), (fx) => ({ url: '/api/planner/proposals', body: { jobIds: [fx.jobId], horizonDays: 2 } })),
-  row('POST', '/api/planner/accept', 'spray-sessions:write', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/planner/accept', body: { sessions: [{ boothId: fx.freeBoothId, ...fx.freeSlot() }] } })),
-  row('GET', '/api/today', 'today:read', s(401, 200, 200, 200, 403), get('/api/today'), 'The assembler’s day is the ready board.'),
-  row('GET', '/api/coats', 'coats:read', s(401, 200, 200, 200, 403), get('/api/coats')),
-  row('POST', '/api/coats', 'coats:write', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/coats', body: fx.coatBody() })),
-  row('GET', '/api/coats/:id', 'coats:read', s(401, 200, 200, 200, 403), async (fx) => ({ url: `/api/coats/${await fx.anyCoat()}` })),
-  row('POST', '/api/coats/:id/corrections', 'coats:write', s(401, 201, 201, 201, 403), async (fx) => ({ url: `/api/coats/${await fx.newCoat()}/corrections`, body: { reason: 'Wrong notes', notes: 'Corrected' } })),
-  row('GET', '/api/ready', 'ready:read', s(401, 200, 200, 200, 200), get('/api/ready')),
-  row('GET', '/api/readings', 'booths:read', s(401, 200, 200, 200, 200), get('/api/readings')),
-  row('POST', '/api/readings', 'readings:write', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/readings', body: { boothId: fx.boothId, airTempC: 19, relativeHumidityPct: 55 } })),
-  row('GET', '/api/events', 'signed-in', s(401, 200, 200, 200, 200), () => ({ url: '/api/events', stream: true })),
-  row('GET', '/api/notifications', 'signed-in', s(401, 200, 200, 200, 200), get('/api/notifications')),
-  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework'].map((report) => row('GET', `/api/reports/${report}`, 'reports:read', s(401, 200, 200, 403, 403), get(`/api/reports/${report}?${reportRange}`))),
-  row('GET', '/api/reports/conditions', 'reports:read', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/reports/conditions?${reportRange}&boothId=${fx.boothId}` })),
-  row('GET', '/api/mailbox', 'users:read', s(401, 404, 403, 403, 403), get('/api/mailbox'), 'Tests run without the development mailbox, so the admin gets 404 not_found.'),
+  row('GET', '/api/finish-systems/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/finish-systems/${fx.finishSystemId}` })),
+  row('PATCH', '/api/finish-systems/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/finish-systems/${fx.finishSystemId}`, body: { description: 'For the security tests' } })),
+  row('GET', '/api/jobs', s(401, 200, 200, 200, 200), get('/api/jobs')),
+  row('POST', '/api/jobs', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/jobs', body: { customer: 'Matrix Ltd', reference: `MX-${fx.next()}`, dueDate: '2027-07-01' } })),
+  row('GET', '/api/jobs/parts-template.csv', s(401, 200, 200, 200, 200), get('/api/jobs/parts-template.csv')),
+  row('GET', '/api/jobs/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}` })),
+  row('PATCH', '/api/jobs/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}`, body: { sheen: 'Satin 30' } })),
+  row('GET', '/api/jobs/:id/estimate', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}/estimate` })),
+  row('GET', '/api/jobs/:id/parts', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts` })),
+  row('POST', '/api/jobs/:id/parts', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts`, body: { label: `Filler ${fx.next()}`, lengthMm: 700, widthMm: 60, thicknessMm: 18 } })),
+  row('POST', '/api/jobs/:id/parts/import', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts/import`, form: { fields: { preview: 'true' }, file: { name: 'cut.csv', content: Buffer.from(csv) } } }), 'A preview: 200 and nothing saved.'),
+  row('GET', '/api/parts/by-tag/:tag', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts/by-tag/${fx.partTag}` })),
+  row('GET', '/api/parts/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts/${fx.partId}` })),
+  row('PATCH', '/api/parts/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/parts/${fx.partId}`, body: { kind: 'panel' } })),
+  row('POST', '/api/parts/:id/collect', s(401, 200, 200, 403, 200), (fx) => ({ url: `/api/parts/${fx.partId}/collect` })),
+  row('DELETE', '/api/parts/:id/collect', s(401, 200, 200, 403, 200), (fx) => ({ url: `/api/parts/${fx.partId}/collect` })),
+  row('GET', '/api/sprayers', s(401, 200, 200, 200, 200), get('/api/sprayers')),
+  row('GET', '/api/spray-sessions', s(401, 200, 200, 200, 200), get('/api/spray-sessions')),
+  row('POST', '/api/spray-sessions', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/spray-sessions', body: { boothId: fx.freeBoothId, ...fx.freeSlot() } })),
+  row('GET', '/api/spray-sessions/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}` })),
+  row('PATCH', '/api/spray-sessions/:id', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}`, body: { notes: 'Masking checked' } }), 'The sprayer runs this session, so may change its notes.'),
+  row('GET', '/api/spray-sessions/:id/cautions', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/cautions` })),
+  row('GET', '/api/spray-sessions/:id/mixes', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/mixes` })),
+  row('POST', '/api/spray-sessions/:id/mixes', s(401, 201, 201, 201, 403), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/mixes`, body: { productId: fx.productId, wantedL: 1, tempC: 20 } })),
+  row('POST', '/api/planner/proposals', s(401, 200, 200, 403, 403), (fx) => ({ url: '/api/planner/proposals', body: { jobIds: [fx.jobId], horizonDays: 2 } })),
+  row('POST', '/api/planner/accept', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/planner/accept', body: { sessions: [{ boothId: fx.freeBoothId, ...fx.freeSlot() }] } })),
+  row('GET', '/api/today', s(401, 200, 200, 200, 403), get('/api/today'), 'The assembler’s day is the ready board.'),
+  row('GET', '/api/coats', s(401, 200, 200, 200, 403), get('/api/coats')),
+  row('POST', '/api/coats', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/coats', body: fx.coatBody() })),
+  row('GET', '/api/coats/:id', s(401, 200, 200, 200, 403), async (fx) => ({ url: `/api/coats/${await fx.anyCoat()}` })),
+  row('POST', '/api/coats/:id/corrections', s(401, 201, 201, 201, 403), async (fx) => ({ url: `/api/coats/${await fx.newCoat()}/corrections`, body: { reason: 'Wrong notes', notes: 'Corrected' } })),
+  row('GET', '/api/ready', s(401, 200, 200, 200, 200), get('/api/ready')),
+  row('GET', '/api/readings', s(401, 200, 200, 200, 200), get('/api/readings')),
+  row('POST', '/api/readings', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/readings', body: { boothId: fx.boothId, airTempC: 19, relativeHumidityPct: 55 } })),
+  row('GET', '/api/events', s(401, 200, 200, 200, 200), () => ({ url: '/api/events', stream: true })),
+  row('GET', '/api/notifications', s(401, 200, 200, 200, 200), get('/api/notifications')),
+  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework'].map((report) => row('GET', `/api/reports/${report}`, s(401, 200, 200, 403, 403), get(`/api/reports/${report}?${reportRange}`))),
+  row('GET', '/api/reports/conditions', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/reports/conditions?${reportRange}&boothId=${fx.boothId}` })),
+  row('GET', '/api/mailbox', s(401, 404, 403, 403, 403), get('/api/mailbox'), 'Tests run without the development mailbox, so the admin gets 404 not_found.'),
 ];
 
 export const routeKey = (method: string, path: string) => `${method.toUpperCase()} ${path.replace(/\/+$/, '') || '/'}`;

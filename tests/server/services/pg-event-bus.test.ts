@@ -50,11 +50,11 @@ describe.skipIf(!pgUrl)('the change feed shared through PostgreSQL (skipped with
   it('delivers what one instance publishes to the subscribers of every instance, the publisher included, once each', async () => {
     const first = await startBus();
     const second = await startBus();
-    first.bus.publish({ type: 'part.changed', id: 41 });
+    first.bus.publish({ type: 'part.changed', id: 41, siteId: null });
     await waitUntil('both buses to hear part 41', () => first.heard.length > 0 && second.heard.length > 0);
-    second.bus.publish({ type: 'spray-session.changed', id: 7 });
+    second.bus.publish({ type: 'spray-session.changed', id: 7, siteId: null });
     await waitUntil('both buses to hear session 7', () => first.heard.length > 1 && second.heard.length > 1);
-    expect(first.heard).toEqual([{ type: 'part.changed', id: 41 }, { type: 'spray-session.changed', id: 7 }]);
+    expect(first.heard).toEqual([{ type: 'part.changed', id: 41, siteId: null }, { type: 'spray-session.changed', id: 7, siteId: null }]);
     expect(second.heard).toEqual(first.heard);
   });
 
@@ -63,13 +63,13 @@ describe.skipIf(!pgUrl)('the change feed shared through PostgreSQL (skipped with
     const other = await startBus();
     const cut = await listenerPids();
     await dataSource.query(`SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = 'boothwright-change-feed' AND datname = current_database()`);
-    other.bus.publish({ type: 'part.changed', id: 99 });
-    expect(other.heard).toContainEqual({ type: 'part.changed', id: 99 });
+    other.bus.publish({ type: 'part.changed', id: 99, siteId: null });
+    expect(other.heard).toContainEqual({ type: 'part.changed', id: 99, siteId: null });
     await waitUntil('every listener to reconnect on a new connection', async () => {
       const now = await listenerPids();
       return now.length === cut.length && now.every((pid) => !cut.includes(pid));
     });
-    publisher.bus.publish({ type: 'part.changed', id: 100 });
+    publisher.bus.publish({ type: 'part.changed', id: 100, siteId: null });
     await waitUntil('the other bus to hear part 100', () => other.heard.some((e) => e.type === 'part.changed' && e.id === 100));
   });
 });

@@ -1,10 +1,11 @@
 import { TypeormStore } from 'connect-typeorm';
-import session from 'express-session';
+import expressSession from 'express-session';
 import type { RequestHandler } from 'express';
 import type { DataSource } from 'typeorm';
-import { SessionEntity } from '../db/entities/session.entity';
+import { SignInSessionEntity } from '../db/entities/sign-in-session.entity';
 
-export const sessionCookieName = 'bw.sid';
+/** The cookie that carries the sign-in session (not a spray session). */
+export const signInCookieName = 'bw.sid';
 const twelveHours = 12 * 60 * 60 * 1000;
 
 const touchEveryMs = 5 * 60 * 1000;
@@ -18,13 +19,13 @@ const touchMemoryLimit = 20_000;
  */
 function throttleTouch(store: TypeormStore, dataSource: DataSource): TypeormStore {
   const touchedAt = new Map<string, number>();
-  store.touch = (sid, session, callback) => {
+  store.touch = (sid, signInSession, callback) => {
     const now = Date.now();
     if (now - (touchedAt.get(sid) ?? 0) < touchEveryMs) return callback?.();
     if (touchedAt.size >= touchMemoryLimit) touchedAt.clear();
     touchedAt.set(sid, now);
-    const expiredAt = now + (session.cookie?.maxAge ?? twelveHours);
-    dataSource.getRepository(SessionEntity).update({ id: sid }, { expiredAt }).then(
+    const expiredAt = now + (signInSession.cookie?.maxAge ?? twelveHours);
+    dataSource.getRepository(SignInSessionEntity).update({ id: sid }, { expiredAt }).then(
       () => callback?.(),
       (error: Error) => callback?.(error),
     );
@@ -32,11 +33,11 @@ function throttleTouch(store: TypeormStore, dataSource: DataSource): TypeormStor
   return store;
 }
 
-/** Sessions live in the database (connect-typeorm), so sign-ins survive a restart and work on any instance. */
-export function sessionMiddleware(dataSource: DataSource, secret: string, behindHttpsProxy: boolean): RequestHandler {
-  const store = throttleTouch(new TypeormStore({ cleanupLimit: 2, ttl: twelveHours / 1000 }).connect(dataSource.getRepository(SessionEntity)), dataSource);
-  return session({
-    name: sessionCookieName,
+/** Sign-in sessions live in the database (connect-typeorm), so sign-ins survive a restart and work on any instance. */
+export function signInSessionMiddleware(dataSource: DataSource, secret: string, behindHttpsProxy: boolean): RequestHandler {
+  const store = throttleTouch(new TypeormStore({ cleanupLimit: 2, ttl: twelveHours / 1000 }).connect(dataSource.getRepository(SignInSessionEntity)), dataSource);
+  return expressSession({
+    name: signInCookieName,
     secret,
     store,
     resave: false,

@@ -6,7 +6,7 @@ import path from 'node:path';
  * A shop that never set SESSION_SECRET still gets a strong one: it is made once and kept
  * beside the data, so sign-ins survive restarts without a shared default secret.
  */
-export function resolveSessionSecret(configured: string | undefined, dataDir: string): string {
+export function resolveSignInSecret(configured: string | undefined, dataDir: string): string {
   if (configured) return configured;
   const file = path.join(dataDir, '.session-secret');
   if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();

@@ -1,9 +1,9 @@
 import type { ISession } from 'connect-typeorm';
 import { Column, DeleteDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
 
-/** The express-session store (connect-typeorm): sign-ins survive a server restart. */
+/** The sign-in session store for express-session (connect-typeorm): sign-ins survive a server restart. */
 @Entity({ name: 'sessions' })
-export class SessionEntity implements ISession {
+export class SignInSessionEntity implements ISession {
   @Index()
   @Column({ type: 'bigint', transformer: { to: (v: number) => v, from: (v: string | number) => Number(v) } })
   expiredAt = Date.now();

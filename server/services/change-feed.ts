@@ -1,0 +1,15 @@
+import { inScope, type SiteScope } from '../lib/site-scope';
+import type { ChangeEvent, EventBus } from './events';
+
+/** The live changes one user may hear of: the whole group's, and those of the sites they see. */
+export function createChangeFeed(scope: SiteScope, events: EventBus) {
+  return {
+    subscribe(listener: (event: ChangeEvent) => void): () => void {
+      return events.subscribe((event) => {
+        if (event.siteId === null || inScope(scope, event.siteId)) listener(event);
+      });
+    },
+  };
+}
+
+export type ChangeFeed = ReturnType<typeof createChangeFeed>;
