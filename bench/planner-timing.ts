@@ -35,11 +35,9 @@ function plannerInput(): PlanInput {
     id: j + 1,
     reference: `PLAN-${j + 1}`,
     dueDate: new Date(now.getTime() + (4 + (j % 10)) * 86_400_000).toISOString().slice(0, 10),
-    partIds: Array.from({ length: 10 }, (_, i) => j * 10 + i + 1),
-    areaM2: 7 + (j % 5),
-    footprintM2: 2.5 + (j % 3) * 0.5,
-    remaining: steps,
-    lastWindow: null,
+    parts: Array.from({ length: 10 }, (_, i) => ({ id: j * 10 + i + 1, areaM2: (7 + (j % 5)) / 10, footprintM2: (2.5 + (j % 3) * 0.5) / 10, coats: [] })),
+    steps,
+    booked: [],
   }));
   return {
     now: new Date(now.getTime()),
@@ -78,7 +76,7 @@ export function timePlanner(runs = 5): PlannerTiming {
   return {
     medianMs: times[Math.floor(runs / 2)],
     runs,
-    parts: input.jobs.reduce((n, j) => n + j.partIds.length, 0),
+    parts: input.jobs.reduce((n, j) => n + j.parts.length, 0),
     sessionsPlanned: plan.sessions.length,
     jobsOnTime: plan.jobs.filter((j) => j.dueDateMet).length,
     jobs: input.jobs.length,

@@ -36,6 +36,7 @@ export const permissions = [
   'reports:read',
   'sites:read',
   'sites:write',
+  'today:read',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
@@ -47,6 +48,7 @@ const matrix: Record<Role, readonly Permission[]> = {
   // A lead does everything but run the users and the shop's own settings.
   lead: permissions.filter((p) => !adminOnly.includes(p)),
   sprayer: [
+    'today:read',
     'sites:read',
     'booths:read',
     'racks:read',

@@ -21,6 +21,7 @@ import { settingsRoutes } from '../routes/settings';
 import { siteRoutes } from '../routes/sites';
 import { sprayerRoutes } from '../routes/sprayers';
 import { spraySessionRoutes } from '../routes/spray-sessions';
+import { todayRoutes } from '../routes/today';
 import { userRoutes } from '../routes/users';
 import { buildOpenApiDocument } from './openapi';
 import { defineRoute, type ApiRoute } from './route';
@@ -60,6 +61,7 @@ export const apiRoutes: ApiRoute[] = [
   ...sprayerRoutes,
   ...spraySessionRoutes,
   ...plannerRoutes,
+  ...todayRoutes,
   ...coatRoutes,
   ...denibRoutes,
   ...readyRoutes,

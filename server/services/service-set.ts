@@ -29,6 +29,7 @@ import { createSiteService, type SiteService } from './sites';
 import { createSprayerService, type SprayerService } from './sprayers';
 import { createSpraySessionCautionService, type SpraySessionCautionService } from './spray-session-cautions';
 import { createSpraySessionService, type SpraySessionService } from './spray-sessions';
+import { createTodayService, type TodayService } from './today';
 import { createUserService, type UserService } from './users';
 
 /** What services share across requests: the clock, the change feed and its open streams, the file store, the e-mail side. */
@@ -61,6 +62,7 @@ export interface ServiceSet {
   coats: CoatService;
   denibs: DenibService;
   planner: PlannerService;
+  today: TodayService;
   ready: ReadyService;
   readings: ReadingService;
   reports: ReportService;
@@ -113,6 +115,7 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
     coats: () => createCoatService(data, set.settings, events, clock),
     denibs: () => createDenibService(data, events, clock),
     planner: () => createPlannerService(data, set.settings, clock),
+    today: () => createTodayService(data, { settings: set.settings, planner: set.planner, sprayers: set.sprayers }, clock),
     ready: () => createReadyService(data, set.settings, clock),
     readings: () => createReadingService(data, events, clock),
     reports: () => createReportService(data, set.settings, set.estimates),

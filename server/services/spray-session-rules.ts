@@ -58,10 +58,3 @@ export function assertOpen(slot: Slot, booth: BoothEntity, timeZone: string, ove
     throw new AppError('outside_opening_hours', `${problem}. A lead may book it anyway with a reason.`, { start: problem, 'override.reason': 'Give a reason to book outside opening hours' });
   }
 }
-
-/** The sprayer must be an active user of the booth's own site: nobody runs another site's booth. */
-export async function assertSprayer(tx: SiteData, sprayerId: number | null | undefined, booth: BoothEntity): Promise<void> {
-  if (!sprayerId) return;
-  const user = await tx.forSite(booth.siteId).users.findOneBy({ id: sprayerId });
-  if (!user || user.disabled) throw new AppError('validation_failed', 'That sprayer does not exist, is disabled or works at another site', { sprayerId: 'Choose an active user of this booth’s site' });
-}

@@ -18,37 +18,9 @@ import { partsSeenBy } from './part-sites';
 import { assertRackSpace } from './rack-space';
 import type { SettingsService } from './settings';
 import { changeState, recordChecklist, type SpraySessionActor } from './spray-session-progress';
-import { assertNoClash, assertOpen, assertSprayer } from './spray-session-rules';
-
-async function toDtos(data: SiteData, spraySessions: SpraySessionEntity[]): Promise<SpraySession[]> {
-  const ids = spraySessions.map((s) => s.id);
-  const boothIds = [...new Set(spraySessions.map((s) => s.boothId))];
-  const userIds = [...new Set(spraySessions.map((s) => s.sprayerId).filter((id): id is number => id !== null))];
-  const [items, booths, users] = await Promise.all([
-    ids.length ? data.spraySessionItems.find({ where: { spraySessionId: In(ids) }, order: { id: 'ASC' } }) : [],
-    boothIds.length ? data.booths.find({ where: { id: In(boothIds) }, select: { id: true, name: true } }) : [],
-    userIds.length ? data.users.find({ where: { id: In(userIds) }, select: { id: true, name: true } }) : [],
-  ]);
-  const boothName = new Map(booths.map((b) => [b.id, b.name]));
-  const userName = new Map(users.map((u) => [u.id, u.name]));
-  return spraySessions.map((s) => ({
-    id: s.id,
-    boothId: s.boothId,
-    boothName: boothName.get(s.boothId) ?? '',
-    start: s.startAt,
-    end: s.endAt,
-    sprayerId: s.sprayerId,
-    sprayerName: s.sprayerId === null ? null : (userName.get(s.sprayerId) ?? null),
-    state: s.state,
-    notes: s.notes,
-    items: items.filter((i) => i.spraySessionId === s.id).map((i) => ({ partId: i.partId, stepPosition: i.stepPosition })),
-    overrideReason: s.overrideReason,
-    checklist: s.checklist,
-    clearingStartedAt: s.clearingStartedAt,
-    createdAt: s.createdAt,
-    updatedAt: s.updatedAt,
-  }));
-}
+import { toSpraySessionDtos } from './spray-session-dto';
+import { assertNoClash, assertOpen } from './spray-session-rules';
+import { assertSprayerFor } from './sprayers';
 
 /** Planned parts must exist, and a part placed at another site is not the booth's site's to plan. */
 async function writeItems(tx: SiteData, booth: BoothEntity, spraySessionId: number, items: { partId: number; stepPosition: number | null }[]): Promise<void> {
@@ -83,7 +55,7 @@ async function boothOrFail(tx: SiteData, boothId: number): Promise<BoothEntity> 
 async function insertSpraySession(tx: SiteData, fields: SpraySessionFields, actor: Actor, timezone: string, now: string): Promise<{ spraySession: SpraySessionEntity; siteId: number }> {
   const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
   const booth = await boothOrFail(tx, fields.boothId);
-  await assertSprayer(tx, fields.sprayerId, booth);
+  await assertSprayerFor(tx, fields.sprayerId, booth);
   assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
   await assertNoClash(tx, slot, booth, timezone);
   await assertRackSpace(tx.forSite(booth.siteId), fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
@@ -101,6 +73,11 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
     const spraySession = await tx.spraySessions.findOneBy({ id });
     if (!spraySession) throw notFound('Spray session');
     return spraySession;
+  }
+
+  /** Sessions as the API sends them, with what each sprays and what is sprayed already. */
+  async function toDtos(tx: SiteData, spraySessions: SpraySessionEntity[]): Promise<SpraySession[]> {
+    return toSpraySessionDtos(tx, spraySessions, { planningTempC: (await settings.get()).planningDryingTempC, now: clock.now() });
   }
 
   async function getWith(tx: SiteData, id: number): Promise<SpraySession> {
@@ -167,11 +144,11 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
       };
       if (Date.parse(slot.endAt) <= Date.parse(slot.startAt)) throw new AppError('validation_failed', 'The end must be after the start', { end: 'The end must be after the start' });
       const booth = await boothOrFail(tx, slot.boothId);
-      const moved = slot.boothId !== spraySession.boothId || slot.startAt !== spraySession.startAt || slot.endAt !== spraySession.endAt || slot.sprayerId !== spraySession.sprayerId;
-      if (moved) {
-        await assertSprayer(tx, slot.sprayerId, booth);
-        assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
-      }
+      const retimed = slot.boothId !== spraySession.boothId || slot.startAt !== spraySession.startAt || slot.endAt !== spraySession.endAt;
+      const moved = retimed || slot.sprayerId !== spraySession.sprayerId;
+      if (moved) await assertSprayerFor(tx, slot.sprayerId, booth);
+      // Giving a session to someone else leaves its hours alone: a booking already made outside them stands.
+      if (retimed) assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
       if ((moved || patch.state === 'planned') && (patch.state ?? spraySession.state) !== 'cancelled') await assertNoClash(tx, slot, booth, timezone);
       Object.assign(spraySession, { ...slot, notes: patch.notes ?? spraySession.notes, updatedAt: now });
       if (patch.override) spraySession.overrideReason = patch.override.reason;

@@ -1,41 +1,40 @@
-import type { OpeningSpan } from '../schemas/booth';
-import { calendarDateIn } from '../time';
+import { calendarDateIn, wallClockIn } from '../time';
+import { findSlot, type Interval, type RackLoad, type SlotContext, type Taken } from './auto-plan-slots';
 import type { DryingRow } from './drying-row-schema';
 import { adjustDryingTimes } from './drying-times';
-import { openingHoursProblem } from './opening-hours';
-import { sessionMinutes } from './planning';
+import type { RecoatWindow } from './readiness';
+import { projectedRecoatWindow, sharedRecoatWindow } from './recoat-window';
 
-export type PlanBooth = { id: number; name: string; openingHours: OpeningSpan[]; sprayRateM2PerH: number };
+export type { PlanBooth } from './auto-plan-slots';
 export type PlanStep = { position: number; kind: 'coat'; productName: string; dryingTimes: DryingRow[] } | { position: number; kind: 'abrade'; grit: string };
+
+/** A coat already on record on a part: the step it was, and the times it left. */
+export type RecordedCoat = { stepPosition: number; recoatOpensAt: Date; recoatClosesAt: Date | null; packAt: Date };
+export type PlanPart = {
+  id: number;
+  /** Coated area sprayed per coat, m². */
+  areaM2: number;
+  /** Shelf area the part takes lying flat, m². */
+  footprintM2: number;
+  coats: RecordedCoat[];
+};
+/** A live session (booked ahead, or under way) that already plans a step on some of the job's parts. */
+export type BookedStep = { stepPosition: number; start: Date; end: Date; partIds: number[] };
 export type PlanJob = {
   id: number;
   reference: string;
   dueDate: string;
-  partIds: number[];
-  /** Coated area sprayed per coat, m². */
-  areaM2: number;
-  /** Shelf area the parts take lying flat, m². */
-  footprintM2: number;
-  remaining: PlanStep[];
-  /** The recoat window left by the last coat already on the parts, if any. */
-  lastWindow: Window | null;
+  /** The whole finish system, in order; steps on record or booked are not proposed again. */
+  steps: PlanStep[];
+  parts: PlanPart[];
+  booked: BookedStep[];
 };
-type Window = { opensAt: Date; closesAt: Date | null };
-type Interval = { boothId: number; start: Date; end: Date };
-type RackLoad = { from: Date; until: Date; areaM2: number };
 
-export type PlanInput = {
-  now: Date;
-  horizonDays: number;
-  timeZone: string;
+export type PlanInput = SlotContext & {
   planningTempC: number;
-  setupMin: number;
-  cleanDownMin: number;
   /** Time to denib between coats, off the booth: common practice, no published source. */
   abradeMin: number;
-  booths: PlanBooth[];
   busy: Interval[];
-  rackCapacityM2: number;
   rackLoad: RackLoad[];
   jobs: PlanJob[];
 };
@@ -44,82 +43,105 @@ export type PlannedSession = { jobId: number; stepPosition: number; boothId: num
 export type JobPlan = { jobId: number; reference: string; dueDate: string; finishesAt: Date | null; dueDateMet: boolean; notes: string[] };
 export type Plan = { sessions: PlannedSession[]; jobs: JobPlan[] };
 
-const slotMs = 15 * 60_000;
-const ceilToSlot = (t: number) => Math.ceil(t / slotMs) * slotMs;
-const overlaps = (a: { start: Date; end: Date }, b: { start: Date; end: Date }) => a.start < b.end && b.start < a.end;
+type CoatStep = Extract<PlanStep, { kind: 'coat' }>;
+/** Where each part stands as the plan walks the finish system: its open window, when it is free, when it can be packed. */
+type PartState = { window: RecoatWindow | null; freeAt: Date; packAt: Date | null };
+type JobWalk = { job: PlanJob; parts: Map<number, PartState>; abradeDue: boolean; sessions: PlannedSession[]; notes: string[] };
 
-type State = { busy: Interval[]; rackLoad: RackLoad[] };
+const later = (a: Date, b: Date | null | undefined) => (b && b > a ? b : a);
+const shopTime = (at: Date, timeZone: string) => {
+  const clock = wallClockIn(at, timeZone);
+  return `${clock.date} ${clock.time}`;
+};
 
-function rackFits(state: State, input: PlanInput, from: Date, until: Date, areaM2: number): boolean {
-  // Peak load over the interval is reached at one of the loads' starts (or at `from`).
-  const starts = [from, ...state.rackLoad.filter((l) => l.from > from && l.from < until).map((l) => l.from)];
-  return starts.every((t) => state.rackLoad.filter((l) => l.from <= t && t < l.until).reduce((sum, l) => sum + l.areaM2, 0) + areaM2 <= input.rackCapacityM2);
+/** The parts whose step `position` is on record, booked, or still to be planned. */
+function split(walk: JobWalk, position: number) {
+  const recorded = new Map(walk.job.parts.flatMap((p) => p.coats.filter((c) => c.stepPosition === position).map((c) => [p.id, c] as const)));
+  const booked = walk.job.booked.filter((b) => b.stepPosition === position && b.partIds.some((id) => !recorded.has(id)));
+  const bookedIds = new Set(booked.flatMap((b) => b.partIds));
+  const needing = walk.job.parts.filter((p) => !recorded.has(p.id) && !bookedIds.has(p.id));
+  return { recorded, booked, needing };
 }
 
-/** The earliest booth slot from `earliest` that is open, free, and leaves rack space until handling. */
-function findSlot(input: PlanInput, state: State, earliest: Date, areaM2: number, footprintM2: number, handleMin: number): Interval | null {
-  const horizon = input.now.getTime() + input.horizonDays * 86_400_000;
-  for (let t = ceilToSlot(earliest.getTime()); t < horizon; t += slotMs) {
-    for (const booth of input.booths) {
-      const slot = { boothId: booth.id, start: new Date(t), end: new Date(t + sessionMinutesFor(input, booth, areaM2) * 60_000) };
-      if (slot.end.getTime() > horizon || openingHoursProblem(slot.start, slot.end, booth.openingHours, input.timeZone)) continue;
-      if (state.busy.some((b) => b.boothId === booth.id && overlaps(b, slot))) continue;
-      if (!rackFits(state, input, slot.end, new Date(slot.end.getTime() + handleMin * 60_000), footprintM2)) continue;
-      return slot;
+function followBooked(input: PlanInput, walk: JobWalk, step: CoatStep, booked: BookedStep[], recorded: Map<number, RecordedCoat>): void {
+  for (const session of booked) {
+    const after = projectedRecoatWindow(session.end, step.dryingTimes, input.planningTempC);
+    const before = sharedRecoatWindow(session.partIds.flatMap((id) => walk.parts.get(id)?.window ?? []));
+    walk.notes.push(`Step ${step.position + 1} (${step.productName}) is already booked ${shopTime(session.start, input.timeZone)}; not proposed again.`);
+    if (before && session.start < before.opensAt) walk.notes.push(`That session starts before the previous coat’s recoat window opens (${shopTime(before.opensAt, input.timeZone)}).`);
+    if (before?.closesAt && session.start > before.closesAt) walk.notes.push(`That session starts after the previous coat’s recoat window closes (${shopTime(before.closesAt, input.timeZone)}): denib first.`);
+    for (const id of session.partIds) {
+      if (!recorded.has(id)) walk.parts.set(id, { window: after, freeAt: session.end, packAt: after.packAt });
     }
   }
-  return null;
 }
 
-// Each booth turns the area into its own session length at its spray rate.
-function sessionMinutesFor(input: PlanInput, booth: PlanBooth, areaM2: number): number {
-  return sessionMinutes({ areaM2, sprayRateM2PerH: booth.sprayRateM2PerH, setupMin: input.setupMin, cleanDownMin: input.cleanDownMin });
+/** Books the parts still needing this coat into the earliest free slot; false when none is found. */
+function proposeStep(input: PlanInput, taken: Taken, walk: JobWalk, step: CoatStep, needing: PlanPart[]): boolean {
+  const times = adjustDryingTimes(step.dryingTimes, input.planningTempC).times;
+  const states = needing.map((p) => walk.parts.get(p.id)!);
+  const window = sharedRecoatWindow(states.flatMap((s) => s.window ?? []));
+  const abrade = walk.abradeDue ? input.abradeMin * 60_000 : 0;
+  const earliest = new Date(Math.max(input.now.getTime(), ...states.map((s) => s.freeAt.getTime()), window?.opensAt.getTime() ?? 0) + abrade);
+  const areaM2 = needing.reduce((sum, p) => sum + p.areaM2, 0);
+  const footprintM2 = needing.reduce((sum, p) => sum + p.footprintM2, 0);
+  let slot = findSlot(input, taken, earliest, areaM2, footprintM2, times.handleMin);
+  if (slot && !walk.abradeDue && window?.closesAt && slot.start > window.closesAt) {
+    walk.notes.push(`Step ${step.position + 1}: no booth time before the recoat window closes (${shopTime(window.closesAt, input.timeZone)}); the plan adds a P320 denib first.`);
+    slot = findSlot(input, taken, new Date(earliest.getTime() + input.abradeMin * 60_000), areaM2, footprintM2, times.handleMin);
+  }
+  if (!slot) {
+    walk.notes.push(`Step ${step.position + 1} (${step.productName}): no free booth time with rack space in the next ${input.horizonDays} days.`);
+    return false;
+  }
+  const partIds = needing.map((p) => p.id);
+  walk.sessions.push({ jobId: walk.job.id, stepPosition: step.position, boothId: slot.boothId, start: slot.start, end: slot.end, productName: step.productName, areaM2, partIds });
+  taken.busy.push(slot);
+  taken.rackLoad.push({ from: slot.end, until: new Date(slot.end.getTime() + times.handleMin * 60_000), areaM2: footprintM2 });
+  const after = projectedRecoatWindow(slot.end, step.dryingTimes, input.planningTempC);
+  for (const id of partIds) walk.parts.set(id, { window: after, freeAt: slot.end, packAt: after.packAt });
+  return true;
 }
 
-function planJob(input: PlanInput, state: State, job: PlanJob): { sessions: PlannedSession[]; plan: JobPlan } {
-  const notes: string[] = [];
-  const sessions: PlannedSession[] = [];
-  let window = job.lastWindow;
-  let ready = input.now;
-  let finishesAt: Date | null = null;
-  for (const step of job.remaining) {
+function walkCoat(input: PlanInput, taken: Taken, walk: JobWalk, step: CoatStep): boolean {
+  const { recorded, booked, needing } = split(walk, step.position);
+  for (const [id, coat] of recorded) {
+    const state = walk.parts.get(id)!;
+    walk.parts.set(id, { window: { opensAt: coat.recoatOpensAt, closesAt: coat.recoatClosesAt }, freeAt: state.freeAt, packAt: coat.packAt });
+  }
+  followBooked(input, walk, step, booked, recorded);
+  const done = needing.length === 0 || proposeStep(input, taken, walk, step, needing);
+  walk.abradeDue = false;
+  return done;
+}
+
+function planJob(input: PlanInput, taken: Taken, job: PlanJob): { sessions: PlannedSession[]; plan: JobPlan } {
+  const walk: JobWalk = { job, parts: new Map(job.parts.map((p) => [p.id, { window: null, freeAt: input.now, packAt: null }])), abradeDue: false, sessions: [], notes: [] };
+  const unplanned = (): JobPlan => ({ jobId: job.id, reference: job.reference, dueDate: job.dueDate, finishesAt: null, dueDateMet: false, notes: walk.notes });
+  for (const step of job.steps) {
     if (step.kind === 'abrade') {
-      ready = new Date(Math.max(ready.getTime(), window?.opensAt.getTime() ?? 0) + input.abradeMin * 60_000);
-      window = window ? { opensAt: window.opensAt, closesAt: null } : null;
+      walk.abradeDue = true;
       continue;
     }
-    const times = adjustDryingTimes(step.dryingTimes, input.planningTempC).times;
-    const earliest = new Date(Math.max(ready.getTime(), window?.opensAt.getTime() ?? 0));
-    let slot = findSlot(input, state, earliest, job.areaM2, job.footprintM2, times.handleMin);
-    if (slot && window?.closesAt && slot.start > window.closesAt) {
-      notes.push(`Step ${step.position + 1}: no booth time before the recoat window closes (${window.closesAt.toISOString()}); the plan adds a P320 denib first.`);
-      slot = findSlot(input, state, new Date(earliest.getTime() + input.abradeMin * 60_000), job.areaM2, job.footprintM2, times.handleMin);
-    }
-    if (!slot) {
-      notes.push(`Step ${step.position + 1} (${step.productName}): no free booth time with rack space in the next ${input.horizonDays} days.`);
-      return { sessions, plan: { jobId: job.id, reference: job.reference, dueDate: job.dueDate, finishesAt: null, dueDateMet: false, notes } };
-    }
-    const end = slot.end.getTime();
-    sessions.push({ jobId: job.id, stepPosition: step.position, boothId: slot.boothId, start: slot.start, end: slot.end, productName: step.productName, areaM2: job.areaM2, partIds: job.partIds });
-    state.busy.push(slot);
-    state.rackLoad.push({ from: slot.end, until: new Date(end + times.handleMin * 60_000), areaM2: job.footprintM2 });
-    window = { opensAt: new Date(end + times.recoatMinMin * 60_000), closesAt: times.recoatMaxMin === null ? null : new Date(end + times.recoatMaxMin * 60_000) };
-    ready = slot.end;
-    finishesAt = new Date(end + times.packMin * 60_000);
+    if (!walkCoat(input, taken, walk, step)) return { sessions: walk.sessions, plan: unplanned() };
   }
+  const packTimes = [...walk.parts.values()].map((s) => s.packAt);
+  const finishesAt = packTimes.some((t) => t === null) ? null : packTimes.reduce<Date | null>((a, b) => (a ? later(a, b) : b), null);
   const dueDateMet = finishesAt !== null && calendarDateIn(finishesAt, input.timeZone) <= job.dueDate;
-  if (finishesAt && !dueDateMet) notes.push(`Ready to pack ${calendarDateIn(finishesAt, input.timeZone)}, after the due date ${job.dueDate}.`);
-  return { sessions, plan: { jobId: job.id, reference: job.reference, dueDate: job.dueDate, finishesAt, dueDateMet, notes } };
+  if (finishesAt && !dueDateMet) walk.notes.push(`Ready to pack ${calendarDateIn(finishesAt, input.timeZone)}, after the due date ${job.dueDate}.`);
+  return { sessions: walk.sessions, plan: { jobId: job.id, reference: job.reference, dueDate: job.dueDate, finishesAt, dueDateMet, notes: walk.notes } };
 }
 
 /**
- * Puts each job's remaining steps into free booth time, earliest due date first: every coat
- * after the previous one's recoat window opens (at the planning temperature) and, where it can,
- * before it closes; inside opening hours; with rack space until the parts can be handled.
+ * Puts each job's steps that are neither on record nor already booked into free booth time,
+ * earliest due date first. Every part starts from its own coats on record and its live bookings:
+ * a booked step is not proposed again, and the next coat waits for the recoat window that booking
+ * will open (at the planning temperature); each coat goes in where it can before the window
+ * closes, inside opening hours, with rack space until the parts can be handled.
  */
 export function autoPlan(input: PlanInput): Plan {
-  const state: State = { busy: [...input.busy], rackLoad: [...input.rackLoad] };
+  const taken: Taken = { busy: [...input.busy], rackLoad: [...input.rackLoad] };
   const ordered = [...input.jobs].sort((a, b) => a.dueDate.localeCompare(b.dueDate) || a.id - b.id);
-  const results = ordered.map((job) => planJob(input, state, job));
+  const results = ordered.map((job) => planJob(input, taken, job));
   return { sessions: results.flatMap((r) => r.sessions), jobs: results.map((r) => r.plan) };
 }

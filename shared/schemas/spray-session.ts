@@ -65,6 +65,51 @@ export const spraySessionQuerySchema = z.object({
 });
 export type SpraySessionQuery = z.infer<typeof spraySessionQuerySchema>;
 
+/** A planned part: the step it is to get and, once that step's coat is on record, when it went on. */
+export const sessionItemDtoSchema = z.object({
+  partId: z.number().int(),
+  stepPosition: z.number().int().nullable(),
+  /** When the part's coat of this step was sprayed (in this session or another); null while still to spray. */
+  sprayedAt: z.string().nullable().default(null),
+});
+export type SessionItemDto = z.infer<typeof sessionItemDtoSchema>;
+
+/** One coat the session sprays on one job's parts: "coat 1 of 3, Kestrel primer, 8 parts". */
+export const sessionCoatSchema = z.object({
+  jobId: z.number().int(),
+  jobReference: z.string(),
+  colour: z.string(),
+  stepPosition: z.number().int(),
+  /** Which coat of the finish system this is (1-based), and how many coats it has. */
+  coatNumber: z.number().int(),
+  coatsTotal: z.number().int(),
+  productId: z.number().int(),
+  productName: z.string(),
+  partCount: z.number().int(),
+  sprayedCount: z.number().int(),
+});
+export type SessionCoat = z.infer<typeof sessionCoatSchema>;
+
+/** When the session's parts may take their coat: the previous coat's recoat window, shared by every part. */
+export const sessionRecoatWindowSchema = z.object({
+  opensAt: z.string(),
+  closesAt: z.string().nullable(),
+  /** True when the previous coat is booked but not sprayed yet: worked out from its session's end. */
+  projected: z.boolean(),
+});
+
+/** What a session sprays, in words a planner block can show. */
+export const sessionWorkSchema = z.object({
+  partCount: z.number().int(),
+  sprayedCount: z.number().int(),
+  jobs: z.array(z.object({ id: z.number().int(), reference: z.string(), colour: z.string() })),
+  coats: z.array(sessionCoatSchema),
+  recoatWindow: sessionRecoatWindowSchema.nullable(),
+});
+export type SessionWork = z.infer<typeof sessionWorkSchema>;
+
+export const emptySessionWork: SessionWork = { partCount: 0, sprayedCount: 0, jobs: [], coats: [], recoatWindow: null };
+
 export const spraySessionSchema = z.object({
   id: z.number().int(),
   boothId: z.number().int(),
@@ -75,11 +120,12 @@ export const spraySessionSchema = z.object({
   sprayerName: z.string().nullable(),
   state: spraySessionStateSchema,
   notes: z.string(),
-  items: z.array(z.object({ partId: z.number().int(), stepPosition: z.number().int().nullable() })),
+  items: z.array(sessionItemDtoSchema),
   overrideReason: z.string().nullable(),
   checklist: checklistResultSchema.nullable(),
   /** When spraying stopped and the air started to clear; the clearance countdown runs from here. */
   clearingStartedAt: z.string().nullable(),
+  work: sessionWorkSchema.default(emptySessionWork),
   createdAt: z.string(),
   updatedAt: z.string(),
 });
@@ -91,7 +137,3 @@ export const spraySessionCautionsSchema = z.object({
   cautions: z.array(z.object({ code: z.string(), title: z.string(), message: z.string() })),
 });
 export type SpraySessionCautions = z.infer<typeof spraySessionCautionsSchema>;
-
-/** Who can be given a spray session. */
-export const sprayerSchema = z.object({ id: z.number().int(), name: z.string(), role: z.enum(['sprayer', 'lead']) });
-export type Sprayer = z.infer<typeof sprayerSchema>;

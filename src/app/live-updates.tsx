@@ -6,6 +6,7 @@ import { plannerKeys } from '../features/planner/api/planner-keys';
 import { rackKeys } from '../features/racks/api/rack-keys';
 import { readyKeys } from '../features/ready-board/api/ready-keys';
 import { spraySessionKeys } from '../features/spray-session/api/spray-session-keys';
+import { todayKeys } from '../features/today/api/today-keys';
 import { useLiveUpdates, type LiveChange } from '../lib/use-live-updates';
 
 // Prefixes, broad on purpose: each feature keeps its own keys, and only queries on screen refetch.
@@ -15,11 +16,11 @@ const sessionLists: QueryKey = ['spray-sessions'];
 const readings: QueryKey = ['readings'];
 
 const keysByChange: Record<string, readonly QueryKey[]> = {
-  'coat.created': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, coatLog],
-  'denib.created': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, coatLog],
-  'spray-session.changed': [plannerKeys.all, spraySessionKeys.all, sessionLists],
-  'part.changed': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, rackKeys.all],
-  'reading.created': [spraySessionKeys.all, readings],
+  'coat.created': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, coatLog, todayKeys.all],
+  'denib.created': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, coatLog, todayKeys.all],
+  'spray-session.changed': [plannerKeys.all, spraySessionKeys.all, sessionLists, todayKeys.all],
+  'part.changed': [readyKeys.lists(), jobKeys.all, partKeys.all, plannerKeys.all, spraySessionKeys.all, rackKeys.all, todayKeys.all],
+  'reading.created': [spraySessionKeys.all, readings, todayKeys.all],
 };
 
 const allKeys: readonly QueryKey[] = [...new Map(Object.values(keysByChange).flat().map((key) => [JSON.stringify(key), key])).values()];

@@ -16,7 +16,7 @@ const groups: NavGroup[] = [
   {
     label: 'Workshop',
     items: [
-      { to: '/', label: 'Today', end: true },
+      { to: '/', label: 'Today', end: true, permission: 'today:read' },
       { to: '/planner', label: 'Booth planner', permission: 'spray-sessions:read' },
       { to: '/spray-sessions', label: 'Spray sessions', permission: 'spray-sessions:read' },
       { to: '/coat-log', label: 'Coat log', permission: 'coats:read' },

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { signIn } from './helpers';
 
 test('a lead auto-plans a job’s coats and books them all at once', async ({ page }) => {
@@ -18,6 +18,15 @@ test('a lead auto-plans a job’s coats and books them all at once', async ({ pa
   await dialog.getByRole('button', { name: 'Book all 3 sessions' }).click();
   await expect(page.getByText('Booked 3 spray sessions')).toBeVisible();
   await expect(dialog).toBeHidden();
+
+  // Asked again, it starts from what is now booked: nothing is proposed twice.
+  await page.getByRole('button', { name: 'Auto-plan jobs' }).click();
+  await dialog.getByRole('checkbox', { name: /LJ-26-105/ }).check();
+  await dialog.getByRole('button', { name: 'Propose a plan' }).click();
+  await expect(dialog.getByText('Nothing to book: every chosen job is finished, already booked, or could not be fitted (see above).')).toBeVisible();
+  const job = dialog.getByRole('list', { name: 'Jobs in the proposal' });
+  await expect(job).toContainText('Step 1 (Kestrel 2K PU Primer White) is already booked');
+  await expect(job).toContainText('Step 4 (Kestrel 2K PU Topcoat Satin) is already booked');
 });
 
 test('a sprayer has no auto-plan button', async ({ page }) => {

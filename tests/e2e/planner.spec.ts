@@ -1,38 +1,13 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
+import { booth, boothCalendar, calendarEvent, drag, openBookingForm, summerWeek } from './planner-helpers';
 
-/**
- * A Tuesday in July or August (British Summer Time, UTC+1) of a far year picked at random, so a
- * rerun on the same database books free days. The browser sits in New York, so a time that shows
- * right can only come from the shop's zone (Europe/London), not the device's.
- */
-function summerTuesday(): { tuesday: string; saturday: string } {
-  const year = new Date().getFullYear() + 2 + Math.floor(Math.random() * 500);
-  const firstOfJuly = new Date(Date.UTC(year, 6, 1));
-  const week = Math.floor(Math.random() * 8);
-  const tuesday = new Date(Date.UTC(year, 6, 1 + ((2 - firstOfJuly.getUTCDay() + 7) % 7) + week * 7));
-  const saturday = new Date(tuesday.getTime() + 4 * 86_400_000);
-  return { tuesday: tuesday.toISOString().slice(0, 10), saturday: saturday.toISOString().slice(0, 10) };
-}
-
-const { tuesday, saturday } = summerTuesday();
-const booth = 'Booth 1 (cross-draft)';
+// The browser sits in New York, so a time that shows right can only come from the shop's zone
+// (Europe/London), not the device's.
+const { tuesday, saturday } = summerWeek();
 
 test.use({ timezoneId: 'America/New_York' });
 test.describe.configure({ mode: 'serial' });
-
-async function openBookingForm(page: Page, start: string, end: string): Promise<Locator> {
-  await page.getByRole('button', { name: 'Book a session' }).click();
-  const dialog = page.getByRole('dialog', { name: 'Book a spray session' });
-  await dialog.getByLabel('Booth').selectOption({ label: booth });
-  await dialog.getByLabel('Starts').fill(start);
-  await dialog.getByLabel('Ends').fill(end);
-  return dialog;
-}
-
-function calendarEvent(page: Page, text: string): Locator {
-  return page.getByRole('region', { name: /^Calendar/ }).locator('.fc-timegrid-event', { hasText: text });
-}
 
 test.describe('booth planner', () => {
   test('a lead books a session from the form and sees it at 09:00 shop time, whatever the device’s zone', async ({ page }) => {
@@ -55,19 +30,23 @@ test.describe('booth planner', () => {
     await dialog.getByRole('button', { name: 'Book session' }).click();
     await expect(dialog).toBeHidden();
 
-    // The calendar jumps to the booked week; the session says its booth, state and sprayer in words.
-    const event = calendarEvent(page, booth);
+    // The calendar jumps to the booked week; the session says what it sprays, its state and sprayer in words.
+    const event = calendarEvent(page, 'LJ-26-105');
     await expect(event).toContainText('Planned');
+    await expect(event).toContainText('LJ-26-105 · coat 1 of 3');
+    await expect(event).toContainText('Kestrel 2K PU Primer White · Ink blue');
+    await expect(event).toContainText('8 parts');
     await expect(event).toContainText('No sprayer yet');
+    await expect(event).toContainText(booth);
     await expect(event).toContainText(`09:00 - ${suggestedEnd}`);
-    // It sits on the 09:00 row of the grid, and the server holds 08:00 UTC.
-    const slot = await page.locator('.fc-timegrid-slot-lane[data-time="09:00:00"]').first().boundingBox();
+    // It sits on the 09:00 row of its booth's grid, and the server holds 08:00 UTC.
+    const slot = await boothCalendar(page).locator('.fc-timegrid-slot-lane[data-time="09:00:00"]').boundingBox();
     const block = await event.boundingBox();
     expect(Math.abs(block!.y - slot!.y)).toBeLessThan(3);
     const stored = await page.request.get(`/api/spray-sessions?from=${tuesday}T00:00:00Z&to=${tuesday}T23:59:00Z`);
     const { items } = (await stored.json()) as { items: { start: string; boothName: string }[] };
     expect(items.find((s) => s.boothName === booth)?.start).toBe(`${tuesday}T08:00:00.000Z`);
-    await expect(page.getByRole('button', { name: /09:00–\d\d:\d\d BST.*Booth 1 \(cross-draft\).*Planned/ })).toBeVisible();
+    await expect(page.getByRole('button', { name: /09:00–\d\d:\d\d BST.*Booth 1 \(cross-draft\).*Planned.*LJ-26-105 · coat 1 of 3: Kestrel 2K PU Primer White · Ink blue · 8 parts/ })).toBeVisible();
     await page.screenshot({ path: '/tmp/shots/planner-week-1280.png', fullPage: true });
   });
 
@@ -93,7 +72,7 @@ test.describe('booth planner', () => {
     await dialog.getByRole('button', { name: 'Book anyway' }).click();
     await expect(dialog).toBeHidden();
 
-    const event = calendarEvent(page, booth).filter({ hasText: '10:00 - 11:00' });
+    const event = calendarEvent(page, '10:00 - 11:00');
     await expect(event).toContainText('Planned');
     await event.click();
     const summary = page.getByRole('dialog', { name: /^Spray session \d+$/ });
@@ -111,7 +90,7 @@ test.describe('booth planner', () => {
     await signIn(page, 'sprayer', '/planner');
     await expect(page.getByRole('heading', { name: 'Booth planner', level: 1 })).toBeVisible();
     await page.getByLabel('Go to day').fill(tuesday);
-    const event = calendarEvent(page, booth).filter({ hasText: '09:00 - ' });
+    const event = calendarEvent(page, '09:00 - ');
     await expect(event).toContainText('Planned');
     await expect(page.getByRole('button', { name: /Book/ })).toHaveCount(0);
     await expect(event).not.toHaveClass(/fc-event-draggable/);
@@ -135,14 +114,14 @@ test.describe('booth planner, dragging', () => {
   test('a lead drags a session to a later time; a drag onto a closed day goes back with the reason', async ({ page }) => {
     await signIn(page, 'lead', '/planner');
     await page.getByLabel('Go to day').fill(tuesday);
-    const calendar = page.getByRole('region', { name: /^Calendar/ });
+    const calendar = boothCalendar(page);
     await calendar.scrollIntoViewIfNeeded();
-    const event = calendarEvent(page, booth).filter({ hasText: /^09:00 - / });
+    const event = calendarEvent(page, 'LJ-26-105').filter({ hasText: /^09:00 - / });
     const from = (await event.boundingBox())!;
-    const elevenOClock = (await page.locator('.fc-timegrid-slot-lane[data-time="11:00:00"]').first().boundingBox())!;
+    const elevenOClock = (await calendar.locator('.fc-timegrid-slot-lane[data-time="11:00:00"]').boundingBox())!;
     await drag(page, { x: from.x + from.width / 2, y: from.y + 6 }, { x: from.x + from.width / 2, y: elevenOClock.y + 6 });
 
-    const moved = calendarEvent(page, booth).filter({ hasText: /^11:00 - / });
+    const moved = calendarEvent(page, 'LJ-26-105').filter({ hasText: /^11:00 - / });
     await expect(moved).toBeVisible();
     await expect(page.getByText(/Moved: Booth 1 \(cross-draft\), .*11:00–/)).toBeVisible();
     const stored = await page.request.get(`/api/spray-sessions?from=${tuesday}T00:00:00Z&to=${tuesday}T23:59:00Z`);
@@ -152,7 +131,7 @@ test.describe('booth planner, dragging', () => {
     // Sideways onto Saturday at the same time (after the 10:00–11:00 booking there): the booth is
     // closed, so the server refuses, the block goes back and the lead is asked for a reason.
     const block = (await moved.boundingBox())!;
-    const saturdayColumn = (await page.locator('.fc-col-header-cell.fc-day-sat').boundingBox())!;
+    const saturdayColumn = (await calendar.locator('.fc-col-header-cell.fc-day-sat').boundingBox())!;
     await drag(page, { x: block.x + block.width / 2, y: block.y + 6 }, { x: saturdayColumn.x + saturdayColumn.width / 2, y: block.y + 6 });
     const ask = page.getByRole('dialog', { name: 'Outside opening hours' });
     await expect(ask).toContainText('The booth is closed on Saturdays. A lead may book it anyway with a reason.');
@@ -160,23 +139,69 @@ test.describe('booth planner, dragging', () => {
     await ask.getByRole('button', { name: 'Leave it where it was' }).click();
     await expect(ask).toBeHidden();
     await expect(moved).toBeVisible();
-    await expect(page.locator('.fc-day-sat .fc-timegrid-event', { hasText: /^11:00 - / })).toHaveCount(0);
+    await expect(calendar.locator('.fc-day-sat .fc-timegrid-event', { hasText: /^11:00 - / })).toHaveCount(0);
+  });
+
+  test('while the next coat is dragged its recoat window shows on the calendar, and the move can be undone', async ({ page }) => {
+    await signIn(page, 'lead', '/planner');
+    const dialog = await openBookingForm(page, `${tuesday}T15:00`, `${tuesday}T16:00`);
+    await dialog.getByLabel('Job').selectOption({ label: 'LJ-26-105 · Ardent Bathrooms' });
+    await dialog.getByLabel('Coat').selectOption('2');
+    await dialog.getByRole('button', { name: 'Choose all 8 parts' }).click();
+    await dialog.getByRole('button', { name: 'Book session' }).click();
+    await expect(dialog).toBeHidden();
+    const calendar = boothCalendar(page);
+    const topcoat = calendarEvent(page, 'coat 2 of 3').filter({ hasText: /^15:00 - 16:00/ });
+    await expect(topcoat).toContainText('Kestrel 2K PU Topcoat Satin · Ink blue');
+
+    // The primer before it is booked, not sprayed: its window is worked out from that booking's end.
+    await topcoat.scrollIntoViewIfNeeded();
+    const from = (await topcoat.boundingBox())!;
+    const fourOClock = (await calendar.locator('.fc-timegrid-slot-lane[data-time="16:00:00"]').boundingBox())!;
+    await page.mouse.move(from.x + from.width / 2, from.y + 6);
+    await page.mouse.down();
+    await page.mouse.move(from.x + from.width / 2 + 4, from.y + 10, { steps: 4 });
+    await page.mouse.move(from.x + from.width / 2, fourOClock.y + 6, { steps: 12 });
+    await expect(calendar.locator('.bw-recoat-open').first()).toBeVisible();
+    await expect(calendar.locator('.bw-recoat-too-soon').first()).toBeAttached();
+    await expect(calendar.getByText(/Recoat window from .*\d\d:\d\d, no closing time \(from the booked coat before\)/)).toBeVisible();
+    await page.screenshot({ path: '/tmp/shots/planner-recoat-window-1280.png' });
+    await page.mouse.up();
+    await expect(calendar.locator('.bw-recoat')).toHaveCount(0);
+
+    const toast = page.locator('[data-sonner-toast]', { hasText: /Moved: Booth 1 \(cross-draft\), .*16:00–17:00/ });
+    await expect(toast).toBeVisible();
+    await expect(calendarEvent(page, 'coat 2 of 3').filter({ hasText: /^16:00 - 17:00/ })).toBeVisible();
+    await toast.getByRole('button', { name: 'Undo' }).click();
+    await expect(page.getByText(/Put back: Booth 1 \(cross-draft\), .*15:00–16:00/)).toBeVisible();
+    await expect(calendarEvent(page, 'coat 2 of 3').filter({ hasText: /^15:00 - 16:00/ })).toBeVisible();
+    const stored = await page.request.get(`/api/spray-sessions?from=${tuesday}T00:00:00Z&to=${tuesday}T23:59:00Z`);
+    const { items } = (await stored.json()) as { items: { start: string; work: { coats: { coatNumber: number }[] } }[] };
+    expect(items.find((s) => s.work.coats[0]?.coatNumber === 2)?.start).toBe(`${tuesday}T14:00:00.000Z`);
   });
 
   test('a lead changes the sprayer from the summary, cancels the session and undoes it', async ({ page }) => {
     await signIn(page, 'lead', '/planner');
     await page.getByLabel('Go to day').fill(tuesday);
-    await calendarEvent(page, booth).filter({ hasText: /^11:00 - / }).click();
+    await calendarEvent(page, 'LJ-26-105').filter({ hasText: /^11:00 - / }).click();
     const summary = page.getByRole('dialog', { name: /^Spray session \d+$/ });
     await summary.getByRole('button', { name: 'Change booking' }).click();
     const form = page.getByRole('dialog', { name: /^Change spray session \d+$/ });
     await expect(form.getByText('Keeps its 8 planned parts unless you choose others.')).toBeVisible();
-    await form.getByLabel('Sprayer').selectOption({ label: 'Me (Dev Okafor)' });
+    await form.getByLabel('Sprayer').selectOption({ label: 'Dev Okafor (me)' });
     await form.getByRole('button', { name: 'Save changes' }).click();
     await expect(form).toBeHidden();
-    const event = calendarEvent(page, booth).filter({ hasText: /^11:00 - / });
+    const event = calendarEvent(page, 'LJ-26-105').filter({ hasText: /^11:00 - / });
     await expect(event).toContainText('Planned');
     await expect(event).toContainText('Dev Okafor');
+
+    // …and gives it to the sprayer instead.
+    await event.click();
+    await summary.getByRole('button', { name: 'Change booking' }).click();
+    await form.getByLabel('Sprayer').selectOption({ label: 'Mina Castell' });
+    await form.getByRole('button', { name: 'Save changes' }).click();
+    await expect(form).toBeHidden();
+    await expect(event).toContainText('Mina Castell');
 
     await event.click();
     await summary.getByRole('button', { name: 'Cancel session' }).click();
@@ -186,19 +211,10 @@ test.describe('booth planner, dragging', () => {
     await expect(event).toHaveCount(0);
     await page.getByLabel('Show cancelled sessions').check();
     await expect(event).toContainText('Cancelled');
-    await expect(event.locator('.line-through', { hasText: 'Dev Okafor' })).toBeVisible();
+    await expect(event.locator('.line-through', { hasText: 'Mina Castell' })).toBeVisible();
     await toast.getByRole('button', { name: 'Undo' }).click();
     await expect(page.getByText(/Back in the plan: Booth 1/)).toBeVisible();
     await expect(event).toContainText('Planned');
-    await expect(event).toContainText('Dev Okafor');
+    await expect(event).toContainText('Mina Castell');
   });
 });
-
-async function drag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }) {
-  await page.mouse.move(from.x, from.y);
-  await page.mouse.down();
-  // A few small steps first: the calendar only starts a drag once the pointer has moved.
-  await page.mouse.move(from.x + 4, from.y + 4, { steps: 4 });
-  await page.mouse.move(to.x, to.y, { steps: 12 });
-  await page.mouse.up();
-}

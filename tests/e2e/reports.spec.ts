@@ -140,7 +140,7 @@ test.describe('reports', () => {
   for (const role of ['sprayer', 'assembler'] as DemoRole[]) {
     test(`${role === 'assembler' ? 'an' : 'a'} ${role} has no Reports item, and the address shows the not-allowed page`, async ({ page }) => {
       await signIn(page, role);
-      await expect(mainNav(page).getByRole('link', { name: 'Today', exact: true })).toBeVisible();
+      await expect(mainNav(page).getByRole('link', { name: 'Booths', exact: true })).toBeVisible();
       await expect(mainNav(page).getByRole('link', { name: 'Reports', exact: true })).toHaveCount(0);
       await page.goto('/reports?report=solvent');
       await expect(page.getByRole('heading', { name: 'Not part of your role' })).toBeVisible();

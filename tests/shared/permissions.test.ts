@@ -10,14 +10,18 @@ const expected: Record<string, string[]> = {
     ...['spray-sessions:read', 'spray-sessions:write', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'parts:collect', 'readings:write'],
     // All reports; their own site's sites list, but adding or renaming sites is the admin's.
     ...['reports:read', 'sites:read'],
+    // The day's planning board.
+    'today:read',
   ],
   // Sprayers read data sheets, finish systems and jobs but edit none of them.
   sprayer: [
     ...['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
     // Sprayers run the sessions they are given and log coats, but do not book the booth.
     ...['spray-sessions:read', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'readings:write', 'sites:read'],
+    // Their own day: the sessions they are given and the next step in each.
+    'today:read',
   ],
-  // Assemblers read jobs (and the systems they name) to know what is coming.
+  // Assemblers land on the ready board rather than a day board; they read jobs (and the systems they name) to know what is coming.
   assembler: ['sites:read', 'booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
 };
 

@@ -1,3 +1,4 @@
+import { useSearchParams } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { useShopSettings } from '../../features/settings/api/get-settings';
@@ -13,6 +14,9 @@ function PlannerWithSettings() {
   const user = useSessionUser();
   const settings = useShopSettings();
   const scope = useSiteScope(user);
+  // A link from the day's board may name the day to open on (?day=YYYY-MM-DD).
+  const [params] = useSearchParams();
+  const day = params.get('day') ?? '';
   if (settings.isPending) return <LoadingState what="the shop settings" />;
   if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;
   const { timezone, setupMin, cleanDownMin } = settings.data;
@@ -21,8 +25,8 @@ function PlannerWithSettings() {
     <PlannerPage
       settings={{ timezone, setupMin, cleanDownMin }}
       viewer={viewer}
-      canListUsers={can(user.role, 'users:read')}
       siteId={scope.siteId}
+      initialDay={/^\d{4}-\d{2}-\d{2}$/.test(day) ? day : undefined}
       siteSwitcher={<SiteSwitcher scope={scope} />}
     />
   );

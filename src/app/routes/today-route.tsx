@@ -1,22 +1,28 @@
+import { Navigate, useLocation } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
-import { useBooths } from '../../features/booths/api/get-booths';
-import { useRacks } from '../../features/racks/api/get-racks';
+import { ErrorState, LoadingState } from '../../components/ui/states';
 import { useShopSettings } from '../../features/settings/api/get-settings';
+import { SiteSwitcher } from '../../features/sites/components/site-switcher';
+import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { TodayPage } from '../../features/today/components/today-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { useSessionUser } from '../session-user';
 
-const firstPage = { page: 1, pageSize: 1 };
-
-export function TodayRoute() {
+function TodayBoard() {
   usePageTitle('Today');
   const user = useSessionUser();
   const settings = useShopSettings();
-  const booths = useBooths(firstPage);
-  const racks = useRacks(firstPage);
-  const counts = {
-    booths: can(user.role, 'booths:read') ? booths.data?.total : undefined,
-    racks: can(user.role, 'racks:read') ? racks.data?.total : undefined,
-  };
-  return <TodayPage user={user} settings={settings.data} counts={counts} />;
+  const scope = useSiteScope(user);
+  if (settings.isPending) return <LoadingState what="the shop settings" />;
+  if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;
+  return <TodayPage user={user} settings={settings.data} siteId={scope.siteId} siteSwitcher={<SiteSwitcher scope={scope} />} />;
+}
+
+/** Everyone lands here; an assembler's day is the ready board, so they go straight to it. */
+export function TodayRoute() {
+  const user = useSessionUser();
+  const location = useLocation();
+  // Keyed by the visit: signing in can land here twice in a row, and a second landing must send them on again.
+  if (!can(user.role, 'today:read')) return <Navigate key={location.key} to="/ready" replace />;
+  return <TodayBoard />;
 }

@@ -52,3 +52,76 @@ describe('POST /api/planner/accept', () => {
     expect(after).toBe(before);
   });
 });
+
+describe('proposals start from what is booked and what is sprayed', () => {
+  type Proposed = { stepPosition: number; boothId: number; start: string; end: string; partIds: number[] };
+  let drawers: number;
+  let sealerSession: { id: number; end: string };
+  const propose = async (): Promise<{ sessions: Proposed[]; jobs: { notes: string[] }[] }> =>
+    (await lead.agent.post('/api/planner/proposals').set('x-csrf-token', lead.csrf).send({ jobIds: [drawers] }).expect(200)).body.plan;
+
+  beforeAll(async () => {
+    drawers = (await lead.agent.get('/api/jobs?q=LJ-26-102')).body.items[0].id;
+  });
+
+  it('does not propose a coat already booked, and plans the next one after that booking’s recoat window', async () => {
+    // The drawer boxes' system: sanding sealer, P320 denib, precat clear.
+    const first = await propose();
+    expect(first.sessions.map((s) => s.stepPosition)).toEqual([0, 2]);
+    const sealer = first.sessions[0];
+    const booked = await lead.agent
+      .post('/api/planner/accept')
+      .set('x-csrf-token', lead.csrf)
+      .send({ sessions: [{ boothId: sealer.boothId, start: sealer.start, end: sealer.end, items: sealer.partIds.map((partId) => ({ partId, stepPosition: 0 })) }] })
+      .expect(201);
+    sealerSession = booked.body.items[0];
+
+    const again = await propose();
+    expect(again.sessions.map((s) => s.stepPosition)).toEqual([2]);
+    expect(again.jobs[0].notes[0]).toMatch(/^Step 1 \(Kestrel Sanding Sealer NC\) is already booked/);
+    // The sealer's recoat opens 30 min after it goes on at 20 °C (its data sheet row), then a 30 min denib.
+    expect(Date.parse(again.sessions[0].start) - Date.parse(sealerSession.end)).toBeGreaterThanOrEqual(60 * 60_000);
+  });
+
+  it('marks the parts already sprayed in a booked session, and proposes the coat again only for the rest once it is cancelled', async () => {
+    const parts: { id: number }[] = (await lead.agent.get(`/api/jobs/${drawers}/parts?pageSize=200`)).body.items;
+    const sealerId = (await lead.agent.get('/api/products?q=Sanding Sealer')).body.items[0].id;
+    const sprayed = parts.slice(0, 40).map((p) => p.id);
+    await lead.agent
+      .post('/api/coats')
+      .set('x-csrf-token', lead.csrf)
+      .send({ spraySessionId: sealerSession.id, partIds: sprayed, productId: sealerId, sprayedAt: sealerSession.end, airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 })
+      .expect(201);
+
+    const session = (await lead.agent.get(`/api/spray-sessions/${sealerSession.id}`).expect(200)).body.spraySession;
+    const done = session.items.filter((i: { sprayedAt: string | null }) => i.sprayedAt !== null).map((i: { partId: number }) => i.partId);
+    expect(done.sort((a: number, b: number) => a - b)).toEqual([...sprayed].sort((a, b) => a - b));
+    expect(session.work).toMatchObject({ partCount: 80, sprayedCount: 40, jobs: [{ id: drawers, reference: 'LJ-26-102', colour: 'Natural' }] });
+    expect(session.work.coats).toEqual([
+      { jobId: drawers, jobReference: 'LJ-26-102', colour: 'Natural', stepPosition: 0, coatNumber: 1, coatsTotal: 2, productId: sealerId, productName: 'Kestrel Sanding Sealer NC', partCount: 80, sprayedCount: 40 },
+    ]);
+
+    await lead.agent.patch(`/api/spray-sessions/${sealerSession.id}`).set('x-csrf-token', lead.csrf).send({ state: 'cancelled' }).expect(200);
+    const after = await propose();
+    expect(after.sessions.map((s) => s.stepPosition)).toEqual([0, 2]);
+    expect(after.sessions[0].partIds).toHaveLength(40);
+    expect(after.sessions[0].partIds.some((id) => sprayed.includes(id))).toBe(false);
+    expect(after.sessions[1].partIds).toHaveLength(80);
+  });
+
+  it('shows the recoat window the previous coat leaves on a booked next coat, worked out from its booking until it is sprayed', async () => {
+    const plan = await propose();
+    const [sealer, precat] = plan.sessions;
+    const accepted = await lead.agent
+      .post('/api/planner/accept')
+      .set('x-csrf-token', lead.csrf)
+      .send({ sessions: [sealer, precat].map((s) => ({ boothId: s.boothId, start: s.start, end: s.end, items: s.partIds.map((partId) => ({ partId, stepPosition: s.stepPosition })) })) })
+      .expect(201);
+    const next = accepted.body.items[1];
+    // 40 parts have the sealer on record (its window opens 30 min after the coat went on); the other 40
+    // are booked in the new sealer session, whose window opens 30 min after it ends: the later one counts.
+    const opens = Math.max(Date.parse(sealerSession.end), Date.parse(sealer.end)) + 30 * 60_000;
+    expect(next.work.recoatWindow).toEqual({ opensAt: new Date(opens).toISOString(), closesAt: null, projected: true });
+    expect(next.work.coats[0]).toMatchObject({ coatNumber: 2, coatsTotal: 2, productName: 'Kestrel Precat Clear Matt', partCount: 80, sprayedCount: 0 });
+  });
+});

@@ -88,7 +88,7 @@ describe('cautions and sprayers', () => {
 
   it('lists who can be given a session without exposing the user admin list', async () => {
     const res = await lead.agent.get('/api/sprayers').expect(200);
-    expect(res.body.items).toEqual(expect.arrayContaining([{ id: 3, name: 'Mina Castell', role: 'sprayer' }]));
+    expect(res.body.items).toEqual(expect.arrayContaining([{ id: 3, name: 'Mina Castell', role: 'sprayer', siteId: 1 }]));
     expect(res.body.items.every((u: { role: string }) => ['sprayer', 'lead'].includes(u.role))).toBe(true);
   });
 });

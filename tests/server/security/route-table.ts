@@ -129,6 +129,7 @@ export const routeTable: RouteRow[] = [
   row('POST', '/api/spray-sessions/:id/mixes', s(401, 201, 201, 201, 403), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/mixes`, body: { productId: fx.productId, wantedL: 1, tempC: 20 } })),
   row('POST', '/api/planner/proposals', s(401, 200, 200, 403, 403), (fx) => ({ url: '/api/planner/proposals', body: { jobIds: [fx.jobId], horizonDays: 2 } })),
   row('POST', '/api/planner/accept', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/planner/accept', body: { sessions: [{ boothId: fx.freeBoothId, ...fx.freeSlot() }] } })),
+  row('GET', '/api/today', s(401, 200, 200, 200, 403), get('/api/today'), 'The assembler’s day is the ready board.'),
   row('GET', '/api/coats', s(401, 200, 200, 200, 403), get('/api/coats')),
   row('POST', '/api/coats', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/coats', body: fx.coatBody() })),
   row('GET', '/api/coats/:id', s(401, 200, 200, 200, 403), async (fx) => ({ url: `/api/coats/${await fx.anyCoat()}` })),

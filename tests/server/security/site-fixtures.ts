@@ -16,9 +16,16 @@ export interface SiteSide {
   placedPartTag: string;
 }
 
+/** One site's things on today's board: a session under way now that nobody has been given. */
+export interface TodaySide {
+  spraySessionId: number;
+}
+
 export interface SiteFixtures {
   first: SiteSide;
   second: SiteSide;
+  /** Today's board: each site's session now, and a job whose only part waits for its denib at the first site. */
+  today: { first: TodaySide; second: TodaySide; denibJobId: number };
   /** The job the placed parts belong to (jobs are the group's). */
   jobId: number;
   productId: number;
@@ -100,6 +107,23 @@ async function secondSitePeople(app: Express, admin: SignedIn, siteId: number): 
   return { people, sprayerId };
 }
 
+/** An hour around now on the side's booth, given to nobody, so it is on today's board (and the sprayers' count of unassigned sessions). */
+async function bookNow(admin: SignedIn, side: SiteSide, label: string): Promise<TodaySide> {
+  const start = Date.now() - 5 * 60_000;
+  const slot = { boothId: side.boothId, start: new Date(start).toISOString(), end: new Date(start + 3600_000).toISOString() };
+  return { spraySessionId: (await ok(post(admin, '/api/spray-sessions', slot), `${label} session today`)).spraySession.id };
+}
+
+/** A job of the first site only: primer, denib, topcoat, its one part primed on the first site's rack, so its denib is due there. */
+async function denibJobOnFirstSite(shared: Shared, first: SiteSide, topcoatId: number): Promise<number> {
+  const steps = [{ kind: 'coat', productId: shared.productId, dryFilmUm: 50 }, { kind: 'abrade', grit: 'P320' }, { kind: 'coat', productId: topcoatId, dryFilmUm: 40 }];
+  const systemId = (await ok(post(shared.admin, '/api/finish-systems', { name: 'Site matrix primed system', steps }), 'primed system')).finishSystem.id;
+  const jobId = (await ok(post(shared.admin, '/api/jobs', { customer: 'Matrix Ltd', reference: 'SITE-MATRIX-DENIB', dueDate: '2027-07-01', finishSystemId: systemId }), 'denib job')).job.id;
+  const part = (await ok(post(shared.admin, `/api/jobs/${jobId}/parts`, { label: 'Matrix door', lengthMm: 700, widthMm: 400, thicknessMm: 18, rackId: first.rackId, shelf: 4 }), 'denib part')).part;
+  await ok(post(shared.admin, '/api/coats', coatOn(first.spraySessionId, [part.id], shared.productId)), 'denib primer');
+  return jobId;
+}
+
 /** The demo shop as the first site, and a second site with its own people, booth, rack, session, coat and placed part. */
 export async function createSiteFixtures(app: Express): Promise<SiteFixtures> {
   const admin = await signIn(app, demo.admin);
@@ -125,8 +149,9 @@ export async function createSiteFixtures(app: Express): Promise<SiteFixtures> {
   const secondSiteId = (await ok(post(admin, '/api/sites', { name: 'Second matrix site' }), 'second site')).site.id;
   const { people, sprayerId } = await secondSitePeople(app, admin, secondSiteId);
   const second = await buildSide(shared, secondSiteId, sprayerId, 'Second');
+  const today = { first: await bookNow(admin, first, 'First'), second: await bookNow(admin, second, 'Second'), denibJobId: await denibJobOnFirstSite(shared, first, topcoat.id) };
   const coatBody = async (side: SiteSide) => coatOn(side.spraySessionId, [(await freshPart()).id], primer.id);
   const secondSiteCoat = async () => (await ok(post(admin, '/api/coats', await coatBody(second)), 'second coat')).coat.id as number;
   const fileId = (topcoat.tdsFile as { id: number }).id;
-  return { first, second, jobId, productId: primer.id, fileId, finishSystemId, people, admin, next, freeSlot, freshPart: async () => (await freshPart()).id, coatBody, secondSiteCoat };
+  return { first, second, today, jobId, productId: primer.id, fileId, finishSystemId, people, admin, next, freeSlot, freshPart: async () => (await freshPart()).id, coatBody, secondSiteCoat };
 }

@@ -3,7 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { can } from '../../../shared/permissions';
 import { apiRoutes } from '../../../server/registry/api-routes';
-import { signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
+import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
 import { signedOutAgent } from './fixtures';
 import { routeKey } from './route-table';
 import { errorBodyProblems, send } from './send';
@@ -92,6 +92,16 @@ describe('every route as the lead, sprayer and assembler of another site', () =>
     const found: Record<string, string[]> = {};
     for (const who of siteRoles) found[who] = await problemsOf(row, who);
     expect(found).toEqual({ lead: [], sprayer: [], assembler: [] });
+  });
+});
+
+describe('GET /api/today as the first site’s lead', () => {
+  it('shows the things the second site’s board must not: the first site’s session now and the part waiting for its denib there', async () => {
+    const lead = await signIn(ctx.app, demo.lead);
+    const day = (await lead.agent.get('/api/today').expect(200)).body.today;
+    expect(day.sessions.map((s: { id: number }) => s.id)).toContain(fx.today.first.spraySessionId);
+    expect(day.sessions.map((s: { id: number }) => s.id)).not.toContain(fx.today.second.spraySessionId);
+    expect(day.denibWaiting).toContainEqual(expect.objectContaining({ jobId: fx.today.denibJobId, partCount: 1, grit: 'P320' }));
   });
 });
 

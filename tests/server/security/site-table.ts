@@ -73,6 +73,29 @@ function historyLeaks(b: Body, fx: SiteFixtures, first: FirstSite): string[] {
   ];
 }
 
+/**
+ * What a second-site board must not show: the first site's sessions, booths, people, sensors, or
+ * its job whose only part waits there; and what it must: its own session now, and (to its
+ * sprayers) one unassigned session today, its own, not the first site's.
+ */
+function todayLeaks(body: Body, fx: SiteFixtures, first: FirstSite): string[] {
+  const day = body.today;
+  if (day.view === 'sprayer') {
+    const sessions = [...day.mySessions, ...(day.nextSession ? [day.nextSession] : [])];
+    return [...leaked(sessions, 'id', first.spraySessions, 'spray session'), ...(day.unassignedToday === 1 ? [] : [`${day.unassignedToday} unassigned sessions today counted, not the site’s one`])];
+  }
+  const lists = [...day.recoatClosing, ...day.denibWaiting, ...day.jobsAtRisk];
+  return [
+    ...leaked(day.sessions, 'id', first.spraySessions, 'spray session'),
+    ...leaked(day.booths, 'id', first.booths, 'booth'),
+    ...leaked(day.sprayers, 'id', first.users, 'sprayer'),
+    ...leaked(day.staleSensors, 'boothId', first.booths, 'sensor of booth'),
+    ...leaked(day.recoatClosing, 'bookedSessionId', first.spraySessions, 'booking in spray session'),
+    ...lists.filter((entry: Body) => entry.jobId === fx.today.denibJobId).map(() => 'the job whose only part is at the first site'),
+    ...(day.sessions.some((s: Body) => s.id === fx.today.second.spraySessionId) ? [] : ['the site’s own session now is missing']),
+  ];
+}
+
 const reportOf = (body: Body, fx: SiteFixtures) => (body.report?.siteId === fx.second.siteId ? [] : [`report of site ${body.report?.siteId}`]);
 
 export const siteTable: SiteRow[] = [
@@ -164,6 +187,8 @@ export const siteTable: SiteRow[] = [
     ...b.plan.sessions.filter((s: Body) => s.partIds.includes(fx.first.placedPartId)).map(() => 'planned the part on the first site’s rack'),
   ])),
   row('POST', '/api/planner/accept', (fx) => ({ url: '/api/planner/accept', body: { sessions: [slotOn(fx.second.boothId, fx)] } }), refused((fx) => [{ url: '/api/planner/accept', body: { sessions: [slotOn(fx.first.boothId, fx)] }, fields: ['boothId'] }])),
+
+  row('GET', '/api/today', get('/api/today'), filtered(() => ({ url: '/api/today?siteId=1' }), todayLeaks)),
 
   row('GET', '/api/coats', get('/api/coats?pageSize=500'), filtered((fx) => ({ url: `/api/coats?pageSize=500&spraySessionId=${fx.first.spraySessionId}&siteId=1` }), (b, _fx, first) => leaked(b.items, 'spraySessionId', first.spraySessions, 'coat of session'))),
   row('POST', '/api/coats', async (fx) => ({ url: '/api/coats', body: await fx.coatBody(fx.second) }), refused(async (fx) => [{ url: '/api/coats', body: await fx.coatBody(fx.first), fields: ['spraySessionId'] }])),

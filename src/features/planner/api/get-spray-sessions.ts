@@ -18,6 +18,7 @@ export const plannerSessionSchema = spraySessionSchema.pick({
   notes: true,
   items: true,
   overrideReason: true,
+  work: true,
 });
 export type PlannerSession = z.infer<typeof plannerSessionSchema>;
 

@@ -1,28 +1,22 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { listSchema } from '../../../../shared/schemas/common';
-import { userSchema } from '../../../../shared/schemas/user';
+import { sprayerListSchema } from '../../../../shared/schemas/sprayer';
 import { apiClient } from '../../../lib/api-client';
 import { plannerKeys } from './planner-keys';
 
-const userListSchema = listSchema(userSchema);
-
-export function getUsers(signal?: AbortSignal) {
-  return apiClient.get('/api/users', userListSchema, { query: { page: 1, pageSize: 200 }, signal });
+export function getSprayers(boothId: number, signal?: AbortSignal) {
+  return apiClient.get('/api/sprayers', sprayerListSchema, { query: { boothId }, signal });
 }
 
-/**
- * People who can be put on a session: active sprayers and leads. The user list is the owner's
- * alone (users:read), so other roles do not ask; a lighter sprayer list would serve leads too.
- */
-export const sprayersQueryOptions = (enabled: boolean) =>
+/** Who a session in this booth can be given to: the active sprayers and leads of the booth's site. */
+export const sprayersQueryOptions = (boothId: number | undefined) =>
   queryOptions({
-    queryKey: plannerKeys.sprayers(),
-    queryFn: ({ signal }) => getUsers(signal),
-    select: (list) => list.items.filter((user) => !user.disabled && (user.role === 'sprayer' || user.role === 'lead')),
+    queryKey: plannerKeys.sprayers(boothId),
+    queryFn: ({ signal }) => getSprayers(boothId!, signal),
+    select: (list) => list.items,
     staleTime: 5 * 60_000,
-    enabled,
+    enabled: boothId !== undefined && Number.isFinite(boothId),
   });
 
-export function useSprayers(enabled: boolean) {
-  return useQuery(sprayersQueryOptions(enabled));
+export function useSprayers(boothId: number | undefined) {
+  return useQuery(sprayersQueryOptions(boothId));
 }

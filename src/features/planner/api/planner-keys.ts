@@ -19,5 +19,5 @@ export const plannerKeys = {
   part: (id: number) => [...plannerKeys.all, 'part', id] as const,
   finishSystems: () => [...plannerKeys.all, 'finish-systems'] as const,
   products: () => [...plannerKeys.all, 'products'] as const,
-  sprayers: () => [...plannerKeys.all, 'sprayers'] as const,
+  sprayers: (boothId?: number) => [...plannerKeys.all, 'sprayers', boothId ?? 'none'] as const,
 };

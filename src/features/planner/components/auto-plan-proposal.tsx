@@ -35,7 +35,7 @@ export function AutoPlanProposal({ plan, timeZone, boothNames }: AutoPlanProposa
         ))}
       </ul>
       {plan.sessions.length === 0 ? (
-        <p>Nothing to book: every chosen job is finished or could not be fitted (see above).</p>
+        <p>Nothing to book: every chosen job is finished, already booked, or could not be fitted (see above).</p>
       ) : (
         <div className="overflow-x-auto">
           <table className="w-full text-left text-sm">
@@ -46,7 +46,7 @@ export function AutoPlanProposal({ plan, timeZone, boothNames }: AutoPlanProposa
                 <th className="p-2">Coat</th>
                 <th className="p-2">Booth</th>
                 <th className="p-2">When (shop time)</th>
-                <th className="p-2">Area</th>
+                <th className="p-2">Parts</th>
               </tr>
             </thead>
             <tbody>
@@ -58,7 +58,9 @@ export function AutoPlanProposal({ plan, timeZone, boothNames }: AutoPlanProposa
                   </td>
                   <td className="p-2">{boothNames.get(s.boothId) ?? `Booth ${s.boothId}`}</td>
                   <td className="p-2">{when(s.start, s.end, timeZone)}</td>
-                  <td className="p-2">{s.areaM2.toFixed(1)} m²</td>
+                  <td className="p-2">
+                    {s.partIds.length} {s.partIds.length === 1 ? 'part' : 'parts'}, {s.areaM2.toFixed(1)} m²
+                  </td>
                 </tr>
               ))}
             </tbody>

@@ -18,6 +18,7 @@ import { DurationSuggestion } from './duration-suggestion';
 import { OverrideReasonPanel } from './override-reason-panel';
 import { PlanPartsFields, type PartsPlan } from './plan-parts-fields';
 import { ShopTimeField } from './shop-time-field';
+import { SprayerField, type SprayerViewer } from './sprayer-field';
 
 type BookingInput = z.input<typeof createSpraySessionSchema>;
 type BookingOutput = z.output<typeof createSpraySessionSchema>;
@@ -44,12 +45,12 @@ interface BookingFormProps {
   target: BookingTarget;
   booths: Booth[];
   settings: PlanningSettings;
-  sprayerOptions: { value: number | ''; label: string }[];
+  viewer: SprayerViewer;
   onDone: (saved: PlannerSession | null) => void;
 }
 
 /** Book a session, or change one: booth, times on the shop clock, sprayer, parts and notes. */
-export function BookingForm({ target, booths, settings, sprayerOptions, onDone }: BookingFormProps) {
+export function BookingForm({ target, booths, settings, viewer, onDone }: BookingFormProps) {
   const createSession = useCreateSpraySession();
   const updateSession = useUpdateSpraySession();
   const [formError, setFormError] = useState<string | null>(null);
@@ -103,10 +104,11 @@ export function BookingForm({ target, booths, settings, sprayerOptions, onDone }
         />
         <ShopTimeField control={control} name="start" label="Starts" timeZone={settings.timezone} error={errors.start?.message} />
         <ShopTimeField control={control} name="end" label="Ends" timeZone={settings.timezone} error={errors.end?.message} />
-        <SelectField
-          label="Sprayer"
+        <SprayerField
+          boothId={Number(boothId) || undefined}
+          viewer={viewer}
+          current={target.kind === 'edit' ? target.session : undefined}
           className="sm:col-span-2"
-          options={sprayerOptions}
           error={errors.sprayerId?.message}
           registration={register('sprayerId', { setValueAs: idOrNull })}
         />

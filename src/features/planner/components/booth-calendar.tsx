@@ -5,6 +5,7 @@ import FullCalendar from '@fullcalendar/react';
 import timeGridPlugin from '@fullcalendar/timegrid';
 import { useEffect, useRef, type CSSProperties } from 'react';
 import type { PlannerView } from '../utils/calendar-range';
+import { useRecoatShading } from '../hooks/use-recoat-shading';
 import { shopTimeZonePlugin } from '../utils/shop-zone-plugin';
 import { SessionEventContent } from './session-event-content';
 
@@ -26,6 +27,8 @@ interface BoothCalendarProps extends CalendarHandlers {
   businessHours: BusinessHoursInput;
   canWrite: boolean;
   label: string;
+  /** Pixels; the grid scrolls inside it. */
+  height?: number;
 }
 
 const plugins = [timeGridPlugin, interactionPlugin, shopTimeZonePlugin];
@@ -42,7 +45,7 @@ const calendarTheme = {
 } as CSSProperties;
 
 /** One time grid; the planner shows one per booth on the day view, or one for the week. */
-export function BoothCalendar({ view, day, timeZone, events, businessHours, canWrite, label, ...handlers }: BoothCalendarProps) {
+export function BoothCalendar({ view, day, timeZone, events, businessHours, canWrite, label, height = 640, ...handlers }: BoothCalendarProps) {
   const calendarRef = useRef<FullCalendar>(null);
   const viewName = view === 'week' ? 'timeGridWeek' : 'timeGridDay';
 
@@ -57,8 +60,9 @@ export function BoothCalendar({ view, day, timeZone, events, businessHours, canW
   };
   const click = (arg: EventClickArg) => {
     arg.jsEvent.preventDefault();
-    handlers.onOpenSession(Number(arg.event.id));
+    if (arg.event.extendedProps.session) handlers.onOpenSession(Number(arg.event.id));
   };
+  const shading = useRecoatShading(timeZone, canWrite);
 
   return (
     <div role="region" aria-label={label} style={calendarTheme} className="min-w-0 rounded-panel border border-maple-300 bg-white p-1 text-sm [&_.fc-timegrid-slot]:h-6!">
@@ -80,7 +84,7 @@ export function BoothCalendar({ view, day, timeZone, events, businessHours, canW
         slotLabelFormat={clock}
         eventTimeFormat={clock}
         dayHeaderFormat={{ weekday: 'short', day: 'numeric', month: 'short' }}
-        height={640}
+        height={height}
         expandRows={false}
         nowIndicator
         businessHours={businessHours}
@@ -88,14 +92,28 @@ export function BoothCalendar({ view, day, timeZone, events, businessHours, canW
         eventInteractive
         selectable={canWrite}
         selectMirror={canWrite}
+        slotEventOverlap={false}
+        eventMinHeight={28}
+        selectLongPressDelay={400}
+        eventLongPressDelay={400}
+        eventBackgroundColor="#d5ece4"
+        eventBorderColor="#1b5246"
+        eventTextColor="#123630"
         editable={canWrite}
         eventDurationEditable={canWrite}
         select={select}
         eventClick={click}
         eventDrop={handlers.onMove}
         eventResize={handlers.onMove}
-        eventDragStart={() => handlers.onInteracting(true)}
-        eventDragStop={() => handlers.onInteracting(false)}
+        eventDidMount={shading.mounted}
+        eventDragStart={() => {
+          shading.dragStarted();
+          handlers.onInteracting(true);
+        }}
+        eventDragStop={(arg) => {
+          shading.dragStopped(arg.view.calendar);
+          handlers.onInteracting(false);
+        }}
         eventResizeStart={() => handlers.onInteracting(true)}
         eventResizeStop={() => handlers.onInteracting(false)}
         eventContent={(arg) => <SessionEventContent arg={arg} />}

@@ -1,13 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { toast } from 'sonner';
 import { overrideSchema } from '../../../../shared/schemas/spray-session';
 import { Dialog } from '../../../components/ui/dialog';
 import { FormAlert } from '../../../components/ui/field';
 import { errorMessage } from '../../../lib/error-messages';
 import { useUpdateSpraySession } from '../api/update-spray-session';
-import type { PendingMove } from '../hooks/use-calendar-moves';
+import { useUndoMove, type PendingMove } from '../hooks/use-calendar-moves';
 import { sessionWhen } from '../utils/session-time';
 import { OverrideReasonPanel } from './override-reason-panel';
 
@@ -19,13 +18,14 @@ interface MoveOverrideDialogProps {
 
 function MoveOverrideForm({ move, timeZone, onClose }: { move: PendingMove; timeZone: string; onClose: () => void }) {
   const updateSession = useUpdateSpraySession();
+  const confirmMove = useUndoMove(timeZone);
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm({ resolver: zodResolver(overrideSchema), defaultValues: { reason: '' } });
   const onSubmit = handleSubmit(async (override) => {
     setFormError(null);
     try {
       const saved = await updateSession.mutateAsync({ id: move.id, changes: { start: move.start, end: move.end, override } });
-      toast.success(`Moved: ${saved.boothName}, ${sessionWhen(saved, timeZone)}.`);
+      confirmMove(saved, move.before);
       onClose();
     } catch (error) {
       setFormError(errorMessage(error));

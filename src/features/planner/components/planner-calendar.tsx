@@ -1,8 +1,9 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import type { Booth } from '../../../../shared/schemas/booth';
 import { calendarDateIn } from '../../../../shared/time';
 import { Button } from '../../../components/ui/button';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
+import { boothIdentities } from '../../../lib/booth-identity';
 import { errorMessage } from '../../../lib/error-messages';
 import { useSpraySessions, type PlannerSession } from '../api/get-spray-sessions';
 import { useCalendarMoves } from '../hooks/use-calendar-moves';
@@ -56,7 +57,9 @@ export function PlannerCalendar({ settings, booths, siteId, canWrite, day, onDay
   const moves = useCalendarMoves(timeZone);
   const title = rangeTitle(view, day);
   const shownBooths = boothId ? booths.filter((booth) => booth.id === boothId) : booths;
-  const shownSessions = (sessions.data?.items ?? []).filter((session) => showCancelled || session.state !== 'cancelled');
+  const identities = useMemo(() => boothIdentities(booths.map((booth) => booth.id)), [booths]);
+  // Kept stable across renders: a new list mid-drag would make the calendar redraw its events and drop the shading.
+  const shownSessions = useMemo(() => (sessions.data?.items ?? []).filter((session) => showCancelled || session.state !== 'cancelled'), [sessions.data, showCancelled]);
   const open = (id: number) => {
     const session = sessions.data?.items.find((s) => s.id === id);
     if (session) onOpen(session);
@@ -65,6 +68,7 @@ export function PlannerCalendar({ settings, booths, siteId, canWrite, day, onDay
   return (
     <>
       <PlannerToolbar
+        identities={identities}
         view={view}
         weekAllowed={!narrow}
         day={day}
@@ -101,13 +105,14 @@ export function PlannerCalendar({ settings, booths, siteId, canWrite, day, onDay
           booths={shownBooths}
           sessions={shownSessions}
           canWrite={canWrite}
+          identities={identities}
           onSelectRange={(start, end, boothForRange) => onBook(start.toISOString(), end.toISOString(), boothForRange)}
           onOpenSession={open}
           onMove={moves.onMove}
           onInteracting={setInteracting}
         />
       )}
-      <SessionList sessions={shownSessions} timeZone={timeZone} title={title} onOpen={open} />
+      <SessionList sessions={shownSessions} timeZone={timeZone} title={title} identities={identities} onOpen={open} />
       {canWrite && <MoveOverrideDialog move={moves.pendingMove} timeZone={timeZone} onClose={moves.closePendingMove} />}
     </>
   );

@@ -4,7 +4,6 @@ import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { usePlannerBooths } from '../api/get-planner-booths';
-import { useSprayers } from '../api/get-sprayers';
 import type { PlannerSession } from '../api/get-spray-sessions';
 import { useCancelSession } from '../hooks/use-cancel-session';
 import { shopWallToInstant } from '../utils/shop-wall-clock';
@@ -16,21 +15,21 @@ import { PlannerDialogs, type Viewer } from './planner-dialogs';
 interface PlannerPageProps {
   settings: PlanningSettings;
   viewer: Viewer;
-  canListUsers: boolean;
   /** An admin looking at one site (left out: every site), and the switcher that chooses it. */
   siteId?: number;
   siteSwitcher?: ReactNode;
+  /** The day to open on; today when not given. */
+  initialDay?: string;
 }
 
 /** The booth planner: a week or day of spray sessions per booth, booked and moved by the lead. */
-export function PlannerPage({ settings, viewer, canListUsers, siteId, siteSwitcher }: PlannerPageProps) {
+export function PlannerPage({ settings, viewer, siteId, siteSwitcher, initialDay }: PlannerPageProps) {
   const timeZone = settings.timezone;
-  const [day, setDay] = useState(() => calendarDateIn(new Date(), timeZone));
+  const [day, setDay] = useState(() => initialDay ?? calendarDateIn(new Date(), timeZone));
   const [booking, setBooking] = useState<BookingTarget | null>(null);
   const [opened, setOpened] = useState<PlannerSession | undefined>(undefined);
   const [autoPlanning, setAutoPlanning] = useState(false);
   const booths = usePlannerBooths(siteId);
-  const sprayers = useSprayers(viewer.canWrite && canListUsers);
   const cancelSession = useCancelSession(timeZone);
 
   const bookBlank = () => {
@@ -105,7 +104,6 @@ export function PlannerPage({ settings, viewer, canListUsers, siteId, siteSwitch
         viewer={viewer}
         settings={settings}
         booths={booths.data.items}
-        sprayers={sprayers.data}
         booking={booking}
         opened={opened}
         onBooked={booked}

@@ -1,12 +1,15 @@
 import { useId } from 'react';
 import type { Booth } from '../../../../shared/schemas/booth';
+import { BoothMark } from '../../../components/ui/booth-mark';
 import { Button } from '../../../components/ui/button';
+import type { BoothIdentity } from '../../../lib/booth-identity';
 import { inputClasses } from '../../../components/ui/field';
 import type { PlannerView } from '../utils/calendar-range';
 
 export type BoothFilter = number | 'all';
 
 interface PlannerToolbarProps {
+  identities: Map<number, BoothIdentity>;
   view: PlannerView;
   weekAllowed: boolean;
   day: string;
@@ -37,6 +40,21 @@ function ViewToggle({ view, weekAllowed, onView }: Pick<PlannerToolbarProps, 'vi
         </Button>
       ))}
     </div>
+  );
+}
+
+/** Which band marks which booth; the blocks repeat the booth's name too. */
+function BoothKey({ booths, identities }: { booths: Booth[]; identities: Map<number, BoothIdentity> }) {
+  if (booths.length < 2) return null;
+  return (
+    <ul aria-label="Booths on the calendar" className="flex basis-full flex-wrap gap-x-4 gap-y-1 text-sm">
+      {booths.map((booth) => (
+        <li key={booth.id} className="flex items-center gap-1.5">
+          <BoothMark identity={identities.get(booth.id)} className="h-4 w-3" />
+          <span>{booth.name}</span>
+        </li>
+      ))}
+    </ul>
   );
 }
 
@@ -88,6 +106,7 @@ export function PlannerToolbar(props: PlannerToolbarProps) {
         <input type="checkbox" className="size-5 accent-lacquer-700" checked={showCancelled} onChange={(event) => props.onShowCancelled(event.target.checked)} />
         Show cancelled sessions
       </label>
+      <BoothKey booths={booths} identities={props.identities} />
     </div>
   );
 }

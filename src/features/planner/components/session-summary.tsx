@@ -3,6 +3,8 @@ import { Link } from 'react-router-dom';
 import type { Booth } from '../../../../shared/schemas/booth';
 import { spraySessionStateLabels } from '../../../../shared/schemas/spray-session';
 import { Button, buttonClasses } from '../../../components/ui/button';
+import { formatShopDateTime } from '../../../lib/shop-time';
+import { sessionWorkLine } from '../../../lib/session-work-words';
 import { useSpraySession } from '../api/get-spray-session';
 import type { PlannerSession } from '../api/get-spray-sessions';
 import { useSessionPlan, type SessionPlan } from '../hooks/use-session-plan';
@@ -30,12 +32,12 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
-function PlannedParts({ plan, count }: { plan: SessionPlan; count: number }) {
+function PlannedParts({ plan, count, sprayed, timeZone }: { plan: SessionPlan; count: number; sprayed: number; timeZone: string }) {
   if (count === 0) return <p className="mt-3 text-maple-700">No parts planned yet.</p>;
   return (
     <section aria-labelledby="session-parts" className="mt-4">
       <h3 id="session-parts" className="font-semibold">
-        Planned parts ({count})
+        Planned parts ({count}){sprayed > 0 ? `, ${sprayed} sprayed` : ''}
       </h3>
       <ul className="mt-1 max-h-48 overflow-y-auto rounded-panel border border-maple-200 bg-white">
         {plan.rows.map((row) => (
@@ -45,11 +47,20 @@ function PlannedParts({ plan, count }: { plan: SessionPlan; count: number }) {
             </Link>
             {row.jobReference && <span className="text-maple-700">Job {row.jobReference}</span>}
             <span>{row.coat}</span>
+            <span className={row.sprayedAt ? 'font-medium text-verdict-go' : 'text-maple-700'}>
+              {row.sprayedAt ? `✓ Sprayed ${formatShopDateTime(row.sprayedAt, timeZone)}` : 'To spray'}
+            </span>
           </li>
         ))}
       </ul>
     </section>
   );
+}
+
+function windowWords(window: NonNullable<PlannerSession['work']['recoatWindow']>, timeZone: string): string {
+  const opens = `opens ${formatShopDateTime(window.opensAt, timeZone)}`;
+  const closes = window.closesAt ? `, closes ${formatShopDateTime(window.closesAt, timeZone)}` : ', no closing time';
+  return `${opens}${closes}${window.projected ? ' (worked out from the booked coat before)' : ''}`;
 }
 
 /** A session at a glance: when, where, who, its state in words, its parts and what safety asks. */
@@ -68,10 +79,12 @@ export function SessionSummary({ shown, booth, timeZone, canWrite, canReadProduc
         <Fact term="Booth">{session.boothName}</Fact>
         <Fact term="When">{sessionWhen(session, timeZone)}</Fact>
         <Fact term="Sprayer">{sprayerWords(session)}</Fact>
+        {session.work.coats.length > 0 && <Fact term="Sprays">{sessionWorkLine(session.work)}</Fact>}
+        {session.work.recoatWindow && <Fact term="Recoat window">{windowWords(session.work.recoatWindow, timeZone)}</Fact>}
         {session.notes && <Fact term="Notes">{session.notes}</Fact>}
         {session.overrideReason && <Fact term="Booked outside opening hours because">{session.overrideReason}</Fact>}
       </dl>
-      <PlannedParts plan={plan} count={new Set(session.items.map((item) => item.partId)).size} />
+      <PlannedParts plan={plan} count={session.work.partCount || new Set(session.items.map((item) => item.partId)).size} sprayed={session.work.sprayedCount} timeZone={timeZone} />
       <SessionCautions plan={plan} booth={booth} />
       <div className="mt-6 flex flex-wrap justify-end gap-3">
         {canWrite && cancellable && (

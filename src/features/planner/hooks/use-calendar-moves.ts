@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { toast } from 'sonner';
 import { errorMessage } from '../../../lib/error-messages';
+import type { PlannerSession } from '../api/get-spray-sessions';
 import { useUpdateSpraySession } from '../api/update-spray-session';
 import type { SessionMoveArg } from '../components/booth-calendar';
 import { needsOverrideReason } from '../utils/booking-errors';
@@ -11,27 +12,49 @@ export interface PendingMove {
   start: string;
   end: string;
   message: string;
+  /** Where it was, so the move can be undone. */
+  before: PlannerSession;
 }
 
 /**
- * A drag or resize is saved at once. When the server refuses, the block goes back where it was
- * and the reason is shown in words; outside opening hours the lead may give a reason and move it anyway.
+ * Undo puts a moved session back where it was. A slot first booked outside opening hours goes
+ * back with the reason it was booked there under.
+ */
+export function useUndoMove(timeZone: string) {
+  const updateSession = useUpdateSpraySession();
+  const undo = (before: PlannerSession) =>
+    updateSession
+      .mutateAsync({ id: before.id, changes: { start: before.start, end: before.end, boothId: before.boothId, ...(before.overrideReason ? { override: { reason: before.overrideReason } } : {}) } })
+      .then(
+        () => toast.success(`Put back: ${before.boothName}, ${sessionWhen(before, timeZone)}.`),
+        (error: unknown) => toast.error(`Could not undo: ${errorMessage(error)}`),
+      );
+  return (saved: PlannerSession, before: PlannerSession) =>
+    toast.success(`Moved: ${saved.boothName}, ${sessionWhen(saved, timeZone)}.`, { duration: 10_000, action: { label: 'Undo', onClick: () => void undo(before) } });
+}
+
+/**
+ * A drag or resize is saved at once, with Undo on the confirmation. When the server refuses, the
+ * block goes back where it was and the reason is shown in words; outside opening hours the lead
+ * may give a reason and move it anyway.
  */
 export function useCalendarMoves(timeZone: string) {
   const updateSession = useUpdateSpraySession();
+  const confirmMove = useUndoMove(timeZone);
   const [problem, setProblem] = useState<string | null>(null);
   const [pendingMove, setPendingMove] = useState<PendingMove | null>(null);
 
   const onMove = (arg: SessionMoveArg) => {
     const { event } = arg;
+    const before = event.extendedProps.session as PlannerSession;
     if (!event.start || !event.end) return arg.revert();
     const move = { id: Number(event.id), start: event.start.toISOString(), end: event.end.toISOString() };
     setProblem(null);
     updateSession.mutateAsync({ id: move.id, changes: { start: move.start, end: move.end } }).then(
-      (saved) => toast.success(`Moved: ${saved.boothName}, ${sessionWhen(saved, timeZone)}.`),
+      (saved) => confirmMove(saved, before),
       (error: unknown) => {
         arg.revert();
-        if (needsOverrideReason(error)) setPendingMove({ ...move, message: errorMessage(error) });
+        if (needsOverrideReason(error)) setPendingMove({ ...move, message: errorMessage(error), before });
         else setProblem(`Not moved: ${errorMessage(error)}`);
       },
     );

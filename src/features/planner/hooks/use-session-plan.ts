@@ -16,6 +16,8 @@ export interface PlannedPartRow {
   label: string;
   jobReference: string | null;
   coat: string;
+  /** When this step's coat went on the part; null while it is still to spray. */
+  sprayedAt: string | null;
 }
 
 export interface SessionPlan {
@@ -52,7 +54,7 @@ export function useSessionPlan(session: PlannerSession, canReadProducts: boolean
     const part = parts.find((q) => q.data?.id === item.partId)?.data;
     const { job, system } = systemOfPart(item.partId);
     const step = coatStep(system, item.stepPosition);
-    return { partId: item.partId, label: part?.label ?? `Part ${item.partId}`, jobReference: job?.reference ?? null, coat: step ? step.productName : 'Coat not set' };
+    return { partId: item.partId, label: part?.label ?? `Part ${item.partId}`, jobReference: job?.reference ?? null, coat: step ? step.productName : 'Coat not set', sprayedAt: item.sprayedAt };
   });
   const productIds = unique(items.flatMap((item) => coatStep(systemOfPart(item.partId).system, item.stepPosition)?.productId ?? []));
   const known = productIds.flatMap((id) => products.data?.items.find((p: Product) => p.id === id) ?? []);

@@ -1,15 +1,16 @@
 import type { EventInput } from '@fullcalendar/core';
 import { spraySessionStateLabels, type SpraySessionState } from '../../../../shared/schemas/spray-session';
+import { boothIdentity, type BoothIdentity } from '../../../lib/booth-identity';
 import type { PlannerSession } from '../api/get-spray-sessions';
 
-/** Colours only back up the words on each event (tailwind tokens: lacquer, verdict, maple). */
-const stateColours: Record<SpraySessionState, { background: string; border: string; text: string }> = {
-  planned: { background: '#1b5246', border: '#123630', text: '#ffffff' },
-  checking: { background: '#2a7f69', border: '#17423a', text: '#ffffff' },
-  spraying: { background: '#b4232a', border: '#7d1419', text: '#ffffff' },
-  clearing: { background: '#a35a00', border: '#6e3d00', text: '#ffffff' },
-  done: { background: '#776548', border: '#3f362a', text: '#ffffff' },
-  cancelled: { background: '#faf8f4', border: '#95805c', text: '#3f362a' },
+/** State chips: the colour only backs up the word (tailwind tokens: lacquer, verdict, maple). */
+export const stateChipColours: Record<SpraySessionState, { background: string; text: string }> = {
+  planned: { background: '#1b5246', text: '#ffffff' },
+  checking: { background: '#2a7f69', text: '#ffffff' },
+  spraying: { background: '#b4232a', text: '#ffffff' },
+  clearing: { background: '#a35a00', text: '#ffffff' },
+  done: { background: '#5c4e39', text: '#ffffff' },
+  cancelled: { background: '#ffffff', text: '#3f362a' },
 };
 
 export const sprayerWords = (session: Pick<PlannerSession, 'sprayerName'>) => session.sprayerName ?? 'No sprayer yet';
@@ -24,17 +25,19 @@ export function isMovable(session: PlannerSession): boolean {
   return session.state === 'planned';
 }
 
-export function toCalendarEvent(session: PlannerSession, canWrite: boolean): EventInput {
-  const colours = stateColours[session.state];
+/** A block takes its booth's look: the booth's tint, its patterned band and ink, whatever its state. */
+export function toCalendarEvent(session: PlannerSession, canWrite: boolean, identity: BoothIdentity = boothIdentity(0)): EventInput {
+  const cancelled = session.state === 'cancelled';
   return {
     id: String(session.id),
     title: sessionLabel(session),
     start: session.start,
     end: session.end,
     editable: canWrite && isMovable(session),
-    backgroundColor: colours.background,
-    borderColor: colours.border,
-    textColor: colours.text,
-    extendedProps: { session },
+    backgroundColor: cancelled ? '#ffffff' : identity.tint,
+    borderColor: identity.ink,
+    textColor: '#2a241c',
+    classNames: ['bw-session', ...(cancelled ? ['bw-session-cancelled'] : [])],
+    extendedProps: { session, identity },
   };
 }

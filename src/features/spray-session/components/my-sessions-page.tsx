@@ -4,6 +4,7 @@ import { calendarDateIn } from '../../../../shared/time';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
+import { sessionWorkLine } from '../../../lib/session-work-words';
 import { formatShopDate } from '../../../lib/shop-time';
 import { useSpraySessions } from '../api/get-spray-sessions';
 import { sessionSpan } from '../utils/session-format';
@@ -25,7 +26,6 @@ interface MySessionsPageProps {
 }
 
 function SessionRow({ session, timeZone }: { session: SpraySession; timeZone: string }) {
-  const parts = new Set(session.items.map((i) => i.partId)).size;
   return (
     <li>
       <Link
@@ -35,8 +35,9 @@ function SessionRow({ session, timeZone }: { session: SpraySession; timeZone: st
         <span>
           <span className="block text-lg font-bold text-lacquer-900 underline-offset-4">{session.boothName}</span>
           <span className="block text-maple-800">
-            {sessionSpan(session, timeZone)} · {parts === 1 ? '1 part' : `${parts} parts`} · {session.sprayerName ?? 'no sprayer yet'}
+            {sessionSpan(session, timeZone)} · {session.sprayerName ?? 'no sprayer yet'}
           </span>
+          <span className="block text-maple-800">{sessionWorkLine(session.work)}</span>
         </span>
         <SessionStateBadge state={session.state} />
       </Link>

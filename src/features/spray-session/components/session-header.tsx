@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { spraySessionStateLabels, type SpraySession, type SpraySessionState } from '../../../../shared/schemas/spray-session';
+import { coatHeadline, coatMaterial, partsWords } from '../../../lib/session-work-words';
 import { sessionSpan } from '../utils/session-format';
 
 const stateStyles: Record<SpraySessionState, string> = {
@@ -39,8 +40,17 @@ export function SessionHeader({ session, timeZone, partCount }: { session: Spray
       <dl className="mt-3 grid gap-3 sm:grid-cols-3">
         <Fact term="When (shop time)">{sessionSpan(session, timeZone)}</Fact>
         <Fact term="Sprayer">{session.sprayerName ?? 'Not assigned'}</Fact>
-        <Fact term="Planned parts">{partCount === 0 ? 'None planned' : partCount}</Fact>
+        <Fact term="Planned parts">{partCount === 0 ? 'None planned' : partsWords({ partCount, sprayedCount: session.work.sprayedCount })}</Fact>
       </dl>
+      {session.work.coats.length > 0 && (
+        <ul aria-label="What this session sprays" className="mt-2 space-y-0.5 text-lg">
+          {session.work.coats.map((coat) => (
+            <li key={`${coat.jobId}-${coat.stepPosition}`}>
+              <span className="font-semibold">{coatHeadline(coat)}</span>: {coatMaterial(coat)} ({partsWords(coat)})
+            </li>
+          ))}
+        </ul>
+      )}
       {session.notes && <p className="mt-3 rounded-panel border border-maple-300 bg-white p-3">{session.notes}</p>}
     </header>
   );

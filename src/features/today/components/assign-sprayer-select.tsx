@@ -1,0 +1,47 @@
+import { useId } from 'react';
+import { toast } from 'sonner';
+import type { Sprayer } from '../../../../shared/schemas/sprayer';
+import type { TodaySession } from '../../../../shared/schemas/today';
+import { inputClasses } from '../../../components/ui/field';
+import { errorMessage } from '../../../lib/error-messages';
+import { useAssignSprayer } from '../api/assign-sprayer';
+
+interface AssignSprayerSelectProps {
+  session: TodaySession;
+  /** The active sprayers and leads of the session's booth's site. */
+  sprayers: Sprayer[];
+  label: string;
+}
+
+/** Give a planned session to someone (or change who has it) without leaving the board. */
+export function AssignSprayerSelect({ session, sprayers, label }: AssignSprayerSelectProps) {
+  const id = useId();
+  const assign = useAssignSprayer();
+  const change = (value: string) => {
+    const sprayerId = value === '' ? null : Number(value);
+    const name = sprayers.find((s) => s.id === sprayerId)?.name;
+    assign.mutate(
+      { sessionId: session.id, sprayerId },
+      {
+        onSuccess: () => toast.success(name ? `${name} sprays ${session.boothName} session ${session.id}.` : `Session ${session.id} has no sprayer now.`),
+        onError: (error) => toast.error(`Not changed: ${errorMessage(error)}`),
+      },
+    );
+  };
+  return (
+    <div className="flex flex-wrap items-center gap-2">
+      <label htmlFor={id} className="text-sm font-medium">
+        Sprayer<span className="sr-only"> for {label}</span>
+      </label>
+      <select id={id} className={`${inputClasses} max-w-60`} value={session.sprayerId ?? ''} disabled={assign.isPending} onChange={(event) => change(event.target.value)}>
+        <option value="">Not assigned yet</option>
+        {sprayers.map((s) => (
+          <option key={s.id} value={s.id}>
+            {s.name}
+          </option>
+        ))}
+      </select>
+      {assign.isPending && <span role="status" className="text-sm text-maple-700">Saving…</span>}
+    </div>
+  );
+}
