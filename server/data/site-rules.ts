@@ -1,0 +1,75 @@
+import type { EntityManager } from 'typeorm';
+
+/**
+ * How the rows of one table belong to a site. Booths, racks and users carry a site; spray
+ * sessions belong to their booth's site; mixes, coats and planned items to their session's;
+ * readings to their booth's or rack's; audit entries to the site they were written about (or to
+ * the whole group). Jobs, parts, products, finish systems and settings are group-wide, but a part
+ * placed on a rack is placed on that rack's site.
+ */
+export interface SiteRule<E> {
+  /** SQL, on the row alias, true for rows of the site bound as `:scopeSiteId`; absent when every site shares the rows. */
+  where?: (alias: string) => string;
+  /** The sites a row about to be written touches; none for a group-wide row. */
+  sitesOf(row: Partial<E>, manager: EntityManager): Promise<number[]>;
+  /** Rows the whole group shares: nothing to check on read or write. */
+  shared?: true;
+}
+
+const boothsOfSite = 'SELECT sb.id FROM booths sb WHERE sb.site_id = :scopeSiteId';
+const racksOfSite = 'SELECT sr.id FROM racks sr WHERE sr.site_id = :scopeSiteId';
+const spraySessionsOfSite = `SELECT ss.id FROM spray_sessions ss WHERE ss.booth_id IN (${boothsOfSite})`;
+const coatsOfSite = `SELECT sc.id FROM coats sc WHERE sc.spray_session_id IN (${spraySessionsOfSite})`;
+
+/** The site of the row with this id, by one of the lookups below; none when there is no such row. */
+async function siteOf(manager: EntityManager, lookup: (id: string) => string, id: number | null | undefined): Promise<number[]> {
+  if (id === null || id === undefined) return [];
+  const placeholder = manager.connection.options.type === 'postgres' ? '$1' : '?';
+  const rows: { site_id: unknown }[] = await manager.query(lookup(placeholder), [id]);
+  return rows.length ? [Number(rows[0].site_id)] : [];
+}
+
+const boothSites = (id: string) => `SELECT site_id FROM booths WHERE id = ${id}`;
+const rackSites = (id: string) => `SELECT site_id FROM racks WHERE id = ${id}`;
+const spraySessionSites = (id: string) => `SELECT b.site_id FROM spray_sessions s JOIN booths b ON b.id = s.booth_id WHERE s.id = ${id}`;
+const coatSites = (id: string) => `SELECT b.site_id FROM coats c JOIN spray_sessions s ON s.id = c.spray_session_id JOIN booths b ON b.id = s.booth_id WHERE c.id = ${id}`;
+
+const own = (siteId: number | undefined): number[] => (siteId === undefined ? [] : [siteId]);
+
+export const groupWide: SiteRule<object> = { shared: true, sitesOf: async () => [] };
+
+export const ownSite: SiteRule<{ siteId: number }> = {
+  where: (a) => `${a}.site_id = :scopeSiteId`,
+  sitesOf: async (row) => own(row.siteId),
+};
+
+export const byBooth: SiteRule<{ boothId: number }> = {
+  where: (a) => `${a}.booth_id IN (${boothsOfSite})`,
+  sitesOf: (row, manager) => siteOf(manager, boothSites, row.boothId),
+};
+
+export const bySpraySession: SiteRule<{ spraySessionId: number }> = {
+  where: (a) => `${a}.spray_session_id IN (${spraySessionsOfSite})`,
+  sitesOf: (row, manager) => siteOf(manager, spraySessionSites, row.spraySessionId),
+};
+
+export const byCoat: SiteRule<{ coatId: number }> = {
+  where: (a) => `${a}.coat_id IN (${coatsOfSite})`,
+  sitesOf: (row, manager) => siteOf(manager, coatSites, row.coatId),
+};
+
+export const byBoothOrRack: SiteRule<{ boothId: number | null; rackId: number | null }> = {
+  where: (a) => `(${a}.booth_id IN (${boothsOfSite}) OR ${a}.rack_id IN (${racksOfSite}))`,
+  sitesOf: async (row, manager) => [...(await siteOf(manager, boothSites, row.boothId)), ...(await siteOf(manager, rackSites, row.rackId))],
+};
+
+/** Group-wide rows whose placement on a rack belongs to the rack's site. */
+export const placedOnRack: SiteRule<{ rackId: number | null }> = {
+  sitesOf: (row, manager) => siteOf(manager, rackSites, row.rackId),
+};
+
+/** Entries about one site's things, or (site null) about the group's. */
+export const siteOrGroup: SiteRule<{ siteId: number | null }> = {
+  where: (a) => `(${a}.site_id IS NULL OR ${a}.site_id = :scopeSiteId)`,
+  sitesOf: async (row) => (row.siteId === null || row.siteId === undefined ? [] : [row.siteId]),
+};
