@@ -21,6 +21,9 @@ import { siteRoutes } from '../routes/sites';
 import { sprayerRoutes } from '../routes/sprayers';
 import { spraySessionRoutes } from '../routes/spray-sessions';
 import { userRoutes } from '../routes/users';
+import { coatPhotoRoutes } from '../routes/coat-photos';
+import { crewRoutes } from '../routes/crew';
+import { upkeepRoutes } from '../routes/upkeep';
 import { buildOpenApiDocument } from './openapi';
 import { defineRoute, type ApiRoute } from './route';
 
@@ -65,4 +68,7 @@ export const apiRoutes: ApiRoute[] = [
   ...eventRoutes,
   ...notificationRoutes,
   ...reportRoutes,
+  ...upkeepRoutes,
+  ...crewRoutes,
+  ...coatPhotoRoutes,
 ];

@@ -10,12 +10,16 @@ const expected: Record<string, string[]> = {
     ...['spray-sessions:read', 'spray-sessions:write', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'parts:collect', 'readings:write'],
     // All reports; their own site's sites list, but adding or renaming sites is the admin's.
     ...['reports:read', 'sites:read'],
+    // Booth upkeep in full; their own crew records, and everyone's status only (recording them is the admin's).
+    ...['upkeep:read', 'upkeep:log', 'upkeep:write', 'crew:own', 'crew:status'],
   ],
   // Sprayers read data sheets, finish systems and jobs but edit none of them.
   sprayer: [
     ...['booths:read', 'racks:read', 'settings:read', 'calculator:use', 'products:read', 'finish-systems:read', 'jobs:read'],
     // Sprayers run the sessions they are given and log coats, but do not book the booth.
     ...['spray-sessions:read', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'readings:write', 'sites:read'],
+    // They note the filter gauge and log a filter change, and read their own crew records.
+    ...['upkeep:read', 'upkeep:log', 'crew:own'],
   ],
   // Assemblers read jobs (and the systems they name) to know what is coming.
   assembler: ['sites:read', 'booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
@@ -38,6 +42,11 @@ describe('the permission matrix', () => {
     expect(roles.filter((role) => can(role, 'users:write'))).toEqual(['admin']);
     expect(roles.filter((role) => can(role, 'settings:write'))).toEqual(['admin']);
     expect(roles.filter((role) => can(role, 'sites:write'))).toEqual(['admin']);
+  });
+
+  it('keeps the recording of crew protection records to the admin, and their status to the admin and the lead', () => {
+    expect(roles.filter((role) => can(role, 'crew:write'))).toEqual(['admin']);
+    expect(roles.filter((role) => can(role, 'crew:status'))).toEqual(['admin', 'lead']);
   });
 
   it('shows reports to the owner and the finishing lead only', () => {
