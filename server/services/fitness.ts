@@ -18,7 +18,7 @@ const levels: RespiratorLevel[] = ['air-fed', 'vapour-and-particulate', 'particu
 
 /** Who may see the assigned sprayer's protection records in a session's fitness: the admin, a lead, the sprayer themself. */
 export function seesCrewOf(viewer: Pick<SessionUser, 'id' | 'role'> | null, spraySession: Pick<SpraySessionEntity, 'sprayerId'>): boolean {
-  if (!viewer) return true;
+  if (!viewer || spraySession.sprayerId === null) return true;
   return can(viewer.role, 'crew:status') || viewer.id === spraySession.sprayerId;
 }
 
