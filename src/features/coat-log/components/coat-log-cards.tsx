@@ -1,8 +1,10 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../../shared/units';
+import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
+import { CoatPhotos } from './coat-photos';
 import { conditionWords, filmWords, partsWords, stepWords, versionWords } from './coat-log-format';
 
 interface CoatLogCardsProps {
@@ -10,10 +12,13 @@ interface CoatLogCardsProps {
   units: UnitSystem;
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
+  photosOf: (coat: Coat) => CoatPhoto[];
+  onOpenPhoto: (photo: CoatPhoto) => void;
+  onAddPhoto?: (coat: Coat) => void;
 }
 
 /** The same records as the table, one card each, for tablets and phones where eleven columns do not fit. */
-export function CoatLogCards({ coats, units, timeZone, onCorrect }: CoatLogCardsProps) {
+export function CoatLogCards({ coats, units, timeZone, onCorrect, photosOf, onOpenPhoto, onAddPhoto }: CoatLogCardsProps) {
   return (
     <ul aria-label="Coat records" className="space-y-3">
       {coats.map((coat) => {
@@ -44,6 +49,7 @@ export function CoatLogCards({ coats, units, timeZone, onCorrect }: CoatLogCards
               {coat.correctionReason && <span className="block">Why: {coat.correctionReason}</span>}
             </p>
             {replaced && <p className="font-bold text-verdict-stop">Corrected by #{coat.supersededById}</p>}
+            <CoatPhotos coat={coat} photos={photosOf(coat)} onOpen={onOpenPhoto} onAdd={replaced ? undefined : onAddPhoto} />
             {onCorrect && !replaced && (
               <Button variant="secondary" className="mt-2" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>
                 Correct

@@ -1,8 +1,10 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../../shared/units';
+import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
+import { CoatPhotos } from './coat-photos';
 import { conditionWords, filmWords, partsWords, stepWords, versionWords } from './coat-log-format';
 
 interface CoatLogTableProps {
@@ -10,6 +12,9 @@ interface CoatLogTableProps {
   units: UnitSystem;
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
+  photosOf: (coat: Coat) => CoatPhoto[];
+  onOpenPhoto: (photo: CoatPhoto) => void;
+  onAddPhoto?: (coat: Coat) => void;
 }
 
 const headings = ['When (shop time)', 'Product, step, parts', 'Film', 'Conditions', 'Warnings', 'Who, version'];
@@ -40,7 +45,7 @@ function Version({ coat }: { coat: Coat }) {
 }
 
 /** One row per coat version; a replaced version is struck through and names the record that corrects it. */
-export function CoatLogTable({ coats, units, timeZone, onCorrect }: CoatLogTableProps) {
+export function CoatLogTable({ coats, units, timeZone, onCorrect, photosOf, onOpenPhoto, onAddPhoto }: CoatLogTableProps) {
   return (
     <div role="region" aria-label="Coat records" tabIndex={0} className="overflow-x-auto rounded-panel border border-maple-300 bg-white">
       <table className="w-full border-collapse text-left">
@@ -89,6 +94,7 @@ export function CoatLogTable({ coats, units, timeZone, onCorrect }: CoatLogTable
                 <td className="px-3 py-2">
                   <span className="block">{coat.recordedByName}</span>
                   <Version coat={coat} />
+                  <CoatPhotos coat={coat} photos={photosOf(coat)} onOpen={onOpenPhoto} onAdd={replaced ? undefined : onAddPhoto} />
                   {onCorrect && !replaced && (
                     <div className="mt-2">
                       <Button variant="secondary" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>

@@ -10,6 +10,7 @@ export interface Viewer {
   name: string;
   canWrite: boolean;
   canReadProducts: boolean;
+  canReadUpkeep: boolean;
 }
 
 /**
@@ -56,6 +57,7 @@ export function PlannerDialogs({ viewer, settings, booths, sprayers, booking, op
             timeZone={settings.timezone}
             canWrite={viewer.canWrite}
             canReadProducts={viewer.canReadProducts}
+            canReadUpkeep={viewer.canReadUpkeep}
             onChange={() => handlers.onChangeBooking(opened)}
             onCancel={() => handlers.onCancelSession(opened)}
           />
