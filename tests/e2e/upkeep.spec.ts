@@ -82,6 +82,23 @@ test.describe('booth upkeep and crew records', () => {
     expect(problems).toEqual([]);
   });
 
+  test('a lead reads upkeep done against due in the reports', async ({ page }) => {
+    const problems = watchConsole(page);
+    await signIn(page, 'lead');
+    await mainNav(page).getByRole('link', { name: 'Reports', exact: true }).click();
+    await page.getByRole('button', { name: 'Last 12 months' }).click();
+    await page.getByRole('tab', { name: 'Upkeep' }).click();
+    await expect(page).toHaveURL(/report=upkeep/);
+    const table = page.getByRole('table', { name: /^Upkeep done in the range and upkeep that fell due/ });
+    // The demo shop changed booth 1's arrestor pads and tested its extraction within the year.
+    const extraction = table.getByRole('row', { name: /Booth 1 \(cross-draft\) Extraction tests/ });
+    // Cells after the booth (a row header): the upkeep, then what was done in the range.
+    await expect(extraction.getByRole('cell').nth(1)).not.toHaveText('0');
+    await expect(table.getByRole('row', { name: /Crew \(all people\) Face-fit tests/ })).toBeVisible();
+    await expect(page.getByRole('link', { name: 'Download CSV' })).toHaveAttribute('href', /^\/api\/reports\/upkeep\?from=/);
+    expect(problems).toEqual([]);
+  });
+
   test('a sprayer sees their own fit test in full', async ({ page }) => {
     const problems = watchConsole(page);
     await signIn(page, 'sprayer');

@@ -137,7 +137,7 @@ export const routeTable: RouteRow[] = [
   row('POST', '/api/readings', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/readings', body: { boothId: fx.boothId, airTempC: 19, relativeHumidityPct: 55 } })),
   row('GET', '/api/events', s(401, 200, 200, 200, 200), () => ({ url: '/api/events', stream: true })),
   row('GET', '/api/notifications', s(401, 200, 200, 200, 200), get('/api/notifications')),
-  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework'].map((report) => row('GET', `/api/reports/${report}`, s(401, 200, 200, 403, 403), get(`/api/reports/${report}?${reportRange}`))),
+  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework', 'upkeep'].map((report) => row('GET', `/api/reports/${report}`, s(401, 200, 200, 403, 403), get(`/api/reports/${report}?${reportRange}`))),
   row('GET', '/api/reports/conditions', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/reports/conditions?${reportRange}&boothId=${fx.boothId}` })),
   row('GET', '/api/mailbox', s(401, 404, 403, 403, 403), get('/api/mailbox'), 'Tests run without the development mailbox, so the admin gets 404 not_found.'),
   row('GET', '/api/booths/:id/upkeep', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/booths/${fx.boothId}/upkeep` })),

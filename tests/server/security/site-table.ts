@@ -169,7 +169,7 @@ export const siteTable: SiteRow[] = [
   ])),
   row('GET', '/api/events', () => ({ url: '/api/events', stream: true }), { kind: 'stream' }),
 
-  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework'].map((report) =>
+  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework', 'upkeep'].map((report) =>
     row('GET', `/api/reports/${report}`, get(`/api/reports/${report}?${reportRange}`), filtered(() => ({ url: `/api/reports/${report}?${reportRange}&siteId=1` }), (b, fx) => reportOf(b, fx))),
   ),
   row('GET', '/api/reports/conditions', (fx) => ({ url: `/api/reports/conditions?${reportRange}&boothId=${fx.second.boothId}` }), refused((fx) => [{ url: `/api/reports/conditions?${reportRange}&boothId=${fx.first.boothId}` }])),

@@ -80,7 +80,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
         <legend className="text-lg font-semibold">Booth upkeep and crew protection</legend>
         <p className="mb-3 text-maple-700">
           How often each falls due, counted from the day it was done, and how far ahead Boothwright warns. The 14-month extraction test follows UK HSE guidance (HSG258); the
-          others are common practice with no published source. Your local regulations and the booth and equipment makers’ instructions come first: set these to match them.
+          other defaults are common practice, with no published source found. Your local regulations and the booth and equipment makers’ instructions come first: set these to match them.
         </p>
         <div className="grid gap-4 sm:grid-cols-2">
           <InputField {...whole} label="Extraction test every" unit="months" error={errors.extractionTestMonths?.message} registration={register('extractionTestMonths', { setValueAs: asNumber })} />

@@ -13,13 +13,17 @@ import { FormActions } from './form-actions';
 import { speed } from './upkeep-format';
 
 const shape = createExtractionTestSchema.shape;
-/** The shared schema, with the readings as one box each (the form keeps objects in its list). */
+/** The shared schema, with the readings as one box each (the form keeps objects in its list); boxes left empty are not readings. */
 const formSchema = createExtractionTestSchema.omit({ faceVelocityPointsMps: true }).extend({
-  points: z.array(z.object({ mps: shape.faceVelocityPointsMps.element })).min(1, 'Enter at least one face velocity reading').max(50),
+  points: z
+    .array(z.object({ mps: shape.faceVelocityPointsMps.element.optional() }))
+    .transform((boxes) => boxes.flatMap((box) => (box.mps === undefined ? [] : [box.mps])))
+    .pipe(shape.faceVelocityPointsMps),
 });
 type Input = z.input<typeof formSchema>;
 type Output = z.output<typeof formSchema>;
-const fieldNames = [...Object.keys(formSchema.shape), 'faceVelocityPointsMps'];
+// A server message about the readings has no one box to sit beside, so it shows above the form.
+const fieldNames = Object.keys(formSchema.shape);
 
 interface ExtractionTestFormProps {
   boothId: number;
@@ -45,7 +49,7 @@ function LiveMean({ points, minimum }: { points: { mps?: number }[] | undefined;
 export function ExtractionTestForm({ boothId, minFaceVelocityMps, intervalMonths, today, onDone }: ExtractionTestFormProps) {
   const record = useRecordExtractionTest();
   const [formError, setFormError] = useState<string | null>(null);
-  const defaults: Input = { boothId, testedOn: today, points: Array.from({ length: 4 }, () => ({ mps: undefined as unknown as number })), clearanceMin: null, testedBy: '', nextDueOn: null, notes: '' };
+  const defaults: Input = { boothId, testedOn: today, points: Array.from({ length: 4 }, () => ({ mps: undefined })), clearanceMin: null, testedBy: '', nextDueOn: null, notes: '' };
   const { register, handleSubmit, setError, control, formState: { errors } } = useForm<Input, unknown, Output>({ resolver: zodResolver(formSchema), defaultValues: defaults });
   const points = useFieldArray({ control, name: 'points' });
   const watched = useWatch({ control, name: 'points' });
@@ -53,7 +57,7 @@ export function ExtractionTestForm({ boothId, minFaceVelocityMps, intervalMonths
   const onSubmit = handleSubmit(async ({ points: readings, ...fields }) => {
     setFormError(null);
     try {
-      const { extractionTest } = await record.mutateAsync({ ...fields, faceVelocityPointsMps: readings.map((p) => p.mps) });
+      const { extractionTest } = await record.mutateAsync({ ...fields, faceVelocityPointsMps: readings });
       toast.success(`Extraction test recorded: mean ${speed(extractionTest.meanFaceVelocityMps)}.`);
       onDone();
     } catch (error) {
@@ -85,7 +89,7 @@ export function ExtractionTestForm({ boothId, minFaceVelocityMps, intervalMonths
         </div>
         {errors.points?.message && <p className="mt-1 text-sm font-medium text-verdict-stop">{errors.points.message}</p>}
         <div className="mt-2 flex flex-wrap items-center gap-3">
-          <Button variant="secondary" onClick={() => points.append({ mps: undefined as unknown as number })} disabled={points.fields.length >= 50}>
+          <Button variant="secondary" onClick={() => points.append({ mps: undefined })} disabled={points.fields.length >= 50}>
             Add a point
           </Button>
           {points.fields.length > 1 && (
