@@ -40,8 +40,8 @@ export interface ResponseSpec {
   otherStatuses?: number[];
   /** The JSON body; checked against every answer in tests. */
   schema?: z.ZodType;
-  /** A body that is not JSON: a CSV or PDF download, or an event stream. */
-  contentType?: 'text/csv' | 'application/pdf' | 'text/event-stream';
+  /** A body that is not JSON: a CSV or PDF download, a photo, or an event stream. */
+  contentType?: 'text/csv' | 'application/pdf' | 'image/jpeg' | 'text/event-stream';
   description?: string;
 }
 

@@ -3,6 +3,7 @@ import { can } from '../../shared/permissions';
 import { createMixSchema, mixSchema } from '../../shared/schemas/checklist';
 import { idParamsSchema, listSchema } from '../../shared/schemas/common';
 import { createSpraySessionSchema, spraySessionCautionsSchema, spraySessionQuerySchema, spraySessionSchema, updateSpraySessionSchema } from '../../shared/schemas/spray-session';
+import { sessionFitnessSchema } from '../../shared/schemas/upkeep';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 const spraySessionEnvelope = z.object({ spraySession: spraySessionSchema });
@@ -61,7 +62,17 @@ export const spraySessionRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     response: { status: 200, schema: spraySessionCautionsSchema },
-    handler: ({ params }, { services }) => services.cautions.forSpraySession(params.id),
+    handler: ({ params }, { services, user }) => services.cautions.forSpraySession(params.id, user),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/spray-sessions/:id/fitness',
+    summary: 'Fit to spray: the booth’s upkeep and the assigned sprayer’s protection records, for each respiratory protection (the sprayer’s part only for the admin, a lead or the sprayer)',
+    access: 'upkeep:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: z.object({ fitness: sessionFitnessSchema }) },
+    handler: async ({ params }, { services, user }) => ({ fitness: await services.fitness.forSpraySession(params.id, user) }),
   }),
   defineRoute({
     method: 'get',

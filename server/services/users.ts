@@ -1,6 +1,6 @@
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { List, PageQuery } from '../../shared/schemas/common';
-import { defaultNotifyPrefs } from '../../shared/schemas/notification';
+import { notifyPrefsOf } from '../../shared/schemas/notification';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
 import { createUserSchema } from '../../shared/schemas/user';
 import { assertStrongPassword } from '../auth/password-strength';
@@ -15,7 +15,7 @@ import { changedFields, recordAudit, type Actor } from './audit';
 
 /** What the sign-in session carries about its user. */
 export function toSignedInUser(user: UserEntity): SessionUser {
-  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: user.notify ?? defaultNotifyPrefs(user.role) };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: notifyPrefsOf(user.role, user.notify) };
 }
 
 export function toUserDto(user: UserEntity): User {

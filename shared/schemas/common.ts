@@ -54,7 +54,7 @@ const visibleCharacter = new RegExp(`[^${blank}\\p{M}]`, 'u');
 export const cleanText = (value: string): string => value.normalize('NFC').replace(blankEnds, '');
 
 /** Text people type that may be left empty. */
-export const optionalTextSchema = (max: number) => z.string().overwrite(cleanText).max(max);
+export const optionalTextSchema = (max: number, tooLong?: string) => z.string().overwrite(cleanText).max(max, tooLong);
 
 /** Text that must say something: made of invisible characters only, it counts as empty. */
 export const requiredTextSchema = (message: string, max: number, min = 1) =>

@@ -15,4 +15,5 @@ export const coatLogKeys = {
   list: (query: CoatLogQuery) => [...coatLogKeys.lists(), query] as const,
   jobs: () => [...coatLogKeys.all, 'jobs'] as const,
   products: () => [...coatLogKeys.all, 'products'] as const,
+  photos: () => [...coatLogKeys.all, 'photos'] as const,
 };

@@ -9,6 +9,8 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
 import type { Reading } from '../../../../shared/schemas/reading';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import type { SessionFitness } from '../../../../shared/schemas/upkeep';
+import { FitnessFindings } from '../../../components/safety/fitness-findings';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
@@ -47,12 +49,14 @@ interface ChecklistFormProps {
   /** null while the data sheets are still loading. */
   products: Product[] | null;
   reading: Reading | null;
+  /** Fit to spray for each protection; null while it loads, undefined when it could not be read (the server still checks). */
+  fitness: SessionFitness | null | undefined;
   units: UnitSystem;
   timeZone: string;
   canOverride: boolean;
 }
 
-export function ChecklistForm({ session, booth, products, reading, units, timeZone, canOverride }: ChecklistFormProps) {
+export function ChecklistForm({ session, booth, products, reading, fitness, units, timeZone, canOverride }: ChecklistFormProps) {
   const update = useUpdateSpraySession();
   const createReading = useCreateReading();
   const blockedId = useId();
@@ -60,7 +64,9 @@ export function ChecklistForm({ session, booth, products, reading, units, timeZo
   const form = useForm<ChecklistInput, unknown, Checklist>({ resolver: zodResolver(checklistSchema), defaultValues: startingValues(session, reading) });
   const { control, handleSubmit, setError, formState } = form;
   const values = useWatch({ control });
-  const live = liveChecklist(values, booth, products);
+  // Judged for the protection the sprayer says they wear: a fit test matters for a tight-fitting facepiece.
+  const fit = fitness ? fitness.byRespirator[values.respiratorKind ?? fitness.neededRespirator] : null;
+  const live = liveChecklist(values, booth, products, fitness === undefined ? [] : (fit?.findings ?? null));
   const blocked = startBlockedReason(live, canOverride, values.overrideReason);
 
   // The typed conditions also go into the booth's readings, so the next form starts from them.
@@ -93,6 +99,7 @@ export function ChecklistForm({ session, booth, products, reading, units, timeZo
         </p>
         <ConditionFields control={control} errors={formState.errors} units={units} />
       </div>
+      {fitness && fit && <FitnessFindings verdict={fit.verdict} findings={fit.findings} crewShown={fitness.crewShown} deferLine={fitness.deferLine} />}
       <ChecklistVerdict evaluation={live.evaluation} missing={live.missing} dew={live.dew} units={units} />
       {canOverride && live.evaluation?.verdict === 'stop' && <OverrideReasonField register={form.register} error={formState.errors.overrideReason?.message} />}
       <div className="flex flex-wrap items-start gap-3">

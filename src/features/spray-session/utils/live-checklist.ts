@@ -1,4 +1,5 @@
 import { evaluateChecklist, type ChecklistEvaluation, type ChecklistProduct } from '../../../../shared/finishing/checklist';
+import type { FitnessFinding } from '../../../../shared/finishing/fitness';
 import { assessConditions } from '../../../../shared/finishing/conditions';
 import { checklistSchema } from '../../../../shared/schemas/checklist';
 
@@ -22,14 +23,15 @@ function dewOf(values: TypedConditions): LiveChecklist['dew'] {
   }
 }
 
-/** The same verdict the server will record, worked out as the sprayer fills the form in. */
-export function liveChecklist(values: unknown, booth: { minFaceVelocityMps: number }, products: ChecklistProduct[] | null): LiveChecklist {
+/** The same verdict the server will record, worked out as the sprayer fills the form in; `fitness` is null while it loads. */
+export function liveChecklist(values: unknown, booth: { minFaceVelocityMps: number }, products: ChecklistProduct[] | null, fitness: FitnessFinding[] | null = []): LiveChecklist {
   const dew = dewOf((values ?? {}) as TypedConditions);
   const parsed = checklistSchema.safeParse(values);
   if (!parsed.success) return { evaluation: null, missing: [...new Set(parsed.error.issues.map((issue) => issue.message))], dew };
   if (products === null) return { evaluation: null, missing: ['The products’ data sheets are still loading.'], dew };
+  if (fitness === null) return { evaluation: null, missing: ['The booth’s upkeep and the sprayer’s records are still loading.'], dew };
   try {
-    return { evaluation: evaluateChecklist(parsed.data, booth, products), missing: [], dew };
+    return { evaluation: evaluateChecklist(parsed.data, booth, products, fitness), missing: [], dew };
   } catch (error) {
     return { evaluation: null, missing: [error instanceof Error ? error.message : 'A value is out of range.'], dew };
   }
