@@ -4,6 +4,8 @@ import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../
 let ctx: TestContext;
 let admin: SignedIn;
 let boothId: number;
+// The server's clock: today, except while a filter change is logged as it happens (in 2019–2020).
+const clock = { at: null as Date | null, now() { return this.at ?? new Date(); } };
 
 const post = (url: string, body: object) => admin.agent.post(url).set('x-csrf-token', admin.csrf).send(body).expect(201);
 type Row = { boothId: number | null; kind: string; done: number; due: number | null; doneByDue: number | null };
@@ -13,7 +15,7 @@ type Row = { boothId: number | null; kind: string; done: number; due: number | n
  * from today) never reaches. The report covers 2020, shop time (Europe/London).
  */
 beforeAll(async () => {
-  ctx = await startTestApp();
+  ctx = await startTestApp({ clock });
   admin = await signIn(ctx.app, demo.admin);
   boothId = (await post('/api/booths', { name: 'Report booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 })).body.booth.id;
   // T1 due 2020-03-10 (14 months on), superseded on time by T2 on 2020-03-01; T2 due 2020-09-01, renewed late by T3 on 2020-10-01 (due 2021-12-01, outside).
@@ -24,7 +26,11 @@ beforeAll(async () => {
   await post('/api/fire-inspections', { boothId, inspectedOn: '2020-01-31', inspectedBy: 'Keldmoor', passed: true });
   const bank = (await post('/api/filter-banks', { boothId, name: 'Pads', kind: 'paint-arrestor', changeAtPa: 250 })).body.filterBank.id;
   // 23:30 UTC on 31 December is still 31 December in London (GMT): the first is outside 2020, the last inside.
-  for (const changedAt of ['2019-12-31T23:30:00Z', '2020-06-01T10:00:00Z', '2020-12-31T23:30:00Z']) await post('/api/filter-changes', { filterBankId: bank, changedAt });
+  for (const changedAt of ['2019-12-31T23:30:00Z', '2020-06-01T10:00:00Z', '2020-12-31T23:30:00Z']) {
+    clock.at = new Date(changedAt);
+    await post('/api/filter-changes', { filterBankId: bank, changedAt });
+  }
+  clock.at = null;
   const sprayer = (await post('/api/users', { email: 'report.sprayer@larchmere.test', name: 'Report Sprayer', role: 'sprayer', password: 'matrix-password-1' })).body.user.id;
   // Fit test due 2020-02-01, renewed on 2020-01-20: on time. Training due 2020-05-01, never renewed.
   await post(`/api/crew/${sprayer}/records`, { kind: 'fit-test', doneOn: '2019-02-01', respiratorModel: 'Ostrel HM-200, M', result: 'pass' });
