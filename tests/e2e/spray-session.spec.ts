@@ -4,7 +4,7 @@ import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import type { SpraySession } from '../../shared/schemas/spray-session';
-import { expect, shotsDir, test } from './console-guard';
+import { expect, shotsDir, test } from './fixtures';
 import { demo, demoPassword, signIn } from './helpers';
 
 const shopZone = 'Europe/London';
