@@ -69,7 +69,7 @@ export function AutoPlanDialog({ open, onClose, timeZone, boothNames, siteId }: 
         </Button>
         {plan && plan.sessions.length > 0 && (
           <Button onClick={book} pending={accept.isPending} pendingText="Booking…">
-            Book all {plan.sessions.length} sessions
+            {plan.sessions.length === 1 ? 'Book this session' : `Book all ${plan.sessions.length} sessions`}
           </Button>
         )}
       </div>
