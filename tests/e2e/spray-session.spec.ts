@@ -137,7 +137,7 @@ test.describe('spray session', () => {
     await expect(latest).toContainText('dry film 57 µm');
     await expect(latest.getByText('Handle from').locator('..')).toContainText(clock(first.handleAt));
     await expect(latest).toContainText(/Flash-off until \d{2}:\d{2}/);
-    await expect(latest).toContainText(`Next on ${partLabel}: Abrade P320`);
+    await expect(latest).toContainText(`Next on ${partLabel}: denib P320, then coat 2 of 3`);
     // The door has just had its planned step: the form does not offer it again by itself.
     await expect(coatForm.getByText('No parts chosen yet.')).toBeVisible();
 
