@@ -14,9 +14,10 @@ import { FitnessFindings } from '../../../components/safety/fitness-findings';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { useNow } from '../../../lib/use-now';
 import { useCreateReading } from '../api/create-reading';
 import { useUpdateSpraySession } from '../api/update-spray-session';
-import { liveChecklist, startBlockedReason } from '../utils/live-checklist';
+import { currentReading, liveChecklist, startBlockedReason } from '../utils/live-checklist';
 import { withoutFieldPrefix } from '../utils/server-errors';
 import { shopWhen } from '../utils/session-format';
 import { ConditionFields, EquipmentChecks, type ChecklistInput } from './checklist-fields';
@@ -43,6 +44,12 @@ function startingValues(session: SpraySession, reading: Reading | null): Default
   };
 }
 
+function conditionsSource(reading: Reading | null, current: Reading | null, timeZone: string): string {
+  if (current) return `Filled in from the ${current.source === 'sensor' ? 'sensor' : 'typed'} reading at ${shopWhen(current.at, timeZone)}; correct them if they have changed.`;
+  if (reading) return `The booth's last reading (${shopWhen(reading.at, timeZone)}) is too old to go on: measure the conditions now and type them in.`;
+  return 'No reading yet for this booth: measure and type them in.';
+}
+
 interface ChecklistFormProps {
   session: SpraySession;
   booth: Booth;
@@ -61,7 +68,9 @@ export function ChecklistForm({ session, booth, products, reading, fitness, unit
   const createReading = useCreateReading();
   const blockedId = useId();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<ChecklistInput, unknown, Checklist>({ resolver: zodResolver(checklistSchema), defaultValues: startingValues(session, reading) });
+  const now = useNow(60_000);
+  const current = currentReading(reading, now);
+  const form = useForm<ChecklistInput, unknown, Checklist>({ resolver: zodResolver(checklistSchema), defaultValues: startingValues(session, current) });
   const { control, handleSubmit, setError, formState } = form;
   const values = useWatch({ control });
   // Judged for the protection the sprayer says they wear: a fit test matters for a tight-fitting facepiece.
@@ -95,7 +104,7 @@ export function ChecklistForm({ session, booth, products, reading, fitness, unit
       <div>
         <h3 className="text-lg font-semibold">Conditions in the booth</h3>
         <p className="mb-2 text-maple-700">
-          {reading ? `Filled in from the ${reading.source === 'sensor' ? 'sensor' : 'typed'} reading at ${shopWhen(reading.at, timeZone)}; correct them if they have changed.` : 'No reading yet for this booth: measure and type them in.'}
+          {conditionsSource(reading, current, timeZone)}
         </p>
         <ConditionFields control={control} errors={formState.errors} units={units} />
       </div>

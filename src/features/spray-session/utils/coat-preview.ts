@@ -34,10 +34,15 @@ export function dryingTempOf(parts: PickedPart[], racks: Rack[], airTempC: numbe
   return temps.length > 0 && temps.every((t): t is number => t !== null) ? Math.min(...temps) : airTempC;
 }
 
-function mixWarnings(mix: Mix | undefined, at: Date): CoatWarning[] {
+/**
+ * The preview's clock ticks every few seconds, so it can read a moment before a pot that was just
+ * mixed; a coat from the pot cannot go on before it was mixed, so that moment counts as the mixing.
+ */
+export function mixWarnings(mix: Mix | undefined, at: Date): CoatWarning[] {
   if (!mix) return [];
-  if (mix.potLifeEndsAt && at.getTime() > Date.parse(mix.potLifeEndsAt)) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot is past its pot life.' }];
-  if (at.getTime() < Date.parse(mix.inductionEndsAt)) return [{ code: 'induction-not-over', verdict: 'caution', message: 'The pot has not finished its induction (stand) time.' }];
+  const sprayedAt = Math.max(at.getTime(), Date.parse(mix.mixedAt));
+  if (mix.potLifeEndsAt && sprayedAt > Date.parse(mix.potLifeEndsAt)) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot is past its pot life.' }];
+  if (sprayedAt < Date.parse(mix.inductionEndsAt)) return [{ code: 'induction-not-over', verdict: 'caution', message: 'The pot has not finished its induction (stand) time.' }];
   return [];
 }
 

@@ -1,7 +1,9 @@
 import { evaluateChecklist, type ChecklistEvaluation, type ChecklistProduct } from '../../../../shared/finishing/checklist';
 import type { FitnessFinding } from '../../../../shared/finishing/fitness';
 import { assessConditions } from '../../../../shared/finishing/conditions';
+import { sensorIsStale } from '../../../../shared/finishing/day-board';
 import { checklistSchema } from '../../../../shared/schemas/checklist';
+import type { Reading } from '../../../../shared/schemas/reading';
 
 export interface LiveChecklist {
   evaluation: ChecklistEvaluation | null;
@@ -43,4 +45,12 @@ export function startBlockedReason(live: LiveChecklist, canOverride: boolean, ov
   if (live.evaluation.verdict !== 'stop') return null;
   if (canOverride) return (overrideReason ?? '').trim().length >= 3 ? null : 'The checks say stop. Put right what is listed, or give your reason to go ahead anyway.';
   return 'The checks say stop. Put right what is listed above; only a finishing lead can override a stop.';
+}
+
+/**
+ * The booth's last reading, offered as its conditions now only while it is recent (as long as a
+ * sensor counts as reporting): days-old figures say nothing about the air the coat goes into.
+ */
+export function currentReading(reading: Reading | null, now: Date): Reading | null {
+  return reading && !sensorIsStale(new Date(reading.at), now) ? reading : null;
 }
