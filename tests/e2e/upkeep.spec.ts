@@ -1,4 +1,5 @@
-import { expect, request, test, type APIRequestContext, type Page } from '@playwright/test';
+import { request, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { demo, demoPassword, mainNav, signIn } from './helpers';
 
 /**
