@@ -125,7 +125,7 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
     coats: () => createCoatService(data, set.settings, events, clock),
     denibs: () => createDenibService(data, events, clock),
     planner: () => createPlannerService(data, set.settings, clock),
-    today: () => createTodayService(data, { settings: set.settings, planner: set.planner, sprayers: set.sprayers }, clock),
+    today: () => createTodayService(data, { settings: set.settings, planner: set.planner, sprayers: set.sprayers, upkeepDue: set.upkeepDue }, clock),
     ready: () => createReadyService(data, set.settings, clock),
     readings: () => createReadingService(data, events, clock),
     reports: () => createReportService(data, set.settings, set.estimates),

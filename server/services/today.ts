@@ -10,6 +10,7 @@ import type { SettingsService } from './settings';
 import type { SprayerService } from './sprayers';
 import { jobsAtRisk, jobsInWork, partsBetweenCoats, staleSensors } from './today-lead';
 import { sessionsIn, toTodaySessions } from './today-sessions';
+import type { UpkeepDueService } from './upkeep-due';
 
 export interface TodayViewer {
   id: number;
@@ -30,13 +31,14 @@ export interface TodayDeps {
   settings: SettingsService;
   planner: PlannerService;
   sprayers: SprayerService;
+  upkeepDue: UpkeepDueService;
 }
 
 /**
  * The day's working board, per role: the lead plans and unblocks, the sprayer sees what to do
  * next. Everything on it is the scope's site's: its booths and sessions, its parts, its people.
  */
-export function createTodayService(data: SiteData, { settings, planner, sprayers }: TodayDeps, clock: Clock = systemClock) {
+export function createTodayService(data: SiteData, { settings, planner, sprayers, upkeepDue }: TodayDeps, clock: Clock = systemClock) {
   async function shopDay() {
     const shop = await settings.get();
     const now = clock.now();
@@ -45,19 +47,20 @@ export function createTodayService(data: SiteData, { settings, planner, sprayers
     return { now, today, timeZone: shop.timezone, context, startOf: (days: number) => shopMidnight(today, shop.timezone, days) };
   }
 
-  async function leadBoard(): Promise<LeadBoard> {
+  async function leadBoard(viewer: TodayViewer): Promise<LeadBoard> {
     const day = await shopDay();
     const [entities, booths, work] = await Promise.all([
       sessionsIn(data, { from: day.startOf(0), to: day.startOf(2) }),
       data.booths.find({ order: { id: 'ASC' } }),
       data.jobs.find({ where: { state: In(workingStates) }, order: { dueDate: 'ASC', id: 'ASC' } }).then((found) => jobsInWork(data, found)),
     ]);
-    const [sessions, people, between, risks, sensors] = await Promise.all([
+    const [sessions, people, between, risks, sensors, upkeep] = await Promise.all([
       toTodaySessions(data, entities, day.context),
       sprayers.list(),
       partsBetweenCoats(data, work, day.now, day.startOf(1)),
       jobsAtRisk(planner, work.jobs, { today: day.today, timeZone: day.timeZone }),
       staleSensors(data, day.now),
+      upkeepDue.due(viewer),
     ]);
     return {
       view: 'lead',
@@ -70,6 +73,7 @@ export function createTodayService(data: SiteData, { settings, planner, sprayers
       ...between,
       jobsAtRisk: risks,
       staleSensors: sensors,
+      upkeepDue: upkeep,
     };
   }
 
@@ -88,7 +92,7 @@ export function createTodayService(data: SiteData, { settings, planner, sprayers
   return {
     /** Leads and admins get the planning board; anyone else who runs sessions gets their own day. */
     board(viewer: TodayViewer): Promise<TodayBoard> {
-      return can(viewer.role, 'spray-sessions:write') ? leadBoard() : sprayerBoard(viewer);
+      return can(viewer.role, 'spray-sessions:write') ? leadBoard(viewer) : sprayerBoard(viewer);
     },
   };
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { siteFilterSchema } from './site';
 import { sprayerSchema } from './sprayer';
+import { upkeepDueSchema } from './upkeep';
 import { sessionWorkSchema, spraySessionStateSchema } from './spray-session';
 
 const date = z.string().regex(/^\d{4}-\d{2}-\d{2}$/);
@@ -85,6 +86,8 @@ export const leadBoardSchema = z.object({
   denibWaiting: z.array(denibWaitingSchema),
   jobsAtRisk: z.array(jobAtRiskSchema),
   staleSensors: z.array(staleSensorSchema),
+  /** Booths and people of the site not fit to spray now, or not soon: filters, extraction tests, fit tests. */
+  upkeepDue: upkeepDueSchema,
 });
 
 export const sprayerBoardSchema = z.object({

@@ -68,7 +68,13 @@ test('a lead sees the day per booth, gives an unassigned session to a sprayer, a
   for (const heading of ['Recoat windows closing today', 'Jobs at risk of missing their due date', 'Waiting on a denib', 'Booth sensors gone quiet']) {
     await expect(page.getByRole('heading', { name: new RegExp(`^${heading}`) })).toBeVisible();
   }
+  // The demo shop's booth 1 has arrestor pads near their limit: the lead sees it and reaches the upkeep page from it.
+  const upkeep = page.getByRole('region', { name: /^Upkeep and crew records due/ });
+  await expect(upkeep).toContainText(/Filter bank .* Pa limit/);
   await page.screenshot({ path: '/tmp/shots/today-lead-1366.png', fullPage: true });
+  await upkeep.getByRole('link', { name: 'Booth 1 (cross-draft)' }).click();
+  await expect(page.getByRole('heading', { name: 'Booth upkeep', level: 1 })).toBeVisible();
+  await page.goBack();
 
   await room.getByRole('link', { name: `Plan ${sprayRoom} in the booth planner` }).click();
   await expect(page.getByRole('heading', { name: 'Booth planner', level: 1 })).toBeVisible();

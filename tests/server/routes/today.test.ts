@@ -94,6 +94,14 @@ describe('GET /api/today for a lead', () => {
     await request(ctx.app).post('/api/readings').set('authorization', `Bearer ${token}`).send({ boothId: 1, airTempC: 19, relativeHumidityPct: 55 }).expect(201);
     expect((await board(lead)).staleSensors).toEqual([]);
   });
+  it('lists the booths and people whose upkeep or crew records are due, as the upkeep page does', async () => {
+    const due = (await board(lead)).upkeepDue;
+    expect(due).toEqual((await lead.agent.get('/api/upkeep/due').expect(200)).body.due);
+    // The test's own booth has no extraction test or fire inspection on record: it is not fit to spray.
+    const ours = due.booths.find((b: { boothId: number }) => b.boothId === booth);
+    expect(ours.fit).toBe(false);
+    expect(ours.items.map((i: { kind: string; status: string }) => `${i.kind}:${i.status}`)).toEqual(expect.arrayContaining(['extraction-test:none', 'fire-inspection:none']));
+  });
 });
 
 describe('GET /api/today for a sprayer', () => {

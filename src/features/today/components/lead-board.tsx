@@ -3,6 +3,7 @@ import type { LeadBoard as LeadBoardData } from '../../../../shared/schemas/toda
 import { boothIdentities } from '../../../lib/booth-identity';
 import { DenibWaiting, JobsAtRisk, RecoatClosing, StaleSensors } from './attention-lists';
 import { BoothDayCard } from './booth-day-card';
+import { UpkeepDueList } from './upkeep-due-list';
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
@@ -47,6 +48,7 @@ export function LeadBoard({ board, timeZone }: { board: LeadBoardData; timeZone:
         <JobsAtRisk items={board.jobsAtRisk} />
         <DenibWaiting items={board.denibWaiting} />
         <StaleSensors items={board.staleSensors} timeZone={timeZone} />
+        <UpkeepDueList due={board.upkeepDue} />
       </div>
     </div>
   );
