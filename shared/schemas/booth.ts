@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { listSchema } from './common';
 import { siteIdSchema } from './site';
 
 export const boothKinds = ['cross-draft', 'down-draft', 'open-face', 'spray-room'] as const;
@@ -72,3 +73,6 @@ export const boothSchema = boothFieldsSchema.extend({
   updatedAt: z.string(),
 });
 export type Booth = z.infer<typeof boothSchema>;
+
+export const boothResponseSchema = z.object({ booth: boothSchema });
+export const boothListSchema = listSchema(boothSchema);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pageFields } from './common';
+import { listSchema, pageFields } from './common';
 
 export const partFaces = ['one', 'both'] as const;
 export const partFacesSchema = z.enum(partFaces, { error: 'Faces is one or both' });
@@ -69,3 +69,6 @@ export const csvTemplateHeaders = ['label', 'kind', 'lengthMm', 'widthMm', 'thic
 export const partListQuerySchema = z.object({
   ...pageFields(500, 1000),
 });
+
+export const partResponseSchema = z.object({ part: partSchema });
+export const partListSchema = listSchema(partSchema);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { listSchema } from './common';
 import { siteIdSchema } from './site';
 
 export const rackLocations = ['drying-room', 'booth-side'] as const;
@@ -39,3 +40,6 @@ export const rackSchema = rackFieldsSchema.extend({
   updatedAt: z.string(),
 });
 export type Rack = z.infer<typeof rackSchema>;
+
+export const rackResponseSchema = z.object({ rack: rackSchema });
+export const rackListSchema = listSchema(rackSchema);

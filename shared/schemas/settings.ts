@@ -22,3 +22,5 @@ function isKnownTimeZone(zone: string): boolean {
     return false;
   }
 }
+
+export const shopSettingsResponseSchema = z.object({ settings: shopSettingsSchema });

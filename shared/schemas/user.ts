@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { roleSchema } from './auth';
-import { unitSystemSchema } from './common';
+import { listSchema, unitSystemSchema } from './common';
 import { notifyPrefsSchema } from './notification';
 import { siteIdSchema } from './site';
 
@@ -46,3 +46,6 @@ export const updateMeSchema = z
   .object({ name: z.string().trim().min(1, 'Enter a name').max(120), units: unitSystemSchema, notify: notifyPrefsSchema })
   .partial();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
+
+export const userResponseSchema = z.object({ user: userSchema });
+export const userListSchema = listSchema(userSchema);

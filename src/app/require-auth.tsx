@@ -1,6 +1,6 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '../features/auth/api/get-me';
-import { SessionUserProvider } from './session-user';
+import { SignedInUserProvider } from './signed-in-user';
 
 export function FullPageStatus({ children }: { children: string }) {
   return (
@@ -27,8 +27,8 @@ export function RequireAuth() {
     return <Navigate to={`/sign-in${search}`} replace />;
   }
   return (
-    <SessionUserProvider user={me.data}>
+    <SignedInUserProvider user={me.data}>
       <Outlet />
-    </SessionUserProvider>
+    </SignedInUserProvider>
   );
 }

@@ -11,7 +11,7 @@ import { buttonClasses } from '../../components/ui/button';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useShopTimeZone } from '../use-shop-time-zone';
 import { useShopToday } from '../use-shop-today';
 import { useIdParam } from './id-param';
@@ -26,7 +26,7 @@ function BackToJobs() {
 }
 
 function JobView({ jobId }: { jobId: number }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const canWrite = can(user.role, 'jobs:write');
   const shopToday = useShopToday();
   const timeZone = useShopTimeZone();

@@ -11,7 +11,7 @@ import { useRacks } from '../../features/racks/api/get-racks';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useShopTimeZone } from '../use-shop-time-zone';
 import { useIdParam } from './id-param';
 import { NotFoundRoute } from './not-found-route';
@@ -30,7 +30,7 @@ function JobLine({ jobId }: { jobId: number }) {
 }
 
 function PartView({ partId }: { partId: number }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const part = usePart(partId);
   const racks = useRacks({ page: 1, pageSize: 200 });
   const refreshJob = useRefreshJob(part.data?.jobId ?? 0);

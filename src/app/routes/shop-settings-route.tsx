@@ -6,10 +6,10 @@ import { ShopSettingsForm } from '../../features/settings/components/shop-settin
 import { ShopSettingsSummary } from '../../features/settings/components/shop-settings-summary';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function ShopSettingsContent() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const canEdit = can(user.role, 'settings:write');
   return (

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { userResponseSchema, type LoginInput } from '../../../../shared/schemas/auth';
+import { signedInUserResponseSchema, type LoginInput } from '../../../../shared/schemas/auth';
 import { apiClient, refreshCsrfToken } from '../../../lib/api-client';
 import { authKeys } from './auth-keys';
 
 export async function login(input: LoginInput) {
-  const { user } = await apiClient.post('/api/auth/login', input, userResponseSchema);
+  const { user } = await apiClient.post('/api/auth/login', input, signedInUserResponseSchema);
   return user;
 }
 

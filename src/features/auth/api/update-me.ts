@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { userResponseSchema } from '../../../../shared/schemas/auth';
+import { signedInUserResponseSchema } from '../../../../shared/schemas/auth';
 import type { UpdateMeInput } from '../../../../shared/schemas/user';
 import { apiClient } from '../../../lib/api-client';
 import { authKeys } from './auth-keys';
 
 export async function updateMe(input: UpdateMeInput) {
-  const { user } = await apiClient.patch('/api/auth/me', input, userResponseSchema);
+  const { user } = await apiClient.patch('/api/auth/me', input, signedInUserResponseSchema);
   return user;
 }
 
