@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { partHistoryResponseSchema } from '../../shared/schemas/part-history';
-import { createPartSchema, csvTemplateHeaders, importMappingSchema, importResultSchema, partListQuerySchema, partListSchema, partResponseSchema, updatePartSchema } from '../../shared/schemas/part';
+import { createPartSchema, csvTemplateHeaders, importMappingSchema, importResultSchema, partIdsQuerySchema, partListQuerySchema, partListSchema, partResponseSchema, updatePartSchema } from '../../shared/schemas/part';
 import { answered, defineRoute, Reply, type ApiRoute } from '../registry/route';
 
 const importFormSchema = z.object({
@@ -73,6 +73,16 @@ export const partRoutes: ApiRoute[] = [
       const result = await services.partImport.importCsv(params.id, file?.buffer, form.mapping, form.preview, actor);
       return new Reply(result.saved ? 201 : 200, result);
     },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/parts',
+    summary: 'Several parts by id (?ids=3,5,8; ids that name nothing are left out, a place on another site’s rack too)',
+    access: 'jobs:read',
+    sites: 'site',
+    query: partIdsQuerySchema,
+    response: { status: 200, schema: partListSchema },
+    handler: ({ query }, { services }) => services.parts.listByIds(query.ids),
   }),
   defineRoute({
     method: 'get',

@@ -1,4 +1,0 @@
-export const settingsKeys = {
-  all: ['settings'] as const,
-  shop: () => [...settingsKeys.all, 'shop'] as const,
-};
