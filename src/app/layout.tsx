@@ -2,7 +2,7 @@ import { useEffect, useRef, useState } from 'react';
 import { Link, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import { toast } from 'sonner';
 import { roleLabels } from '../../shared/permissions';
-import { useLogout } from '../features/auth/api/logout';
+import { useLogout } from '../api/auth/logout';
 import { errorMessage } from '../lib/error-messages';
 import { MainNav } from './main-nav';
 import { useSignedInUser } from './signed-in-user';

@@ -1,5 +1,5 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
-import { useMe } from '../features/auth/api/get-me';
+import { useMe } from '../api/auth/get-me';
 import { SignedInUserProvider } from './signed-in-user';
 
 export function FullPageStatus({ children }: { children: string }) {

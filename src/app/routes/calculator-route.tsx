@@ -1,6 +1,6 @@
 import { lazy, Suspense } from 'react';
 import { LoadingState, ErrorState } from '../../components/ui/states';
-import { useBooths } from '../../features/booths/api/get-booths';
+import { useBooths } from '../../api/booths/get-booths';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
 import { useSignedInUser } from '../signed-in-user';

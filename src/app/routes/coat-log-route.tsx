@@ -3,7 +3,7 @@ import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { CoatLogPage } from '../../features/coat-log/components/coat-log-page';
 import type { CoatLogFilterValues } from '../../features/coat-log/components/coat-log-filters';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
 import { useSignedInUser } from '../signed-in-user';

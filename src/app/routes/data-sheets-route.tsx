@@ -1,5 +1,5 @@
 import { can } from '../../../shared/permissions';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { DataSheetsPage } from '../../features/products/components/data-sheets-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';

@@ -1,8 +1,8 @@
 import { can } from '../../../shared/permissions';
 import type { CoatingProducts } from '../../features/finish-systems/components/coating-products';
 import { FinishSystemsPage } from '../../features/finish-systems/components/finish-systems-page';
-import { useProducts } from '../../features/products/api/get-products';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useProducts } from '../../api/products/get-products';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
 import { useSignedInUser } from '../signed-in-user';

@@ -1,7 +1,7 @@
 import { useSearchParams } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { PlannerPage } from '../../features/planner/components/planner-page';
 import { SiteSwitcher } from '../../features/sites/components/site-switcher';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';

@@ -2,7 +2,7 @@ import { useParams } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { idSchema } from '../../../shared/schemas/common';
 import { ProductPage } from '../../features/products/components/product-page';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
 import { useSignedInUser } from '../signed-in-user';

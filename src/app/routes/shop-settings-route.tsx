@@ -1,7 +1,7 @@
 import { can } from '../../../shared/permissions';
 import { PageHeader } from '../../components/ui/page-header';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { ShopSettingsForm } from '../../features/settings/components/shop-settings-form';
 import { ShopSettingsSummary } from '../../features/settings/components/shop-settings-summary';
 import { usePageTitle } from '../../lib/use-page-title';

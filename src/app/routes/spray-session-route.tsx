@@ -1,5 +1,5 @@
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { SpraySessionPage } from '../../features/spray-session/components/spray-session-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';

@@ -1,6 +1,6 @@
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { MySessionsPage } from '../../features/spray-session/components/my-sessions-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';

@@ -1,7 +1,7 @@
 import { Navigate, useLocation } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { SiteSwitcher } from '../../features/sites/components/site-switcher';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { TodayPage } from '../../features/today/components/today-page';

@@ -1,5 +1,5 @@
 import { can } from '../../../shared/permissions';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { UsersPage } from '../../features/users/components/users-page';
 import { usePageTitle } from '../../lib/use-page-title';

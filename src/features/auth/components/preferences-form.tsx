@@ -8,7 +8,7 @@ import { updateMeSchema, type UpdateMeInput } from '../../../../shared/schemas/u
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useUpdateMe } from '../api/update-me';
+import { useUpdateMe } from '../../../api/auth/update-me';
 import { NotifyPrefsFieldset } from './notify-prefs-fieldset';
 import { RecentNotifications } from './recent-notifications';
 

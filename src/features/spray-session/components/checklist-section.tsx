@@ -2,7 +2,7 @@ import type { Booth } from '../../../../shared/schemas/booth';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { useLatestReading } from '../api/get-latest-reading';
+import { useLatestReading } from '../../../api/readings/get-readings';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { ChecklistForm } from './checklist-form';
 import { RecordedChecklist } from './recorded-checklist';

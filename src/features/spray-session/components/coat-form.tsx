@@ -68,7 +68,7 @@ export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, rea
   const { form, values, step, product } = coat;
   const { register, control, handleSubmit, setError, setValue, formState } = form;
   const preview = useCoatPreview({ coat, sessionCoats, units, timeZone });
-  const { record, pending } = useRecordCoat(session.id, queue);
+  const { record, pending } = useRecordCoat(queue);
   const stops = useStopReasons(preview.warnings);
   const [formError, setFormError] = useState<string | null>(null);
 

@@ -3,7 +3,7 @@ import { roleLabels } from '../../../../shared/permissions';
 import type { SignedInUser } from '../../../../shared/schemas/auth';
 import type { ShopSettings } from '../../../../shared/schemas/settings';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { useToday } from '../api/get-today';
+import { useToday } from '../../../api/today/get-today';
 import { LeadBoard } from './lead-board';
 import { ShopClock } from './shop-clock';
 import { SprayerBoard } from './sprayer-board';

@@ -1,0 +1,4 @@
+export const mailboxKeys = {
+  all: ['mailbox'] as const,
+  messages: () => [...mailboxKeys.all, 'messages'] as const,
+};
