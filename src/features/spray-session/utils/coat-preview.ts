@@ -1,4 +1,6 @@
 import { computeCoatRecord, type CoatRecord, type CoatWarning } from '../../../../shared/finishing/coat-record';
+import { coatDryingTempC } from '../../../../shared/finishing/drying-temperature';
+import { potWarnings } from '../../../../shared/finishing/pot-life';
 import type { Mix } from '../../../../shared/schemas/checklist';
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
@@ -28,17 +30,9 @@ export function previousWindowOf(partIds: number[], ready: Map<number, ReadyPart
   return windows.sort((a, b) => b.opensAt.getTime() - a.opensAt.getTime())[0] ?? null;
 }
 
-/** As the server does it: the coolest heated rack when every part sits on one, else the booth air. */
+/** The server's rule (shared): the parts' racks' drying temperatures, else the booth air. */
 export function dryingTempOf(parts: PickedPart[], racks: Rack[], airTempC: number): number {
-  const temps = parts.map((part) => racks.find((rack) => rack.id === part.rackId)?.dryingTempC ?? null);
-  return temps.length > 0 && temps.every((t): t is number => t !== null) ? Math.min(...temps) : airTempC;
-}
-
-function mixWarnings(mix: Mix | undefined, at: Date): CoatWarning[] {
-  if (!mix) return [];
-  if (mix.potLifeEndsAt && at.getTime() > Date.parse(mix.potLifeEndsAt)) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot is past its pot life.' }];
-  if (at.getTime() < Date.parse(mix.inductionEndsAt)) return [{ code: 'induction-not-over', verdict: 'caution', message: 'The pot has not finished its induction (stand) time.' }];
-  return [];
+  return coatDryingTempC(parts.map((part) => racks.find((rack) => rack.id === part.rackId)?.dryingTempC ?? null), airTempC);
 }
 
 export interface CoatPreviewInput {
@@ -62,7 +56,7 @@ export interface CoatPreviewInput {
 export function previewCoat(input: CoatPreviewInput): { record: CoatRecord; warnings: CoatWarning[] } | { problem: string } {
   try {
     const record = computeCoatRecord({ ...input, sprayedAt: input.at });
-    return { record, warnings: [...record.warnings, ...mixWarnings(input.mix, input.at)] };
+    return { record, warnings: [...record.warnings, ...(input.mix ? potWarnings(input.mix, input.at) : [])] };
   } catch (error) {
     return { problem: error instanceof Error ? error.message : 'A value is out of range.' };
   }
