@@ -10,7 +10,14 @@ const featureOf = (file) => /[/\\]src[/\\]features[/\\]([^/\\]+)[/\\]/.exec(file
 const inApi = (file) => /[/\\]src[/\\]api[/\\]/.test(file);
 
 const featureImports = {
-  meta: { type: 'problem', messages: { crossFeature: 'Features do not import each other ({{target}}): move the shared call to src/api, or compose both in src/app.', apiToFeature: 'src/api never imports a feature ({{target}}).' } },
+  meta: {
+    type: 'problem',
+    messages: {
+      crossFeature:
+        'Features do not import each other ({{target}}): move the shared call to src/api, or compose both in src/app.',
+      apiToFeature: 'src/api never imports a feature ({{target}}).',
+    },
+  },
   create(context) {
     const file = context.filename;
     const own = featureOf(file);
@@ -24,12 +31,23 @@ const featureImports = {
       if (api) context.report({ node, messageId: 'apiToFeature', data: { target } });
       else if (target !== own) context.report({ node, messageId: 'crossFeature', data: { target } });
     };
-    return { ImportDeclaration: check, ExportNamedDeclaration: check, ExportAllDeclaration: check, ImportExpression: check };
+    return {
+      ImportDeclaration: check,
+      ExportNamedDeclaration: check,
+      ExportAllDeclaration: check,
+      ImportExpression: check,
+    };
   },
 };
 
 const noApiPathsInFeatures = {
-  meta: { type: 'problem', messages: { apiPath: 'A server address ({{text}}) belongs in src/api, where each resource is declared once; a call only this screen makes goes in this feature’s api/ folder.' } },
+  meta: {
+    type: 'problem',
+    messages: {
+      apiPath:
+        'A server address ({{text}}) belongs in src/api, where each resource is declared once; a call only this screen makes goes in this feature’s api/ folder.',
+    },
+  },
   create(context) {
     const file = context.filename;
     if (!featureOf(file) || /[/\\]src[/\\]features[/\\][^/\\]+[/\\]api[/\\]/.test(file)) return {};
@@ -43,4 +61,6 @@ const noApiPathsInFeatures = {
   },
 };
 
-export const clientBoundaries = { rules: { 'feature-imports': featureImports, 'no-api-paths-in-features': noApiPathsInFeatures } };
+export const clientBoundaries = {
+  rules: { 'feature-imports': featureImports, 'no-api-paths-in-features': noApiPathsInFeatures },
+};

@@ -84,4 +84,3 @@ export const partIdsQuerySchema = z.object({
     .transform((text) => [...new Set(text.split(',').map(Number))])
     .pipe(z.array(z.number().max(maxId, 'No record has an id that large')).max(maxPartIds, `At most ${maxPartIds} parts at once`)),
 });
-export type PartIdsQuery = z.infer<typeof partIdsQuerySchema>;

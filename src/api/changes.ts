@@ -25,27 +25,69 @@ import { userKeys } from './users/user-keys';
  */
 export const changedKeys = {
   /** A coat (or its correction): the parts' steps and readiness, the jobs' states and ready times, the sessions' work, the day, the reports. */
-  coat: (): QueryKey[] => [coatKeys.all, partKeys.all, readyKeys.all, jobKeys.all, spraySessionKeys.all, todayKeys.all, reportKeys.all],
-  denib: (): QueryKey[] => [denibKeys.all, partKeys.all, readyKeys.all, jobKeys.all, spraySessionKeys.all, todayKeys.all],
+  coat: (): QueryKey[] => [
+    coatKeys.all,
+    partKeys.all,
+    readyKeys.all,
+    jobKeys.all,
+    spraySessionKeys.all,
+    todayKeys.all,
+    reportKeys.all,
+  ],
+  denib: (): QueryKey[] => [
+    denibKeys.all,
+    partKeys.all,
+    readyKeys.all,
+    jobKeys.all,
+    spraySessionKeys.all,
+    todayKeys.all,
+  ],
   /** A pot: the session's mixes and the solvent and material reports. */
   mix: (): QueryKey[] => [mixKeys.all, reportKeys.all],
   /** A booking moved or run: the next coat times and job ready times count booked sessions; booth use too. */
-  spraySession: (): QueryKey[] => [spraySessionKeys.all, readyKeys.all, jobKeys.all, partKeys.histories(), todayKeys.all, reportKeys.all],
+  spraySession: (): QueryKey[] => [
+    spraySessionKeys.all,
+    readyKeys.all,
+    jobKeys.all,
+    partKeys.histories(),
+    todayKeys.all,
+    reportKeys.all,
+  ],
   /** A part added, changed, moved or collected: its job's count, area and estimate, its rack's space. */
   part: (): QueryKey[] => [partKeys.all, readyKeys.all, jobKeys.all, spraySessionKeys.all, rackKeys.all, todayKeys.all],
   reading: (): QueryKey[] => [readingKeys.all, todayKeys.all, reportKeys.all],
   /** A job's finish system or dates: its parts' steps, the sessions' work, the day's jobs at risk. */
   job: (): QueryKey[] => [jobKeys.all, partKeys.all, readyKeys.all, spraySessionKeys.all, todayKeys.all],
   /** A data sheet: every screen that shows the product or works times out from it. */
-  product: (): QueryKey[] => [productKeys.all, finishSystemKeys.all, jobKeys.all, partKeys.histories(), readyKeys.all, spraySessionKeys.all, todayKeys.all],
-  finishSystem: (): QueryKey[] => [finishSystemKeys.all, jobKeys.all, partKeys.all, readyKeys.all, spraySessionKeys.all, todayKeys.all],
+  product: (): QueryKey[] => [
+    productKeys.all,
+    finishSystemKeys.all,
+    jobKeys.all,
+    partKeys.histories(),
+    readyKeys.all,
+    spraySessionKeys.all,
+    todayKeys.all,
+  ],
+  finishSystem: (): QueryKey[] => [
+    finishSystemKeys.all,
+    jobKeys.all,
+    partKeys.all,
+    readyKeys.all,
+    spraySessionKeys.all,
+    todayKeys.all,
+  ],
   booth: (): QueryKey[] => [boothKeys.all, siteKeys.counts(), spraySessionKeys.all, todayKeys.all],
   rack: (): QueryKey[] => [rackKeys.all, siteKeys.counts(), partKeys.all, readyKeys.all],
   /** A user: the sprayers a session may be given to, and the names sessions show. */
   user: (): QueryKey[] => [userKeys.all, siteKeys.counts(), sprayerKeys.all, spraySessionKeys.all, todayKeys.all],
   site: (): QueryKey[] => [siteKeys.all],
   /** The shop's timezone and planning temperature go into every time the server works out. */
-  settings: (): QueryKey[] => [settingsKeys.all, readyKeys.all, jobKeys.all, partKeys.histories(), todayKeys.all, reportKeys.all],
+  settings: (): QueryKey[] => [
+    settingsKeys.all,
+    readyKeys.all,
+    jobKeys.all,
+    partKeys.histories(),
+    todayKeys.all,
+    reportKeys.all,
+  ],
 };
-
-export type ChangeKind = keyof typeof changedKeys;

@@ -2,7 +2,7 @@ import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '../api/auth/get-me';
 import { SignedInUserProvider } from './signed-in-user';
 
-export function FullPageStatus({ children }: { children: string }) {
+function FullPageStatus({ children }: { children: string }) {
   return (
     <div className="grid min-h-dvh place-items-center p-6">
       <p role="status" className="text-lg text-maple-700">

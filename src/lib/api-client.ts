@@ -46,7 +46,7 @@ async function fetchCsrfToken(): Promise<string> {
 }
 
 /** The token is fetched once and shared; a failed fetch is forgotten so the next call tries again. */
-export function getCsrfToken(): Promise<string> {
+function getCsrfToken(): Promise<string> {
   if (!csrfToken) {
     csrfToken = fetchCsrfToken().catch((error: unknown) => {
       csrfToken = null;

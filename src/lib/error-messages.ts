@@ -28,7 +28,3 @@ export function errorMessage(error: unknown): string {
   }
   return wordsByCode.internal;
 }
-
-export function wordsForCode(code: string): string {
-  return wordsByCode[code] ?? wordsByCode.internal;
-}

@@ -10,7 +10,11 @@ export function getAudit(filters: PageQuery, signal?: AbortSignal) {
 
 /** Newest first. */
 export const auditQueryOptions = (filters: PageQuery) =>
-  queryOptions({ queryKey: auditKeys.list(filters), queryFn: ({ signal }) => getAudit(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: auditKeys.list(filters),
+    queryFn: ({ signal }) => getAudit(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useAudit(filters: PageQuery) {
   return useQuery(auditQueryOptions(filters));

@@ -8,7 +8,8 @@ export async function getBooth(id: number, signal?: AbortSignal) {
   return booth;
 }
 
-export const boothQueryOptions = (id: number) => queryOptions({ queryKey: boothKeys.detail(id), queryFn: ({ signal }) => getBooth(id, signal) });
+export const boothQueryOptions = (id: number) =>
+  queryOptions({ queryKey: boothKeys.detail(id), queryFn: ({ signal }) => getBooth(id, signal) });
 
 export function useBooth(id: number) {
   return useQuery(boothQueryOptions(id));

@@ -8,7 +8,11 @@ export function getBooths(filters: BoothFilters, signal?: AbortSignal) {
 }
 
 export const boothsQueryOptions = (filters: BoothFilters) =>
-  queryOptions({ queryKey: boothKeys.list(filters), queryFn: ({ signal }) => getBooths(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: boothKeys.list(filters),
+    queryFn: ({ signal }) => getBooths(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useBooths(filters: BoothFilters) {
   return useQuery(boothsQueryOptions(filters));

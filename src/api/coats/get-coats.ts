@@ -9,7 +9,11 @@ export function getCoats(filters: CoatFilters, signal?: AbortSignal) {
 
 /** Newest first; current versions only unless `history` asks for every version. */
 export const coatsQueryOptions = (filters: CoatFilters) =>
-  queryOptions({ queryKey: coatKeys.list(filters), queryFn: ({ signal }) => getCoats(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: coatKeys.list(filters),
+    queryFn: ({ signal }) => getCoats(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useCoats(filters: CoatFilters) {
   return useQuery(coatsQueryOptions(filters));

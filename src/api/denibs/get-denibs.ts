@@ -9,7 +9,11 @@ export function getDenibs(filters: DenibFilters, signal?: AbortSignal) {
 
 /** Newest first. */
 export const denibsQueryOptions = (filters: DenibFilters) =>
-  queryOptions({ queryKey: denibKeys.list(filters), queryFn: ({ signal }) => getDenibs(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: denibKeys.list(filters),
+    queryFn: ({ signal }) => getDenibs(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useDenibs(filters: DenibFilters) {
   return useQuery(denibsQueryOptions(filters));

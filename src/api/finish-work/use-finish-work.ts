@@ -22,11 +22,16 @@ const unique = (ids: number[]) => [...new Set(ids)].sort((a, b) => a - b);
  * detail, so a change to a job, system or product refreshes every screen that shows it.
  * `products: false` for roles that do not read data sheets.
  */
-export function useFinishWork(jobIds: number[], { products: readProducts = true }: { products?: boolean } = {}): FinishWork {
+export function useFinishWork(
+  jobIds: number[],
+  { products: readProducts = true }: { products?: boolean } = {},
+): FinishWork {
   const { jobs, pending: jobsPending, error: jobsError } = useJobsById(unique(jobIds));
   const systemIds = unique(jobs.flatMap((job) => (job.finishSystemId === null ? [] : [job.finishSystemId])));
   const { systems, pending: systemsPending, error: systemsError } = useFinishSystemsById(systemIds);
-  const productIds = unique(systems.flatMap((system) => system.steps.flatMap((step) => (step.kind === 'coat' ? [step.productId] : []))));
+  const productIds = unique(
+    systems.flatMap((system) => system.steps.flatMap((step) => (step.kind === 'coat' ? [step.productId] : []))),
+  );
   const { products, pending: productsPending, error: productsError } = useProductsById(productIds, readProducts);
 
   const jobKey = jobs.map((j) => `${j.id}:${j.finishSystemId}:${j.updatedAt}`).join();
@@ -36,11 +41,17 @@ export function useFinishWork(jobIds: number[], { products: readProducts = true 
   const maps = useMemo(
     () => ({
       jobs: new Map(jobs.map((job) => [job.id, job])),
-      systemByJob: new Map(jobs.flatMap((job) => systems.filter((s) => s.id === job.finishSystemId).map((s) => [job.id, s] as const))),
+      systemByJob: new Map(
+        jobs.flatMap((job) => systems.filter((s) => s.id === job.finishSystemId).map((s) => [job.id, s] as const)),
+      ),
       products: new Map(products.map((product) => [product.id, product])),
     }),
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [jobKey, systemKey, productKey],
   );
-  return { ...maps, pending: jobsPending || systemsPending || productsPending, error: jobsError ?? systemsError ?? productsError };
+  return {
+    ...maps,
+    pending: jobsPending || systemsPending || productsPending,
+    error: jobsError ?? systemsError ?? productsError,
+  };
 }

@@ -8,7 +8,8 @@ export async function getJob(id: number, signal?: AbortSignal) {
   return job;
 }
 
-export const jobQueryOptions = (id: number) => queryOptions({ queryKey: jobKeys.detail(id), queryFn: ({ signal }) => getJob(id, signal) });
+export const jobQueryOptions = (id: number) =>
+  queryOptions({ queryKey: jobKeys.detail(id), queryFn: ({ signal }) => getJob(id, signal) });
 
 export function useJob(id: number) {
   return useQuery(jobQueryOptions(id));

@@ -9,7 +9,11 @@ export function getJobs(filters: JobFilters, signal?: AbortSignal) {
 
 /** By due date. */
 export const jobsQueryOptions = (filters: JobFilters) =>
-  queryOptions({ queryKey: jobKeys.list(filters), queryFn: ({ signal }) => getJobs(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: jobKeys.list(filters),
+    queryFn: ({ signal }) => getJobs(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useJobs(filters: JobFilters, { enabled = true }: { enabled?: boolean } = {}) {
   return useQuery({ ...jobsQueryOptions(filters), enabled });

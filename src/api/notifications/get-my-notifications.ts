@@ -10,7 +10,11 @@ export async function getMyNotifications(signal?: AbortSignal) {
 }
 
 export const myNotificationsQueryOptions = () =>
-  queryOptions({ queryKey: notificationKeys.mine(), queryFn: ({ signal }) => getMyNotifications(signal), refetchInterval: 60_000 });
+  queryOptions({
+    queryKey: notificationKeys.mine(),
+    queryFn: ({ signal }) => getMyNotifications(signal),
+    refetchInterval: 60_000,
+  });
 
 export function useMyNotifications() {
   return useQuery(myNotificationsQueryOptions());

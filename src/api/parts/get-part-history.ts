@@ -10,7 +10,11 @@ export async function getPartHistory(id: number, signal?: AbortSignal) {
 
 /** Refetched now and then as well as on live changes: windows open and close on the server's clock. */
 export const partHistoryQueryOptions = (id: number) =>
-  queryOptions({ queryKey: partKeys.history(id), queryFn: ({ signal }) => getPartHistory(id, signal), refetchInterval: 60_000 });
+  queryOptions({
+    queryKey: partKeys.history(id),
+    queryFn: ({ signal }) => getPartHistory(id, signal),
+    refetchInterval: 60_000,
+  });
 
 export function usePartHistory(id: number, enabled = true) {
   return useQuery({ ...partHistoryQueryOptions(id), enabled });

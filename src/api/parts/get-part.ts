@@ -8,7 +8,8 @@ export async function getPart(id: number, signal?: AbortSignal) {
   return part;
 }
 
-export const partQueryOptions = (id: number) => queryOptions({ queryKey: partKeys.detail(id), queryFn: ({ signal }) => getPart(id, signal) });
+export const partQueryOptions = (id: number) =>
+  queryOptions({ queryKey: partKeys.detail(id), queryFn: ({ signal }) => getPart(id, signal) });
 
 export function usePart(id: number) {
   return useQuery(partQueryOptions(id));

@@ -13,7 +13,11 @@ export async function getParts(ids: number[], signal?: AbortSignal): Promise<Par
 /** At most as many as the server answers at once; the caller says when a longer list was cut. */
 export const partsQueryOptions = (ids: number[]) => {
   const wanted = [...new Set(ids)].sort((a, b) => a - b).slice(0, maxPartIds);
-  return queryOptions({ queryKey: partKeys.list({ ids: wanted }), queryFn: ({ signal }) => getParts(wanted, signal), enabled: wanted.length > 0 });
+  return queryOptions({
+    queryKey: partKeys.list({ ids: wanted }),
+    queryFn: ({ signal }) => getParts(wanted, signal),
+    enabled: wanted.length > 0,
+  });
 };
 
 export function useParts(ids: number[]) {

@@ -34,7 +34,11 @@ export function previewPartsImport({ jobId, file, mapping }: ImportCall) {
 
 /** Saves every row, or none when any row is wrong (a 400 naming the rows). */
 export async function commitPartsImport({ jobId, file, mapping }: ImportCall) {
-  const result = await apiClient.postForm(`/api/jobs/${jobId}/parts/import`, importForm(file, mapping, false), previewResultSchema);
+  const result = await apiClient.postForm(
+    `/api/jobs/${jobId}/parts/import`,
+    importForm(file, mapping, false),
+    previewResultSchema,
+  );
   return result.items;
 }
 

@@ -1,5 +1,5 @@
 /** A job's parts, or several parts by id (a spray session's planned parts). */
-export type PartListFilters = { jobId: number } | { ids: number[] };
+type PartListFilters = { jobId: number } | { ids: number[] };
 
 export const partKeys = {
   all: ['parts'] as const,

@@ -9,14 +9,18 @@ export async function getProduct(id: number, signal?: AbortSignal) {
 }
 
 /** The data sheet: drying times, mix ratio, limits, hazards and lots (with their expiry worked out). */
-export const productQueryOptions = (id: number) => queryOptions({ queryKey: productKeys.detail(id), queryFn: ({ signal }) => getProduct(id, signal) });
+export const productQueryOptions = (id: number) =>
+  queryOptions({ queryKey: productKeys.detail(id), queryFn: ({ signal }) => getProduct(id, signal) });
 
 export function useProduct(id: number) {
   return useQuery(productQueryOptions(id));
 }
 
 /** The data sheets of the products given, each from its own cached detail, so a change to one refreshes it everywhere. */
-export function useProductsById(ids: number[], enabled = true): { products: Product[]; pending: boolean; error: unknown } {
+export function useProductsById(
+  ids: number[],
+  enabled = true,
+): { products: Product[]; pending: boolean; error: unknown } {
   return useQueries({
     queries: ids.map((id) => ({ ...productQueryOptions(id), enabled })),
     combine: (results) => ({

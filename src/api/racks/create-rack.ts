@@ -3,7 +3,6 @@ import { rackResponseSchema, type CreateRackInput } from '../../../shared/schema
 import { apiClient } from '../../lib/api-client';
 import { changedKeys } from '../changes';
 import { invalidate } from '../invalidate';
-import { rackKeys } from './rack-keys';
 
 export async function createRack(input: CreateRackInput) {
   const { rack } = await apiClient.post('/api/racks', input, rackResponseSchema);
@@ -14,9 +13,6 @@ export function useCreateRack() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createRack,
-    onSuccess: (rack) => {
-      queryClient.setQueryData(rackKeys.detail(rack.id), rack);
-      return invalidate(queryClient, changedKeys.rack());
-    },
+    onSuccess: () => invalidate(queryClient, changedKeys.rack()),
   });
 }

@@ -8,7 +8,11 @@ export function getRacks(filters: RackFilters, signal?: AbortSignal) {
 }
 
 export const racksQueryOptions = (filters: RackFilters) =>
-  queryOptions({ queryKey: rackKeys.list(filters), queryFn: ({ signal }) => getRacks(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: rackKeys.list(filters),
+    queryFn: ({ signal }) => getRacks(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useRacks(filters: RackFilters) {
   return useQuery(racksQueryOptions(filters));

@@ -3,7 +3,6 @@ import { rackResponseSchema, type UpdateRackInput } from '../../../shared/schema
 import { apiClient } from '../../lib/api-client';
 import { changedKeys } from '../changes';
 import { invalidate } from '../invalidate';
-import { rackKeys } from './rack-keys';
 
 export async function updateRack({ id, changes }: { id: number; changes: UpdateRackInput }) {
   const { rack } = await apiClient.patch(`/api/racks/${id}`, changes, rackResponseSchema);
@@ -14,9 +13,6 @@ export function useUpdateRack() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateRack,
-    onSuccess: (rack) => {
-      queryClient.setQueryData(rackKeys.detail(rack.id), rack);
-      return invalidate(queryClient, changedKeys.rack());
-    },
+    onSuccess: () => invalidate(queryClient, changedKeys.rack()),
   });
 }

@@ -23,19 +23,28 @@ export const readyQueryOptions = (filters: ReadyFilters) =>
     refetchInterval: (q) => (q.state.status === 'error' ? livePollMs : 60_000),
   });
 
-export function useReady(filters: ReadyFilters, { enabled = true, inBackground = false }: { enabled?: boolean; inBackground?: boolean } = {}) {
+export function useReady(
+  filters: ReadyFilters,
+  { enabled = true, inBackground = false }: { enabled?: boolean; inBackground?: boolean } = {},
+) {
   return useQuery({ ...readyQueryOptions(filters), enabled, refetchIntervalInBackground: inBackground });
 }
 
 /** When the whole job will be ready to handle and to pack (null when the board has nothing of it). */
 export function useJobReadyTime(jobId: number) {
-  return useQuery({ ...readyQueryOptions({ jobId, collectedDays: 0 }), select: (list): ReadyJob | null => list.jobs.find((job) => job.jobId === jobId) ?? null });
+  return useQuery({
+    ...readyQueryOptions({ jobId, collectedDays: 0 }),
+    select: (list): ReadyJob | null => list.jobs.find((job) => job.jobId === jobId) ?? null,
+  });
 }
 
 /** Where every part of the jobs given stands, by part id, and whether some of it is still loading. */
 export function useReadyByJobs(jobIds: number[]): { ready: Map<number, ReadyPart>; pending: boolean } {
   return useQueries({
     queries: jobIds.map((jobId) => readyQueryOptions({ jobId })),
-    combine: (results) => ({ ready: new Map(results.flatMap((r) => r.data?.items ?? []).map((part) => [part.id, part])), pending: results.some((r) => r.isPending) }),
+    combine: (results) => ({
+      ready: new Map(results.flatMap((r) => r.data?.items ?? []).map((part) => [part.id, part])),
+      pending: results.some((r) => r.isPending),
+    }),
   });
 }

@@ -10,7 +10,11 @@ export async function getBoothUseReport(params: ReportParams['booth-use'], signa
 }
 
 export const boothUseReportQueryOptions = (params: ReportParams['booth-use']) =>
-  queryOptions({ queryKey: reportKeys.detail('booth-use', params), queryFn: ({ signal }) => getBoothUseReport(params, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: reportKeys.detail('booth-use', params),
+    queryFn: ({ signal }) => getBoothUseReport(params, signal),
+    staleTime: 60_000,
+  });
 
 export function useBoothUseReport(params: ReportParams['booth-use']) {
   return useQuery(boothUseReportQueryOptions(params));

@@ -10,7 +10,11 @@ export async function getConditionsReport(params: ReportParams['conditions'], si
 }
 
 export const conditionsReportQueryOptions = (params: ReportParams['conditions']) =>
-  queryOptions({ queryKey: reportKeys.detail('conditions', params), queryFn: ({ signal }) => getConditionsReport(params, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: reportKeys.detail('conditions', params),
+    queryFn: ({ signal }) => getConditionsReport(params, signal),
+    staleTime: 60_000,
+  });
 
 export function useConditionsReport(params: ReportParams['conditions']) {
   return useQuery(conditionsReportQueryOptions(params));

@@ -10,7 +10,11 @@ export async function getMaterialReport(params: ReportParams['material'], signal
 }
 
 export const materialReportQueryOptions = (params: ReportParams['material']) =>
-  queryOptions({ queryKey: reportKeys.detail('material', params), queryFn: ({ signal }) => getMaterialReport(params, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: reportKeys.detail('material', params),
+    queryFn: ({ signal }) => getMaterialReport(params, signal),
+    staleTime: 60_000,
+  });
 
 export function useMaterialReport(params: ReportParams['material']) {
   return useQuery(materialReportQueryOptions(params));

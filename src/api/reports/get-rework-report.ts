@@ -10,7 +10,11 @@ export async function getReworkReport(params: ReportParams['rework'], signal?: A
 }
 
 export const reworkReportQueryOptions = (params: ReportParams['rework']) =>
-  queryOptions({ queryKey: reportKeys.detail('rework', params), queryFn: ({ signal }) => getReworkReport(params, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: reportKeys.detail('rework', params),
+    queryFn: ({ signal }) => getReworkReport(params, signal),
+    staleTime: 60_000,
+  });
 
 export function useReworkReport(params: ReportParams['rework']) {
   return useQuery(reworkReportQueryOptions(params));

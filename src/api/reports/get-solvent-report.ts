@@ -10,7 +10,11 @@ export async function getSolventReport(params: ReportParams['solvent'], signal?:
 }
 
 export const solventReportQueryOptions = (params: ReportParams['solvent']) =>
-  queryOptions({ queryKey: reportKeys.detail('solvent', params), queryFn: ({ signal }) => getSolventReport(params, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: reportKeys.detail('solvent', params),
+    queryFn: ({ signal }) => getSolventReport(params, signal),
+    staleTime: 60_000,
+  });
 
 export function useSolventReport(params: ReportParams['solvent']) {
   return useQuery(solventReportQueryOptions(params));

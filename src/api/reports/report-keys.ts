@@ -1,4 +1,10 @@
-import type { AreaSprayedQuery, BoothUseQuery, ConditionsQuery, MaterialQuery, ReportRangeQuery } from '../../../shared/schemas/report';
+import type {
+  AreaSprayedQuery,
+  BoothUseQuery,
+  ConditionsQuery,
+  MaterialQuery,
+  ReportRangeQuery,
+} from '../../../shared/schemas/report';
 
 export const reportKinds = ['booth-use', 'area-sprayed', 'conditions', 'solvent', 'material', 'rework'] as const;
 export type ReportKind = (typeof reportKinds)[number];

@@ -8,7 +8,8 @@ export const reportPath = (kind: ReportKind) => `/api/reports/${kind}`;
  */
 export function reportCsvHref<K extends ReportKind>(kind: K, params: ReportParams[K]): string {
   const search = new URLSearchParams();
-  for (const [key, value] of Object.entries(params)) if (value !== undefined && value !== null) search.set(key, String(value));
+  for (const [key, value] of Object.entries(params))
+    if (value !== undefined && value !== null) search.set(key, String(value));
   search.set('format', 'csv');
   return `${reportPath(kind)}?${search.toString()}`;
 }

@@ -9,7 +9,11 @@ export async function getShopSettings(signal?: AbortSignal) {
 }
 
 export const shopSettingsQueryOptions = () =>
-  queryOptions({ queryKey: settingsKeys.shop(), queryFn: ({ signal }) => getShopSettings(signal), staleTime: 10 * 60_000 });
+  queryOptions({
+    queryKey: settingsKeys.shop(),
+    queryFn: ({ signal }) => getShopSettings(signal),
+    staleTime: 10 * 60_000,
+  });
 
 export function useShopSettings() {
   return useQuery(shopSettingsQueryOptions());

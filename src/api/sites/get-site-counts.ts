@@ -15,7 +15,10 @@ export interface SiteCounts {
   users: ReadonlyMap<number, number>;
 }
 
-type PagedBySite = (filters: { page: number; pageSize: number }, signal?: AbortSignal) => Promise<List<{ siteId: number }>>;
+type PagedBySite = (
+  filters: { page: number; pageSize: number },
+  signal?: AbortSignal,
+) => Promise<List<{ siteId: number }>>;
 
 /** Counts one list by site, page by page. An admin's lists span every site when no site is named. */
 async function countBySite(getPage: PagedBySite, signal?: AbortSignal): Promise<Map<number, number>> {
@@ -29,11 +32,14 @@ async function countBySite(getPage: PagedBySite, signal?: AbortSignal): Promise<
 }
 
 export async function getSiteCounts(signal?: AbortSignal): Promise<SiteCounts> {
-  const [booths, racks, users] = await Promise.all([getBooths, getRacks, getUsers].map((getPage) => countBySite(getPage, signal)));
+  const [booths, racks, users] = await Promise.all(
+    [getBooths, getRacks, getUsers].map((getPage) => countBySite(getPage, signal)),
+  );
   return { booths, racks, users };
 }
 
-export const siteCountsQueryOptions = () => queryOptions({ queryKey: siteKeys.counts(), queryFn: ({ signal }) => getSiteCounts(signal) });
+export const siteCountsQueryOptions = () =>
+  queryOptions({ queryKey: siteKeys.counts(), queryFn: ({ signal }) => getSiteCounts(signal) });
 
 export function useSiteCounts() {
   return useQuery(siteCountsQueryOptions());

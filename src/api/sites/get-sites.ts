@@ -11,7 +11,12 @@ export function getSites(signal?: AbortSignal) {
 }
 
 /** Sites change rarely: the forms, tables and switchers that name them share one cached list. */
-export const sitesQueryOptions = () => queryOptions({ queryKey: siteKeys.list(everySite), queryFn: ({ signal }) => getSites(signal), staleTime: 5 * 60_000 });
+export const sitesQueryOptions = () =>
+  queryOptions({
+    queryKey: siteKeys.list(everySite),
+    queryFn: ({ signal }) => getSites(signal),
+    staleTime: 5 * 60_000,
+  });
 
 export function useSites() {
   return useQuery(sitesQueryOptions());

@@ -11,5 +11,8 @@ export async function createSpraySession(input: CreateSpraySessionInput) {
 
 export function useCreateSpraySession() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createSpraySession, onSuccess: () => invalidate(queryClient, changedKeys.spraySession()) });
+  return useMutation({
+    mutationFn: createSpraySession,
+    onSuccess: () => invalidate(queryClient, changedKeys.spraySession()),
+  });
 }

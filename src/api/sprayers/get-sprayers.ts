@@ -9,7 +9,12 @@ export function getSprayers(boothId: number, signal?: AbortSignal) {
 
 /** Who a session in this booth can be given to: the active sprayers and leads of the booth's site. */
 export const sprayersQueryOptions = (boothId: number) =>
-  queryOptions({ queryKey: sprayerKeys.list(boothId), queryFn: ({ signal }) => getSprayers(boothId, signal), select: (list) => list.items, staleTime: 5 * 60_000 });
+  queryOptions({
+    queryKey: sprayerKeys.list(boothId),
+    queryFn: ({ signal }) => getSprayers(boothId, signal),
+    select: (list) => list.items,
+    staleTime: 5 * 60_000,
+  });
 
 export function useSprayers(boothId: number | undefined) {
   const known = boothId !== undefined && Number.isFinite(boothId);

@@ -10,7 +10,11 @@ export async function getToday(siteId: number | undefined, signal?: AbortSignal)
 
 /** The board follows live changes; the minute poll moves countdowns and "closing today" along on a quiet stream. */
 export const todayQueryOptions = (siteId?: number) =>
-  queryOptions({ queryKey: todayKeys.board(siteId), queryFn: ({ signal }) => getToday(siteId, signal), refetchInterval: 60_000 });
+  queryOptions({
+    queryKey: todayKeys.board(siteId),
+    queryFn: ({ signal }) => getToday(siteId, signal),
+    refetchInterval: 60_000,
+  });
 
 export function useToday(siteId?: number) {
   return useQuery(todayQueryOptions(siteId));

@@ -8,7 +8,11 @@ export function getUsers(filters: UserFilters, signal?: AbortSignal) {
 }
 
 export const usersQueryOptions = (filters: UserFilters) =>
-  queryOptions({ queryKey: userKeys.list(filters), queryFn: ({ signal }) => getUsers(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: userKeys.list(filters),
+    queryFn: ({ signal }) => getUsers(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useUsers(filters: UserFilters) {
   return useQuery(usersQueryOptions(filters));

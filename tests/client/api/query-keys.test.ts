@@ -38,7 +38,8 @@ describe('query keys', () => {
   });
 
   it.each(Object.keys(changedKeys))('every key a %s change invalidates matches a query the app defines', (kind) => {
-    for (const prefix of changedKeys[kind as keyof typeof changedKeys]()) expect(matchesSomeQuery(prefix), JSON.stringify(prefix)).toBe(true);
+    for (const prefix of changedKeys[kind as keyof typeof changedKeys]())
+      expect(matchesSomeQuery(prefix), JSON.stringify(prefix)).toBe(true);
   });
 
   it('has live updates for every change the server streams, each matching a query', () => {

@@ -15,7 +15,10 @@ async function streamWhile(watcher: SignedIn, change: () => Promise<unknown>, ex
   const { port } = server.address() as AddressInfo;
   const controller = new AbortController();
   try {
-    const response = await fetch(`http://127.0.0.1:${port}/api/events`, { headers: { cookie }, signal: controller.signal });
+    const response = await fetch(`http://127.0.0.1:${port}/api/events`, {
+      headers: { cookie },
+      signal: controller.signal,
+    });
     const reader = response.body!.getReader();
     await reader.read();
     await change();
@@ -32,14 +35,32 @@ describe('GET /api/events: data sheets and finish systems', () => {
   it('streams product.changed to every site when a data sheet changes, so open spray sessions show the new sheet', async () => {
     const sprayer = await signIn(ctx.app, demo.sprayer);
     const lead = await signIn(ctx.app, demo.lead);
-    const text = await streamWhile(sprayer, () => lead.agent.patch('/api/products/1').set('x-csrf-token', lead.csrf).send({ name: 'Kestrel primer (new sheet)' }).expect(200), 'product.changed');
+    const text = await streamWhile(
+      sprayer,
+      () =>
+        lead.agent
+          .patch('/api/products/1')
+          .set('x-csrf-token', lead.csrf)
+          .send({ name: 'Kestrel primer (new sheet)' })
+          .expect(200),
+      'product.changed',
+    );
     expect(text).toContain('"id":1');
   });
 
   it('streams finish-system.changed when a finish system changes', async () => {
     const assembler = await signIn(ctx.app, demo.assembler);
     const lead = await signIn(ctx.app, demo.lead);
-    const text = await streamWhile(assembler, () => lead.agent.patch('/api/finish-systems/1').set('x-csrf-token', lead.csrf).send({ name: 'Clear oak, precat matt (revised)' }).expect(200), 'finish-system.changed');
+    const text = await streamWhile(
+      assembler,
+      () =>
+        lead.agent
+          .patch('/api/finish-systems/1')
+          .set('x-csrf-token', lead.csrf)
+          .send({ name: 'Clear oak, precat matt (revised)' })
+          .expect(200),
+      'finish-system.changed',
+    );
     expect(text).toContain('"id":1');
   });
 });

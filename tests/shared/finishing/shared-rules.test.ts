@@ -44,11 +44,16 @@ describe('potWarnings', () => {
   const mix = { inductionEndsAt: '2026-03-02T09:15:00Z', potLifeEndsAt: '2026-03-02T13:00:00Z' };
   // The pot's own instants (worked out when it was mixed, DESIGN.md formula 7) decide; these checks only read them.
   it('stops a coat sprayed from a pot past its pot life, with the recorded words', () => {
-    expect(potWarnings(mix, new Date('2026-03-02T13:00:01Z'))).toEqual([{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot was past its pot life when this coat went on.' }]);
+    expect(potWarnings(mix, new Date('2026-03-02T13:00:01Z'))).toEqual([
+      { code: 'pot-life-expired', verdict: 'stop', message: 'The pot was past its pot life when this coat went on.' },
+    ]);
   });
 
   it('cautions a coat from a pot still standing, and says nothing in between or for a pot with no pot life', () => {
-    expect(potWarnings(mix, new Date('2026-03-02T09:00:00Z'))[0]).toMatchObject({ code: 'induction-not-over', verdict: 'caution' });
+    expect(potWarnings(mix, new Date('2026-03-02T09:00:00Z'))[0]).toMatchObject({
+      code: 'induction-not-over',
+      verdict: 'caution',
+    });
     expect(potWarnings(mix, new Date('2026-03-02T10:00:00Z'))).toEqual([]);
     expect(potWarnings({ ...mix, potLifeEndsAt: null }, new Date('2026-03-03T10:00:00Z'))).toEqual([]);
   });
@@ -56,7 +61,11 @@ describe('potWarnings', () => {
 
 describe('dryingStateAt and readinessMovedOn', () => {
   const at = (iso: string) => new Date(iso);
-  const times = { handleAt: at('2026-03-02T12:00:00Z'), packAt: at('2026-03-02T20:00:00Z'), fullCureAt: at('2026-03-09T10:00:00Z') };
+  const times = {
+    handleAt: at('2026-03-02T12:00:00Z'),
+    packAt: at('2026-03-02T20:00:00Z'),
+    fullCureAt: at('2026-03-09T10:00:00Z'),
+  };
   // DESIGN.md formula 3: drying, ready to handle, ready to pack, cured; each begins at its instant.
   it('moves a finished part along as its instants pass', () => {
     expect(dryingStateAt(times, at('2026-03-02T11:59:59Z'))).toBe('drying');

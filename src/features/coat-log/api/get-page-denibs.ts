@@ -10,7 +10,10 @@ type Filters = Omit<CoatFilters, 'page' | 'pageSize'>;
 
 /** The coat just before this page (the oldest on the page before), whose time bounds this page's denibs. */
 function usePreviousCoat(filters: Filters, page: number, pageSize: number) {
-  return useQuery({ ...coatsQueryOptions({ ...filters, page: (page - 1) * pageSize, pageSize: 1 }), enabled: page > 1 });
+  return useQuery({
+    ...coatsQueryOptions({ ...filters, page: (page - 1) * pageSize, pageSize: 1 }),
+    enabled: page > 1,
+  });
 }
 
 /**
@@ -18,12 +21,20 @@ function usePreviousCoat(filters: Filters, page: number, pageSize: number) {
  * coat (or the filter's start, on the last page) up to the page before's oldest coat (or the
  * filter's end, on the first page). Denibs have no product, so a product filter shows none.
  */
-export function usePageDenibs(filters: Filters, page: number, pageSize: number, coats: List<Coat> | undefined): Denib[] {
+export function usePageDenibs(
+  filters: Filters,
+  page: number,
+  pageSize: number,
+  coats: List<Coat> | undefined,
+): Denib[] {
   const previous = usePreviousCoat(filters, page, pageSize);
   const last = !coats || page * pageSize >= coats.total;
   const oldest = coats?.items.at(-1)?.sprayedAt;
   const to = page === 1 ? filters.to : previous.data?.items[0]?.sprayedAt;
   const ready = Boolean(coats) && !filters.productId && (page === 1 || Boolean(to));
-  const denibs = useQuery({ ...denibsQueryOptions({ jobId: filters.jobId, from: last ? filters.from : oldest, to, pageSize: 500 }), enabled: ready });
+  const denibs = useQuery({
+    ...denibsQueryOptions({ jobId: filters.jobId, from: last ? filters.from : oldest, to, pageSize: 500 }),
+    enabled: ready,
+  });
   return ready ? (denibs.data?.items ?? []) : [];
 }

@@ -13,7 +13,7 @@ export interface SprayerViewer {
  * Who a session can be given to: nobody yet, or an active sprayer or lead of the booth's site.
  * A session already given to someone keeps that choice on offer while the list loads.
  */
-export function sprayerOptions(viewer: SprayerViewer, sprayers: Sprayer[] | undefined, current: Pick<SpraySession, 'sprayerId' | 'sprayerName'> | undefined) {
+function sprayerOptions(viewer: SprayerViewer, sprayers: Sprayer[] | undefined, current: Pick<SpraySession, 'sprayerId' | 'sprayerName'> | undefined) {
   const options: { value: number | ''; label: string }[] = [{ value: '', label: 'Not assigned yet' }];
   for (const s of sprayers ?? []) options.push({ value: s.id, label: s.id === viewer.id ? `${s.name} (me)` : `${s.name}${s.role === 'lead' ? ' (lead)' : ''}` });
   if (current?.sprayerId && !options.some((o) => o.value === current.sprayerId)) {

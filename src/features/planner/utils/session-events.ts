@@ -16,7 +16,7 @@ export const stateChipColours: Record<SpraySessionState, { background: string; t
 export const sprayerWords = (session: Pick<SpraySession, 'sprayerName'>) => session.sprayerName ?? 'No sprayer yet';
 
 /** "Booth 1 · Planned · Mina Castell": booth, state and sprayer in words, never by colour alone. */
-export function sessionLabel(session: SpraySession): string {
+function sessionLabel(session: SpraySession): string {
   return [session.boothName, spraySessionStateLabels[session.state], sprayerWords(session)].join(' · ');
 }
 

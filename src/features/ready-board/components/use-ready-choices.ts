@@ -15,6 +15,9 @@ const byReference = new Intl.Collator('en-GB', { numeric: true });
 export function useReadyChoices(): { jobs: JobChoice[]; racks: RackChoice[] } {
   const jobs = useJobs(onePage);
   const racks = useRacks(onePage);
-  const sortedJobs = useMemo(() => [...(jobs.data?.items ?? [])].sort((a, b) => byReference.compare(a.reference, b.reference)), [jobs.data]);
+  const sortedJobs = useMemo(
+    () => [...(jobs.data?.items ?? [])].sort((a, b) => byReference.compare(a.reference, b.reference)),
+    [jobs.data],
+  );
   return { jobs: sortedJobs, racks: racks.data?.items ?? [] };
 }

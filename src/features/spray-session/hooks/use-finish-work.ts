@@ -1,4 +1,7 @@
-import { useFinishWork as useJobsFinishWork, type FinishWork as JobsFinishWork } from '../../../api/finish-work/use-finish-work';
+import {
+  useFinishWork as useJobsFinishWork,
+  type FinishWork as JobsFinishWork,
+} from '../../../api/finish-work/use-finish-work';
 import { useReadyByJobs } from '../../../api/ready/get-ready';
 import type { FinishWork } from '../utils/session-plan';
 

@@ -3,7 +3,7 @@ import { isApiError } from '../../../lib/api-client';
 import { useCreateCoat } from '../../../api/coats/create-coat';
 import type { PendingCoat } from './use-pending-coats';
 
-export type RecordOutcome = { kind: 'saved'; coat: Coat } | { kind: 'queued' } | { kind: 'failed'; error: unknown };
+type RecordOutcome = { kind: 'saved'; coat: Coat } | { kind: 'queued' } | { kind: 'failed'; error: unknown };
 
 /**
  * Sends a coat; when the booth has no connection the coat is queued on the tablet with the same

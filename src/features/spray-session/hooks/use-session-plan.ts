@@ -26,7 +26,10 @@ export function useSessionPlan(session: SpraySession): SessionPlan {
   const pending = (partIds.length > 0 && planned.isPending) || work.pending;
   const gaps: string[] = [];
   if (partIds.length === 0) gaps.push('No parts are planned for this session, so its products are not known.');
-  if (partIds.length > maxPartIds) gaps.push(`Only the first ${maxPartIds} of ${partIds.length} planned parts were read; check the products of the rest.`);
+  if (partIds.length > maxPartIds)
+    gaps.push(
+      `Only the first ${maxPartIds} of ${partIds.length} planned parts were read; check the products of the rest.`,
+    );
   if (planned.isError || work.error) gaps.push('Some of the planned parts or their data sheets could not be read.');
   const withoutSystem = parts.filter((part) => !pending && !work.systemByJob.has(part.jobId));
   if (withoutSystem.length) gaps.push(`${withoutSystem.length} planned part(s) belong to a job with no finish system.`);

@@ -35,7 +35,7 @@ export function dryingTempOf(parts: PickedPart[], racks: Rack[], airTempC: numbe
   return coatDryingTempC(parts.map((part) => racks.find((rack) => rack.id === part.rackId)?.dryingTempC ?? null), airTempC);
 }
 
-export interface CoatPreviewInput {
+interface CoatPreviewInput {
   product: Product;
   targetDryFilmUm: number | null;
   airTempC: number;

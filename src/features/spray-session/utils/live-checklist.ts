@@ -2,7 +2,7 @@ import { evaluateChecklist, type ChecklistEvaluation, type ChecklistProduct } fr
 import { assessConditions } from '../../../../shared/finishing/conditions';
 import { checklistSchema } from '../../../../shared/schemas/checklist';
 
-export interface LiveChecklist {
+interface LiveChecklist {
   evaluation: ChecklistEvaluation | null;
   missing: string[];
   dew: { dewPointC: number; surfaceMarginC: number } | null;
