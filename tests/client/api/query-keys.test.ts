@@ -63,6 +63,14 @@ describe('query keys', () => {
     expect(refreshed(['parts', 'history', 7])).toBe(true);
   });
 
+  it('refreshes a data sheet wherever it shows, the spray session’s coat form included, when it changes', () => {
+    const product = keysForChange('product.changed');
+    const refreshed = (probe: QueryKey) => product.some((prefix) => partialMatchKey(probe, prefix));
+    expect(refreshed(['products', 'detail', 5])).toBe(true);
+    expect(refreshed(['products', 'list', { page: 1, pageSize: 200 }])).toBe(true);
+    expect(refreshed(['finish-systems', 'detail', 2])).toBe(true);
+  });
+
   it('refreshes everything live for a change type it does not know yet', () => {
     expect(keysForChange('something.new')).toBe(everyLiveKey);
   });
