@@ -7,7 +7,7 @@ import type { SpraySession } from '../../shared/schemas/spray-session';
 import { expect, shotsDir, test } from './console-guard';
 import { demo, demoPassword, signIn, type DemoRole } from './helpers';
 
-/** The lead's API session, only to set the stage: a new door on a rack and a session booked now for the sprayer. */
+/** The lead's API session, only to set the stage: a new job's door on a rack and a session booked now for the sprayer. */
 async function setStage(baseURL: string) {
   const api = await request.newContext({ baseURL });
   const token = async () => (await (await api.get('/api/auth/csrf')).json()).token as string;
@@ -27,7 +27,14 @@ async function setStage(baseURL: string) {
   };
   const get = async <T>(path: string): Promise<T> => (await (await api.get(path)).json()) as T;
   const now = Date.now();
-  const job = (await get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
+  // A job of its own on the vanity job's finish system (2K PU primer first), so no other test's part counts change.
+  const vanity = (await get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
+  const { job } = await send<{ job: Job }>('POST', '/api/jobs', {
+    customer: 'Live Test Joinery',
+    reference: `LIVE-${now}`,
+    dueDate: '2027-06-30',
+    finishSystemId: vanity.finishSystemId,
+  });
   const { part } = await send<{ part: Part }>('POST', `/api/jobs/${job.id}/parts`, {
     label: `Live door ${now}`,
     lengthMm: 715,
