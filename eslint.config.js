@@ -84,4 +84,23 @@ export default tseslint.config(
     files: ['tests/**/*.{ts,tsx,mjs}', 'bench/**/*.{ts,mjs}', '*.config.{ts,js}', 'eslint/**/*.js', 'scripts/**/*.{ts,mjs}'],
     languageOptions: { globals: globals.node },
   },
+  {
+    files: ['tests/e2e/**/*.ts'],
+    ignores: ['tests/e2e/fixtures.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            {
+              name: '@playwright/test',
+              importNames: ['test', 'expect'],
+              allowTypeImports: true,
+              message: 'Import test and expect from tests/e2e/fixtures.ts: it fails a test on any console error, page error or 5xx answer.',
+            },
+          ],
+        },
+      ],
+    },
+  },
 );

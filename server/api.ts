@@ -27,7 +27,8 @@ export function buildApiRouter(deps: RegistryDeps): Router {
   const router = Router();
   // A token names its booth whatever the site, so it is looked up across every site.
   const sensors = createReadingService(openSiteData(deps.dataSource, everySite), deps.services.events, deps.services.clock);
-  router.use(sensorAuth(sensors.boothForToken), requireCsrf);
+  const sensorPaths = new Set(apiRoutes.filter((route) => typeof route.access === 'object' && route.method === 'post').map((route) => route.path.replace(/^\/api/, '')));
+  router.use(sensorAuth(sensors.boothForToken, sensorPaths), requireCsrf);
   mountRoutes(
     router,
     apiRoutes.filter((route) => !route.bare),

@@ -9,9 +9,11 @@ import { buildApiRouter, buildBareApiRouter } from './api';
 import { configurePassport } from './auth/passport';
 import type { AppConfig } from './config/env';
 import { systemClock, type Clock } from './lib/clock';
+import { LiveStreamLimits } from './lib/live-stream-limits';
 import { errorHandler } from './middleware/error-handler';
 import { securityHeaders } from './middleware/security';
 import { signInSessionMiddleware } from './middleware/sign-in-session';
+import { runAsOwnWork } from './db/sqlite-gate';
 import type { RegistryDeps } from './registry/mount';
 import { EventBus } from './services/events';
 import { createFileStorage } from './services/file-storage';
@@ -38,11 +40,13 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   if (config.trustProxy) app.set('trust proxy', 1);
   app.disable('x-powered-by');
+  // Each request is its own piece of work: on SQLite none of its queries may run inside another request's transaction.
+  app.use((_req, _res, next) => runAsOwnWork(next));
   app.use(securityHeaders(config.trustProxy));
   app.use(pinoHttp({ logger, genReqId: (req) => (req.headers['x-request-id'] as string) || randomUUID(), autoLogging: config.env !== 'test' }));
 
   const auth = configurePassport(dataSource);
-  const services = { clock, events: deps.events ?? new EventBus(), storage: createFileStorage(config), notifications: deps.notifications };
+  const services = { clock, events: deps.events ?? new EventBus(), liveStreams: new LiveStreamLimits(config.liveStreams), storage: createFileStorage(config), notifications: deps.notifications };
   const registry: RegistryDeps = { dataSource, config, services, auth };
   app.use('/api', buildBareApiRouter(registry));
   app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.signInSecret, config.trustProxy), auth.initialize(), auth.session());

@@ -6,12 +6,15 @@ import { startEventBus } from './services/pg-event-bus';
 import { loadConfig } from './config/env';
 import { resolveSignInSecret } from './config/sign-in-secret';
 import { openDataSource } from './db/data-source';
+import { claimDatabase } from './db/database-lock';
 import { demoSignInLines, demoUsers } from './db/seed';
 import { UserEntity } from './db/entities/user.entity';
 
 async function main(): Promise<void> {
   const config = loadConfig();
   const logger = pino({ level: config.logLevel });
+  // While the server runs, a restore (or a second server) on the same SQLite file is refused.
+  if (config.database.kind === 'sqlite' && config.database.path !== ':memory:') process.on('exit', claimDatabase(config.database.path, 'server'));
   const dataSource = await openDataSource(config.database, { migrate: true });
   // Several instances on PostgreSQL must share SESSION_SECRET; one machine can keep its own beside the data.
   const dataDir = config.database.kind === 'sqlite' ? path.dirname(path.resolve(config.database.path)) : path.resolve('data');

@@ -37,10 +37,18 @@ export const permissions = [
   'sites:read',
   'sites:write',
   'today:read',
+  'upkeep:read',
+  'upkeep:log',
+  'upkeep:write',
+  'crew:own',
+  'crew:status',
+  'crew:write',
 ] as const;
 export type Permission = (typeof permissions)[number];
 
-const adminOnly: readonly Permission[] = ['users:read', 'users:write', 'settings:write', 'sites:write'];
+// Crew protection records are health and personal records: only the admin records them and reads
+// everyone's details; a lead sees each person's status (valid, due soon, lapsed) and nothing more.
+const adminOnly: readonly Permission[] = ['users:read', 'users:write', 'settings:write', 'sites:write', 'crew:write'];
 
 /** The one matrix: the server enforces it, the client hides what a role may not do. Deny by default. */
 const matrix: Record<Role, readonly Permission[]> = {
@@ -63,6 +71,12 @@ const matrix: Record<Role, readonly Permission[]> = {
     'coats:write',
     'ready:read',
     'readings:write',
+    // Booth upkeep as a shop runs it: the sprayer reads the booth's record, notes the filter gauge and
+    // logs the filters they change; banks, extraction tests and fire inspections are the lead's.
+    'upkeep:read',
+    'upkeep:log',
+    // Their own fit tests, health surveillance and training.
+    'crew:own',
   ],
   assembler: ['sites:read', 'booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
 };

@@ -1,3 +1,4 @@
+import type { Request } from 'express';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { DataSource } from 'typeorm';
@@ -5,6 +6,11 @@ import { UserEntity } from '../db/entities/user.entity';
 import { toSignedInUser } from '../services/users';
 import { hashPassword, verifyPassword } from './passwords';
 
+/** What a session keeps of its sign-in. */
+interface SignIn {
+  id: number;
+  epoch: number;
+}
 
 // Checked when the e-mail is unknown, so a wrong e-mail and a wrong password take the same time.
 let decoyHash: Promise<string> | undefined;
@@ -25,13 +31,27 @@ export function configurePassport(dataSource: DataSource): passport.PassportStat
         .catch(done);
     }),
   );
-  instance.serializeUser((user, done) => done(null, user.id));
-  // A disabled or deleted user's sessions stop working on their next request.
-  instance.deserializeUser((id: number, done) => {
+  // A sign-in remembers the user's session epoch; a password reset raises it and so ends it.
+  instance.serializeUser((user, done) => {
+    users
+      .findOneBy({ id: user.id })
+      .then((row) => done(null, { id: user.id, epoch: row?.sessionEpoch ?? 0 } satisfies SignIn))
+      .catch(done);
+  });
+  // A disabled or deleted user's sessions, and those from before a password reset, stop working on their next request.
+  instance.deserializeUser((stored: SignIn | number, done) => {
+    const { id, epoch } = typeof stored === 'number' ? { id: stored, epoch: 0 } : stored;
     users
       .findOneBy({ id })
-      .then((user) => done(null, user && !user.disabled ? toSignedInUser(user) : false))
+      .then((user) => done(null, user && !user.disabled && user.sessionEpoch === epoch ? toSignedInUser(user) : false))
       .catch(done);
   });
   return instance as unknown as passport.PassportStatic;
+}
+
+/** Signs the request's user in again under their current session epoch: their own password change keeps this sign-in. */
+export function renewSignIn(req: Request): Promise<void> {
+  const user = req.user;
+  if (!user) return Promise.resolve();
+  return new Promise((resolve, reject) => req.logIn(user, { session: true, keepSessionInfo: true }, (error) => (error ? reject(error) : resolve())));
 }

@@ -31,6 +31,9 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   UPLOAD_DIR: z.string().default(path.join('data', 'uploads')),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  LOGIN_ACCOUNT_RATE_LIMIT: z.coerce.number().int().min(1).default(5),
+  LIVE_STREAMS_PER_USER: z.coerce.number().int().min(1).default(10),
+  LIVE_STREAMS_PER_SERVER: z.coerce.number().int().min(1).default(1000),
   SMTP_URL: z.preprocess((v) => (v === '' ? undefined : v), z.string().regex(/^smtps?:\/\//, 'SMTP_URL must start with smtp:// or smtps://').optional()),
   MAIL_FROM: z.string().default('Boothwright <boothwright@localhost>'),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
@@ -72,6 +75,10 @@ export interface AppConfig {
   logLevel: string;
   uploadDir: string;
   loginRateLimit: number;
+  /** Failed sign-ins to one account (whatever the address) before it waits a few minutes. */
+  loginAccountRateLimit: number;
+  /** Open live-update streams (GET /api/events) one user, and this whole server, may hold. */
+  liveStreams: { perUser: number; perServer: number };
   /** Unset: the app starts its own fake SMTP server on FAKE_SMTP_PORT (0 = any free port). */
   smtpUrl: string | undefined;
   mailFrom: string;
@@ -101,6 +108,8 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     logLevel: env.LOG_LEVEL,
     uploadDir: env.UPLOAD_DIR,
     loginRateLimit: env.LOGIN_RATE_LIMIT,
+    loginAccountRateLimit: env.LOGIN_ACCOUNT_RATE_LIMIT,
+    liveStreams: { perUser: env.LIVE_STREAMS_PER_USER, perServer: env.LIVE_STREAMS_PER_SERVER },
     smtpUrl: env.SMTP_URL,
     mailFrom: env.MAIL_FROM,
     fakeSmtpPort: env.FAKE_SMTP_PORT,

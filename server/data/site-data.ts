@@ -20,10 +20,17 @@ import { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity
 import { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { StoredFileEntity } from '../db/entities/stored-file.entity';
 import { UserEntity } from '../db/entities/user.entity';
+import { CoatPhotoEntity } from '../db/entities/coat-photo.entity';
+import { CrewRecordEntity } from '../db/entities/crew-record.entity';
+import { ExtractionTestEntity } from '../db/entities/extraction-test.entity';
+import { FilterBankEntity } from '../db/entities/filter-bank.entity';
+import { FilterChangeEntity } from '../db/entities/filter-change.entity';
+import { FilterGaugeReadingEntity } from '../db/entities/filter-gauge-reading.entity';
+import { FireInspectionEntity } from '../db/entities/fire-inspection.entity';
 import { inTransaction } from '../db/transaction';
 import { everySite, type SiteScope } from '../lib/site-scope';
 import { ScopedRepository } from './scoped-repository';
-import { byBoothOrRack, byCoat, byDenib, bySpraySession, byBooth, groupWide, ownSite, placedOnRack, siteOrGroup, type SiteRule } from './site-rules';
+import { byBoothOrRack, byCoat, byDenib, bySpraySession, byBooth, byUser, groupWide, ownSite, placedOnRack, siteOrGroup, type SiteRule } from './site-rules';
 
 export type Dialect = 'sqlite' | 'postgres';
 
@@ -62,6 +69,14 @@ export interface SiteData {
   readonly finishSteps: ScopedRepository<FinishStepEntity>;
   readonly jobs: ScopedRepository<JobEntity>;
   readonly notifications: ScopedRepository<NotificationEntity>;
+  /** Booth upkeep belongs to the booth's site; crew records to the person's; coat photos to the coat's. */
+  readonly filterBanks: ScopedRepository<FilterBankEntity>;
+  readonly gaugeReadings: ScopedRepository<FilterGaugeReadingEntity>;
+  readonly filterChanges: ScopedRepository<FilterChangeEntity>;
+  readonly extractionTests: ScopedRepository<ExtractionTestEntity>;
+  readonly fireInspections: ScopedRepository<FireInspectionEntity>;
+  readonly crewRecords: ScopedRepository<CrewRecordEntity>;
+  readonly coatPhotos: ScopedRepository<CoatPhotoEntity>;
   readonly sql: RawSql;
   /** Runs `work` in one transaction, with the same scope. Never call it from inside `work`. */
   transaction<T>(work: (tx: SiteData) => Promise<T>): Promise<T>;
@@ -102,6 +117,13 @@ function build(dataSource: DataSource, manager: EntityManager, scope: SiteScope)
     finishSteps: repo(FinishStepEntity, groupWide),
     jobs: repo(JobEntity, groupWide),
     notifications: repo(NotificationEntity, groupWide),
+    filterBanks: repo(FilterBankEntity, byBooth),
+    gaugeReadings: repo(FilterGaugeReadingEntity, byBooth),
+    filterChanges: repo(FilterChangeEntity, byBooth),
+    extractionTests: repo(ExtractionTestEntity, byBooth),
+    fireInspections: repo(FireInspectionEntity, byBooth),
+    crewRecords: repo(CrewRecordEntity, byUser),
+    coatPhotos: repo(CoatPhotoEntity, byCoat),
     sql: { dialect, query: (text, params) => manager.query(text, params) },
     transaction: (work) => inTransaction(dataSource, (tx) => work(build(dataSource, tx, scope))),
     get acrossSites() {

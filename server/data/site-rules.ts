@@ -80,3 +80,12 @@ export const siteOrGroup: SiteRule<{ siteId: number | null }> = {
   where: (a) => `(${a}.site_id IS NULL OR ${a}.site_id = :scopeSiteId)`,
   sitesOf: async (row) => (row.siteId === null || row.siteId === undefined ? [] : [row.siteId]),
 };
+
+const usersOfSite = 'SELECT su.id FROM users su WHERE su.site_id = :scopeSiteId';
+const userSites = (id: string) => `SELECT site_id FROM users WHERE id = ${id}`;
+
+/** A person's own records (fit tests, health surveillance, training) belong to their site. */
+export const byUser: SiteRule<{ userId: number }> = {
+  where: (a) => `${a}.user_id IN (${usersOfSite})`,
+  sitesOf: (row, manager) => siteOf(manager, userSites, row.userId),
+};

@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { loadConfig } from '../config/env';
 import { createFileStorage } from '../services/file-storage';
-import { backupSqlite, restoreSqlite } from './backup';
+import { backupShop, restoreShop, type Shop } from './backup';
 import { openDataSource } from './data-source';
 import { seedDemoHistory } from './demo-history';
 import { demoSignInLines, seedDemoShop } from './seed';
@@ -24,20 +24,27 @@ async function generate(name: string | undefined): Promise<void> {
   console.log(`Wrote ${file}; add ${className} to server/db/migrations.ts.`);
 }
 
-function sqlitePath(): string {
-  const { database } = loadConfig();
-  if (database.kind !== 'sqlite') throw new Error('Backups here are for the SQLite file; for PostgreSQL use pg_dump and pg_restore.');
-  return database.path;
+function shop(): Shop {
+  const config = loadConfig();
+  if (config.database.kind !== 'sqlite') {
+    throw new Error('Backups here are for the SQLite file. On PostgreSQL use pg_dump and pg_restore, and copy the upload folder or bucket with them.');
+  }
+  return { databasePath: config.database.path, storage: createFileStorage(config) };
 }
 
 async function backup(): Promise<void> {
-  console.log(`Backed up to ${await backupSqlite(sqlitePath(), path.join(path.dirname(path.resolve(sqlitePath())), 'backups'))}`);
+  const { databasePath, storage } = shop();
+  const result = await backupShop({ databasePath, storage }, path.join(path.dirname(path.resolve(databasePath)), 'backups'));
+  console.log(`Backed up the database and ${result.files} uploaded file(s) to ${result.folder} (readable by this user only).`);
+  if (result.missing.length) console.warn(`These recorded files were missing from the file storage and are not in the backup: ${result.missing.join(', ')}`);
 }
 
-function restore(file: string | undefined): void {
-  if (!file) throw new Error('Usage: npm run restore -- <backup file>   (stop the server first)');
-  restoreSqlite(file, sqlitePath());
-  console.log(`Restored ${file} to ${sqlitePath()}. Start the server again.`);
+async function restore(backupPath: string | undefined): Promise<void> {
+  if (!backupPath) throw new Error('Usage: npm run restore -- <backup folder>   (stop the server first)');
+  const target = shop();
+  const { files, withFiles } = await restoreShop(backupPath, target);
+  const what = withFiles ? `the database and ${files} uploaded file(s)` : 'the database (this older backup holds no uploaded files)';
+  console.log(`Restored ${what} from ${backupPath} to ${target.databasePath}. Start the server again.`);
 }
 
 async function run(command: string | undefined, arg: string | undefined): Promise<void> {

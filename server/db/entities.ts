@@ -20,6 +20,13 @@ import { NotificationEntity } from './entities/notification.entity';
 import { ReadingEntity } from './entities/reading.entity';
 import { SpraySessionItemEntity } from './entities/spray-session-item.entity';
 import { SpraySessionEntity } from './entities/spray-session.entity';
+import { CoatPhotoEntity } from './entities/coat-photo.entity';
+import { CrewRecordEntity } from './entities/crew-record.entity';
+import { ExtractionTestEntity } from './entities/extraction-test.entity';
+import { FilterBankEntity } from './entities/filter-bank.entity';
+import { FilterChangeEntity } from './entities/filter-change.entity';
+import { FilterGaugeReadingEntity } from './entities/filter-gauge-reading.entity';
+import { FireInspectionEntity } from './entities/fire-inspection.entity';
 
 export const entities = [
   UserEntity,
@@ -45,4 +52,11 @@ export const entities = [
   ReadingEntity,
   MixEntity,
   NotificationEntity,
+  FilterBankEntity,
+  FilterGaugeReadingEntity,
+  FilterChangeEntity,
+  ExtractionTestEntity,
+  FireInspectionEntity,
+  CrewRecordEntity,
+  CoatPhotoEntity,
 ];

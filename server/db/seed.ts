@@ -11,6 +11,7 @@ import { createRackService } from '../services/racks';
 import { createSettingsService } from '../services/settings';
 import { createUserService } from '../services/users';
 import { UserEntity } from './entities/user.entity';
+import { seedDemoUpkeep } from './demo-upkeep';
 import { seedMasterData } from './seed-master-data';
 
 /** An invented shop. The password is printed at start and in the README; change it for real use. */
@@ -48,6 +49,7 @@ export async function seedDemoShop(dataSource: DataSource, options: { uploadDir:
   const racks = createRackService(openSiteData(dataSource, everySite));
   for (const rack of demoRacks) await racks.create(rack, systemActor);
   await seedMasterData(dataSource, options.storage ?? options.uploadDir, 'Europe/London');
+  await seedDemoUpkeep(dataSource, new Date());
   return { seeded: true };
 }
 

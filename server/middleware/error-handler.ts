@@ -58,6 +58,7 @@ function toAppError(error: unknown): AppError | null {
   // The database's own guards (see the sessions-and-coats migration) speak for themselves.
   const dbMessage = error instanceof Error ? error.message : '';
   if (dbMessage.includes('booth_overlap')) return new AppError('conflict', 'The booth is already booked at that time', { start: 'Overlaps another spray session of this booth' });
+  if (dbMessage.includes('append_only: upkeep')) return new AppError('conflict', 'Upkeep, crew and photo records are never changed or deleted; record a new one instead');
   if (dbMessage.includes('append_only')) return new AppError('conflict', 'Coat records are never changed or deleted; record a correction instead');
   const parserError = error as BodyParserError;
   if (parserError?.type === 'entity.parse.failed') return new AppError('bad_request', 'The request body is not valid JSON');

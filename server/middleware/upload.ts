@@ -7,7 +7,8 @@ import { AppError } from '../lib/app-error';
  * names ever becomes a path. Multer's own errors become field-level 400/413 answers.
  */
 export function singleUpload(maxBytes: number): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single('file');
+  // Browsers send a file name as raw UTF-8 without saying so; read as latin1 (multer's default) "données" arrives as "donnÃ©es".
+  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 }, defParamCharset: 'utf8' }).single('file');
   const limitMb = Math.round(maxBytes / 1024 / 1024);
   return (req, res, next) => {
     upload(req, res, (error: unknown) => {

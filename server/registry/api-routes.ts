@@ -23,6 +23,9 @@ import { sprayerRoutes } from '../routes/sprayers';
 import { spraySessionRoutes } from '../routes/spray-sessions';
 import { todayRoutes } from '../routes/today';
 import { userRoutes } from '../routes/users';
+import { coatPhotoRoutes } from '../routes/coat-photos';
+import { crewRoutes } from '../routes/crew';
+import { upkeepRoutes } from '../routes/upkeep';
 import { buildOpenApiDocument } from './openapi';
 import { defineRoute, type ApiRoute } from './route';
 
@@ -69,4 +72,7 @@ export const apiRoutes: ApiRoute[] = [
   ...eventRoutes,
   ...notificationRoutes,
   ...reportRoutes,
+  ...upkeepRoutes,
+  ...crewRoutes,
+  ...coatPhotoRoutes,
 ];

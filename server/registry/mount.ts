@@ -1,5 +1,4 @@
 import type { Request, RequestHandler, Router } from 'express';
-import rateLimit from 'express-rate-limit';
 import type passport from 'passport';
 import type { DataSource } from 'typeorm';
 import { z } from 'zod';
@@ -9,6 +8,7 @@ import { openSiteData } from '../data/site-data';
 import { AppError } from '../lib/app-error';
 import { oneSite, siteScopeFor } from '../lib/site-scope';
 import { requirePermission, requireSignIn } from '../middleware/permissions';
+import { signInLimits } from '../middleware/sign-in-limits';
 import { singleUpload } from '../middleware/upload';
 import { createServiceSet, type ServiceDeps } from '../services/service-set';
 import { answered, Reply, type Access, type ApiRoute, type RouteContext } from './route';
@@ -97,19 +97,12 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
   };
 }
 
-/** Mounts each route with, in order: its sign-in limit, its access check, its upload, then the handler. */
+/** Mounts each route with, in order: its sign-in limits (per address and per account), its access check, its upload, then the handler. */
 export function mountRoutes(router: Router, routes: ApiRoute[], deps: RegistryDeps): void {
-  const signInLimit = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: deps.config.loginRateLimit,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-7',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError('too_many_requests', 'Too many failed sign-ins; wait 15 minutes and try again')),
-  });
+  const signInLimit = signInLimits(deps.config.loginRateLimit, deps.config.loginAccountRateLimit);
   for (const route of mountOrder(routes)) {
     const chain: RequestHandler[] = [];
-    if (route.limit === 'sign-in') chain.push(signInLimit);
+    if (route.limit === 'sign-in') chain.push(...signInLimit);
     chain.push(accessCheck(route.access));
     if (route.multipart) chain.push(singleUpload(route.multipart.file.maxBytes));
     chain.push(handle(route, deps));

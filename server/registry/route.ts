@@ -40,8 +40,8 @@ export interface ResponseSpec {
   otherStatuses?: number[];
   /** The JSON body; checked against every answer in tests. */
   schema?: z.ZodType;
-  /** A body that is not JSON: a CSV or PDF download, or an event stream. */
-  contentType?: 'text/csv' | 'application/pdf' | 'text/event-stream';
+  /** A body that is not JSON: a CSV or PDF download, a photo, or an event stream. */
+  contentType?: 'text/csv' | 'application/pdf' | 'image/jpeg' | 'text/event-stream';
   description?: string;
 }
 
@@ -100,7 +100,7 @@ export interface RouteSpec<P, Q, B, M> {
   /** A multipart form: its text fields and one file in the field `file`. */
   multipart?: { fields: Exclude<M, undefined>; file: FileField };
   response: ResponseSpec;
-  /** Failed sign-ins are limited per address. */
+  /** Failed sign-ins are limited per address and per account (the e-mail typed). */
   limit?: 'sign-in';
   /** Answered before the sign-in session is read (health, the API document). */
   bare?: boolean;

@@ -18,7 +18,7 @@ export const authRoutes: ApiRoute[] = [
   defineRoute({
     method: 'post',
     path: '/api/auth/login',
-    summary: 'Sign in (failed attempts are limited per address)',
+    summary: 'Sign in (failed attempts are limited per address and per account)',
     access: 'public',
     sites: 'own',
     limit: 'sign-in',

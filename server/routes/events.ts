@@ -5,11 +5,13 @@ export const eventRoutes: ApiRoute[] = [
   defineRoute({
     method: 'get',
     path: '/api/events',
-    summary: 'Server-sent change events (coats, spray sessions, parts, readings) of the sites the user sees',
+    summary: 'Server-sent change events (coats, spray sessions, parts, readings) of the sites the user sees; open streams are capped per user and per server (429)',
     access: 'signed-in',
     sites: 'site',
     response: { status: 200, contentType: 'text/event-stream', description: 'An endless stream of `change` events' },
-    handler: (_input, { services, req, res }) => {
+    handler: (_input, { services, user, req, res }) => {
+      // Before any byte is written, so a refusal is still a plain 429 answer.
+      const release = services.changes.claimStream(user!.id);
       res.writeHead(200, { 'Content-Type': 'text/event-stream', 'Cache-Control': 'no-cache, no-transform', Connection: 'keep-alive', 'X-Accel-Buffering': 'no' });
       res.write('retry: 3000\n\n');
       const unsubscribe = services.changes.subscribe((event) => res.write(`event: change\ndata: ${JSON.stringify(event)}\n\n`));
@@ -19,6 +21,7 @@ export const eventRoutes: ApiRoute[] = [
         clearInterval(heartbeat);
         unsubscribe();
       });
+      res.on('close', release);
       return answered;
     },
   }),

@@ -7,8 +7,8 @@ export const fileRoutes: ApiRoute[] = [
   defineRoute({
     method: 'get',
     path: '/api/files/:id',
-    summary: 'Download an uploaded data sheet',
-    access: 'signed-in',
+    summary: 'Download an uploaded data sheet (whoever may read data sheets)',
+    access: 'products:read',
     sites: 'group',
     params: idParamsSchema,
     response: { status: 200, contentType: 'application/pdf', description: 'The file as uploaded' },

@@ -11,6 +11,7 @@ import {
   reportRangeQuerySchema,
   reworkReportSchema,
   solventReportSchema,
+  upkeepReportSchema,
 } from '../../shared/schemas/report';
 import { answered, defineRoute, type ApiRoute } from '../registry/route';
 import type { ReportService } from '../services/reports';
@@ -58,4 +59,5 @@ export const reportRoutes: ApiRoute[] = [
   reportRoute({ name: 'solvent', path: 'solvent', summary: 'Litres mixed and VOC per month with the yearly total', query: reportRangeQuerySchema, schema: solventReportSchema }),
   reportRoute({ name: 'material', path: 'material', summary: 'Litres used against the estimate per job and product (?jobId)', query: materialQuerySchema, schema: materialReportSchema }),
   reportRoute({ name: 'rework', path: 'rework', summary: 'Coats corrected or re-sprayed by reason per month', query: reportRangeQuerySchema, schema: reworkReportSchema }),
+  reportRoute({ name: 'upkeep', path: 'upkeep', summary: 'Booth upkeep and crew records done against due: per booth, and the site’s crew as counts', query: reportRangeQuerySchema, schema: upkeepReportSchema }),
 ];

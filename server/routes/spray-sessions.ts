@@ -9,6 +9,7 @@ import {
   spraySessionResponseSchema,
   updateSpraySessionSchema,
 } from '../../shared/schemas/spray-session';
+import { sessionFitnessResponseSchema } from '../../shared/schemas/upkeep';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 /** Spray sessions belong to their booth's site, and so do their pots and cautions. */
@@ -65,7 +66,17 @@ export const spraySessionRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     response: { status: 200, schema: spraySessionCautionsSchema },
-    handler: ({ params }, { services }) => services.cautions.forSpraySession(params.id),
+    handler: ({ params }, { services, user }) => services.cautions.forSpraySession(params.id, user),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/spray-sessions/:id/fitness',
+    summary: 'Fit to spray: the booth’s upkeep and the assigned sprayer’s protection records, for each respiratory protection (the sprayer’s part only for the admin, a lead or the sprayer)',
+    access: 'upkeep:read',
+    sites: 'site',
+    params: idParamsSchema,
+    response: { status: 200, schema: sessionFitnessResponseSchema },
+    handler: async ({ params }, { services, user }) => ({ fitness: await services.fitness.forSpraySession(params.id, user) }),
   }),
   defineRoute({
     method: 'get',

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { idParamsSchema, pageFields } from '../../shared/schemas/common';
 import { siteFilterFields } from '../../shared/schemas/site';
 import { createUserSchema, updateUserSchema, userListSchema, userResponseSchema } from '../../shared/schemas/user';
+import { renewSignIn } from '../auth/passport';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 export const userRoutes: ApiRoute[] = [
@@ -28,12 +29,16 @@ export const userRoutes: ApiRoute[] = [
   defineRoute({
     method: 'patch',
     path: '/api/users/:id',
-    summary: 'Change a user',
+    summary: 'Change a user (a new password signs them out everywhere, except an admin’s own current sign-in)',
     access: 'users:write',
     sites: 'site',
     params: idParamsSchema,
     body: updateUserSchema,
     response: { status: 200, schema: userResponseSchema },
-    handler: async ({ params, body }, { services, actor }) => ({ user: await services.users.update(params.id, body, actor) }),
+    handler: async ({ params, body }, { services, actor, user, req }) => {
+      const changed = await services.users.update(params.id, body, actor);
+      if (body.password && params.id === user!.id) await renewSignIn(req);
+      return { user: changed };
+    },
   }),
 ];

@@ -4,6 +4,7 @@ import type { SiteData } from '../data/site-data';
 import type { CoatEntity, StoredWarning } from '../db/entities/coat.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { assertHappenedNearNow } from '../lib/instant-window';
 import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session-runner';
 import { toCoatDtos } from './coat-dto';
 import { prepareCoat, type CoatFields } from './coat-inputs';
@@ -82,18 +83,34 @@ export function createCoatService(data: SiteData, settings: SettingsService, eve
     /** A resent coat with a known idempotency key returns the first record instead of a second one. */
     async create(input: CreateCoatInput, actor: SpraySessionRunner): Promise<{ coat: Coat; replayed: boolean }> {
       const { idempotencyKey, ...fields } = createCoatSchema.parse(input);
-      if (idempotencyKey) {
-        const existing = await data.acrossSites.coats.findOneBy({ idempotencyKey });
-        if (existing && !(await data.coats.existsBy({ id: existing.id }))) throw new AppError('conflict', 'This idempotency key belongs to another record', { idempotencyKey: 'Send a new key' });
-        if (existing) return { coat: await dto(data, existing), replayed: true };
+      // A coat with this key already recorded (a resend, however long the tablet was offline) is answered with that record.
+      const replay = async () => {
+        const existing = idempotencyKey ? await data.acrossSites.coats.findOneBy({ idempotencyKey }) : null;
+        if (!existing) return null;
+        if (!(await data.coats.existsBy({ id: existing.id }))) throw new AppError('conflict', 'This idempotency key belongs to another record', { idempotencyKey: 'Send a new key' });
+        return { coat: await dto(data, existing), replayed: true };
+      };
+      const earlier = await replay();
+      if (earlier) return earlier;
+      assertHappenedNearNow(fields.sprayedAt, 'sprayedAt', clock.now());
+      let made: Awaited<ReturnType<typeof written>>;
+      try {
+        made = await data.transaction((tx) => written(tx, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor));
+      } catch (error) {
+        // The same coat resent twice at once: the database let one in and refused the other.
+        const raced = await replay();
+        if (raced) return raced;
+        throw error;
       }
-      const { coat, siteId } = await data.transaction((tx) => written(tx, fields, { replacesId: null, version: 1, correctionReason: null, idempotencyKey }, actor));
+      const { coat, siteId } = made;
       events.publish({ type: 'coat.created', id: coat.id, partIds: coat.partIds, siteId });
       return { coat, replayed: false };
     },
 
     async correct(id: number, input: CorrectCoatInput, actor: SpraySessionRunner): Promise<Coat> {
       const { reason, ...changes } = input;
+      // A correction that leaves the time alone may correct a coat of any age.
+      assertHappenedNearNow(changes.sprayedAt, 'sprayedAt', clock.now());
       const { coat, siteId } = await data.transaction(async (tx) => {
         const old = await tx.coats.findOneBy({ id });
         if (!old) throw notFound('Coat record');

@@ -5,6 +5,7 @@ import type { SiteData } from '../data/site-data';
 import type { DenibEntity } from '../db/entities/denib.entity';
 import { AppError } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { assertHappenedNearNow } from '../lib/instant-window';
 import type { EventBus } from './events';
 import { partsSeenBy } from './part-sites';
 import { refreshPartStates } from './part-states';
@@ -57,6 +58,7 @@ export function createDenibService(data: SiteData, events: EventBus, clock: Cloc
     async create(input: CreateDenibInput, actor: SpraySessionRunner): Promise<Denib> {
       const fields = createDenibSchema.parse(input);
       const now = clock.now();
+      assertHappenedNearNow(fields.abradedAt, 'abradedAt', now);
       const { denib, siteId } = await data.transaction(async (tx) => {
         await assertRunsSpraySession(tx, fields.spraySessionId, actor);
         const site = await checkReferences(tx, fields, now);

@@ -19,11 +19,12 @@ export function isPdf(buffer: Buffer): boolean {
   return buffer.subarray(0, 5).toString('latin1') === '%PDF-';
 }
 
-// Keep the name people see readable, but never let it carry a path or control characters.
+// Keep the name people see readable (any script), but never let it carry a path, control
+// characters or invisible format characters (a right-to-left override can disguise an extension).
 export function cleanOriginalName(name: string): string {
-  const base = name.split(/[\\/]/).pop() ?? '';
+  const base = name.normalize('NFC').split(/[\\/]/).pop() ?? '';
   const cleaned = [...base]
-    .filter((c) => c.charCodeAt(0) >= 0x20 && c.charCodeAt(0) !== 0x7f && c !== '"')
+    .filter((c) => !/[\p{Cc}\p{Cf}"]/u.test(c))
     .join('')
     .trim()
     .slice(0, 200);
@@ -54,6 +55,11 @@ export function createFileService(data: SiteData, storage: FileStorage | string,
         uploadedAt: clock.now().toISOString(),
       });
       return tx.files.save(file);
+    },
+
+    /** Deletes bytes no record points at any more. A failure only leaves an orphan behind, so it is logged, not thrown. */
+    async discard(storedName: string, onError: (error: Error) => void = () => undefined): Promise<void> {
+      await store.remove(storedName).catch(onError);
     },
 
     /** The record and its bytes, wherever they are stored. */

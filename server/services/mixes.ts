@@ -6,6 +6,7 @@ import type { SiteData } from '../data/site-data';
 import type { MixEntity } from '../db/entities/mix.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { assertHappenedNearNow } from '../lib/instant-window';
 import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session-runner';
 
 function toMixDto(mix: MixEntity, productName: string): Mix {
@@ -18,6 +19,7 @@ export function createMixService(data: SiteData, clock: Clock = systemClock) {
   return {
     async create(spraySessionId: number, input: CreateMixInput, actor: SpraySessionRunner): Promise<Mix> {
       const fields = createMixSchema.parse(input);
+      assertHappenedNearNow(fields.mixedAt, 'mixedAt', clock.now());
       return data.transaction(async (tx) => {
         if (!(await tx.spraySessions.existsBy({ id: spraySessionId }))) throw notFound('Spray session');
         await assertRunsSpraySession(tx, spraySessionId, actor);

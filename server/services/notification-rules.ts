@@ -1,11 +1,12 @@
 import { In, LessThanOrEqual, MoreThan } from 'typeorm';
 import { seesAllSites } from '../../shared/permissions';
-import { defaultNotifyPrefs, type NotificationKind } from '../../shared/schemas/notification';
+import { notifyPrefsOf, type NotificationKind } from '../../shared/schemas/notification';
 import { calendarDateIn, wallClockIn } from '../../shared/time';
 import type { SiteData } from '../data/site-data';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import type { UserEntity } from '../db/entities/user.entity';
 import { readinessOf } from './ready';
+import { crewDue, upkeepDue } from './upkeep-notifications';
 
 export interface DueNotification {
   dedupeKey: string;
@@ -27,7 +28,7 @@ export interface RuleContext {
 }
 
 const dayMs = 86_400_000;
-const wants = (user: UserEntity, kind: NotificationKind) => !user.disabled && (user.notify ?? defaultNotifyPrefs(user.role))[kind];
+const wants = (user: UserEntity, kind: NotificationKind) => !user.disabled && notifyPrefsOf(user.role, user.notify)[kind];
 const at = (iso: string, ctx: RuleContext) => wallClockIn(new Date(iso), ctx.timeZone).time;
 /** An admin hears about every site; everyone else about their own. */
 const ofSite = (user: UserEntity, siteId: number | undefined) => seesAllSites(user.role) || user.siteId === siteId;
@@ -121,4 +122,4 @@ export async function dailyPlan(ctx: RuleContext): Promise<DueNotification[]> {
     .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${clock.date}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
 }
 
-export const notificationRules = [partsReady, recoatClosing, spraySessionChanges, dailyPlan];
+export const notificationRules = [partsReady, recoatClosing, spraySessionChanges, dailyPlan, upkeepDue, crewDue];

@@ -20,6 +20,15 @@ import { toFileRef, type FileService, type Upload } from './files';
 import { toLotDto, toProductDto } from './product-dto';
 import type { SettingsService } from './settings';
 
+/** Deletes a file's record when no product points at it any more; returns the stored name whose bytes can go. */
+async function forgetUnusedFile(tx: SiteData, fileId: number): Promise<string | null> {
+  const stillUsed = await tx.products.existsBy([{ tdsFileId: fileId }, { sdsFileId: fileId }]);
+  const file = stillUsed ? null : await tx.files.findOneBy({ id: fileId });
+  if (!file) return null;
+  await tx.files.delete({ id: fileId });
+  return file.storedName;
+}
+
 /** Data sheets, their lots and documents are the group's: every site sprays from the same sheets. */
 export function createProductService(data: SiteData, files: FileService, settings: SettingsService, clock: Clock = systemClock, events?: EventBus) {
   // After the transaction commits, so a screen that refetches sees the change. Data sheets are the group's.
@@ -105,18 +114,33 @@ export function createProductService(data: SiteData, files: FileService, setting
       return published(productId, toLotDto(lot, await today()));
     },
 
+    /**
+     * Stores the PDF and points the product at it. The bytes it replaces are deleted once the
+     * change has committed (and their record with it); if the change fails, the new bytes go.
+     */
     async attachDocument(productId: number, kind: 'tds' | 'sds', upload: Upload | undefined, actor: Actor): Promise<Product> {
       const now = clock.now();
-      await data.transaction(async (tx) => {
-        const product = await findOrFail(tx, productId);
-        const file = await files.storePdf(tx, upload, actor.id);
-        if (kind === 'tds') product.tdsFileId = file.id;
-        else product.sdsFileId = file.id;
-        product.updatedAt = now.toISOString();
-        await tx.products.save(product);
-        const what = kind === 'tds' ? 'technical data sheet' : 'safety data sheet';
-        await recordAudit(tx, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
-      });
+      let stored: string | null = null;
+      let replaced: string | null = null;
+      try {
+        await data.transaction(async (tx) => {
+          const product = await findOrFail(tx, productId);
+          const file = await files.storePdf(tx, upload, actor.id);
+          stored = file.storedName;
+          const previousId = kind === 'tds' ? product.tdsFileId : product.sdsFileId;
+          if (kind === 'tds') product.tdsFileId = file.id;
+          else product.sdsFileId = file.id;
+          product.updatedAt = now.toISOString();
+          await tx.products.save(product);
+          replaced = previousId === null ? null : await forgetUnusedFile(tx, previousId);
+          const what = kind === 'tds' ? 'technical data sheet' : 'safety data sheet';
+          await recordAudit(tx, actor, { action: 'attach', entity: 'product', entityId: productId, summary: `Attached ${what} ${file.originalName} to ${product.name}` }, now);
+        });
+      } catch (error) {
+        if (stored) await files.discard(stored);
+        throw error;
+      }
+      if (replaced) await files.discard(replaced);
       return published(productId, await this.get(productId));
     },
   };

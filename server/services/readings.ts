@@ -6,6 +6,7 @@ import type { SiteData } from '../data/site-data';
 import type { ReadingEntity } from '../db/entities/reading.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import { assertHappenedNearNow } from '../lib/instant-window';
 import { recordAudit, type Actor } from './audit';
 import type { EventBus } from './events';
 
@@ -28,6 +29,7 @@ export function createReadingService(data: SiteData, events: EventBus, clock: Cl
     /** A sensor may only post for the booth its token belongs to. */
     async record(input: CreateReadingInput, source: { userId: number | null; sensorBoothId?: number }): Promise<Reading> {
       const fields = createReadingSchema.parse(input);
+      assertHappenedNearNow(fields.at, 'at', clock.now());
       if (source.sensorBoothId !== undefined && fields.boothId !== source.sensorBoothId) {
         throw new AppError('forbidden', 'This sensor token belongs to another booth');
       }

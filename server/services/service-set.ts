@@ -1,5 +1,6 @@
 import type { SiteData } from '../data/site-data';
 import type { Clock } from '../lib/clock';
+import type { LiveStreamLimits } from '../lib/live-stream-limits';
 import type { NotificationRuntime } from '../mail/notifications-runtime';
 import { listAudit } from './audit';
 import { createChangeFeed, type ChangeFeed } from './change-feed';
@@ -30,11 +31,17 @@ import { createSpraySessionCautionService, type SpraySessionCautionService } fro
 import { createSpraySessionService, type SpraySessionService } from './spray-sessions';
 import { createTodayService, type TodayService } from './today';
 import { createUserService, type UserService } from './users';
+import { createCoatPhotoService, type CoatPhotoService } from './coat-photos';
+import { createCrewService, type CrewService } from './crew';
+import { createFitnessService, type FitnessService } from './fitness';
+import { createUpkeepService, type UpkeepService } from './upkeep';
+import { createUpkeepDueService, type UpkeepDueService } from './upkeep-due';
 
-/** What services share across requests: the clock, the change feed, the file store, the e-mail side. */
+/** What services share across requests: the clock, the change feed and its open streams, the file store, the e-mail side. */
 export interface ServiceDeps {
   clock: Clock;
   events: EventBus;
+  liveStreams: LiveStreamLimits;
   storage: FileStorage;
   notifications?: NotificationRuntime;
 }
@@ -67,6 +74,11 @@ export interface ServiceSet {
   audit: { list: (query: Parameters<typeof listAudit>[1]) => ReturnType<typeof listAudit> };
   notifications: NotificationReader;
   changes: ChangeFeed;
+  upkeep: UpkeepService;
+  upkeepDue: UpkeepDueService;
+  crew: CrewService;
+  fitness: FitnessService;
+  coatPhotos: CoatPhotoService;
 }
 
 /** Each service made on first use only, then kept for the rest of the request. */
@@ -107,7 +119,7 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
     partHistory: () => createPartHistoryService(data, set.settings, clock),
     estimates: () => createEstimateService(data),
     spraySessions: () => createSpraySessionService(data, set.settings, events, clock),
-    cautions: () => createSpraySessionCautionService(data),
+    cautions: () => createSpraySessionCautionService(data, set.settings, clock),
     sprayers: () => createSprayerService(data),
     mixes: () => createMixService(data, clock),
     coats: () => createCoatService(data, set.settings, events, clock),
@@ -119,7 +131,12 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
     reports: () => createReportService(data, set.settings, set.estimates),
     audit: () => ({ list: (query) => listAudit(data, query) }),
     notifications: () => createNotificationReader(deps.notifications),
-    changes: () => createChangeFeed(data.scope, events),
+    changes: () => createChangeFeed(data.scope, events, deps.liveStreams),
+    upkeep: () => createUpkeepService(data, set.settings, clock),
+    upkeepDue: () => createUpkeepDueService(data, set.settings, clock),
+    crew: () => createCrewService(data, set.settings, clock),
+    fitness: () => createFitnessService(data, set.settings, clock),
+    coatPhotos: () => createCoatPhotoService(data, deps.storage, clock),
   });
   return set;
 }

@@ -13,11 +13,25 @@ export const defaultShopSettings: ShopSettings = {
   cleanDownMin: 20,
   yearlySolventThresholdKg: 5000,
   dailyPlanHour: 6,
+  // UK HSE HSG258: local exhaust ventilation thoroughly examined and tested at least every 14 months.
+  extractionTestMonths: 14,
+  // Yearly: common practice, no published source; the fire authority and the equipment maker decide.
+  fireInspectionMonths: 12,
+  // Yearly face-fit tests: common practice, no published source (an annual test is also a US OSHA rule, from memory).
+  fitTestMonths: 12,
+  // Yearly health surveillance for isocyanate work after the first months (HSE G402, from memory).
+  healthSurveillanceMonths: 12,
+  // Warn 30 days ahead: common practice, no published source.
+  upkeepDueSoonDays: 30,
 };
 
 function toSettingsDto(row: ShopSettingsEntity): ShopSettings {
   const { shopName, timezone, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour } = row;
-  return { shopName, timezone, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour };
+  const { extractionTestMonths, fireInspectionMonths, fitTestMonths, healthSurveillanceMonths, upkeepDueSoonDays } = row;
+  return {
+    ...{ shopName, timezone, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour },
+    ...{ extractionTestMonths, fireInspectionMonths, fitTestMonths, healthSurveillanceMonths, upkeepDueSoonDays },
+  };
 }
 
 /** The shop's settings are the group's: one timezone and one set of planning defaults for every site. */

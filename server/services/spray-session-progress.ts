@@ -1,11 +1,13 @@
 import { evaluateChecklist } from '../../shared/finishing/checklist';
 import type { Checklist, ChecklistResult } from '../../shared/schemas/checklist';
+import type { ShopSettings } from '../../shared/schemas/settings';
 import type { SpraySessionState } from '../../shared/schemas/spray-session';
 import type { BoothEntity } from '../db/entities/booth.entity';
 import type { SiteData } from '../data/site-data';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { AppError } from '../lib/app-error';
 import type { Actor } from './audit';
+import { fitnessOf } from './fitness';
 import { spraySessionProducts } from './spray-session-products';
 
 export interface SpraySessionActor extends Actor {
@@ -13,11 +15,14 @@ export interface SpraySessionActor extends Actor {
   mayOverride: boolean;
 }
 
-export async function recordChecklist(tx: SiteData, spraySession: SpraySessionEntity, booth: BoothEntity, checklist: Checklist, actor: SpraySessionActor): Promise<ChecklistResult> {
+/** The checks, with the booth's upkeep and the assigned sprayer's records judged for the protection actually worn. */
+export async function recordChecklist(tx: SiteData, spraySession: SpraySessionEntity, booth: BoothEntity, checklist: Checklist, actor: SpraySessionActor, shop: ShopSettings, now: Date): Promise<ChecklistResult> {
   if (checklist.overrideReason && !actor.mayOverride) {
     throw new AppError('forbidden', 'Only a finishing lead can override a stop; ask them to enter the reason', { overrideReason: 'A lead must give this' });
   }
-  const { verdict, problems } = evaluateChecklist(checklist, booth, await spraySessionProducts(tx, spraySession.id));
+  const products = await spraySessionProducts(tx, spraySession.id);
+  const fitness = (await fitnessOf(tx, spraySession, booth, products, shop, now, true))(checklist.respiratorKind);
+  const { verdict, problems } = evaluateChecklist(checklist, booth, products, fitness.findings);
   return { ...checklist, verdict, problems, completedAt: new Date().toISOString(), completedByName: actor.name };
 }
 

@@ -130,7 +130,8 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
   };
 
   async function update(id: number, patch: UpdateSpraySessionInput, actor: SpraySessionActor): Promise<SpraySession> {
-    const { timezone } = await settings.get();
+    const shop = await settings.get();
+    const { timezone } = shop;
     const now = clock.now().toISOString();
     const updated = await data.transaction(async (tx) => {
       const spraySession = await spraySessionOrFail(tx, id);
@@ -152,7 +153,7 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
       if ((moved || patch.state === 'planned') && (patch.state ?? spraySession.state) !== 'cancelled') await assertNoClash(tx, slot, booth, timezone);
       Object.assign(spraySession, { ...slot, notes: patch.notes ?? spraySession.notes, updatedAt: now });
       if (patch.override) spraySession.overrideReason = patch.override.reason;
-      if (patch.checklist) spraySession.checklist = await recordChecklist(tx, spraySession, booth, patch.checklist, actor);
+      if (patch.checklist) spraySession.checklist = await recordChecklist(tx, spraySession, booth, patch.checklist, actor, shop, clock.now());
       if (patch.state && patch.state !== spraySession.state) changeState(spraySession, patch.state, now);
       await tx.spraySessions.save(spraySession);
       if (patch.items) await writeItems(tx, booth, id, patch.items);

@@ -1,8 +1,9 @@
 import type { SignedInUser } from '../../shared/schemas/auth';
 import type { List, PageQuery } from '../../shared/schemas/common';
-import { defaultNotifyPrefs } from '../../shared/schemas/notification';
+import { notifyPrefsOf } from '../../shared/schemas/notification';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
 import { createUserSchema } from '../../shared/schemas/user';
+import { assertStrongPassword } from '../auth/password-strength';
 import { hashPassword } from '../auth/passwords';
 import type { SiteData } from '../data/site-data';
 import type { UserEntity } from '../db/entities/user.entity';
@@ -14,7 +15,7 @@ import { changedFields, recordAudit, type Actor } from './audit';
 
 /** What the sign-in session carries about its user. */
 export function toSignedInUser(user: UserEntity): SignedInUser {
-  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: user.notify ?? defaultNotifyPrefs(user.role) };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: notifyPrefsOf(user.role, user.notify) };
 }
 
 export function toUserDto(user: UserEntity): User {
@@ -29,6 +30,11 @@ export function createUserService(data: SiteData, clock: Clock = systemClock) {
   async function applyUpdate(id: number, patch: UpdateUserInput, actor: Actor, summary: string): Promise<UserEntity> {
     const now = clock.now();
     const { password, ...fields } = patch;
+    if (password) {
+      const user = await data.users.findOneBy({ id });
+      if (!user) throw notFound('User');
+      assertStrongPassword(password, [user.email, fields.name ?? user.name]);
+    }
     const passwordHash = password ? await hashPassword(password) : undefined;
     return data.transaction(async (tx) => {
       const user = await tx.users.findOneBy({ id });
@@ -36,7 +42,8 @@ export function createUserService(data: SiteData, clock: Clock = systemClock) {
       if (fields.siteId !== undefined) await requireSite(tx, fields.siteId);
       const changes = changedFields(user, fields);
       if (passwordHash) changes.password = { from: '…', to: 'changed' };
-      Object.assign(user, fields, passwordHash ? { passwordHash } : {}, { updatedAt: now.toISOString() });
+      // A new password ends every sign-in made with the old one (see passport.ts).
+      Object.assign(user, fields, passwordHash ? { passwordHash, sessionEpoch: user.sessionEpoch + 1 } : {}, { updatedAt: now.toISOString() });
       await tx.users.save(user);
       await recordAudit(tx, actor, { action: 'update', entity: 'user', entityId: id, summary: `${summary} ${user.email}`, changes, siteId: user.siteId }, now);
       return user;
@@ -51,6 +58,7 @@ export function createUserService(data: SiteData, clock: Clock = systemClock) {
     /** Left out of the input, the new user joins the creating admin's own site. */
     async create(input: CreateUserInput, actor: Actor): Promise<User> {
       const { password, siteId: requested, ...fields } = createUserSchema.parse(input);
+      assertStrongPassword(password, [fields.email, fields.name]);
       const siteId = siteForWrite(data.scope, requested);
       const passwordHash = await hashPassword(password);
       const now = clock.now();

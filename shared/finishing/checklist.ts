@@ -2,6 +2,7 @@ import type { Checklist } from '../schemas/checklist';
 import type { CautionProduct } from './cautions';
 import { respiratorLevel } from './cautions';
 import { assessConditions, worstVerdict, type Verdict } from './conditions';
+import type { FitnessFinding } from './fitness';
 
 export type ChecklistProduct = CautionProduct & { minApplicationTempC: number | null; maxRelativeHumidityPct: number | null };
 export type ChecklistEvaluation = { verdict: Verdict; problems: string[] };
@@ -27,9 +28,13 @@ function equipmentProblems(checklist: Checklist, minFaceVelocityMps: number, pro
   return problems;
 }
 
-/** Go / caution / stop for starting to spray: every equipment problem is a stop, conditions give their own verdict. */
-export function evaluateChecklist(checklist: Checklist, booth: { minFaceVelocityMps: number }, products: ChecklistProduct[]): ChecklistEvaluation {
-  const equipment = equipmentProblems(checklist, booth.minFaceVelocityMps, products);
+/**
+ * Go / caution / stop for starting to spray: every equipment problem is a stop, conditions give
+ * their own verdict, and a fit-to-spray stop (booth upkeep or the sprayer's records lapsed, see
+ * fitness.ts) is a stop like any other. Fit-to-spray cautions are shown beside the checks, not here.
+ */
+export function evaluateChecklist(checklist: Checklist, booth: { minFaceVelocityMps: number }, products: ChecklistProduct[], fitness: FitnessFinding[] = []): ChecklistEvaluation {
+  const equipment = [...equipmentProblems(checklist, booth.minFaceVelocityMps, products), ...fitness.filter((f) => f.severity === 'stop').map((f) => f.message)];
   const conditions = assessConditions({ airTempC: checklist.airTempC, relativeHumidityPct: checklist.relativeHumidityPct, surfaceTempC: checklist.surfaceTempC, ...strictestLimits(products) });
   const conditionProblems = conditions.checks.filter((c) => c.verdict !== 'go').map((c) => c.message);
   const verdict = worstVerdict([equipment.length ? 'stop' : 'go', conditions.verdict]);

@@ -31,7 +31,8 @@ function whileSpraying(coats: NextStepCoat[]): NextStep {
 /**
  * The one next thing to do in a session, following the order the booth works in: checklist
  * (a stop needs a lead), spray each coat from a pot in its pot life, stop, wait out the
- * clearance time with protection on, finish.
+ * clearance time with protection on, finish. A session not started whose parts have all had
+ * their coat elsewhere has nothing left to do.
  */
 export function sessionNextStep(input: NextStepInput): NextStep {
   const { state, checklist } = input;
@@ -42,6 +43,10 @@ export function sessionNextStep(input: NextStepInput): NextStep {
     return { kind: 'finish', words: 'The air is clear: finish the session', at: null };
   }
   if (state === 'spraying') return whileSpraying(input.coats);
+  // Its parts had the coat in another session (a second coat sprayed straight after the first): nothing is left to spray here.
+  if (input.coats.length > 0 && input.coats.every((c) => c.sprayedCount >= c.partCount)) {
+    return { kind: 'done', words: 'Nothing left to spray: every planned part has had its coat. Ask the lead to cancel or re-plan this session', at: null };
+  }
   if (!checklist) return { kind: 'checklist', words: 'Run the pre-spray checklist', at: null };
   if (checklist.verdict === 'stop' && !checklist.overrideReason) return { kind: 'checklist-stop', words: 'The checklist says stop: put it right, or ask the lead', at: null };
   return { kind: 'start-spraying', words: 'Checklist done: start spraying', at: null };

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listSchema } from './common';
+import { listSchema, requiredTextSchema } from './common';
 import { siteIdSchema } from './site';
 
 export const boothKinds = ['cross-draft', 'down-draft', 'open-face', 'spray-room'] as const;
@@ -32,7 +32,7 @@ const positive = (label: string) => z.number({ error: `Enter the ${label.toLower
 
 // Kept free of defaults: a PATCH must never reset a field the caller did not send.
 export const boothFieldsSchema = z.object({
-  name: z.string().trim().min(1, 'Enter a name').max(80),
+  name: requiredTextSchema('Enter a name', 80),
   kind: boothKindSchema,
   volumeM3: positive('Internal volume').max(10000),
   extractionM3PerH: positive('Extraction rate').max(1000000),

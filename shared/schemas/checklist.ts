@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isoInstantSchema, requiredTextSchema } from './common';
 
 export const respiratorKinds = ['air-fed', 'vapour-and-particulate', 'particulate'] as const;
 
@@ -13,7 +14,7 @@ export const checklistSchema = z.object({
   relativeHumidityPct: z.number({ error: 'Enter the relative humidity' }).min(1).max(100, 'RH cannot be over 100 %'),
   surfaceTempC: z.number({ error: 'Enter the surface temperature' }).min(-20).max(80),
   /** A lead's reason for starting despite a stop; recorded with the checklist. */
-  overrideReason: z.string().trim().min(3, 'Say why spraying goes ahead').max(500).nullable().default(null),
+  overrideReason: requiredTextSchema('Say why spraying goes ahead', 500, 3).nullable().default(null),
 });
 export type Checklist = z.infer<typeof checklistSchema>;
 
@@ -30,7 +31,7 @@ export const createMixSchema = z.object({
   lotIds: z.array(z.number().int().positive()).max(4).default([]),
   wantedL: z.number({ error: 'Enter how much to mix' }).positive('Mix more than 0 L').max(200),
   thinningPct: z.number().min(0).max(100).default(0),
-  mixedAt: z.iso.datetime({ offset: true }).optional(),
+  mixedAt: isoInstantSchema.optional(),
   tempC: z.number({ error: 'Enter the mixing temperature' }).min(0).max(50),
 });
 export type CreateMixInput = z.input<typeof createMixSchema>;

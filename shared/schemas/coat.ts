@@ -1,10 +1,10 @@
 import { z } from 'zod';
-import { idSchema, isoInstantSchema, listSchema, pageFields, queryFlagSchema } from './common';
+import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields, queryFlagSchema, requiredTextSchema } from './common';
 import { siteFilterFields } from './site';
 
 export const acknowledgementSchema = z.object({
   code: z.string().min(1).max(60),
-  reason: z.string().trim().min(3, 'Say why the coat went on anyway').max(500),
+  reason: requiredTextSchema('Say why the coat went on anyway', 500, 3),
 });
 
 /** Why a step was sprayed again on parts that already had it (a re-spray, for the rework report). */
@@ -37,7 +37,7 @@ const coatFields = {
   /** Where the parts dry; null means the rack's temperature if heated, else the air temperature. */
   dryingTempC: z.number().min(0).max(80).nullable(),
   acknowledgements: z.array(acknowledgementSchema).max(20),
-  notes: z.string().trim().max(2000),
+  notes: optionalTextSchema(2000),
   reworkReason: z.enum(reworkReasons).nullable(),
   /** Lets a device resend a coat after a dropped connection without making a second record. */
   idempotencyKey: z.string().min(8).max(80).nullable(),
@@ -66,7 +66,7 @@ export const correctCoatSchema = z
   .object(coatFields)
   .omit({ spraySessionId: true, idempotencyKey: true })
   .partial()
-  .extend({ reason: z.string().trim().min(3, 'Say what was wrong').max(500) });
+  .extend({ reason: requiredTextSchema('Say what was wrong', 500, 3) });
 export type CorrectCoatInput = z.infer<typeof correctCoatSchema>;
 
 export const coatWarningSchema = z.object({ code: z.string(), message: z.string(), acknowledgedReason: z.string().nullable().optional() });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, isoInstantSchema, listSchema, pageFields } from './common';
+import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields } from './common';
 import { siteFilterFields } from './site';
 
 /**
@@ -11,7 +11,7 @@ export const createDenibSchema = z.object({
   partIds: z.array(z.number().int().positive()).min(1, 'Choose at least one part').max(2000),
   grit: z.string().trim().regex(/^P\d{2,4}$/, 'Give the grit as a P-grade, e.g. P320'),
   abradedAt: isoInstantSchema,
-  notes: z.string().trim().max(2000).default(''),
+  notes: optionalTextSchema(2000).default(''),
 });
 export type CreateDenibInput = z.input<typeof createDenibSchema>;
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listSchema } from './common';
+import { listSchema, optionalTextSchema, requiredTextSchema } from './common';
 
 const gritSchema = z.string().trim().regex(/^P\d{2,4}$/, 'Give the grit as a P-grade, e.g. P320');
 
@@ -18,8 +18,8 @@ export const finishStepInputSchema = z.discriminatedUnion(
 export type FinishStepInput = z.infer<typeof finishStepInputSchema>;
 
 export const finishSystemFieldsSchema = z.object({
-  name: z.string().trim().min(1, 'Enter a name').max(120),
-  description: z.string().trim().max(1000),
+  name: requiredTextSchema('Enter a name', 120),
+  description: optionalTextSchema(1000),
   steps: z
     .array(finishStepInputSchema)
     .min(1, 'Add at least one step')

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { sprayMethodIds } from '../finishing/material';
-import { listSchema, pageFields, queryNumberSchema } from './common';
+import { listSchema, optionalTextSchema, pageFields, queryNumberSchema, requiredTextSchema } from './common';
 
 /**
  * A job's life cycle: open → in finish (its first coat is on) → ready (every part can be handled)
@@ -29,13 +29,13 @@ export const jobStateSources = ['auto', 'lead'] as const;
 const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31' });
 
 export const jobFieldsSchema = z.object({
-  customer: z.string().trim().min(1, 'Enter the customer').max(120),
-  reference: z.string().trim().min(1, 'Enter the job reference').max(60),
+  customer: requiredTextSchema('Enter the customer', 120),
+  reference: requiredTextSchema('Enter the job reference', 60),
   dueDate: isoDate,
   finishSystemId: z.number().int().positive().nullable(),
-  colour: z.string().trim().max(80),
-  sheen: z.string().trim().max(40),
-  notes: z.string().trim().max(4000),
+  colour: optionalTextSchema(80),
+  sheen: optionalTextSchema(40),
+  notes: optionalTextSchema(4000),
   state: jobStateInputSchema,
 });
 

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { Role } from '../permissions';
 import { listSchema } from './common';
 
-export const notificationKinds = ['parts-ready', 'recoat-closing', 'session-changed', 'daily-plan'] as const;
+export const notificationKinds = ['parts-ready', 'recoat-closing', 'session-changed', 'daily-plan', 'upkeep-due', 'crew-due'] as const;
 export type NotificationKind = (typeof notificationKinds)[number];
 
 export const notificationKindLabels: Record<NotificationKind, string> = {
@@ -10,6 +10,8 @@ export const notificationKindLabels: Record<NotificationKind, string> = {
   'recoat-closing': 'A recoat window is closing with parts still waiting',
   'session-changed': 'A spray session of mine is booked, moved or cancelled',
   'daily-plan': 'The day’s plan, each morning',
+  'upkeep-due': 'Booth upkeep falls due: filters near their limit, an extraction test or fire inspection',
+  'crew-due': 'A fit test, health surveillance or training falls due (mine; a lead’s or owner’s whole crew)',
 };
 
 export const notifyPrefsSchema = z.object({
@@ -17,6 +19,8 @@ export const notifyPrefsSchema = z.object({
   'recoat-closing': z.boolean(),
   'session-changed': z.boolean(),
   'daily-plan': z.boolean(),
+  'upkeep-due': z.boolean(),
+  'crew-due': z.boolean(),
 });
 export type NotifyPrefs = z.infer<typeof notifyPrefsSchema>;
 
@@ -27,7 +31,14 @@ export function defaultNotifyPrefs(role: Role): NotifyPrefs {
     'recoat-closing': role === 'lead' || role === 'sprayer',
     'session-changed': role === 'sprayer',
     'daily-plan': role === 'lead' || role === 'sprayer',
+    'upkeep-due': role === 'lead' || role === 'admin',
+    'crew-due': role !== 'assembler',
   };
+}
+
+/** A user's choices, with the role's defaults for any kind added since they last chose. */
+export function notifyPrefsOf(role: Role, stored: Partial<NotifyPrefs> | null | undefined): NotifyPrefs {
+  return { ...defaultNotifyPrefs(role), ...(stored ?? {}) };
 }
 
 export const notificationSchema = z.object({

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listSchema, maxId, pageFields } from './common';
+import { listSchema, maxId, optionalTextSchema, pageFields, requiredTextSchema } from './common';
 
 export const partFaces = ['one', 'both'] as const;
 export const partFacesSchema = z.enum(partFaces, { error: 'Faces is one or both' });
@@ -7,8 +7,8 @@ export const partFacesSchema = z.enum(partFaces, { error: 'Faces is one or both'
 const mm = (what: string) => z.number({ error: `Enter the ${what} in mm` }).positive(`The ${what} must be more than 0`).max(10000, `The ${what} looks too big for mm`);
 
 export const partFieldsSchema = z.object({
-  label: z.string().trim().min(1, 'Enter a label').max(80),
-  kind: z.string().trim().max(40),
+  label: requiredTextSchema('Enter a label', 80),
+  kind: optionalTextSchema(40),
   lengthMm: mm('length'),
   widthMm: mm('width'),
   thicknessMm: z.number({ error: 'Enter the thickness in mm' }).positive('The thickness must be more than 0').max(500, 'The thickness looks too big for mm'),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { dryingTableSchema, type DryingRow } from '../finishing/drying-row-schema';
-import { listSchema, pageFields } from './common';
+import { listSchema, optionalTextSchema, pageFields, requiredTextSchema } from './common';
 
 export const productKinds = ['primer', 'sealer', 'undercoat', 'topcoat', 'stain', 'clear'] as const;
 export const productKindSchema = z.enum(productKinds, { error: 'Choose what kind of product this is' });
@@ -50,8 +50,8 @@ export function timesShrinkingWithCold(rows: DryingRow[]): { index: number; fiel
 
 // Kept free of defaults: a PATCH must never reset a field the caller did not send.
 export const productFieldsSchema = z.object({
-  name: z.string().trim().min(1, 'Enter the product name').max(120),
-  makerRef: z.string().trim().max(80),
+  name: requiredTextSchema('Enter the product name', 120),
+  makerRef: optionalTextSchema(80),
   kind: productKindSchema,
   chemistry: chemistrySchema,
   volumeSolidsPct: z.number({ error: 'Enter the volume solids in %' }).min(1, 'Volume solids must be between 1 and 100 %').max(100, 'Volume solids must be between 1 and 100 %'),
@@ -125,7 +125,7 @@ export type Lot = z.infer<typeof lotSchema>;
 
 const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31' });
 export const createLotSchema = z.object({
-  lotNumber: z.string().trim().min(1, 'Enter the lot number').max(60),
+  lotNumber: requiredTextSchema('Enter the lot number', 60),
   expiresOn: isoDate.nullable().default(null),
 });
 export type CreateLotInput = z.input<typeof createLotSchema>;

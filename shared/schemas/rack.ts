@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listSchema } from './common';
+import { listSchema, requiredTextSchema } from './common';
 import { siteIdSchema } from './site';
 
 export const rackLocations = ['drying-room', 'booth-side'] as const;
@@ -13,7 +13,7 @@ export const rackLocationLabels: Record<RackLocation, string> = {
 
 // Kept free of defaults: a PATCH must never reset a field the caller did not send.
 export const rackFieldsSchema = z.object({
-  name: z.string().trim().min(1, 'Enter a name').max(80),
+  name: requiredTextSchema('Enter a name', 80),
   location: rackLocationSchema,
   shelves: z.number().int('Whole shelves only').min(1, 'At least one shelf').max(100),
   shelfAreaM2: z.number().positive('Shelf area must be more than 0').max(50),

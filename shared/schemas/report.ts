@@ -153,3 +153,20 @@ export const reworkRowSchema = z.object({
 });
 export const reworkReportSchema = z.object({ report: z.object({ ...rangeEcho, coatCount: z.number().int(), rows: z.array(reworkRowSchema) }) });
 export type ReworkReport = z.infer<typeof reworkReportSchema>['report'];
+
+export const upkeepReportKinds = ['filter-change', 'extraction-test', 'fire-inspection', 'fit-test', 'health-surveillance', 'training'] as const;
+/**
+ * One kind of upkeep for one booth (or, for crew records, the site's people together): how many were
+ * done in the range, how many fell due in it, and how many of those were done again by their due date.
+ * Filter changes fall due on the gauge, not the calendar: their `due` is null.
+ */
+export const upkeepReportRowSchema = z.object({
+  boothId: z.number().int().nullable(),
+  boothName: z.string().nullable(),
+  kind: z.enum(upkeepReportKinds),
+  done: z.number().int(),
+  due: z.number().int().nullable(),
+  doneByDue: z.number().int().nullable(),
+});
+export const upkeepReportSchema = z.object({ report: z.object({ ...rangeEcho, rows: z.array(upkeepReportRowSchema) }) });
+export type UpkeepReport = z.infer<typeof upkeepReportSchema>['report'];

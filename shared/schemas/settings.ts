@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { unitSystemSchema } from './common';
+import { unitSystemSchema, requiredTextSchema } from './common';
 
 export const shopSettingsSchema = z.object({
-  shopName: z.string().trim().min(1, 'Enter the shop name').max(120),
+  shopName: requiredTextSchema('Enter the shop name', 120),
   timezone: z.string().refine(isKnownTimeZone, 'Unknown timezone'),
   defaultUnits: unitSystemSchema,
   planningDryingTempC: z.number().min(5).max(60),
@@ -10,6 +10,12 @@ export const shopSettingsSchema = z.object({
   cleanDownMin: z.number().int().min(0).max(240),
   yearlySolventThresholdKg: z.number().min(0).max(1000000),
   dailyPlanHour: z.number().int().min(0).max(23),
+  // Upkeep and crew protection intervals: defaults are in server/services/settings.ts with their sources.
+  extractionTestMonths: z.number().int().min(1, 'At least 1 month').max(60, 'At most 60 months'),
+  fireInspectionMonths: z.number().int().min(1, 'At least 1 month').max(60, 'At most 60 months'),
+  fitTestMonths: z.number().int().min(1, 'At least 1 month').max(60, 'At most 60 months'),
+  healthSurveillanceMonths: z.number().int().min(1, 'At least 1 month').max(60, 'At most 60 months'),
+  upkeepDueSoonDays: z.number().int().min(1, 'At least 1 day').max(180, 'At most 180 days'),
 });
 export type ShopSettings = z.infer<typeof shopSettingsSchema>;
 export const updateShopSettingsSchema = shopSettingsSchema.partial();

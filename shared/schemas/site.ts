@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { idSchema, listSchema } from './common';
+import { idSchema, listSchema, requiredTextSchema } from './common';
 
 /** A workshop of the group: booths, racks and people belong to one. */
 export const siteFieldsSchema = z.object({
-  name: z.string().trim().min(1, 'Enter a name').max(80),
+  name: requiredTextSchema('Enter a name', 80),
 });
 export const createSiteSchema = siteFieldsSchema;
 export type CreateSiteInput = z.input<typeof createSiteSchema>;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { checklistResultSchema, checklistSchema } from './checklist';
-import { idSchema, isoInstantSchema, listSchema, pageFields } from './common';
+import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields, requiredTextSchema } from './common';
 import { siteFilterFields } from './site';
 import { chemistrySchema, hazardSchema } from './product';
 
@@ -24,14 +24,14 @@ export const sessionItemSchema = z.object({
 });
 
 /** A lead may go ahead outside opening hours or past rack space, never over another booking. */
-export const overrideSchema = z.object({ reason: z.string().trim().min(3, 'Say why this booking goes ahead anyway').max(500) });
+export const overrideSchema = z.object({ reason: requiredTextSchema('Say why this booking goes ahead anyway', 500, 3) });
 
 const spraySessionFields = {
   boothId: z.number({ error: 'Choose a booth' }).int().positive('Choose a booth'),
   start: isoInstantSchema,
   end: isoInstantSchema,
   sprayerId: z.number().int().positive().nullable(),
-  notes: z.string().trim().max(2000),
+  notes: optionalTextSchema(2000),
   items: z.array(sessionItemSchema).max(2000),
   override: overrideSchema.nullable(),
 };

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { roleSchema } from './auth';
-import { listSchema, unitSystemSchema } from './common';
+import { listSchema, requiredTextSchema, unitSystemSchema } from './common';
 import { notifyPrefsSchema } from './notification';
 import { siteIdSchema } from './site';
 
@@ -20,7 +20,7 @@ const passwordSchema = z.string().min(10, 'Use at least 10 characters').max(200)
 
 export const createUserSchema = z.object({
   email: z.string().trim().toLowerCase().email('Enter an e-mail address'),
-  name: z.string().trim().min(1, 'Enter a name').max(120),
+  name: requiredTextSchema('Enter a name', 120),
   role: roleSchema,
   units: unitSystemSchema.default('metric'),
   password: passwordSchema,
@@ -31,7 +31,7 @@ export type CreateUserInput = z.input<typeof createUserSchema>;
 
 export const updateUserSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter a name').max(120),
+    name: requiredTextSchema('Enter a name', 120),
     role: roleSchema,
     units: unitSystemSchema,
     disabled: z.boolean(),
@@ -43,7 +43,7 @@ export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
 /** What any signed-in user may change about themselves. */
 export const updateMeSchema = z
-  .object({ name: z.string().trim().min(1, 'Enter a name').max(120), units: unitSystemSchema, notify: notifyPrefsSchema })
+  .object({ name: requiredTextSchema('Enter a name', 120), units: unitSystemSchema, notify: notifyPrefsSchema })
   .partial();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
 

@@ -1,6 +1,8 @@
 import type { QueryKey } from '@tanstack/react-query';
 import { boothKeys } from './booths/booth-keys';
+import { coatPhotoKeys } from './coat-photos/coat-photo-keys';
 import { coatKeys } from './coats/coat-keys';
+import { crewKeys } from './crew/crew-keys';
 import { denibKeys } from './denibs/denib-keys';
 import { finishSystemKeys } from './finish-systems/finish-system-keys';
 import { jobKeys } from './jobs/job-keys';
@@ -16,6 +18,7 @@ import { siteKeys } from './sites/site-keys';
 import { sprayerKeys } from './sprayers/sprayer-keys';
 import { spraySessionKeys } from './spray-sessions/spray-session-keys';
 import { todayKeys } from './today/today-keys';
+import { upkeepKeys } from './upkeep/upkeep-keys';
 import { userKeys } from './users/user-keys';
 
 /**
@@ -34,6 +37,8 @@ export const changedKeys = {
     todayKeys.all,
     reportKeys.all,
   ],
+  /** A photo beside a coat: the log's photos. */
+  coatPhoto: (): QueryKey[] => [coatPhotoKeys.all],
   denib: (): QueryKey[] => [
     denibKeys.all,
     partKeys.all,
@@ -81,7 +86,11 @@ export const changedKeys = {
   /** A user: the sprayers a session may be given to, and the names sessions show. */
   user: (): QueryKey[] => [userKeys.all, siteKeys.counts(), sprayerKeys.all, spraySessionKeys.all, todayKeys.all],
   site: (): QueryKey[] => [siteKeys.all],
-  /** The shop's timezone and planning temperature go into every time the server works out. */
+  /** Booth upkeep (filters, gauges, extraction and fire checks): what is due, who may spray where, the upkeep report. */
+  upkeep: (): QueryKey[] => [upkeepKeys.all, spraySessionKeys.fitnesses(), reportKeys.all],
+  /** A crew record (fit test, health check, training): the person, what is due, who may spray, the upkeep report. */
+  crew: (): QueryKey[] => [crewKeys.all, upkeepKeys.all, spraySessionKeys.fitnesses(), reportKeys.all],
+  /** The shop's timezone and planning temperature go into every time the server works out; its upkeep intervals into what is due. */
   settings: (): QueryKey[] => [
     settingsKeys.all,
     readyKeys.all,
@@ -89,5 +98,7 @@ export const changedKeys = {
     partKeys.histories(),
     todayKeys.all,
     reportKeys.all,
+    upkeepKeys.all,
+    spraySessionKeys.fitnesses(),
   ],
 };

@@ -25,6 +25,8 @@ const groups: NavGroup[] = [
       { to: '/jobs', label: 'Jobs', permission: 'jobs:read' },
       { to: '/booths', label: 'Booths', permission: 'booths:read' },
       { to: '/racks', label: 'Racks', permission: 'racks:read' },
+      { to: '/upkeep', label: 'Booth upkeep', permission: 'upkeep:read' },
+      { to: '/crew', label: 'Crew records', permission: 'crew:own' },
       { to: '/data-sheets', label: 'Data sheets', permission: 'products:read' },
       { to: '/finish-systems', label: 'Finish systems', permission: 'finish-systems:read' },
       { to: '/calculator', label: 'Calculator', permission: 'calculator:use' },

@@ -30,6 +30,9 @@ const appRoutes: RouteObject[] = [
   { path: 'jobs/:id/tags', errorElement, lazy: () => import('./routes/job-tags-route').then((m) => ({ Component: m.JobTagsRoute })) },
   { path: 'parts/:id', errorElement, lazy: () => import('./routes/part-route').then((m) => ({ Component: m.PartRoute })) },
   { path: 'ready', errorElement, lazy: () => import('./routes/ready-route').then((m) => ({ Component: m.ReadyRoute })) },
+  { path: 'upkeep', errorElement, lazy: () => import('./routes/upkeep-route').then((m) => ({ Component: m.UpkeepRoute })) },
+  { path: 'crew', errorElement, lazy: () => import('./routes/crew-route').then((m) => ({ Component: m.CrewRoute })) },
+  { path: 'crew/:userId', errorElement, lazy: () => import('./routes/crew-person-route').then((m) => ({ Component: m.CrewPersonRoute })) },
   {
     path: 'settings',
     errorElement,

@@ -1,4 +1,5 @@
-import { expect, test, type Page } from '@playwright/test';
+import type { Page } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
 
 // The smallest file the server accepts as a PDF: it checks the "%PDF-" header, not the extension.

@@ -1,4 +1,5 @@
-import { expect, type Page } from '@playwright/test';
+import type { Page } from '@playwright/test';
+import { expect } from './fixtures';
 
 export const demoPassword = 'finish-demo-2026';
 

@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import type { Page } from '@playwright/test';
-import { expect, shotsDir, test } from './console-guard';
+import { expect, shotsDir, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
 
 /** Cut lists from a spreadsheet: our own column names are not used, so every size column needs matching. */

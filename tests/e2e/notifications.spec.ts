@@ -1,4 +1,5 @@
-import { expect, request, test } from '@playwright/test';
+import { request } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { demo, demoPassword, mainNav, signIn } from './helpers';
 
 const shopZone = 'Europe/London';

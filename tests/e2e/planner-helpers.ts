@@ -1,4 +1,5 @@
-import { expect, type Locator, type Page } from '@playwright/test';
+import type { Locator, Page } from '@playwright/test';
+import { expect } from './fixtures';
 
 /**
  * A Tuesday in July or August (British Summer Time, UTC+1) of a far year picked at random, so a

@@ -1,5 +1,5 @@
 import { request, type APIRequestContext, type Locator, type Page } from '@playwright/test';
-import { expect, shotsDir, test } from './console-guard';
+import { expect, shotsDir, test } from './fixtures';
 import { demo, demoPassword, mainNav, signIn, type DemoRole } from './helpers';
 
 const shopZone = 'Europe/London';

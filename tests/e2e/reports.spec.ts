@@ -1,4 +1,5 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
+import type { Locator, Page } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { mainNav, signIn, type DemoRole } from './helpers';
 
 /** What one report's JSON holds that the page shows as a key figure; the demo seed decides the values. */

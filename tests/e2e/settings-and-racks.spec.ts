@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
 
 test.describe('racks', () => {
@@ -31,6 +31,18 @@ test.describe('settings', () => {
     await dialog.getByRole('button', { name: 'Save user' }).click();
     await expect(dialog.getByText('Already in use')).toBeVisible();
     await expect(dialog.getByLabel('E-mail')).toHaveAttribute('aria-invalid', 'true');
+  });
+
+  test('a common password is refused with the reason beside the field', async ({ page }) => {
+    await signIn(page, 'admin', '/settings/users');
+    await page.getByRole('button', { name: 'Add user' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Add a user' });
+    await dialog.getByLabel('Name', { exact: true }).fill('Pat Weakley');
+    await dialog.getByLabel('E-mail').fill(`pat.weakley.${Date.now()}@larchmere.test`);
+    await dialog.getByLabel('First password').fill('password12');
+    await dialog.getByRole('button', { name: 'Save user' }).click();
+    await expect(dialog.getByText(/commonly used password/)).toBeVisible();
+    await expect(dialog.getByLabel('First password')).toHaveAttribute('aria-invalid', 'true');
   });
 
   test('the admin adds a user, then disables them after confirming', async ({ page }) => {

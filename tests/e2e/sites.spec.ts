@@ -1,4 +1,5 @@
-import { expect, test, type Browser, type Page } from '@playwright/test';
+import type { Browser, Page } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { mainNav, signIn, type DemoRole } from './helpers';
 
 // One shop, two sites: the admin adds Riverside works with a booth and a lead of its own. Each person

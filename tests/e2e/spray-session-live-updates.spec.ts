@@ -4,7 +4,7 @@ import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import type { SpraySession } from '../../shared/schemas/spray-session';
-import { expect, shotsDir, test } from './console-guard';
+import { expect, shotsDir, test } from './fixtures';
 import { demo, demoPassword, signIn, type DemoRole } from './helpers';
 
 /** The lead's API session, only to set the stage: a new job's door on a rack and a session booked now for the sprayer. */
@@ -69,16 +69,10 @@ async function setStage(baseURL: string) {
   };
 }
 
-/** Another person's browser, watched as the test's own page is: a console error, page error or 5xx fails the test. */
-async function personAt(browser: Browser, role: DemoRole, path: string, problems: string[]): Promise<Page> {
+/** Another person's browser: the fixtures watch its pages as they do the test's own (a console error, page error or 5xx fails the test). */
+async function personAt(browser: Browser, role: DemoRole, path: string): Promise<Page> {
   const context = await browser.newContext();
   const page = await context.newPage();
-  page.on(
-    'console',
-    (m) => m.type() === 'error' && !/status of 4\d\d/.test(m.text()) && problems.push(`${role}: ${m.text()}`),
-  );
-  page.on('pageerror', (e) => problems.push(`${role}: ${e.message}`));
-  page.on('response', (r) => r.status() >= 500 && problems.push(`${role}: ${r.status()} from ${r.url()}`));
   const streamOpen = page.waitForResponse((r) => r.url().endsWith('/api/events') && r.ok());
   await signIn(page, role, path);
   await streamOpen;
@@ -97,11 +91,10 @@ test('a coat logged on the sprayer’s tablet shows on the lead’s open coat lo
 }) => {
   test.setTimeout(120_000);
   const stage = await setStage(baseURL!);
-  const problems: string[] = [];
 
-  const lead = await personAt(browser, 'lead', `/coat-log?job=${stage.job.id}`, problems);
+  const lead = await personAt(browser, 'lead', `/coat-log?job=${stage.job.id}`);
   await expect(lead.getByRole('heading', { name: 'Coat log', level: 1 })).toBeVisible();
-  const assembler = await personAt(browser, 'assembler', `/ready?job=${stage.job.id}`, problems);
+  const assembler = await personAt(browser, 'assembler', `/ready?job=${stage.job.id}`);
   const card = assembler.getByRole('listitem', { name: new RegExp(`^${stage.part.label}, `) });
   await expect(card).toContainText('Waiting for finish');
   await expect(card).toContainText('No coats yet (3 to go)');
@@ -139,5 +132,4 @@ test('a coat logged on the sprayer’s tablet shows on the lead’s open coat lo
   await lead.context().close();
   await assembler.context().close();
   await stage.api.dispose();
-  expect(problems, 'the other browsers reported problems').toEqual([]);
 });

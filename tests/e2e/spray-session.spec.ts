@@ -4,7 +4,7 @@ import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import type { SpraySession } from '../../shared/schemas/spray-session';
-import { expect, shotsDir, test } from './console-guard';
+import { expect, shotsDir, test } from './fixtures';
 import { demo, demoPassword, signIn } from './helpers';
 
 const shopZone = 'Europe/London';
@@ -137,7 +137,7 @@ test.describe('spray session', () => {
     await expect(latest).toContainText('dry film 57 µm');
     await expect(latest.getByText('Handle from').locator('..')).toContainText(clock(first.handleAt));
     await expect(latest).toContainText(/Flash-off until \d{2}:\d{2}/);
-    await expect(latest).toContainText(`Next on ${partLabel}: Abrade P320`);
+    await expect(latest).toContainText(`Next on ${partLabel}: denib P320, then coat 2 of 3`);
     // The door has just had its planned step: the form does not offer it again by itself.
     await expect(coatForm.getByText('No parts chosen yet.')).toBeVisible();
 

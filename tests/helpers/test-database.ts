@@ -41,8 +41,21 @@ async function createPostgresDatabase(adminUrl: string): Promise<Omit<TestDataba
     drop: async () => {
       const client = new pg.Client({ connectionString: adminUrl });
       await client.connect();
-      await client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
-      await client.end();
+      try {
+        // An autovacuum worker busy on the new database has no role, and PostgreSQL 15's FORCE then
+        // refuses to end it (42501); it is gone a moment later, so try again a few times.
+        for (let attempt = 1; ; attempt++) {
+          try {
+            await client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+            break;
+          } catch (error) {
+            if ((error as { code?: string }).code !== '42501' || attempt >= 20) throw error;
+            await new Promise((resolve) => setTimeout(resolve, 250));
+          }
+        }
+      } finally {
+        await client.end();
+      }
     },
   };
 }

@@ -79,7 +79,7 @@ describe.skipIf(!pgUrl)('two app instances on one PostgreSQL database (skipped w
     const board = await openEventStream(b.base, leadOnA);
     try {
       await waitUntil('the event stream on B to open', () => board.received().includes('retry:'));
-      const coatBody = { spraySessionId: session.body.spraySession.id, partIds, productId, sprayedAt: '2027-03-01T09:15:00Z', airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
+      const coatBody = { spraySessionId: session.body.spraySession.id, partIds, productId, sprayedAt: new Date(Date.now() - 3_600_000).toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
       const coat = await json(await call(a.base, leadOnA, '/api/coats', { method: 'POST', body: coatBody }));
       expect(coat.status).toBe(201);
       const expected = `"type":"coat.created","id":${coat.body.coat.id}`;

@@ -12,6 +12,8 @@ const expected: Record<string, string[]> = {
     ...['reports:read', 'sites:read'],
     // The day's planning board.
     'today:read',
+    // Booth upkeep in full; their own crew records, and everyone's status only (recording them is the admin's).
+    ...['upkeep:read', 'upkeep:log', 'upkeep:write', 'crew:own', 'crew:status'],
   ],
   // Sprayers read data sheets, finish systems and jobs but edit none of them.
   sprayer: [
@@ -20,6 +22,8 @@ const expected: Record<string, string[]> = {
     ...['spray-sessions:read', 'spray-sessions:run', 'coats:read', 'coats:write', 'ready:read', 'readings:write', 'sites:read'],
     // Their own day: the sessions they are given and the next step in each.
     'today:read',
+    // They note the filter gauge and log a filter change, and read their own crew records.
+    ...['upkeep:read', 'upkeep:log', 'crew:own'],
   ],
   // Assemblers land on the ready board rather than a day board; they read jobs (and the systems they name) to know what is coming.
   assembler: ['sites:read', 'booths:read', 'racks:read', 'settings:read', 'finish-systems:read', 'jobs:read', 'spray-sessions:read', 'ready:read', 'parts:collect'],
@@ -42,6 +46,11 @@ describe('the permission matrix', () => {
     expect(roles.filter((role) => can(role, 'users:write'))).toEqual(['admin']);
     expect(roles.filter((role) => can(role, 'settings:write'))).toEqual(['admin']);
     expect(roles.filter((role) => can(role, 'sites:write'))).toEqual(['admin']);
+  });
+
+  it('keeps the recording of crew protection records to the admin, and their status to the admin and the lead', () => {
+    expect(roles.filter((role) => can(role, 'crew:write'))).toEqual(['admin']);
+    expect(roles.filter((role) => can(role, 'crew:status'))).toEqual(['admin', 'lead']);
   });
 
   it('shows reports to the owner and the finishing lead only', () => {

@@ -31,6 +31,21 @@ export class ShopSettingsEntity {
   @Column({ type: 'integer' })
   dailyPlanHour: number;
 
+  @Column({ type: 'integer', default: 14 })
+  extractionTestMonths: number;
+
+  @Column({ type: 'integer', default: 12 })
+  fireInspectionMonths: number;
+
+  @Column({ type: 'integer', default: 12 })
+  fitTestMonths: number;
+
+  @Column({ type: 'integer', default: 12 })
+  healthSurveillanceMonths: number;
+
+  @Column({ type: 'integer', default: 30 })
+  upkeepDueSoonDays: number;
+
   @Column({ type: 'varchar', length: 30 })
   updatedAt: string;
 }

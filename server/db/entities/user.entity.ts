@@ -26,6 +26,10 @@ export class UserEntity {
   @Column({ type: 'boolean', default: false })
   disabled: boolean;
 
+  /** Raised when the password is reset: every sign-in made before carries an older number and ends. */
+  @Column({ type: 'integer', default: 0 })
+  sessionEpoch: number;
+
   /** What the user is e-mailed about; null means their role's defaults. */
   @Column({ type: 'simple-json', nullable: true })
   notify: NotifyPrefs | null;

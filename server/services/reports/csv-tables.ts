@@ -1,4 +1,4 @@
-import type { AreaSprayedReport, BoothUseReport, ConditionsReport, MaterialReport, ReworkReport, SolventReport } from '../../../shared/schemas/report';
+import type { AreaSprayedReport, BoothUseReport, ConditionsReport, MaterialReport, ReworkReport, SolventReport, UpkeepReport } from '../../../shared/schemas/report';
 import { toCsv } from './csv';
 
 /** Each report's table as CSV, SI units, the same rows the page shows. */
@@ -19,4 +19,5 @@ export const reportCsv = {
   material: (r: MaterialReport) =>
     toCsv(['job', 'customer', 'product', 'estimated_l', 'used_l'], r.rows.map((x) => [x.jobReference, x.customer, x.productName, x.estimatedL, x.usedL])),
   rework: (r: ReworkReport) => toCsv(['month', 'kind', 'reason', 'count'], r.rows.map((x) => [x.month, x.kind, x.reason, x.count])),
+  upkeep: (r: UpkeepReport) => toCsv(['booth', 'kind', 'done', 'due', 'done_by_due_date'], r.rows.map((x) => [x.boothName ?? 'crew', x.kind, x.done, x.due ?? '', x.doneByDue ?? ''])),
 };

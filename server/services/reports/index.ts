@@ -8,6 +8,7 @@ import { conditionsReport } from './conditions';
 import { materialReport } from './material';
 import { reworkReport } from './rework';
 import { solventReport } from './solvent';
+import { upkeepReport } from './upkeep';
 
 /**
  * Read-only aggregates over the coat log; every report is grouped in the database by shop-time
@@ -27,6 +28,7 @@ export function createReportService(data: SiteData, settings: SettingsService, e
     },
     material: async (query: MaterialQuery) => materialReport(data, estimates, site(query), await timeZone()),
     rework: async (query: ReportRangeQuery) => reworkReport(data, site(query), await timeZone()),
+    upkeep: async (query: ReportRangeQuery) => upkeepReport(data, site(query), await timeZone()),
   };
 }
 

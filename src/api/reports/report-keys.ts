@@ -6,7 +6,7 @@ import type {
   ReportRangeQuery,
 } from '../../../shared/schemas/report';
 
-export const reportKinds = ['booth-use', 'area-sprayed', 'conditions', 'solvent', 'material', 'rework'] as const;
+export const reportKinds = ['booth-use', 'area-sprayed', 'conditions', 'solvent', 'material', 'rework', 'upkeep'] as const;
 export type ReportKind = (typeof reportKinds)[number];
 
 /** What each report is asked for; `format` is left out: the JSON calls never send it, the CSV link adds it. */
@@ -17,6 +17,7 @@ export interface ReportParams {
   solvent: Omit<ReportRangeQuery, 'format'>;
   material: Omit<MaterialQuery, 'format'>;
   rework: Omit<ReportRangeQuery, 'format'>;
+  upkeep: Omit<ReportRangeQuery, 'format'>;
 }
 
 export const reportKeys = {

@@ -9,4 +9,7 @@ export const spraySessionKeys = {
   list: (filters: SpraySessionFilters) => [...spraySessionKeys.lists(), filters] as const,
   details: () => [...spraySessionKeys.all, 'detail'] as const,
   detail: (id: number) => [...spraySessionKeys.details(), id] as const,
+  /** Whether the booth and the sprayer are fit to spray the session: upkeep and crew records move it too. */
+  fitnesses: () => [...spraySessionKeys.all, 'fitness'] as const,
+  fitness: (id: number) => [...spraySessionKeys.fitnesses(), id] as const,
 };

@@ -20,7 +20,7 @@ function PlannerWithSettings() {
   if (settings.isPending) return <LoadingState what="the shop settings" />;
   if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;
   const { timezone, setupMin, cleanDownMin } = settings.data;
-  const viewer = { id: user.id, name: user.name, canWrite: can(user.role, 'spray-sessions:write'), canReadProducts: can(user.role, 'products:read') };
+  const viewer = { id: user.id, name: user.name, canWrite: can(user.role, 'spray-sessions:write'), canReadProducts: can(user.role, 'products:read'), canReadUpkeep: can(user.role, 'upkeep:read') };
   return (
     <PlannerPage
       settings={{ timezone, setupMin, cleanDownMin }}

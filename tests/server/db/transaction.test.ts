@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import { openDataSource } from '../../../server/db/data-source';
 import { JobEntity } from '../../../server/db/entities/job.entity';
+import { runAsOwnWork } from '../../../server/db/sqlite-gate';
 import { inTransaction } from '../../../server/db/transaction';
 import { createTestDatabase, type TestDatabase } from '../../helpers/test-database';
 
@@ -32,5 +33,55 @@ describe('inTransaction', () => {
     expect((results[1] as PromiseRejectedResult).reason.message).toBe('second one fails');
     const saved = await dataSource.getRepository(JobEntity).find({ order: { reference: 'ASC' } });
     expect(saved.map((j) => j.reference)).toEqual(['TX-0', 'TX-2']);
+  });
+
+  it('never lets another request’s query into an open transaction: it neither sees its writes nor is rolled back with it', async () => {
+    let opened!: () => void;
+    const isOpen = new Promise<void>((resolve) => (opened = resolve));
+    let finish!: () => void;
+    const held = new Promise<void>((resolve) => (finish = resolve));
+    const job = (reference: string) => ({ customer: 'c', reference, dueDate: '2027-01-01', createdAt: 'x', updatedAt: 'x' });
+    const failing = inTransaction(dataSource, async (manager) => {
+      await manager.insert(JobEntity, job('INSIDE-1'));
+      opened();
+      await held;
+      throw new Error('the transaction rolls back');
+    });
+    await isOpen;
+    // Two other requests while the transaction is open: one writes, one reads.
+    const otherWrite = runAsOwnWork(() => dataSource.getRepository(JobEntity).insert(job('OUTSIDE-1')));
+    const otherRead = runAsOwnWork(() => dataSource.getRepository(JobEntity).findBy({ reference: 'INSIDE-1' }));
+    // Give them every chance to run inside the transaction before it ends.
+    await pause(20);
+    finish();
+    await expect(failing).rejects.toThrow('the transaction rolls back');
+    await otherWrite;
+    expect(await otherRead).toEqual([]);
+    expect(await dataSource.getRepository(JobEntity).countBy({ reference: 'OUTSIDE-1' })).toBe(1);
+    expect(await dataSource.getRepository(JobEntity).countBy({ reference: 'INSIDE-1' })).toBe(0);
+  });
+
+  it('interleaves two transactions, each with queries started together, without sharing a client', async () => {
+    const warnings: string[] = [];
+    const onWarning = (warning: Error) => warnings.push(warning.message);
+    process.on('warning', onWarning);
+    try {
+      const both = ['A', 'B'].map((name) =>
+        inTransaction(dataSource, async (manager) => {
+          await manager.insert(JobEntity, { customer: name, reference: `PAIR-${name}`, dueDate: '2027-01-01', createdAt: 'x', updatedAt: 'x' });
+          await pause(5);
+          // Started together on the transaction's one connection.
+          return Promise.all([1, 2, 3, 4].map(() => manager.countBy(JobEntity, { customer: name })));
+        }),
+      );
+      expect(await Promise.all(both)).toEqual([
+        [1, 1, 1, 1],
+        [1, 1, 1, 1],
+      ]);
+      await new Promise((resolve) => setImmediate(resolve));
+      expect(warnings.filter((w) => w.includes('already executing'))).toEqual([]);
+    } finally {
+      process.off('warning', onWarning);
+    }
   });
 });

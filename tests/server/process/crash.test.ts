@@ -28,9 +28,10 @@ describe('a crash in the middle of a burst of coat records', () => {
     const { sessionId, parts, productId } = await prepare();
     const sprayer = await signInOverHttp(base, 'sprayer@larchmere.test');
     const answered: number[] = [];
+    const startedAt = Date.now();
     let sent = 0;
     const one = async (i: number) => {
-      const coat = { spraySessionId: sessionId, partIds: [parts[i % parts.length]], productId, sprayedAt: new Date(Date.UTC(2027, 2, 1, 8, 0, i)).toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
+      const coat = { spraySessionId: sessionId, partIds: [parts[i % parts.length]], productId, sprayedAt: new Date(startedAt - 3_600_000 + i * 1000).toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
       try {
         const res = await sprayer('/api/coats', { method: 'POST', body: JSON.stringify(coat) });
         if (res.status === 201) answered.push((await body(res)).coat.id);

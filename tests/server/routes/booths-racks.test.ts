@@ -126,3 +126,15 @@ describe('the rest of /api', () => {
     expect(post.requestBody.content['application/json'].schema.required).toEqual(expect.arrayContaining(['name', 'kind', 'volumeM3', 'extractionM3PerH']));
   });
 });
+
+describe('names that show nothing', () => {
+  it('refuses a booth or rack named only with zero-width and other invisible characters, and trims them from real names', async () => {
+    const { agent, csrf } = await signIn(ctx.app, demo.lead);
+    const booth = await agent.post('/api/booths').set('x-csrf-token', csrf).send({ ...newBooth, name: '\u200B\u200B\u200B' }).expect(400);
+    expect(booth.body.error.fields.name).toBe('Enter a name');
+    const rack = await agent.post('/api/racks').set('x-csrf-token', csrf).send({ ...newRack, name: '\u200D\uFEFF\u2800' }).expect(400);
+    expect(rack.body.error.fields.name).toBe('Enter a name');
+    const trimmed = await agent.post('/api/racks').set('x-csrf-token', csrf).send({ ...newRack, name: '\u200BRack Ø\uFEFF' }).expect(201);
+    expect(trimmed.body.rack.name).toBe('Rack Ø');
+  });
+});

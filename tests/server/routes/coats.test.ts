@@ -11,7 +11,8 @@ let primerId: number;
 
 beforeAll(async () => {
   psychrolib.SetUnitSystem(psychrolib.SI);
-  ctx = await startTestApp();
+  // The shop's clock stands just after the morning's coats: what people type lies near now.
+  ctx = await startTestApp({ clock: { now: () => new Date('2027-03-01T12:30:00Z') } });
   lead = await signIn(ctx.app, demo.lead);
   sprayer = await signIn(ctx.app, demo.sprayer);
   const booth = await lead.agent.post('/api/booths').set('x-csrf-token', lead.csrf).send({ name: 'Coat test booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 }).expect(201);
@@ -148,19 +149,57 @@ describe('a correction that names one field', () => {
   });
 });
 
+describe('a coat resent while the first send is still being written', () => {
+  it('keeps one record when a device resends the same coat twice at once', async () => {
+    const body = coat({ partIds: [partIds[0]], sprayedAt: '2027-03-01T11:58:00Z', stepPosition: 2, idempotencyKey: 'tablet-1-coat-0002' });
+    const send = () => sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(body);
+    const [a, b] = await Promise.all([send(), send()]);
+    expect([a.status, b.status].sort()).toEqual([200, 201]);
+    expect(a.body.coat.id).toBe(b.body.coat.id);
+  });
+});
+
 describe('a session not assigned to the sprayer', () => {
   it('takes no coats, pots or corrections from them, and still takes them from a lead', async () => {
     const booth = await lead.agent.post('/api/booths').set('x-csrf-token', lead.csrf).send({ name: 'Unassigned booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 }).expect(201);
     const other = await lead.agent
       .post('/api/spray-sessions')
       .set('x-csrf-token', lead.csrf)
-      .send({ boothId: booth.body.booth.id, start: '2027-03-02T09:00:00Z', end: '2027-03-02T12:00:00Z', sprayerId: null })
+      .send({ boothId: booth.body.booth.id, start: '2027-03-01T12:00:00Z', end: '2027-03-01T14:00:00Z', sprayerId: null })
       .expect(201);
     const otherId = other.body.spraySession.id;
-    const refused = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ spraySessionId: otherId, sprayedAt: '2027-03-02T09:30:00Z' })).expect(403);
+    const refused = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ spraySessionId: otherId, sprayedAt: '2027-03-01T12:15:00Z' })).expect(403);
     expect(refused.body.error.fields.spraySessionId).toBe('Not your session');
     await sprayer.agent.post(`/api/spray-sessions/${otherId}/mixes`).set('x-csrf-token', sprayer.csrf).send({ productId: primerId, wantedL: 1, tempC: 20 }).expect(403);
-    const byLead = await lead.agent.post('/api/coats').set('x-csrf-token', lead.csrf).send(coat({ spraySessionId: otherId, sprayedAt: '2027-03-02T09:30:00Z' })).expect(201);
+    const byLead = await lead.agent.post('/api/coats').set('x-csrf-token', lead.csrf).send(coat({ spraySessionId: otherId, sprayedAt: '2027-03-01T12:15:00Z' })).expect(201);
     await sprayer.agent.post(`/api/coats/${byLead.body.coat.id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Not mine to fix', notes: 'x' }).expect(403);
+  });
+});
+
+describe('instants people type for what happened', () => {
+  // The shop's clock stands at 2027-03-01T12:30Z in this file.
+  it.each([
+    ['the year 9999', '9999-03-01T09:15:00Z', /between the years 2000 and 2199/],
+    ['the year 0000', '0000-03-01T09:15:00Z', /between the years 2000 and 2199/],
+    ['more than 90 days ago', '2026-11-30T09:15:00Z', /within the last 90 days/],
+    ['two hours ahead', '2027-03-01T14:30:00Z', /Cannot be in the future/],
+  ])('refuses a coat sprayed %s, naming the field', async (_label, sprayedAt, message) => {
+    const res = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ partIds: [partIds[0]], sprayedAt })).expect(400);
+    expect(res.body.error.fields.sprayedAt).toMatch(message);
+  });
+
+  it('takes a coat a tablet sends a day late, and refuses a correction that moves it a year on', async () => {
+    const late = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(coat({ partIds: [partIds[0]], sprayedAt: '2027-02-28T11:00:00Z', stepPosition: 0 })).expect(201);
+    const res = await sprayer.agent.post(`/api/coats/${late.body.coat.id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Typed the year wrong', sprayedAt: '2028-02-28T11:00:00Z' }).expect(400);
+    expect(res.body.error.fields).toHaveProperty('sprayedAt');
+  });
+
+  it('refuses a reading or a pot dated far from now', async () => {
+    const reading = await lead.agent.post('/api/readings').set('x-csrf-token', lead.csrf).send({ boothId: 1, at: '9999-01-01T00:00:00Z', airTempC: 20, relativeHumidityPct: 50 }).expect(400);
+    expect(reading.body.error.fields).toHaveProperty('at');
+    const late = await lead.agent.post('/api/readings').set('x-csrf-token', lead.csrf).send({ boothId: 1, at: '2026-10-01T00:00:00Z', airTempC: 20, relativeHumidityPct: 50 }).expect(400);
+    expect(late.body.error.fields.at).toMatch(/within the last 90 days/);
+    const mix = await lead.agent.post(`/api/spray-sessions/${sessionId}/mixes`).set('x-csrf-token', lead.csrf).send({ productId: primerId, wantedL: 1, thinningPct: 0, tempC: 20, mixedAt: '2027-03-02T09:00:00Z' }).expect(400);
+    expect(mix.body.error.fields.mixedAt).toMatch(/Cannot be in the future/);
   });
 });

@@ -38,10 +38,10 @@ async function riversideSite(): Promise<void> {
   const boothId = (await post(admin, '/api/booths', { name: 'Riverside booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000, siteId }).expect(201)).body.booth.id;
   riversideRackId = (await post(admin, '/api/racks', { name: 'Riverside rack', shelves: 6, shelfAreaM2: 1, siteId }).expect(201)).body.rack.id;
   for (const role of ['lead', 'sprayer'] as const) {
-    await post(admin, '/api/users', { email: `${role}.riverside@larchmere.test`, name: `Riverside ${role}`, role, password: 'riverside-2026', siteId }).expect(201);
+    await post(admin, '/api/users', { email: `${role}.riverside@larchmere.test`, name: `Riverside ${role}`, role, password: 'riverside-works-2026', siteId }).expect(201);
   }
-  riversideLead = await signIn(ctx.app, 'lead.riverside@larchmere.test', 'riverside-2026');
-  riversideSprayer = await signIn(ctx.app, 'sprayer.riverside@larchmere.test', 'riverside-2026');
+  riversideLead = await signIn(ctx.app, 'lead.riverside@larchmere.test', 'riverside-works-2026');
+  riversideSprayer = await signIn(ctx.app, 'sprayer.riverside@larchmere.test', 'riverside-works-2026');
   const sprayerId = (await riversideSprayer.agent.get('/api/auth/me').expect(200)).body.user.id;
   riversideSessionId = (await post(riversideLead, '/api/spray-sessions', { boothId, start: '2027-04-06T09:00:00Z', end: '2027-04-06T12:00:00Z', sprayerId }).expect(201)).body.spraySession.id;
 }

@@ -77,11 +77,14 @@ describe('POST /api/denibs', () => {
     await post(lead, '/api/denibs', body).expect(201);
   });
 
-  it('answers 400 with field messages for a bad grit, no parts, a time ahead, and 409 on a cancelled session', async () => {
+  it('answers 400 with field messages for a bad grit, no parts, a time ahead or long past, and 409 on a cancelled session', async () => {
     const bad = await post(sprayer, '/api/denibs', { spraySessionId: sessionId, partIds: [], grit: '320', abradedAt: 'yesterday' }).expect(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['abradedAt', 'grit', 'partIds']);
     const ahead = await post(sprayer, '/api/denibs', { spraySessionId: sessionId, partIds: [doorA], grit: 'P320', abradedAt: '2027-03-05T13:00:00Z' }).expect(400);
     expect(ahead.body.error.fields).toHaveProperty('abradedAt');
+    // The clock stands at 5 March 2027: 1 December 2026 is more than 90 days back, a typing slip.
+    const longAgo = await post(sprayer, '/api/denibs', { spraySessionId: sessionId, partIds: [doorA], grit: 'P320', abradedAt: '2026-12-01T10:00:00Z' }).expect(400);
+    expect(longAgo.body.error.fields.abradedAt).toMatch(/within the last 90 days/);
     const unknown = await post(sprayer, '/api/denibs', { spraySessionId: sessionId, partIds: [999999], grit: 'P320', abradedAt: '2027-03-05T10:00:00Z' }).expect(400);
     expect(unknown.body.error.fields).toHaveProperty('partIds');
     const spare = await post(lead, '/api/spray-sessions', { boothId: 1, start: '2027-03-03T09:00:00Z', end: '2027-03-03T10:00:00Z', sprayerId: 3 }).expect(201);

@@ -25,8 +25,11 @@ async function newJob(reference: string, parts = 2): Promise<{ id: number; partI
   return { id: created.body.job.id, partIds };
 }
 
-const coat = (partIds: number[], sprayedAt: string) =>
-  post(sprayer, '/api/coats', { spraySessionId: sessionId, partIds, productId: primerId, sprayedAt, airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 }).expect(201);
+/** Logs a coat as it goes on: the server's clock is moved up to `sprayedAt` first (a coat is never logged ahead of time). */
+const coat = (partIds: number[], sprayedAt: string) => {
+  if (clock.at.getTime() < Date.parse(sprayedAt)) at(sprayedAt);
+  return post(sprayer, '/api/coats', { spraySessionId: sessionId, partIds, productId: primerId, sprayedAt, airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 }).expect(201);
+};
 
 beforeAll(async () => {
   ctx = await startTestApp({ clock });

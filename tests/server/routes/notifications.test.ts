@@ -2,12 +2,17 @@ import pino from 'pino';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startNotifications, type NotificationRuntime } from '../../../server/mail/notifications-runtime';
 import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
+import { timelineStartingYesterday } from '../../helpers/timeline';
 
 let ctx: TestContext;
 let runtime: NotificationRuntime;
 let lead: SignedIn;
 let sessionId: number;
 let partIds: number[];
+
+// The test's timeline, written for 1 March 2027, happens yesterday and today: the coats it logs
+// must lie near now, and the times of day stay as written.
+const at = timelineStartingYesterday('2027-03-01');
 
 const waitFor = async (check: () => boolean) => {
   for (let i = 0; i < 50 && !check(); i++) await new Promise((r) => setTimeout(r, 50));
@@ -19,7 +24,7 @@ beforeAll(async () => {
   runtime = await startNotifications(ctx.dataSource, { ...ctx.config, fakeSmtpPort: 0, smtpUrl: undefined }, pino({ level: 'silent' }), { schedule: false });
   lead = await signIn(ctx.app, demo.lead);
   const booth = await lead.agent.post('/api/booths').set('x-csrf-token', lead.csrf).send({ name: 'Mail booth', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 }).expect(201);
-  const session = await lead.agent.post('/api/spray-sessions').set('x-csrf-token', lead.csrf).send({ boothId: booth.body.booth.id, start: '2027-03-01T07:00:00Z', end: '2027-03-01T16:00:00Z', sprayerId: 3 }).expect(201);
+  const session = await lead.agent.post('/api/spray-sessions').set('x-csrf-token', lead.csrf).send({ boothId: booth.body.booth.id, start: at('2027-03-01T07:00:00Z'), end: at('2027-03-01T16:00:00Z'), sprayerId: 3 }).expect(201);
   sessionId = session.body.spraySession.id;
   // The demo drawer-box job uses the clear system: sealer, denib, precat clear.
   const job = (await lead.agent.get('/api/jobs?q=LJ-26-102')).body.items[0];
@@ -46,12 +51,12 @@ describe('e-mail notifications', () => {
 
   it('sends "ready to handle" once the last coat can be handled, not before', async () => {
     // Demo sealer at 20 °C: no latest recoat time, handle after 30 min. Precat clear: recoat 45–1440 min, handle 60 min.
-    await coat('Sanding Sealer', '2027-03-01T08:00:00Z', 0);
-    await coat('Precat Clear', '2027-03-01T09:00:00Z', 2);
+    await coat('Sanding Sealer', at('2027-03-01T08:00:00Z'), 0);
+    await coat('Precat Clear', at('2027-03-01T09:00:00Z'), 2);
     const before = runtime.mailbox!.messages.length;
-    await runtime.service.tick(new Date('2027-03-01T09:30:00Z'));
+    await runtime.service.tick(new Date(at('2027-03-01T09:30:00Z')));
     expect(runtime.mailbox!.messages.filter((m) => m.subject.startsWith('Ready to handle'))).toHaveLength(0);
-    await runtime.service.tick(new Date('2027-03-01T10:05:00Z'));
+    await runtime.service.tick(new Date(at('2027-03-01T10:05:00Z')));
     await waitFor(() => runtime.mailbox!.messages.some((m) => m.subject.startsWith('Ready to handle')));
     const ready = runtime.mailbox!.messages.filter((m) => m.subject.startsWith('Ready to handle'));
     // Assembler and lead both asked for it by default.
@@ -66,8 +71,8 @@ describe('e-mail notifications', () => {
     const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];
     const doors = (await lead.agent.get(`/api/jobs/${job.id}/parts`)).body.items.slice(0, 1).map((p: { id: number }) => p.id);
     const productId = (await lead.agent.get('/api/products?q=PU Primer')).body.items[0].id;
-    await lead.agent.post('/api/coats').set('x-csrf-token', lead.csrf).send({ spraySessionId: sessionId, partIds: doors, productId, sprayedAt: '2027-03-01T11:00:00Z', airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 }).expect(201);
-    await runtime.service.tick(new Date('2027-03-02T09:30:00Z'));
+    await lead.agent.post('/api/coats').set('x-csrf-token', lead.csrf).send({ spraySessionId: sessionId, partIds: doors, productId, sprayedAt: at('2027-03-01T11:00:00Z'), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 }).expect(201);
+    await runtime.service.tick(new Date(at('2027-03-02T09:30:00Z')));
     await waitFor(() => runtime.mailbox!.messages.some((m) => m.subject.startsWith('Recoat window closing')));
     const warning = runtime.mailbox!.messages.find((m) => m.subject.startsWith('Recoat window closing'))!;
     expect(warning.subject).toContain('LJ-26-105');
@@ -79,10 +84,10 @@ describe('e-mail notifications', () => {
     const restarted = await startNotifications(ctx.dataSource, { ...ctx.config, fakeSmtpPort: 0, smtpUrl: undefined }, pino({ level: 'silent' }), { schedule: false });
     try {
       // Same instant again: every rule finds the same dedupe keys, so nothing new goes out.
-      const again = await restarted.service.tick(new Date('2027-03-02T09:30:00Z'));
+      const again = await restarted.service.tick(new Date(at('2027-03-02T09:30:00Z')));
       expect(again.sent).toBe(0);
       // The 3 March plan fell due at 06:00 while "down"; the 07:30 tick after the restart sends it.
-      const morning = await restarted.service.tick(new Date('2027-03-03T07:30:00Z'));
+      const morning = await restarted.service.tick(new Date(at('2027-03-03T07:30:00Z')));
       expect(morning.sent).toBeGreaterThan(0);
       await waitFor(() => restarted.mailbox!.messages.some((m) => m.subject.startsWith('Today’s booth plan')));
       expect(restarted.mailbox!.messages.every((m) => !m.subject.startsWith('Ready to handle'))).toBe(true);

@@ -4,8 +4,8 @@ import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../
 let ctx: TestContext;
 let lead: SignedIn;
 let jobId: number;
-// Monday 4 January 2027, 08:00 in London (GMT in winter).
-const clock = { now: () => new Date('2027-01-04T08:00:00Z') };
+// Monday 4 January 2027, 08:00 in London (GMT in winter); moved on when a test logs a coat.
+const clock = { at: new Date('2027-01-04T08:00:00Z'), now() { return this.at; } };
 
 beforeAll(async () => {
   ctx = await startTestApp({ clock });
@@ -87,6 +87,8 @@ describe('proposals start from what is booked and what is sprayed', () => {
     const parts: { id: number }[] = (await lead.agent.get(`/api/jobs/${drawers}/parts?pageSize=200`)).body.items;
     const sealerId = (await lead.agent.get('/api/products?q=Sanding Sealer')).body.items[0].id;
     const sprayed = parts.slice(0, 40).map((p) => p.id);
+    // The coat is logged as the booked session ends (a coat is never logged ahead of time).
+    clock.at = new Date(sealerSession.end);
     await lead.agent
       .post('/api/coats')
       .set('x-csrf-token', lead.csrf)

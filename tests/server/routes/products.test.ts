@@ -91,6 +91,21 @@ describe('lots and data-sheet files', () => {
     expect(Buffer.from(download.body).subarray(0, 5).toString()).toBe('%PDF-');
   });
 
+  it('keeps a file name in any script as typed, and gives it back in the download', async () => {
+    const { agent, csrf } = await signIn(ctx.app, demo.lead);
+    const name = 'Fiche de données de sécurité – Łódź 安全.pdf';
+    const res = await agent.post('/api/products/1/documents').set('x-csrf-token', csrf).field('kind', 'sds').attach('file', simplePdf('Fiche', ['ligne']), name).expect(201);
+    expect(res.body.product.sdsFile.originalName).toBe(name);
+    const download = await agent.get(`/api/files/${res.body.product.sdsFile.id}`).expect(200);
+    expect(download.headers['content-disposition']).toContain(`filename*=UTF-8''${encodeURIComponent(name)}`);
+  });
+
+  it('never keeps a direction override that could disguise the extension', async () => {
+    const { agent, csrf } = await signIn(ctx.app, demo.lead);
+    const res = await agent.post('/api/products/1/documents').set('x-csrf-token', csrf).field('kind', 'sds').attach('file', simplePdf('Sheet', ['line']), 'sheet\u202Efdp.exe.pdf').expect(201);
+    expect(res.body.product.sdsFile.originalName).toBe('sheetfdp.exe.pdf');
+  });
+
   it('refuses a file that is not a PDF whatever its name says', async () => {
     const { agent, csrf } = await signIn(ctx.app, demo.lead);
     const res = await agent.post('/api/products/1/documents').set('x-csrf-token', csrf).field('kind', 'tds').attach('file', Buffer.from('MZ not a pdf'), 'sheet.pdf').expect(400);

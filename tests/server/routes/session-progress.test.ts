@@ -11,7 +11,7 @@ let partId: number;
 const goodChecklist = { extractionRunning: true, filtersChecked: true, faceVelocityMps: 0.55, respiratorFitted: true, respiratorKind: 'air-fed', airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
 
 beforeAll(async () => {
-  ctx = await startTestApp();
+  ctx = await startTestApp({ clock: { now: () => new Date('2027-03-02T16:30:00Z') } });
   lead = await signIn(ctx.app, demo.lead);
   sprayer = await signIn(ctx.app, demo.sprayer);
   const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];

@@ -5,6 +5,9 @@ import { demo, signIn, type SignedIn } from '../../helpers/test-app';
 /** Ids from the seeded demo shop, plus a few records made for these tests, so allowed roles get 2xx. */
 export interface Fixtures {
   sprayerId: number;
+  leadId: number;
+  /** A filter bank of the demo shop's first booth. */
+  filterBankId: number;
   spareUserId: number;
   /** A site made for these tests, so renaming it to its own name touches nothing else. */
   siteId: number;
@@ -29,7 +32,12 @@ export interface Fixtures {
   newCoat(): Promise<number>;
   /** One coat record made on first use and kept. */
   anyCoat(): Promise<number>;
+  /** One photo of that coat, made on first use and kept. */
+  anyPhoto(): Promise<number>;
 }
+
+/** The smallest PNG: a 1 × 1 pixel image (its signature is what the server checks). */
+export const pngBytes = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==', 'base64');
 
 export const pdfBytes = Buffer.from('%PDF-1.4\n1 0 obj <<>> endobj\ntrailer <<>>\n%%EOF\n');
 
@@ -55,6 +63,7 @@ export async function createFixtures(app: Express, admin: SignedIn): Promise<Fix
   const next = () => ++counter;
   const sprayer = await signIn(app, demo.sprayer);
   const sprayerId: number = (await ok(sprayer.agent.get('/api/auth/me'), 'sprayer')).user.id;
+  const leadId: number = (await ok((await signIn(app, demo.lead)).agent.get('/api/auth/me'), 'lead')).user.id;
   const spare = await ok(post(admin, '/api/users', { email: 'spare.person@larchmere.test', name: 'Spare Person', role: 'assembler', password: 'spare-password-1' }), 'spare user');
   const site = await ok(post(admin, '/api/sites', { name: 'Security test site' }), 'site');
   const booth = await findFirst(admin.agent, '/api/booths', 'booth');
@@ -78,12 +87,22 @@ export async function createFixtures(app: Express, admin: SignedIn): Promise<Fix
   const coatBody = () => {
     const door = doors[doorIndex++];
     if (!door) throw new Error('Fixtures ran out of uncoated doors');
-    return { spraySessionId, partIds: [door.id], productId: primer.id, sprayedAt: '2027-06-01T09:15:00Z', airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
+    return { spraySessionId, partIds: [door.id], productId: primer.id, sprayedAt: new Date(Date.now() - 3_600_000).toISOString(), airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 };
   };
   const newCoat = async (): Promise<number> => (await ok(post(admin, '/api/coats', coatBody()), 'coat')).coat.id;
   let firstCoat: Promise<number> | undefined;
+  let firstPhoto: Promise<number> | undefined;
+  const anyCoat = () => (firstCoat ??= newCoat());
+  const newPhoto = async (): Promise<number> => {
+    const res = await admin.agent.post(`/api/coats/${await anyCoat()}/photos`).set('x-csrf-token', admin.csrf).field('subject', 'defect').attach('file', pngBytes, 'defect.png');
+    if (res.status !== 201) throw new Error(`Fixture "photo" answered ${res.status}: ${JSON.stringify(res.body)}`);
+    return res.body.photo.id;
+  };
+  const upkeep = await ok(admin.agent.get(`/api/booths/${booth.id}/upkeep`), 'upkeep');
   return {
     sprayerId,
+    leadId,
+    filterBankId: upkeep.upkeep.banks[0].id,
     spareUserId: spare.user.id,
     siteId: site.site.id,
     boothId: booth.id,
@@ -100,7 +119,8 @@ export async function createFixtures(app: Express, admin: SignedIn): Promise<Fix
     freeSlot,
     coatBody,
     newCoat,
-    anyCoat: () => (firstCoat ??= newCoat()),
+    anyCoat,
+    anyPhoto: () => (firstPhoto ??= newPhoto()),
   };
 }
 

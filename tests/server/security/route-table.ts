@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Role } from '../../../shared/permissions';
-import { pdfBytes, type Fixtures } from './fixtures';
+import { pdfBytes, pngBytes, type Fixtures } from './fixtures';
 
 export const audiences = ['signedOut', 'admin', 'lead', 'sprayer', 'assembler'] as const;
 export type Audience = (typeof audiences)[number];
@@ -96,7 +96,7 @@ export const routeTable: RouteRow[] = [
     url: `/api/products/${fx.productId}/documents`,
     form: { fields: { kind: 'sds' }, file: { name: 'sheet.pdf', content: pdfBytes } },
   })),
-  row('GET', '/api/files/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/files/${fx.fileId}` })),
+  row('GET', '/api/files/:id', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/files/${fx.fileId}` })),
   row('GET', '/api/finish-systems', s(401, 200, 200, 200, 200), get('/api/finish-systems')),
   row('POST', '/api/finish-systems', s(401, 201, 201, 403, 403), (fx) => ({
     url: '/api/finish-systems',
@@ -142,9 +142,24 @@ export const routeTable: RouteRow[] = [
   row('POST', '/api/readings', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/readings', body: { boothId: fx.boothId, airTempC: 19, relativeHumidityPct: 55 } })),
   row('GET', '/api/events', s(401, 200, 200, 200, 200), () => ({ url: '/api/events', stream: true })),
   row('GET', '/api/notifications', s(401, 200, 200, 200, 200), get('/api/notifications')),
-  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework'].map((report) => row('GET', `/api/reports/${report}`, s(401, 200, 200, 403, 403), get(`/api/reports/${report}?${reportRange}`))),
+  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework', 'upkeep'].map((report) => row('GET', `/api/reports/${report}`, s(401, 200, 200, 403, 403), get(`/api/reports/${report}?${reportRange}`))),
   row('GET', '/api/reports/conditions', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/reports/conditions?${reportRange}&boothId=${fx.boothId}` })),
   row('GET', '/api/mailbox', s(401, 404, 403, 403, 403), get('/api/mailbox'), 'Tests run without the development mailbox, so the admin gets 404 not_found.'),
+  row('GET', '/api/booths/:id/upkeep', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/booths/${fx.boothId}/upkeep` })),
+  row('GET', '/api/upkeep/due', s(401, 200, 200, 200, 403), get('/api/upkeep/due')),
+  row('POST', '/api/filter-banks', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/filter-banks', body: { boothId: fx.freeBoothId, name: `Matrix bank ${fx.next()}`, kind: 'exhaust', changeAtPa: 300 } })),
+  row('PATCH', '/api/filter-banks/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/filter-banks/${fx.filterBankId}`, body: { changeAtPa: 250 } })),
+  row('POST', '/api/readings/filter-gauge', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/readings/filter-gauge', body: { filterBankId: fx.filterBankId, pressureDropPa: 120 } })),
+  row('POST', '/api/filter-changes', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/filter-changes', body: { filterBankId: fx.filterBankId, beforePa: 240, afterPa: 50 } })),
+  row('POST', '/api/extraction-tests', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/extraction-tests', body: { boothId: fx.freeBoothId, testedOn: '2025-01-15', faceVelocityPointsMps: [0.5, 0.52], testedBy: 'Matrix Airflow' } })),
+  row('POST', '/api/fire-inspections', s(401, 201, 201, 403, 403), (fx) => ({ url: '/api/fire-inspections', body: { boothId: fx.freeBoothId, inspectedOn: '2025-01-15', inspectedBy: 'Matrix Fire', passed: true } })),
+  row('GET', '/api/crew', s(401, 200, 200, 403, 403), get('/api/crew')),
+  row('GET', '/api/crew/:userId', s(401, 200, 200, 200, 403), (fx, who) => ({ url: `/api/crew/${who === 'lead' ? fx.leadId : fx.sprayerId}` }), 'Each asks for a record they may read: the admin the sprayer’s, the lead and the sprayer their own.'),
+  row('POST', '/api/crew/:userId/records', s(401, 201, 403, 403, 403), (fx) => ({ url: `/api/crew/${fx.sprayerId}/records`, body: { kind: 'training', doneOn: '2025-01-15', title: 'Matrix training' } })),
+  row('GET', '/api/spray-sessions/:id/fitness', s(401, 200, 200, 200, 403), (fx) => ({ url: `/api/spray-sessions/${fx.spraySessionId}/fitness` })),
+  row('POST', '/api/coats/:id/photos', s(401, 201, 201, 201, 403), async (fx) => ({ url: `/api/coats/${await fx.anyCoat()}/photos`, form: { fields: { subject: 'sample-board' }, file: { name: 'board.png', content: pngBytes } } }), 'The sprayer runs the coat’s session.'),
+  row('GET', '/api/coat-photos', s(401, 200, 200, 200, 403), async (fx) => ({ url: `/api/coat-photos?coatIds=${await fx.anyCoat()}` })),
+  row('GET', '/api/coat-photos/:id', s(401, 200, 200, 200, 403), async (fx) => ({ url: `/api/coat-photos/${await fx.anyPhoto()}` })),
 ];
 
 export const routeKey = (method: string, path: string) => `${method.toUpperCase()} ${path.replace(/\/+$/, '') || '/'}`;

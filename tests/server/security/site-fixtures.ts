@@ -1,5 +1,6 @@
 import type { Express } from 'express';
 import { demo, signIn, type SignedIn } from '../../helpers/test-app';
+import { pngBytes } from './fixtures';
 
 /** One site's records for the site matrix: a booth and rack free at any hour, a session, a coat, a denib, a reading and a part on its rack. */
 export interface SiteSide {
@@ -14,6 +15,9 @@ export interface SiteSide {
   /** A part standing on this site's rack, coated in this site's session. */
   placedPartId: number;
   placedPartTag: string;
+  /** A filter bank of this site's booth, and a photo of this site's coat. */
+  filterBankId: number;
+  photoId: number;
 }
 
 /** One site's things on today's board: a session under way now that nobody has been given. */
@@ -33,6 +37,7 @@ export interface SiteFixtures {
   finishSystemId: number;
   /** The second site's people; the first site's are the demo users. */
   people: Record<'lead' | 'sprayer' | 'assembler', SignedIn>;
+  peopleIds: Record<'lead' | 'sprayer' | 'assembler', number>;
   admin: SignedIn;
   next(): number;
   /** An hour on a booth of either site that no other call overlaps. */
@@ -90,21 +95,25 @@ async function buildSide(shared: Shared, siteId: number, sprayerId: number, labe
   const denibId = (await ok(post(admin, '/api/denibs', { spraySessionId, partIds: [placed.id], grit: 'P320', abradedAt: new Date(Date.now() - 30_000).toISOString() }), `${label} denib`)).denib.id;
   await ok(post(admin, '/api/readings', { boothId, airTempC: 19, relativeHumidityPct: 55 }), `${label} reading`);
   await ok(post(admin, `/api/spray-sessions/${spraySessionId}/mixes`, { productId: shared.productId, wantedL: 1, tempC: 20 }), `${label} mix`);
-  return { siteId, boothId, rackId, sprayerId, spraySessionId, coatId, denibId, placedPartId: placed.id, placedPartTag: placed.tag };
+  const filterBankId = (await ok(post(admin, '/api/filter-banks', { boothId, name: `${label} arrestor pads`, kind: 'paint-arrestor', changeAtPa: 250 }), `${label} filter bank`)).filterBank.id;
+  const photo = await admin.agent.post(`/api/coats/${coatId}/photos`).set('x-csrf-token', admin.csrf).field('subject', 'defect').attach('file', pngBytes, 'defect.png');
+  if (photo.status !== 201) throw new Error(`Site fixture "${label} photo" answered ${photo.status}`);
+  return { siteId, boothId, rackId, sprayerId, spraySessionId, coatId, denibId, placedPartId: placed.id, placedPartTag: placed.tag, filterBankId, photoId: photo.body.photo.id };
 }
 
-async function secondSitePeople(app: Express, admin: SignedIn, siteId: number): Promise<{ people: SiteFixtures['people']; sprayerId: number }> {
-  let sprayerId = 0;
+async function secondSitePeople(app: Express, admin: SignedIn, siteId: number): Promise<{ people: SiteFixtures['people']; peopleIds: SiteFixtures['peopleIds']; sprayerId: number }> {
+  const peopleIds = { lead: 0, sprayer: 0, assembler: 0 };
   for (const role of ['lead', 'sprayer', 'assembler'] as const) {
     const user = await ok(post(admin, '/api/users', { email: `${role}.second@larchmere.test`, name: `Second ${role}`, role, password, siteId }), `second ${role}`);
-    if (role === 'sprayer') sprayerId = user.user.id;
+    peopleIds[role] = user.user.id;
   }
+  const sprayerId = peopleIds.sprayer;
   const people = {
     lead: await signIn(app, 'lead.second@larchmere.test', password),
     sprayer: await signIn(app, 'sprayer.second@larchmere.test', password),
     assembler: await signIn(app, 'assembler.second@larchmere.test', password),
   };
-  return { people, sprayerId };
+  return { people, peopleIds, sprayerId };
 }
 
 /** An hour around now on the side's booth, given to nobody, so it is on today's board (and the sprayers' count of unassigned sessions). */
@@ -147,11 +156,11 @@ export async function createSiteFixtures(app: Express): Promise<SiteFixtures> {
   const demoSprayerId = (await ok((await signIn(app, demo.sprayer)).agent.get('/api/auth/me'), 'demo sprayer')).user.id;
   const first = await buildSide(shared, 1, demoSprayerId, 'First');
   const secondSiteId = (await ok(post(admin, '/api/sites', { name: 'Second matrix site' }), 'second site')).site.id;
-  const { people, sprayerId } = await secondSitePeople(app, admin, secondSiteId);
+  const { people, peopleIds, sprayerId } = await secondSitePeople(app, admin, secondSiteId);
   const second = await buildSide(shared, secondSiteId, sprayerId, 'Second');
   const today = { first: await bookNow(admin, first, 'First'), second: await bookNow(admin, second, 'Second'), denibJobId: await denibJobOnFirstSite(shared, first, topcoat.id) };
   const coatBody = async (side: SiteSide) => coatOn(side.spraySessionId, [(await freshPart()).id], primer.id);
   const secondSiteCoat = async () => (await ok(post(admin, '/api/coats', await coatBody(second)), 'second coat')).coat.id as number;
   const fileId = (topcoat.tdsFile as { id: number }).id;
-  return { first, second, today, jobId, productId: primer.id, fileId, finishSystemId, people, admin, next, freeSlot, freshPart: async () => (await freshPart()).id, coatBody, secondSiteCoat };
+  return { first, second, today, jobId, productId: primer.id, fileId, finishSystemId, people, peopleIds, admin, next, freeSlot, freshPart: async () => (await freshPart()).id, coatBody, secondSiteCoat };
 }

@@ -1,4 +1,4 @@
-import { pdfBytes } from './fixtures';
+import { pdfBytes, pngBytes } from './fixtures';
 import type { Method, RequestSpec } from './route-table';
 import type { SiteFixtures } from './site-fixtures';
 
@@ -96,6 +96,11 @@ function todayLeaks(body: Body, fx: SiteFixtures, first: FirstSite): string[] {
   ];
 }
 
+const bank = (boothId: number, fx: SiteFixtures) => ({ boothId, name: `Matrix bank ${fx.next()}`, kind: 'exhaust', changeAtPa: 300 });
+const extractionTest = (boothId: number) => ({ boothId, testedOn: '2025-01-15', faceVelocityPointsMps: [0.5, 0.52], testedBy: 'Matrix Airflow' });
+const fireInspection = (boothId: number) => ({ boothId, inspectedOn: '2025-01-15', inspectedBy: 'Matrix Fire', passed: true });
+const training = { kind: 'training', doneOn: '2025-01-15', title: 'Matrix training' };
+const photoForm = { fields: { subject: 'defect' }, file: { name: 'defect.png', content: pngBytes } };
 const reportOf = (body: Body, fx: SiteFixtures) => (body.report?.siteId === fx.second.siteId ? [] : [`report of site ${body.report?.siteId}`]);
 
 export const siteTable: SiteRow[] = [
@@ -215,8 +220,24 @@ export const siteTable: SiteRow[] = [
   ])),
   row('GET', '/api/events', () => ({ url: '/api/events', stream: true }), { kind: 'stream' }),
 
-  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework'].map((report) =>
+  ...['booth-use', 'area-sprayed', 'solvent', 'material', 'rework', 'upkeep'].map((report) =>
     row('GET', `/api/reports/${report}`, get(`/api/reports/${report}?${reportRange}`), filtered(() => ({ url: `/api/reports/${report}?${reportRange}&siteId=1` }), (b, fx) => reportOf(b, fx))),
   ),
   row('GET', '/api/reports/conditions', (fx) => ({ url: `/api/reports/conditions?${reportRange}&boothId=${fx.second.boothId}` }), refused((fx) => [{ url: `/api/reports/conditions?${reportRange}&boothId=${fx.first.boothId}` }])),
+
+  row('GET', '/api/booths/:id/upkeep', (fx) => ({ url: `/api/booths/${fx.second.boothId}/upkeep` }), refused((fx) => [{ url: `/api/booths/${fx.first.boothId}/upkeep` }])),
+  row('GET', '/api/upkeep/due', get('/api/upkeep/due'), filtered(() => ({ url: '/api/upkeep/due?siteId=1' }), (b, _fx, first) => [...leaked(b.due.booths, 'boothId', first.booths, 'booth'), ...leaked(b.due.crew, 'userId', first.users, 'person')])),
+  row('POST', '/api/filter-banks', (fx) => ({ url: '/api/filter-banks', body: bank(fx.second.boothId, fx) }), refused((fx) => [{ url: '/api/filter-banks', body: bank(fx.first.boothId, fx), fields: ['boothId'] }])),
+  row('PATCH', '/api/filter-banks/:id', (fx) => ({ url: `/api/filter-banks/${fx.second.filterBankId}`, body: { changeAtPa: 260 } }), refused((fx) => [{ url: `/api/filter-banks/${fx.first.filterBankId}`, body: { changeAtPa: 999 } }])),
+  row('POST', '/api/readings/filter-gauge', (fx) => ({ url: '/api/readings/filter-gauge', body: { filterBankId: fx.second.filterBankId, pressureDropPa: 90 } }), refused((fx) => [{ url: '/api/readings/filter-gauge', body: { filterBankId: fx.first.filterBankId, pressureDropPa: 90 }, fields: ['filterBankId'] }])),
+  row('POST', '/api/filter-changes', (fx) => ({ url: '/api/filter-changes', body: { filterBankId: fx.second.filterBankId } }), refused((fx) => [{ url: '/api/filter-changes', body: { filterBankId: fx.first.filterBankId }, fields: ['filterBankId'] }])),
+  row('POST', '/api/extraction-tests', (fx) => ({ url: '/api/extraction-tests', body: extractionTest(fx.second.boothId) }), refused((fx) => [{ url: '/api/extraction-tests', body: extractionTest(fx.first.boothId), fields: ['boothId'] }])),
+  row('POST', '/api/fire-inspections', (fx) => ({ url: '/api/fire-inspections', body: fireInspection(fx.second.boothId) }), refused((fx) => [{ url: '/api/fire-inspections', body: fireInspection(fx.first.boothId), fields: ['boothId'] }])),
+  row('GET', '/api/crew', get('/api/crew'), filtered(() => ({ url: '/api/crew?siteId=1' }), (b, _fx, first) => leaked(b.items, 'userId', first.users, 'person'))),
+  row('GET', '/api/crew/:userId', (fx, who) => ({ url: `/api/crew/${fx.peopleIds[who]}` }), refused((fx) => [{ url: `/api/crew/${fx.first.sprayerId}` }])),
+  row('POST', '/api/crew/:userId/records', (fx) => ({ url: `/api/crew/${fx.second.sprayerId}/records`, body: training }), refused((fx) => [{ url: `/api/crew/${fx.first.sprayerId}/records`, body: training }])),
+  row('GET', '/api/spray-sessions/:id/fitness', (fx) => ({ url: `/api/spray-sessions/${fx.second.spraySessionId}/fitness` }), refused((fx) => [{ url: `/api/spray-sessions/${fx.first.spraySessionId}/fitness` }])),
+  row('POST', '/api/coats/:id/photos', (fx) => ({ url: `/api/coats/${fx.second.coatId}/photos`, form: photoForm }), refused((fx) => [{ url: `/api/coats/${fx.first.coatId}/photos`, form: photoForm }])),
+  row('GET', '/api/coat-photos', (fx) => ({ url: `/api/coat-photos?coatIds=${fx.second.coatId}` }), filtered((fx) => ({ url: `/api/coat-photos?coatIds=${fx.first.coatId},${fx.second.coatId}` }), (b, fx) => b.items.filter((p: Body) => p.coatId === fx.first.coatId).map((p: Body) => `photo ${p.id} of the first site’s coat`))),
+  row('GET', '/api/coat-photos/:id', (fx) => ({ url: `/api/coat-photos/${fx.second.photoId}` }), refused((fx) => [{ url: `/api/coat-photos/${fx.first.photoId}` }])),
 ];

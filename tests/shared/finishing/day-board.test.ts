@@ -26,6 +26,15 @@ describe('sessionNextStep', () => {
     expect(step({ state: 'spraying', checklist: go, coats: [coat({ sprayedCount: 8 })] }).kind).toBe('stop-spraying');
   });
 
+  it('sends nobody to check a booth for a session whose parts have all had their coat elsewhere', () => {
+    const sprayed = [coat({ sprayedCount: 8 }), coat({ coatNumber: 2, partCount: 4, sprayedCount: 4 })];
+    expect(step({ coats: sprayed })).toEqual({ kind: 'done', words: 'Nothing left to spray: every planned part has had its coat. Ask the lead to cancel or re-plan this session', at: null });
+    expect(step({ state: 'checking', checklist: go, coats: sprayed }).kind).toBe('done');
+    expect(step({ coats: [coat({ sprayedCount: 8 }), coat({ coatNumber: 2, partCount: 4, sprayedCount: 3 })] }).kind).toBe('checklist');
+    // No parts planned: the session is still run as booked.
+    expect(step({ coats: [] }).kind).toBe('checklist');
+  });
+
   it('keeps protection on until the clearance time has passed', () => {
     const clearAt = new Date('2027-01-04T10:12:00Z');
     expect(step({ state: 'clearing', clearanceEndsAt: clearAt })).toEqual({ kind: 'clearance', words: 'Clearing the air: keep protection on and others out until', at: clearAt });

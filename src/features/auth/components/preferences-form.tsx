@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { SignedInUser } from '../../../../shared/schemas/auth';
-import { defaultNotifyPrefs } from '../../../../shared/schemas/notification';
+import { notifyPrefsOf } from '../../../../shared/schemas/notification';
 import { updateMeSchema, type UpdateMeInput } from '../../../../shared/schemas/user';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
@@ -18,7 +18,7 @@ const unitChoices = [
 ] as const;
 
 function formValues(user: SignedInUser): UpdateMeInput {
-  return { name: user.name, units: user.units, notify: user.notify ?? defaultNotifyPrefs(user.role) };
+  return { name: user.name, units: user.units, notify: notifyPrefsOf(user.role, user.notify) };
 }
 
 /** The user's own settings, then what the app has e-mailed them lately (times in `timeZone` when given). */

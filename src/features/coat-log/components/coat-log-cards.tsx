@@ -2,8 +2,10 @@ import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Denib } from '../../../../shared/schemas/denib';
 import { formatQuantity } from '../../../../shared/units';
+import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
+import { CoatPhotos } from './coat-photos';
 import { denibWords, logEntries } from './coat-log-entries';
 import { conditionWords, filmWords, partsWords, sharedReason, stepWords, versionWords } from './coat-log-format';
 
@@ -13,10 +15,13 @@ interface CoatLogCardsProps {
   units: UnitSystem;
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
+  photosOf: (coat: Coat) => CoatPhoto[];
+  onOpenPhoto: (photo: CoatPhoto) => void;
+  onAddPhoto?: (coat: Coat) => void;
 }
 
 /** The same records as the table, one card each, for tablets and phones where eleven columns do not fit. */
-export function CoatLogCards({ coats, denibs, units, timeZone, onCorrect }: CoatLogCardsProps) {
+export function CoatLogCards({ coats, denibs, units, timeZone, onCorrect, photosOf, onOpenPhoto, onAddPhoto }: CoatLogCardsProps) {
   return (
     <ul aria-label="Coat records" className="space-y-3">
       {logEntries(coats, denibs).map((entry) => {
@@ -63,6 +68,7 @@ export function CoatLogCards({ coats, denibs, units, timeZone, onCorrect }: Coat
               {coat.correctionReason && <span className="block">Why: {coat.correctionReason}</span>}
             </p>
             {replaced && <p className="font-bold text-verdict-stop">Corrected by #{coat.supersededById}</p>}
+            <CoatPhotos coat={coat} photos={photosOf(coat)} onOpen={onOpenPhoto} onAdd={replaced ? undefined : onAddPhoto} />
             {onCorrect && !replaced && (
               <Button variant="secondary" className="mt-2" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>
                 Correct

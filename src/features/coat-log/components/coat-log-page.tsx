@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { toast } from 'sonner';
 import type { Coat } from '../../../../shared/schemas/coat';
+import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
@@ -10,7 +11,11 @@ import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/sta
 import { errorMessage } from '../../../lib/error-messages';
 import type { CoatFilters } from '../../../api/coats/coat-keys';
 import { getAllCoats, useCoats } from '../../../api/coats/get-coats';
+import { useCoatPhotos } from '../../../api/coat-photos/get-coat-photos';
 import { usePageDenibs } from '../api/get-page-denibs';
+import { formatShopDateTime } from '../../../lib/shop-time';
+import { AddPhotoForm } from './add-photo-form';
+import { PhotoView } from './coat-photos';
 import { coatsToCsv, downloadCsv } from './coat-csv';
 import { CoatLogFilters, type CoatLogFilterValues } from './coat-log-filters';
 import { shopDayStart } from './coat-log-format';
@@ -39,6 +44,11 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
   const coats = useCoats({ ...query, page, pageSize });
   const denibs = usePageDenibs(query, page, pageSize, coats.data);
   const [correcting, setCorrecting] = useState<Coat | null>(null);
+  const [photoFor, setPhotoFor] = useState<Coat | null>(null);
+  const [viewing, setViewing] = useState<CoatPhoto | null>(null);
+  const photos = useCoatPhotos(coats.data?.items.map((c) => c.id) ?? []);
+  const photosOf = (coat: Coat) => (photos.data ?? []).filter((p) => p.shownWithCoatId === coat.id);
+  const photoProps = { photosOf, onOpenPhoto: setViewing, onAddPhoto: canCorrect ? setPhotoFor : undefined };
   const [exporting, setExporting] = useState(false);
 
   const exportCsv = async () => {
@@ -58,7 +68,7 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
     <>
       <PageHeader
         title="Coat log"
-        description="The record of every coat and every denib between coats: product, film, conditions, warnings and who did it. Corrections add a new version; nothing is deleted."
+        description="The record of every coat and every denib between coats: product, film, conditions, warnings, photos and who did it. Corrections and photos add to the record; nothing is deleted."
         actions={
           <Button variant="secondary" onClick={exportCsv} pending={exporting} pendingText="Exporting…" disabled={!coats.data || coats.data.total === 0}>
             Export CSV
@@ -76,16 +86,22 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
         <>
           {/* Eleven columns need a wide screen; below that each coat is a card. Only one of the two is ever displayed. */}
           <div className="hidden xl:block">
-            <CoatLogTable coats={coats.data.items} denibs={denibs} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+            <CoatLogTable coats={coats.data.items} denibs={denibs} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} {...photoProps} />
           </div>
           <div className="xl:hidden">
-            <CoatLogCards coats={coats.data.items} denibs={denibs} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} />
+            <CoatLogCards coats={coats.data.items} denibs={denibs} units={units} timeZone={timeZone} onCorrect={canCorrect ? setCorrecting : undefined} {...photoProps} />
           </div>
           <Pagination page={page} pageSize={pageSize} total={coats.data.total} noun={filters.history ? 'coat versions' : 'coats'} onPage={(next) => onChange(filters, next)} />
         </>
       )}
       <Dialog open={correcting !== null} onClose={() => setCorrecting(null)} wide title={`Correct coat ${correcting?.id ?? ''}`} description="Change what was recorded wrongly. Figures are entered in metric units, as they are stored.">
         {correcting && <CorrectionForm coat={correcting} onDone={() => setCorrecting(null)} />}
+      </Dialog>
+      <Dialog open={photoFor !== null} onClose={() => setPhotoFor(null)} title={`Add a photo to coat ${photoFor?.id ?? ''}`} description="A defect, a sample board or the finish as sprayed. The photo is kept as its own record; the coat is not changed.">
+        {photoFor && <AddPhotoForm coat={photoFor} onDone={() => setPhotoFor(null)} />}
+      </Dialog>
+      <Dialog open={viewing !== null} onClose={() => setViewing(null)} wide title={`Photo of coat ${viewing?.shownWithCoatId ?? ''}`}>
+        {viewing && <PhotoView photo={viewing} when={formatShopDateTime(viewing.takenAt, timeZone)} />}
       </Dialog>
     </>
   );

@@ -2,8 +2,10 @@ import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Denib } from '../../../../shared/schemas/denib';
 import { formatQuantity } from '../../../../shared/units';
+import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
+import { CoatPhotos } from './coat-photos';
 import { denibWords, logEntries } from './coat-log-entries';
 import { conditionWords, filmWords, partsWords, sharedReason, stepWords, versionWords } from './coat-log-format';
 
@@ -14,6 +16,9 @@ interface CoatLogTableProps {
   units: UnitSystem;
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
+  photosOf: (coat: Coat) => CoatPhoto[];
+  onOpenPhoto: (photo: CoatPhoto) => void;
+  onAddPhoto?: (coat: Coat) => void;
 }
 
 const headings = ['When (shop time)', 'Product, step, parts', 'Film', 'Conditions', 'Warnings', 'Who, version'];
@@ -64,7 +69,7 @@ function DenibRow({ denib, timeZone }: { denib: Denib; timeZone: string }) {
 }
 
 /** One row per coat version, and the denibs between them; a replaced version is struck through and names the record that corrects it. */
-export function CoatLogTable({ coats, denibs, units, timeZone, onCorrect }: CoatLogTableProps) {
+export function CoatLogTable({ coats, denibs, units, timeZone, onCorrect, photosOf, onOpenPhoto, onAddPhoto }: CoatLogTableProps) {
   return (
     <div role="region" aria-label="Coat records" tabIndex={0} className="overflow-x-auto rounded-panel border border-maple-300 bg-white">
       <table className="w-full border-collapse text-left">
@@ -115,6 +120,7 @@ export function CoatLogTable({ coats, denibs, units, timeZone, onCorrect }: Coat
                 <td className="px-3 py-2">
                   <span className="block">{coat.recordedByName}</span>
                   <Version coat={coat} />
+                  <CoatPhotos coat={coat} photos={photosOf(coat)} onOpen={onOpenPhoto} onAdd={replaced ? undefined : onAddPhoto} />
                   {onCorrect && !replaced && (
                     <div className="mt-2">
                       <Button variant="secondary" onClick={() => onCorrect(coat)} aria-label={`Correct coat ${coat.id}`}>

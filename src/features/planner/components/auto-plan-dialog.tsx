@@ -54,7 +54,7 @@ export function AutoPlanDialog({ open, onClose, timeZone, boothNames, siteId }: 
           <div className="grid max-h-56 gap-1 overflow-y-auto sm:grid-cols-2">
             {jobs.data.map((job) => (
               <label key={job.id} className="flex min-h-touch items-center gap-2 rounded border border-maple-200 bg-white px-3">
-                <input type="checkbox" checked={chosen.includes(job.id)} onChange={() => toggle(job.id)} className="size-5" />
+                <input type="checkbox" checked={chosen.includes(job.id)} onChange={() => toggle(job.id)} className="size-5 shrink-0" />
                 <span>
                   <strong>{job.reference}</strong> {job.customer} <span className="text-sm text-maple-600">due {job.dueDate}</span>
                 </span>
@@ -69,7 +69,7 @@ export function AutoPlanDialog({ open, onClose, timeZone, boothNames, siteId }: 
         </Button>
         {plan && plan.sessions.length > 0 && (
           <Button onClick={book} pending={accept.isPending} pendingText="Booking…">
-            Book all {plan.sessions.length} sessions
+            {plan.sessions.length === 1 ? 'Book this session' : `Book all ${plan.sessions.length} sessions`}
           </Button>
         )}
       </div>

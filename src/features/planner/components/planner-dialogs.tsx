@@ -9,6 +9,7 @@ export interface Viewer {
   name: string;
   canWrite: boolean;
   canReadProducts: boolean;
+  canReadUpkeep: boolean;
 }
 
 interface PlannerDialogsProps {
@@ -40,6 +41,7 @@ export function PlannerDialogs({ viewer, settings, booths, booking, opened, ...h
             timeZone={settings.timezone}
             canWrite={viewer.canWrite}
             canReadProducts={viewer.canReadProducts}
+            canReadUpkeep={viewer.canReadUpkeep}
             onChange={() => handlers.onChangeBooking(opened)}
             onCancel={() => handlers.onCancelSession(opened)}
           />

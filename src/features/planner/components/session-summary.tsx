@@ -11,6 +11,7 @@ import { useSessionPlan, type SessionPlan } from '../hooks/use-session-plan';
 import { isMovable, sprayerWords } from '../utils/session-events';
 import { sessionWhen } from '../utils/session-time';
 import { SessionCautions } from './session-cautions';
+import { SessionFitness } from './session-fitness';
 
 interface SessionSummaryProps {
   /** The calendar's copy, shown while the live one loads. */
@@ -19,6 +20,8 @@ interface SessionSummaryProps {
   timeZone: string;
   canWrite: boolean;
   canReadProducts: boolean;
+  /** Whether to show if the booth and sprayer are fit to spray (the booth's upkeep and the sprayer's records). */
+  canReadUpkeep: boolean;
   onChange: () => void;
   onCancel: () => void;
 }
@@ -64,7 +67,7 @@ function windowWords(window: NonNullable<SpraySession['work']['recoatWindow']>, 
 }
 
 /** A session at a glance: when, where, who, its state in words, its parts and what safety asks. */
-export function SessionSummary({ shown, booth, timeZone, canWrite, canReadProducts, onChange, onCancel }: SessionSummaryProps) {
+export function SessionSummary({ shown, booth, timeZone, canWrite, canReadProducts, canReadUpkeep, onChange, onCancel }: SessionSummaryProps) {
   const { data: session = shown } = useSpraySession(shown.id, shown);
   const plan = useSessionPlan(session, canReadProducts);
   const cancellable = session.state === 'planned' || session.state === 'checking';
@@ -86,6 +89,7 @@ export function SessionSummary({ shown, booth, timeZone, canWrite, canReadProduc
       </dl>
       <PlannedParts plan={plan} count={session.work.partCount || new Set(session.items.map((item) => item.partId)).size} sprayed={session.work.sprayedCount} timeZone={timeZone} />
       <SessionCautions plan={plan} booth={booth} />
+      <SessionFitness spraySessionId={session.id} enabled={canReadUpkeep && session.state !== 'done' && session.state !== 'cancelled'} />
       <div className="mt-6 flex flex-wrap justify-end gap-3">
         {canWrite && cancellable && (
           <Button variant="danger" onClick={onCancel}>

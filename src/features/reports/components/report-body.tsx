@@ -6,6 +6,7 @@ import { ConditionsReport } from './conditions-report';
 import { MaterialReport } from './material-report';
 import { ReworkReport } from './rework-report';
 import { SolventReport } from './solvent-report';
+import { UpkeepReport } from './upkeep-report';
 
 export function ReportBody({ request, units, timeZone }: { request: ReportRequest; units: UnitSystem; timeZone: string }) {
   switch (request.kind) {
@@ -21,5 +22,7 @@ export function ReportBody({ request, units, timeZone }: { request: ReportReques
       return <MaterialReport params={request.params} units={units} timeZone={timeZone} />;
     case 'rework':
       return <ReworkReport params={request.params} timeZone={timeZone} />;
+    case 'upkeep':
+      return <UpkeepReport params={request.params} timeZone={timeZone} />;
   }
 }

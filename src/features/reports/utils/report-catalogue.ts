@@ -15,4 +15,5 @@ export const reportCatalogue: Record<ReportKind, ReportEntry> = {
   solvent: { tab: 'Solvent & VOC', title: 'Solvent and VOC', question: 'How much solvent did we emit? VOC per month, and the year’s running total against the yearly threshold.' },
   material: { tab: 'Material', title: 'Material against estimate', question: 'What did it take? Litres used against the estimate, per product and per job.' },
   rework: { tab: 'Rework', title: 'Rework', question: 'What had to be done again? Coats re-sprayed or corrected, by reason, per month.' },
+  upkeep: { tab: 'Upkeep', title: 'Upkeep done against due', question: 'Did we keep the booths and the crew in order? Filter changes, extraction tests, fire inspections and crew records done, and those due done by their date.' },
 };

@@ -31,6 +31,7 @@ export function reportRequest(address: ReportAddress, conditionsBoothId: number 
       return { kind: 'material', params: { from, to, ...site, jobId: address.jobId } };
     case 'solvent':
     case 'rework':
+    case 'upkeep':
       return { kind: address.kind, params: { from, to, ...site } };
   }
 }

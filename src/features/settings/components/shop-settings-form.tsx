@@ -76,6 +76,20 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
           registration={register('dailyPlanHour', { setValueAs: Number })}
         />
       </div>
+      <fieldset className="mt-8 max-w-3xl">
+        <legend className="text-lg font-semibold">Booth upkeep and crew protection</legend>
+        <p className="mb-3 text-maple-700">
+          How often each falls due, counted from the day it was done, and how far ahead Boothwright warns. The 14-month extraction test follows UK HSE guidance (HSG258); the
+          other defaults are common practice, with no published source found. Your local regulations and the booth and equipment makers’ instructions come first: set these to match them.
+        </p>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <InputField {...whole} label="Extraction test every" unit="months" error={errors.extractionTestMonths?.message} registration={register('extractionTestMonths', { setValueAs: asNumber })} />
+          <InputField {...whole} label="Fire-protection inspection every" unit="months" error={errors.fireInspectionMonths?.message} registration={register('fireInspectionMonths', { setValueAs: asNumber })} />
+          <InputField {...whole} label="Face-fit test every" unit="months" error={errors.fitTestMonths?.message} registration={register('fitTestMonths', { setValueAs: asNumber })} />
+          <InputField {...whole} label="Health surveillance every" unit="months" hint="For isocyanate work." error={errors.healthSurveillanceMonths?.message} registration={register('healthSurveillanceMonths', { setValueAs: asNumber })} />
+          <InputField {...whole} label="Warn when due within" unit="days" error={errors.upkeepDueSoonDays?.message} registration={register('upkeepDueSoonDays', { setValueAs: asNumber })} />
+        </div>
+      </fieldset>
       <Button type="submit" className="mt-6" pending={update.isPending} pendingText="Saving…" disabled={!isDirty}>
         Save shop settings
       </Button>

@@ -13,6 +13,11 @@ export function ShopSettingsSummary({ settings, units }: { settings: ShopSetting
     ['Clean-down per spray session', `${settings.cleanDownMin} min`],
     ['Yearly solvent threshold', `${formatNumber(settings.yearlySolventThresholdKg, 0)} kg`],
     ['Daily plan sent at', `${String(settings.dailyPlanHour).padStart(2, '0')}:00`],
+    ['Extraction test every', `${settings.extractionTestMonths} months`],
+    ['Fire-protection inspection every', `${settings.fireInspectionMonths} months`],
+    ['Face-fit test every', `${settings.fitTestMonths} months`],
+    ['Health surveillance every', `${settings.healthSurveillanceMonths} months`],
+    ['Upkeep warnings', `${settings.upkeepDueSoonDays} days ahead`],
   ];
   return (
     <dl className="grid max-w-3xl gap-x-6 gap-y-3 rounded-panel border border-maple-300 bg-white p-4 sm:grid-cols-[auto_1fr]">

@@ -9,12 +9,15 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
 import type { Reading } from '../../../../shared/schemas/reading';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import type { SessionFitness } from '../../../../shared/schemas/upkeep';
+import { FitnessFindings } from '../../../components/safety/fitness-findings';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { useNow } from '../../../lib/use-now';
 import { useCreateReading } from '../../../api/readings/create-reading';
 import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
-import { liveChecklist, startBlockedReason } from '../utils/live-checklist';
+import { currentReading, liveChecklist, startBlockedReason } from '../utils/live-checklist';
 import { withoutFieldPrefix } from '../utils/server-errors';
 import { shopWhen } from '../utils/session-format';
 import { ConditionFields, EquipmentChecks, type ChecklistInput } from './checklist-fields';
@@ -41,26 +44,38 @@ function startingValues(session: SpraySession, reading: Reading | null): Default
   };
 }
 
+function conditionsSource(reading: Reading | null, current: Reading | null, timeZone: string): string {
+  if (current) return `Filled in from the ${current.source === 'sensor' ? 'sensor' : 'typed'} reading at ${shopWhen(current.at, timeZone)}; correct them if they have changed.`;
+  if (reading) return `The booth's last reading (${shopWhen(reading.at, timeZone)}) is too old to go on: measure the conditions now and type them in.`;
+  return 'No reading yet for this booth: measure and type them in.';
+}
+
 interface ChecklistFormProps {
   session: SpraySession;
   booth: Booth;
   /** null while the data sheets are still loading. */
   products: Product[] | null;
   reading: Reading | null;
+  /** Fit to spray for each protection; null while it loads, undefined when it could not be read (the server still checks). */
+  fitness: SessionFitness | null | undefined;
   units: UnitSystem;
   timeZone: string;
   canOverride: boolean;
 }
 
-export function ChecklistForm({ session, booth, products, reading, units, timeZone, canOverride }: ChecklistFormProps) {
+export function ChecklistForm({ session, booth, products, reading, fitness, units, timeZone, canOverride }: ChecklistFormProps) {
   const update = useUpdateSpraySession();
   const createReading = useCreateReading();
   const blockedId = useId();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<ChecklistInput, unknown, Checklist>({ resolver: zodResolver(checklistSchema), defaultValues: startingValues(session, reading) });
+  const now = useNow(60_000);
+  const current = currentReading(reading, now);
+  const form = useForm<ChecklistInput, unknown, Checklist>({ resolver: zodResolver(checklistSchema), defaultValues: startingValues(session, current) });
   const { control, handleSubmit, setError, formState } = form;
   const values = useWatch({ control });
-  const live = liveChecklist(values, booth, products);
+  // Judged for the protection the sprayer says they wear: a fit test matters for a tight-fitting facepiece.
+  const fit = fitness ? fitness.byRespirator[values.respiratorKind ?? fitness.neededRespirator] : null;
+  const live = liveChecklist(values, booth, products, fitness === undefined ? [] : (fit?.findings ?? null));
   const blocked = startBlockedReason(live, canOverride, values.overrideReason);
 
   // The typed conditions also go into the booth's readings, so the next form starts from them.
@@ -89,10 +104,11 @@ export function ChecklistForm({ session, booth, products, reading, units, timeZo
       <div>
         <h3 className="text-lg font-semibold">Conditions in the booth</h3>
         <p className="mb-2 text-maple-700">
-          {reading ? `Filled in from the ${reading.source === 'sensor' ? 'sensor' : 'typed'} reading at ${shopWhen(reading.at, timeZone)}; correct them if they have changed.` : 'No reading yet for this booth: measure and type them in.'}
+          {conditionsSource(reading, current, timeZone)}
         </p>
         <ConditionFields control={control} errors={formState.errors} units={units} />
       </div>
+      {fitness && fit && <FitnessFindings verdict={fit.verdict} findings={fit.findings} crewShown={fitness.crewShown} deferLine={fitness.deferLine} />}
       <ChecklistVerdict evaluation={live.evaluation} missing={live.missing} dew={live.dew} units={units} />
       {canOverride && live.evaluation?.verdict === 'stop' && <OverrideReasonField register={form.register} error={formState.errors.overrideReason?.message} />}
       <div className="flex flex-wrap items-start gap-3">

@@ -3,6 +3,7 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
 import { useLatestReading } from '../../../api/readings/get-readings';
+import { useSessionFitness } from '../../../api/spray-sessions/get-session-fitness';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { ChecklistForm } from './checklist-form';
 import { RecordedChecklist } from './recorded-checklist';
@@ -20,6 +21,7 @@ interface ChecklistSectionProps {
 /** Before spraying: the checks, the live verdict and the button that starts spraying. */
 export function ChecklistSection({ session, booth, plan, canRun, canOverride, units, timeZone }: ChecklistSectionProps) {
   const reading = useLatestReading(booth.id);
+  const fitness = useSessionFitness(session.id, canRun);
   return (
     <section aria-labelledby="checklist-heading" className="space-y-4 rounded-panel border border-maple-300 bg-white p-4">
       <div>
@@ -36,7 +38,7 @@ export function ChecklistSection({ session, booth, plan, canRun, canOverride, un
       ) : reading.isError ? (
         <ErrorState error={reading.error} what="the latest booth reading" onRetry={() => reading.refetch()} />
       ) : (
-        <ChecklistForm session={session} booth={booth} products={plan.pending ? null : plan.sprayed} reading={reading.data} units={units} timeZone={timeZone} canOverride={canOverride} />
+        <ChecklistForm session={session} booth={booth} products={plan.pending ? null : plan.sprayed} reading={reading.data} fitness={fitness.isError ? undefined : (fitness.data ?? null)} units={units} timeZone={timeZone} canOverride={canOverride} />
       )}
     </section>
   );

@@ -3,7 +3,7 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { formatQuantity } from '../../../../shared/units';
 import { useNow } from '../../../lib/use-now';
-import { shopWhen } from '../utils/session-format';
+import { nextStepWords, shopWhen } from '../utils/session-format';
 import { CoatTimes } from './coat-times';
 import { Countdown } from './countdown';
 
@@ -24,8 +24,7 @@ function NextWindow({ part, timeZone, now }: { part: ReadyPart; timeZone: string
     : 'no window worked out yet';
   return (
     <p>
-      <span className="font-semibold">Next on {part.label}:</span> {part.nextStep}
-      {part.abradeRequired && !part.nextStep.startsWith('Abrade') ? ' (abrade first: the window was missed)' : ''}; {window}.
+      <span className="font-semibold">Next on {part.label}:</span> {nextStepWords(part)}; {window}.
     </p>
   );
 }

@@ -93,7 +93,7 @@ export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, rea
       <PartPicker chosen={values.partIds?.flatMap((id) => (id === undefined ? [] : [id])) ?? []} known={coat.known} planned={planned} onChange={coat.choose} error={formState.errors.partIds?.message} />
       {coat.mixedSystems && <p className="font-medium text-verdict-stop">These parts follow different finish systems: record them as separate coats.</p>}
       <DenibFirstNote parts={coat.chosen.filter((part) => needsDenibFirst(part, step?.position, coat.work))} />
-      <CoatMaterialFields control={control} register={register} errors={formState.errors} steps={coat.steps} product={product} mixes={coat.productMixes} units={units} timeZone={timeZone} />
+      <CoatMaterialFields control={control} register={register} errors={formState.errors} steps={coat.steps} partsChosen={coat.chosen.length > 0} product={product} mixes={coat.productMixes} units={units} timeZone={timeZone} />
       <div>
         <h3 className="mb-2 text-lg font-semibold">Conditions as sprayed</h3>
         <CoatConditionFields control={control} errors={formState.errors} units={units} />

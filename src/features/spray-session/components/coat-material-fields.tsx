@@ -13,6 +13,8 @@ interface CoatMaterialFieldsProps {
   register: UseFormRegister<CoatEntryInput>;
   errors: FieldErrors<CoatEntryInput>;
   steps: CoatStep[];
+  /** No parts chosen yet: the steps come from the parts' finish system, so there are none to offer. */
+  partsChosen: boolean;
   product: Product | undefined;
   mixes: Mix[];
   units: UnitSystem;
@@ -21,8 +23,8 @@ interface CoatMaterialFieldsProps {
 
 const numberOrNull = { setValueAs: asNumberOrNull };
 
-export function CoatMaterialFields({ control, register, errors, steps, product, mixes, units, timeZone }: CoatMaterialFieldsProps) {
-  const stepOptions = [{ value: '', label: steps.length ? 'Choose the step…' : 'No finish system for these parts' }, ...steps.map((s) => ({ value: s.position, label: stepWords(s, units) }))];
+export function CoatMaterialFields({ control, register, errors, steps, partsChosen, product, mixes, units, timeZone }: CoatMaterialFieldsProps) {
+  const stepOptions = [{ value: '', label: steps.length ? 'Choose the step…' : partsChosen ? 'No finish system for these parts' : 'Choose the parts first' }, ...steps.map((s) => ({ value: s.position, label: stepWords(s, units) }))];
   const mixOptions = [{ value: '', label: mixes.length ? 'No recorded mix' : 'No mix of this product recorded' }, ...mixes.map((m) => ({ value: m.id, label: `Mix ${m.id}: ${m.totalL.toFixed(2)} L, mixed ${shopWhen(m.mixedAt, timeZone)}` }))];
   const lotOptions = [{ value: '', label: 'Lot not recorded' }, ...(product?.lots ?? []).map((lot) => ({ value: lot.id, label: `${lot.lotNumber}${lot.expired ? ` (EXPIRED ${lot.expiresOn})` : ''}` }))];
   return (

@@ -10,7 +10,7 @@ import { MixForm } from './mix-form';
 
 interface MixesSectionProps {
   sessionId: number;
-  /** Products the mix form offers: the session's, else every one its jobs' finish systems use. */
+  /** Products the mix form offers: the session's planned ones first, then the other coats of its jobs' finish systems. */
   products: Product[];
   allProducts: Map<number, Product>;
   canRecord: boolean;

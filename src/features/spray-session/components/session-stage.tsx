@@ -29,7 +29,8 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
   const { state } = session;
   const denibs = useSessionDenibs(session.id);
   const labels = new Map(plan.parts.map((part) => [part.id, part.label]));
-  const mixProducts = plan.sprayed.length ? plan.sprayed : [...plan.products.values()];
+  // The planned coat's products first; the jobs' other coats follow, for a next coat sprayed in the same session.
+  const mixProducts = [...plan.sprayed, ...[...plan.products.values()].filter((product) => !plan.sprayed.includes(product))];
   const coatsList = (
     <SessionCoats
       coats={coats}

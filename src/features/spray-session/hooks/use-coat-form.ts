@@ -6,7 +6,7 @@ import type { Mix } from '../../../../shared/schemas/checklist';
 import { createCoatSchema } from '../../../../shared/schemas/coat';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import type { Reading } from '../../../../shared/schemas/reading';
-import { coatStepsOf, nextCoatPosition } from '../utils/session-plan';
+import { coatStepsOf, suggestedStep } from '../utils/session-plan';
 import type { PickedPart } from '../utils/picked-part';
 import { useFinishWork } from './use-finish-work';
 import type { SessionPlan } from './use-session-plan';
@@ -46,7 +46,7 @@ export function useCoatForm(session: SpraySession, plan: SessionPlan, planned: P
   const product = step ? work.products.get(step.productId) : undefined;
   const productMixes = mixes.filter((mix) => mix.productId === product?.id);
   const systems = new Set(chosen.map((part) => work.systemByJob.get(part.jobId)?.id ?? null));
-  const suggested = first ? (plan.steps.get(first.id) ?? nextCoatPosition(system, work.ready.get(first.id))) : null;
+  const suggested = first ? suggestedStep(plan.steps.get(first.id), system, work.ready.get(first.id)) : null;
 
   const { setValue } = form;
   useEffect(() => {

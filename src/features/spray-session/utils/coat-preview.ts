@@ -16,26 +16,52 @@ type Window = { opensAt: Date; closesAt: Date | null };
  * the ready list's next window. A part between coats with no window left has missed it; an
  * already-closed window stands for that so the same "missed" stop shows as the server gives.
  */
-export function previousWindowOf(partIds: number[], ready: Map<number, ReadyPart>, sessionCoats: Coat[]): Window | null {
+export function previousWindowOf(
+  partIds: number[],
+  ready: Map<number, ReadyPart>,
+  sessionCoats: Coat[],
+): Window | null {
   // A coat whose parts were all denibbed since is no longer what the next coat waits on: the denib re-opened the window.
-  const denibbedSince = (coat: Coat) => partIds.every((id) => !coat.partIds.includes(id) || (ready.get(id)?.denibbedAt ?? '') > coat.sprayedAt);
+  const denibbedSince = (coat: Coat) =>
+    partIds.every((id) => !coat.partIds.includes(id) || (ready.get(id)?.denibbedAt ?? '') > coat.sprayedAt);
   const windows: Window[] = sessionCoats
     .filter((coat) => coat.partIds.some((id) => partIds.includes(id)) && !denibbedSince(coat))
-    .map((coat) => ({ opensAt: new Date(coat.recoatOpensAt), closesAt: coat.recoatClosesAt ? new Date(coat.recoatClosesAt) : null }));
+    .map((coat) => ({
+      opensAt: new Date(coat.recoatOpensAt),
+      closesAt: coat.recoatClosesAt ? new Date(coat.recoatClosesAt) : null,
+    }));
   for (const id of partIds) {
     const part = ready.get(id);
-    if (part?.nextWindowOpensAt) windows.push({ opensAt: new Date(part.nextWindowOpensAt), closesAt: part.nextWindowClosesAt ? new Date(part.nextWindowClosesAt) : null });
-    else if (part && part.state === 'in-finish' && part.coatsDone > 0) windows.push({ opensAt: new Date(0), closesAt: new Date(0) });
+    if (part?.nextWindowOpensAt)
+      windows.push({
+        opensAt: new Date(part.nextWindowOpensAt),
+        closesAt: part.nextWindowClosesAt ? new Date(part.nextWindowClosesAt) : null,
+      });
+    else if (part && part.state === 'in-finish' && part.coatsDone > 0)
+      windows.push({ opensAt: new Date(0), closesAt: new Date(0) });
   }
   return windows.sort((a, b) => b.opensAt.getTime() - a.opensAt.getTime())[0] ?? null;
 }
 
 /** The server's rule (shared): the parts' racks' drying temperatures, else the booth air. */
 export function dryingTempOf(parts: PickedPart[], racks: Rack[], airTempC: number): number {
-  return coatDryingTempC(parts.map((part) => racks.find((rack) => rack.id === part.rackId)?.dryingTempC ?? null), airTempC);
+  return coatDryingTempC(
+    parts.map((part) => racks.find((rack) => rack.id === part.rackId)?.dryingTempC ?? null),
+    airTempC,
+  );
 }
 
-interface CoatPreviewInput {
+/**
+ * The preview's clock ticks every few seconds, so it can read a moment before a pot that was just
+ * mixed; a coat from the pot cannot go on before it was mixed, so that moment counts as the mixing.
+ * The warnings themselves are the server's (shared).
+ */
+export function mixWarnings(mix: Mix | undefined, at: Date): CoatWarning[] {
+  if (!mix) return [];
+  return potWarnings(mix, new Date(Math.max(at.getTime(), Date.parse(mix.mixedAt))));
+}
+
+export interface CoatPreviewInput {
   product: Product;
   targetDryFilmUm: number | null;
   airTempC: number;
@@ -53,10 +79,12 @@ interface CoatPreviewInput {
 }
 
 /** The record the server will make, worked out before sending, so every stop can be answered first. */
-export function previewCoat(input: CoatPreviewInput): { record: CoatRecord; warnings: CoatWarning[] } | { problem: string } {
+export function previewCoat(
+  input: CoatPreviewInput,
+): { record: CoatRecord; warnings: CoatWarning[] } | { problem: string } {
   try {
     const record = computeCoatRecord({ ...input, sprayedAt: input.at });
-    return { record, warnings: [...record.warnings, ...(input.mix ? potWarnings(input.mix, input.at) : [])] };
+    return { record, warnings: [...record.warnings, ...mixWarnings(input.mix, input.at)] };
   } catch (error) {
     return { problem: error instanceof Error ? error.message : 'A value is out of range.' };
   }

@@ -1,6 +1,9 @@
 import { evaluateChecklist, type ChecklistEvaluation, type ChecklistProduct } from '../../../../shared/finishing/checklist';
+import type { FitnessFinding } from '../../../../shared/finishing/fitness';
 import { assessConditions } from '../../../../shared/finishing/conditions';
+import { sensorIsStale } from '../../../../shared/finishing/day-board';
 import { checklistSchema } from '../../../../shared/schemas/checklist';
+import type { Reading } from '../../../../shared/schemas/reading';
 
 interface LiveChecklist {
   evaluation: ChecklistEvaluation | null;
@@ -22,14 +25,15 @@ function dewOf(values: TypedConditions): LiveChecklist['dew'] {
   }
 }
 
-/** The same verdict the server will record, worked out as the sprayer fills the form in. */
-export function liveChecklist(values: unknown, booth: { minFaceVelocityMps: number }, products: ChecklistProduct[] | null): LiveChecklist {
+/** The same verdict the server will record, worked out as the sprayer fills the form in; `fitness` is null while it loads. */
+export function liveChecklist(values: unknown, booth: { minFaceVelocityMps: number }, products: ChecklistProduct[] | null, fitness: FitnessFinding[] | null = []): LiveChecklist {
   const dew = dewOf((values ?? {}) as TypedConditions);
   const parsed = checklistSchema.safeParse(values);
   if (!parsed.success) return { evaluation: null, missing: [...new Set(parsed.error.issues.map((issue) => issue.message))], dew };
   if (products === null) return { evaluation: null, missing: ['The products’ data sheets are still loading.'], dew };
+  if (fitness === null) return { evaluation: null, missing: ['The booth’s upkeep and the sprayer’s records are still loading.'], dew };
   try {
-    return { evaluation: evaluateChecklist(parsed.data, booth, products), missing: [], dew };
+    return { evaluation: evaluateChecklist(parsed.data, booth, products, fitness), missing: [], dew };
   } catch (error) {
     return { evaluation: null, missing: [error instanceof Error ? error.message : 'A value is out of range.'], dew };
   }
@@ -41,4 +45,12 @@ export function startBlockedReason(live: LiveChecklist, canOverride: boolean, ov
   if (live.evaluation.verdict !== 'stop') return null;
   if (canOverride) return (overrideReason ?? '').trim().length >= 3 ? null : 'The checks say stop. Put right what is listed, or give your reason to go ahead anyway.';
   return 'The checks say stop. Put right what is listed above; only a finishing lead can override a stop.';
+}
+
+/**
+ * The booth's last reading, offered as its conditions now only while it is recent (as long as a
+ * sensor counts as reporting): days-old figures say nothing about the air the coat goes into.
+ */
+export function currentReading(reading: Reading | null, now: Date): Reading | null {
+  return reading && !sensorIsStale(new Date(reading.at), now) ? reading : null;
 }

@@ -1,3 +1,5 @@
+import { missedWindowScuffGrit } from '../../../../shared/finishing/readiness';
+import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { calendarDateIn } from '../../../../shared/time';
 import { formatShopClock, shopZoneName } from '../../../lib/shop-time';
 
@@ -41,4 +43,17 @@ export function remainingMinutesWords(ms: number): string {
   const minutes = Math.max(0, Math.ceil(ms / 60_000));
   if (minutes >= 120) return `about ${Math.round(minutes / 60)} hours`;
   return minutes === 1 ? '1 minute' : `${minutes} minutes`;
+}
+
+/**
+ * In the booth's words, as the denib section and the ready board say it: "denib P320, then coat 2
+ * of 3", or "coat 2 of 3 (40 µm dry)". The server names the step ("Abrade P320", "Coat at 40 µm dry").
+ */
+export function nextStepWords(part: Pick<ReadyPart, 'nextStep' | 'abradeRequired' | 'coatsDone' | 'coatsTotal'>): string {
+  const coat = `coat ${Math.min(part.coatsDone + 1, part.coatsTotal)} of ${part.coatsTotal}`;
+  const grit = /^Abrade (.+)$/.exec(part.nextStep ?? '')?.[1];
+  if (grit) return `denib ${grit}, then ${coat}`;
+  const film = /^Coat at (.+)$/.exec(part.nextStep ?? '')?.[1];
+  const words = film ? `${coat} (${film})` : coat;
+  return part.abradeRequired ? `denib ${missedWindowScuffGrit} first (the window was missed), then ${words}` : words;
 }

@@ -20,6 +20,18 @@ export function nextCoatPosition(system: FinishSystem | undefined, ready: ReadyP
   return coatStepsOf(system)[ready?.coatsDone ?? 0]?.position ?? null;
 }
 
+/**
+ * The step the coat form starts on for a part: the one planned for it here, unless the part has
+ * had that coat already (then a second coat in the same session is its next coat), else its next.
+ */
+export function suggestedStep(planned: number | null | undefined, system: FinishSystem | undefined, ready: ReadyPart | undefined): number | null {
+  const next = nextCoatPosition(system, ready);
+  if (planned === null || planned === undefined) return next;
+  const plannedIndex = coatStepsOf(system).findIndex((step) => step.position === planned);
+  const hadIt = plannedIndex >= 0 && plannedIndex < (ready?.coatsDone ?? 0);
+  return hadIt && next !== null ? next : planned;
+}
+
 export function stepWords(step: FinishStep, units: UnitSystem): string {
   const number = `Step ${step.position + 1}`;
   if (step.kind === 'abrade') return `${number}: abrade ${step.grit}`;

@@ -59,7 +59,7 @@ export function CreateUserForm({ defaultUnits, siteChoice, onDone }: CreateUserF
         type="text"
         autoComplete="new-password"
         spellCheck={false}
-        hint="At least 10 characters. Give it to them in person; they can keep it or you can reset it later."
+        hint="At least 10 characters, not a common or easily guessed one. Give it to them in person; they can keep it or you can reset it later."
         error={errors.password?.message}
         registration={register('password')}
       />

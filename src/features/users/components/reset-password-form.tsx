@@ -40,7 +40,7 @@ export function ResetPasswordForm({ user, onDone }: { user: User; onDone: () => 
         type="text"
         autoComplete="new-password"
         spellCheck={false}
-        hint="At least 10 characters. Tell them in person."
+        hint="At least 10 characters, not a common or easily guessed one. Tell them in person."
         error={errors.password?.message}
         registration={register('password')}
       />

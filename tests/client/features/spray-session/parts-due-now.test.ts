@@ -3,7 +3,7 @@ import type { FinishSystem } from '../../../../shared/schemas/finish-system';
 import type { Part } from '../../../../shared/schemas/part';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
-import { partsDueNow, type FinishWork } from '../../../../src/features/spray-session/utils/session-plan';
+import { partsDueNow, suggestedStep, type FinishWork } from '../../../../src/features/spray-session/utils/session-plan';
 
 // Primer at 0, denib at 1, two topcoats at 2 and 3.
 const system = {
@@ -45,5 +45,23 @@ describe('partsDueNow', () => {
   it('takes nothing from a part with every coat on, or with no finish system', () => {
     const planned = session([{ partId: 1, stepPosition: 3 }, { partId: 9, stepPosition: 0 }]);
     expect(partsDueNow(planned, [part(1), { id: 9, jobId: 77 } as Part], work({ 1: 3 }), [])).toEqual([]);
+  });
+});
+
+describe('suggestedStep', () => {
+  const ready = (coatsDone: number) => ({ coatsDone }) as ReadyPart;
+  it('starts on the step planned here while the part has not had it', () => {
+    expect(suggestedStep(0, system, ready(0))).toBe(0);
+    expect(suggestedStep(3, system, ready(1))).toBe(3);
+  });
+  it('moves on to the part’s next coat once it has had the planned one, for a second coat in the same session', () => {
+    // Primer on and denibbed: the topcoat (position 2) is next, not the primer again.
+    expect(suggestedStep(0, system, ready(1))).toBe(2);
+  });
+  it('keeps the planned step when the part has had every coat (a re-spray is chosen by hand)', () => {
+    expect(suggestedStep(3, system, ready(3))).toBe(3);
+  });
+  it('takes the next coat when nothing is planned', () => {
+    expect(suggestedStep(null, system, ready(2))).toBe(3);
   });
 });

@@ -1,0 +1,61 @@
+import type { Coat } from '../../../../shared/schemas/coat';
+import { photoSubjectLabels, type CoatPhoto } from '../../../../shared/schemas/coat-photo';
+import { Button } from '../../../components/ui/button';
+
+interface CoatPhotosProps {
+  coat: Coat;
+  photos: CoatPhoto[];
+  onOpen: (photo: CoatPhoto) => void;
+  /** Left out for someone who may not add photos. */
+  onAdd?: (coat: Coat) => void;
+}
+
+/** Thumbnails of a coat's photos (and those of the versions it corrects); each opens full size. */
+export function CoatPhotos({ coat, photos, onOpen, onAdd }: CoatPhotosProps) {
+  if (photos.length === 0 && !onAdd) return null;
+  return (
+    <div className="mt-2">
+      {photos.length > 0 && (
+        <ul aria-label={`Photos of coat ${coat.id}`} className="flex flex-wrap gap-2">
+          {photos.map((photo) => (
+            <li key={photo.id}>
+              <button
+                type="button"
+                onClick={() => onOpen(photo)}
+                className="block size-16 overflow-hidden rounded-panel border border-maple-400 bg-maple-100 focus-visible:outline-3 focus-visible:outline-lacquer-600"
+                aria-label={`Open photo: ${photoSubjectLabels[photo.subject]}${photo.caption ? `, ${photo.caption}` : ''}`}
+              >
+                <img src={photo.url} alt="" loading="lazy" className="size-full object-cover" />
+              </button>
+            </li>
+          ))}
+        </ul>
+      )}
+      {onAdd && (
+        <Button variant="quiet" className="mt-1" onClick={() => onAdd(coat)} aria-label={`Add a photo to coat ${coat.id}`}>
+          Add photo
+        </Button>
+      )}
+    </div>
+  );
+}
+
+/** One photo as large as the screen allows, with what it shows and who took it. */
+export function PhotoView({ photo, when }: { photo: CoatPhoto; when: string }) {
+  return (
+    <figure>
+      <img src={photo.url} alt={`${photoSubjectLabels[photo.subject]} on coat ${photo.coatId}${photo.caption ? `: ${photo.caption}` : ''}`} className="max-h-[65dvh] w-full rounded-panel bg-maple-100 object-contain" />
+      <figcaption className="mt-2">
+        <span className="font-semibold">{photoSubjectLabels[photo.subject]}</span>
+        {photo.caption && <span>: {photo.caption}</span>}
+        <span className="block text-maple-700">
+          {photo.takenByName}, {when}
+          {photo.coatId !== photo.shownWithCoatId && ` · taken with coat #${photo.coatId}, before its correction`}
+        </span>
+        <a href={photo.url} target="_blank" rel="noreferrer" className="mt-1 inline-flex min-h-touch items-center font-semibold text-lacquer-800 underline underline-offset-4">
+          Open full size
+        </a>
+      </figcaption>
+    </figure>
+  );
+}
