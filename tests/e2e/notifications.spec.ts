@@ -67,7 +67,8 @@ test.describe('e-mail notifications', () => {
       .getByRole('listitem')
       .filter({ hasText: demo.sprayer.email })
       .filter({ hasText: 'Spray session booked or moved' })
-      .first();
+      // Other tests book sessions for the same sprayer: this one is the message about our session.
+      .filter({ hasText: `Spray session ${sessionId} is booked or moved` });
     await expect(message).toBeVisible({ timeout: 90_000 });
     await message.locator('summary').click();
     await expect(page.getByText(`Spray session ${sessionId} is booked or moved`)).toBeVisible();

@@ -147,7 +147,9 @@ test.describe('spray session', () => {
     await expect(coatForm.getByRole('button', { name: 'Record coat on this tablet' })).toBeVisible();
     await coatForm.getByRole('button', { name: 'Planned parts' }).click();
     await coatForm.getByRole('checkbox', { name: new RegExp(partLabel) }).check();
-    await expect(coatForm.getByLabel('Step')).toHaveValue('0');
+    // Chosen by hand, the door's step follows it to its next coat; the sprayer means a second pass of the first.
+    await expect(coatForm.getByLabel('Step')).toHaveValue('2');
+    await coatForm.getByLabel('Step').selectOption('0');
     await box(coatForm, 'Wet film reading').fill('150');
     await expect(coatForm.getByText(/not ready to recoat until/)).toBeVisible();
     await coatForm.getByLabel('Why this coat goes on anyway').fill('Second pass on the edges while the first is wet');
