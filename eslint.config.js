@@ -3,6 +3,7 @@ import pluginQuery from '@tanstack/eslint-plugin-query';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
+import { clientBoundaries } from './eslint/client-boundaries.js';
 
 const processEnv = {
   selector: "MemberExpression[object.name='process'][property.name='env']",
@@ -21,10 +22,12 @@ export default tseslint.config(
   {
     files: ['src/**/*.{ts,tsx}'],
     languageOptions: { globals: globals.browser },
-    plugins: { 'react-hooks': reactHooks, '@tanstack/query': pluginQuery },
+    plugins: { 'react-hooks': reactHooks, '@tanstack/query': pluginQuery, boothwright: clientBoundaries },
     rules: {
       ...reactHooks.configs.recommended.rules,
       ...pluginQuery.configs.recommended.rules,
+      'boothwright/feature-imports': 'error',
+      'boothwright/no-api-paths-in-features': 'error',
       // We do not run the React Compiler; TanStack Table's hook is fine without memoisation.
       'react-hooks/incompatible-library': 'off',
       'no-restricted-imports': ['error', { patterns: [{ group: ['**/server/**', 'typeorm', 'express'], message: 'The client never imports server code.' }] }],
@@ -78,7 +81,7 @@ export default tseslint.config(
     },
   },
   {
-    files: ['tests/**/*.{ts,tsx,mjs}', 'bench/**/*.{ts,mjs}', '*.config.{ts,js}', 'scripts/**/*.{ts,mjs}'],
+    files: ['tests/**/*.{ts,tsx,mjs}', 'bench/**/*.{ts,mjs}', '*.config.{ts,js}', 'eslint/**/*.js', 'scripts/**/*.{ts,mjs}'],
     languageOptions: { globals: globals.node },
   },
   {

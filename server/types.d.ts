@@ -1,5 +1,5 @@
 import 'express-session';
-import type { SessionUser } from '../shared/schemas/auth';
+import type { SignedInUser } from '../shared/schemas/auth';
 import type { SensorBooth } from './services/readings';
 
 declare module 'express-session' {
@@ -11,7 +11,7 @@ declare module 'express-session' {
 declare global {
   namespace Express {
     // eslint-disable-next-line @typescript-eslint/no-empty-object-type
-    interface User extends SessionUser {}
+    interface User extends SignedInUser {}
     interface Request {
       /** Set when a booth's sensor posts with its bearer token instead of a sign-in. */
       sensorBooth?: SensorBooth;

@@ -1,5 +1,5 @@
 import { seesAllSites } from '../../shared/permissions';
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import { AppError } from './app-error';
 
 /** Which sites one request may see and change. */
@@ -22,7 +22,7 @@ export const oneSite = (siteId: number): SiteScope => ({ siteId, homeSiteId: sit
  * From the signed-in user: an admin sees every site, or the one named by `?siteId=` on a route
  * that takes it; everyone else is held to their own site whatever they ask for.
  */
-export function siteScopeFor(user: Pick<SessionUser, 'role' | 'siteId'> | null | undefined, requestedSiteId?: number): SiteScope {
+export function siteScopeFor(user: Pick<SignedInUser, 'role' | 'siteId'> | null | undefined, requestedSiteId?: number): SiteScope {
   if (!user) return everySite;
   if (seesAllSites(user.role)) return { siteId: requestedSiteId ?? null, homeSiteId: user.siteId, allSites: true };
   return oneSite(user.siteId);

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { errorEnvelopeSchema } from '../../shared/errors';
+import { signInCookieName } from '../middleware/sign-in-session';
 import type { ApiRoute } from './route';
 
 const jsonSchema = (schema: z.ZodType, io: 'input' | 'output') => z.toJSONSchema(schema, { io, unrepresentable: 'any' });
@@ -69,7 +70,7 @@ export function buildOpenApiDocument(routes: ApiRoute[]) {
     },
     components: {
       securitySchemes: {
-        signIn: { type: 'apiKey', in: 'cookie', name: 'bw.sid' },
+        signIn: { type: 'apiKey', in: 'cookie', name: signInCookieName },
         sensorToken: { type: 'http', scheme: 'bearer', description: 'A booth sensor’s token, from POST /api/booths/{id}/sensor-token' },
       },
     },

@@ -2,7 +2,7 @@ import type { Request, Response } from 'express';
 import type passport from 'passport';
 import type { z } from 'zod';
 import type { Permission } from '../../shared/permissions';
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import type { AppConfig } from '../config/env';
 import type { SiteScope } from '../lib/site-scope';
 import type { Actor } from '../services/audit';
@@ -60,7 +60,7 @@ export interface RouteContext {
   /** Every service, bound to this request's site scope. */
   services: ServiceSet;
   scope: SiteScope;
-  user: SessionUser | null;
+  user: SignedInUser | null;
   actor: Actor;
   /** The actor for coat, pot and correction writes: anyone who may not book sessions runs only their own. */
   runner: SpraySessionRunner;

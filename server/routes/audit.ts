@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { auditEntrySchema } from '../../shared/schemas/audit';
-import { listSchema, pageFields } from '../../shared/schemas/common';
+import { auditListSchema } from '../../shared/schemas/audit';
+import { pageFields } from '../../shared/schemas/common';
 import { siteFilterFields } from '../../shared/schemas/site';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
@@ -12,7 +12,7 @@ export const auditRoutes: ApiRoute[] = [
     access: 'audit:read',
     sites: 'site',
     query: z.object({ ...pageFields(50, 200), ...siteFilterFields }),
-    response: { status: 200, schema: listSchema(auditEntrySchema) },
+    response: { status: 200, schema: auditListSchema },
     handler: ({ query }, { services }) => services.audit.list(query),
   }),
 ];

@@ -1,4 +1,4 @@
-import { csrfResponseSchema, loginSchema, userResponseSchema } from '../../shared/schemas/auth';
+import { csrfResponseSchema, loginSchema, signedInUserResponseSchema } from '../../shared/schemas/auth';
 import { updateMeSchema } from '../../shared/schemas/user';
 import { authenticate, logIn, logOut } from '../auth/sign-in';
 import { AppError } from '../lib/app-error';
@@ -23,7 +23,7 @@ export const authRoutes: ApiRoute[] = [
     sites: 'own',
     limit: 'sign-in',
     body: loginSchema,
-    response: { status: 200, schema: userResponseSchema },
+    response: { status: 200, schema: signedInUserResponseSchema },
     handler: async (_input, { auth, req, res }) => {
       const user = await authenticate(auth, req, res);
       if (!user) throw new AppError('unauthenticated', 'E-mail or password is wrong, or the account is disabled');
@@ -50,7 +50,7 @@ export const authRoutes: ApiRoute[] = [
     summary: 'The signed-in user',
     access: 'signed-in',
     sites: 'own',
-    response: { status: 200, schema: userResponseSchema },
+    response: { status: 200, schema: signedInUserResponseSchema },
     handler: (_input, { user }) => ({ user }),
   }),
   defineRoute({
@@ -60,7 +60,7 @@ export const authRoutes: ApiRoute[] = [
     access: 'signed-in',
     sites: 'own',
     body: updateMeSchema,
-    response: { status: 200, schema: userResponseSchema },
+    response: { status: 200, schema: signedInUserResponseSchema },
     handler: async ({ body }, { services, user, actor }) => ({ user: await services.users.updateSelf(user!.id, body, actor) }),
   }),
 ];

@@ -1,9 +1,6 @@
-import { z } from 'zod';
-import { coatQuerySchema, coatSchema, correctCoatSchema, createCoatSchema } from '../../shared/schemas/coat';
-import { idParamsSchema, listSchema } from '../../shared/schemas/common';
+import { coatCreatedResponseSchema, coatListSchema, coatQuerySchema, coatResponseSchema, correctCoatSchema, createCoatSchema } from '../../shared/schemas/coat';
+import { idParamsSchema } from '../../shared/schemas/common';
 import { defineRoute, Reply, type ApiRoute } from '../registry/route';
-
-const coatEnvelope = z.object({ coat: coatSchema });
 
 /** The coat log is each site's: coats belong to their spray session's booth's site. */
 export const coatRoutes: ApiRoute[] = [
@@ -14,7 +11,7 @@ export const coatRoutes: ApiRoute[] = [
     access: 'coats:write',
     sites: 'site',
     body: createCoatSchema,
-    response: { status: 201, otherStatuses: [200], schema: coatEnvelope.extend({ replayed: z.boolean() }) },
+    response: { status: 201, otherStatuses: [200], schema: coatCreatedResponseSchema },
     handler: async ({ body }, { services, runner }) => {
       const { coat, replayed } = await services.coats.create(body, runner);
       return new Reply(replayed ? 200 : 201, { coat, replayed });
@@ -27,7 +24,7 @@ export const coatRoutes: ApiRoute[] = [
     access: 'coats:read',
     sites: 'site',
     query: coatQuerySchema,
-    response: { status: 200, schema: listSchema(coatSchema) },
+    response: { status: 200, schema: coatListSchema },
     handler: ({ query }, { services }) => services.coats.list(query),
   }),
   defineRoute({
@@ -37,7 +34,7 @@ export const coatRoutes: ApiRoute[] = [
     access: 'coats:read',
     sites: 'site',
     params: idParamsSchema,
-    response: { status: 200, schema: coatEnvelope },
+    response: { status: 200, schema: coatResponseSchema },
     handler: async ({ params }, { services }) => ({ coat: await services.coats.get(params.id) }),
   }),
   defineRoute({
@@ -48,7 +45,7 @@ export const coatRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     body: correctCoatSchema,
-    response: { status: 201, schema: coatEnvelope },
+    response: { status: 201, schema: coatResponseSchema },
     handler: async ({ params, body }, { services, runner }) => ({ coat: await services.coats.correct(params.id, body, runner) }),
   }),
 ];

@@ -1,5 +1,11 @@
-import { z } from 'zod';
-import { createCrewRecordSchema, crewDetailSchema, crewRecordSchema, crewStatusQuerySchema, crewStatusSchema, crewUserParamsSchema } from '../../shared/schemas/crew';
+import {
+  createCrewRecordSchema,
+  crewDetailResponseSchema,
+  crewRecordResponseSchema,
+  crewStatusListSchema,
+  crewStatusQuerySchema,
+  crewUserParamsSchema,
+} from '../../shared/schemas/crew';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 /** Crew protection records belong to the person's site; details to the person and the admin, status to a lead. */
@@ -7,11 +13,12 @@ export const crewRoutes: ApiRoute[] = [
   defineRoute({
     method: 'get',
     path: '/api/crew',
-    summary: 'Each sprayer’s and lead’s fit test, health surveillance and training as a status only (valid, due soon, lapsed, none)',
+    summary:
+      'Each sprayer’s and lead’s fit test, health surveillance and training as a status only (valid, due soon, lapsed, none)',
     access: 'crew:status',
     sites: 'site',
     query: crewStatusQuerySchema,
-    response: { status: 200, schema: z.object({ items: z.array(crewStatusSchema) }) },
+    response: { status: 200, schema: crewStatusListSchema },
     handler: async (_input, { services }) => ({ items: await services.crew.statuses() }),
   }),
   defineRoute({
@@ -21,7 +28,7 @@ export const crewRoutes: ApiRoute[] = [
     access: 'crew:own',
     sites: 'site',
     params: crewUserParamsSchema,
-    response: { status: 200, schema: z.object({ crew: crewDetailSchema }) },
+    response: { status: 200, schema: crewDetailResponseSchema },
     handler: async ({ params }, { services, user }) => ({ crew: await services.crew.detail(params.userId, user!) }),
   }),
   defineRoute({
@@ -32,7 +39,9 @@ export const crewRoutes: ApiRoute[] = [
     sites: 'site',
     params: crewUserParamsSchema,
     body: createCrewRecordSchema,
-    response: { status: 201, schema: z.object({ record: crewRecordSchema }) },
-    handler: async ({ params, body }, { services, actor }) => ({ record: await services.crew.record(params.userId, body, actor) }),
+    response: { status: 201, schema: crewRecordResponseSchema },
+    handler: async ({ params, body }, { services, actor }) => ({
+      record: await services.crew.record(params.userId, body, actor),
+    }),
   }),
 ];

@@ -1,6 +1,4 @@
-import { z } from 'zod';
-import { listSchema } from '../../shared/schemas/common';
-import { createDenibSchema, denibQuerySchema, denibSchema } from '../../shared/schemas/denib';
+import { createDenibSchema, denibListSchema, denibQuerySchema, denibResponseSchema } from '../../shared/schemas/denib';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 /**
@@ -15,7 +13,7 @@ export const denibRoutes: ApiRoute[] = [
     access: 'coats:write',
     sites: 'site',
     body: createDenibSchema,
-    response: { status: 201, schema: z.object({ denib: denibSchema }) },
+    response: { status: 201, schema: denibResponseSchema },
     handler: async ({ body }, { services, runner }) => ({ denib: await services.denibs.create(body, runner) }),
   }),
   defineRoute({
@@ -25,7 +23,7 @@ export const denibRoutes: ApiRoute[] = [
     access: 'coats:read',
     sites: 'site',
     query: denibQuerySchema,
-    response: { status: 200, schema: listSchema(denibSchema) },
+    response: { status: 200, schema: denibListSchema },
     handler: ({ query }, { services }) => services.denibs.list(query),
   }),
 ];

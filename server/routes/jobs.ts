@@ -1,9 +1,6 @@
-import { z } from 'zod';
-import { idParamsSchema, listSchema } from '../../shared/schemas/common';
-import { createJobSchema, estimateQuerySchema, estimateSchema, jobListQuerySchema, jobSchema, updateJobSchema } from '../../shared/schemas/job';
+import { idParamsSchema } from '../../shared/schemas/common';
+import { createJobSchema, estimateQuerySchema, estimateResponseSchema, jobListQuerySchema, jobListSchema, jobResponseSchema, updateJobSchema } from '../../shared/schemas/job';
 import { defineRoute, type ApiRoute } from '../registry/route';
-
-const jobEnvelope = z.object({ job: jobSchema });
 
 /** Jobs are the group's work orders: every site reads the same job book. */
 export const jobRoutes: ApiRoute[] = [
@@ -14,7 +11,7 @@ export const jobRoutes: ApiRoute[] = [
     access: 'jobs:read',
     sites: 'group',
     query: jobListQuerySchema,
-    response: { status: 200, schema: listSchema(jobSchema) },
+    response: { status: 200, schema: jobListSchema },
     handler: ({ query }, { services }) => services.jobs.list(query),
   }),
   defineRoute({
@@ -24,7 +21,7 @@ export const jobRoutes: ApiRoute[] = [
     access: 'jobs:write',
     sites: 'group',
     body: createJobSchema,
-    response: { status: 201, schema: jobEnvelope },
+    response: { status: 201, schema: jobResponseSchema },
     handler: async ({ body }, { services, actor }) => ({ job: await services.jobs.create(body, actor) }),
   }),
   defineRoute({
@@ -34,7 +31,7 @@ export const jobRoutes: ApiRoute[] = [
     access: 'jobs:read',
     sites: 'group',
     params: idParamsSchema,
-    response: { status: 200, schema: jobEnvelope },
+    response: { status: 200, schema: jobResponseSchema },
     handler: async ({ params }, { services }) => ({ job: await services.jobs.get(params.id) }),
   }),
   defineRoute({
@@ -45,7 +42,7 @@ export const jobRoutes: ApiRoute[] = [
     sites: 'group',
     params: idParamsSchema,
     body: updateJobSchema,
-    response: { status: 200, schema: jobEnvelope },
+    response: { status: 200, schema: jobResponseSchema },
     handler: async ({ params, body }, { services, actor }) => ({ job: await services.jobs.update(params.id, body, actor) }),
   }),
   defineRoute({
@@ -56,7 +53,7 @@ export const jobRoutes: ApiRoute[] = [
     sites: 'group',
     params: idParamsSchema,
     query: estimateQuerySchema,
-    response: { status: 200, schema: z.object({ estimate: estimateSchema }) },
+    response: { status: 200, schema: estimateResponseSchema },
     handler: async ({ params, query }, { services }) => ({ estimate: await services.estimates.forJob(params.id, query) }),
   }),
 ];

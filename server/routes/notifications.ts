@@ -1,6 +1,4 @@
-import { z } from 'zod';
-import { listSchema } from '../../shared/schemas/common';
-import { mailboxMessageSchema, notificationSchema } from '../../shared/schemas/notification';
+import { mailboxSchema, myNotificationsSchema } from '../../shared/schemas/notification';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 export const notificationRoutes: ApiRoute[] = [
@@ -10,7 +8,7 @@ export const notificationRoutes: ApiRoute[] = [
     summary: 'The signed-in user’s recent e-mail notifications',
     access: 'signed-in',
     sites: 'own',
-    response: { status: 200, schema: z.object({ items: z.array(notificationSchema) }) },
+    response: { status: 200, schema: myNotificationsSchema },
     handler: async (_input, { services, user }) => ({ items: await services.notifications.recentFor(user!.id) }),
   }),
   defineRoute({
@@ -19,7 +17,7 @@ export const notificationRoutes: ApiRoute[] = [
     summary: 'The development mailbox: what the local fake SMTP server received (404 when real SMTP is set)',
     access: 'users:read',
     sites: 'own',
-    response: { status: 200, schema: listSchema(mailboxMessageSchema) },
+    response: { status: 200, schema: mailboxSchema },
     handler: (_input, { services }) => services.notifications.mailbox(),
   }),
 ];

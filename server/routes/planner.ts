@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { acceptPlanResponseSchema, acceptPlanSchema, planRequestSchema, planSchema } from '../../shared/schemas/planner';
+import { acceptPlanResponseSchema, acceptPlanSchema, planRequestSchema, planResponseSchema } from '../../shared/schemas/planner';
 import { siteFilterFields } from '../../shared/schemas/site';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
@@ -12,7 +12,7 @@ export const plannerRoutes: ApiRoute[] = [
     sites: 'site',
     query: z.object(siteFilterFields),
     body: planRequestSchema,
-    response: { status: 200, schema: z.object({ plan: planSchema }) },
+    response: { status: 200, schema: planResponseSchema },
     handler: async ({ body }, { services }) => ({ plan: await services.planner.propose(body.jobIds, body.horizonDays) }),
   }),
   defineRoute({

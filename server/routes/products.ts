@@ -1,10 +1,8 @@
 import { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
-import { createLotSchema, createProductSchema, documentKindSchema, lotSchema, productListQuerySchema, productListSchema, productSchema, updateProductSchema } from '../../shared/schemas/product';
+import { createLotSchema, createProductSchema, documentKindSchema, lotResponseSchema, productListQuerySchema, productListSchema, productResponseSchema, updateProductSchema } from '../../shared/schemas/product';
 import { defineRoute, type ApiRoute } from '../registry/route';
 import { maxUploadBytes } from '../services/files';
-
-const productEnvelope = z.object({ product: productSchema });
 
 /** Data sheets, their lots and documents are the group's: every site sprays from the same sheets. */
 export const productRoutes: ApiRoute[] = [
@@ -25,7 +23,7 @@ export const productRoutes: ApiRoute[] = [
     access: 'products:write',
     sites: 'group',
     body: createProductSchema,
-    response: { status: 201, schema: productEnvelope },
+    response: { status: 201, schema: productResponseSchema },
     handler: async ({ body }, { services, actor }) => ({ product: await services.products.create(body, actor) }),
   }),
   defineRoute({
@@ -35,7 +33,7 @@ export const productRoutes: ApiRoute[] = [
     access: 'products:read',
     sites: 'group',
     params: idParamsSchema,
-    response: { status: 200, schema: productEnvelope },
+    response: { status: 200, schema: productResponseSchema },
     handler: async ({ params }, { services }) => ({ product: await services.products.get(params.id) }),
   }),
   defineRoute({
@@ -46,7 +44,7 @@ export const productRoutes: ApiRoute[] = [
     sites: 'group',
     params: idParamsSchema,
     body: updateProductSchema,
-    response: { status: 200, schema: productEnvelope },
+    response: { status: 200, schema: productResponseSchema },
     handler: async ({ params, body }, { services, actor }) => ({ product: await services.products.update(params.id, body, actor) }),
   }),
   defineRoute({
@@ -57,7 +55,7 @@ export const productRoutes: ApiRoute[] = [
     sites: 'group',
     params: idParamsSchema,
     body: createLotSchema,
-    response: { status: 201, schema: z.object({ lot: lotSchema }) },
+    response: { status: 201, schema: lotResponseSchema },
     handler: async ({ params, body }, { services, actor }) => ({ lot: await services.products.addLot(params.id, body, actor) }),
   }),
   defineRoute({
@@ -68,7 +66,7 @@ export const productRoutes: ApiRoute[] = [
     sites: 'group',
     params: idParamsSchema,
     multipart: { fields: z.object({ kind: documentKindSchema }), file: { maxBytes: maxUploadBytes, description: 'The data sheet, a PDF' } },
-    response: { status: 201, schema: productEnvelope },
+    response: { status: 201, schema: productResponseSchema },
     handler: async ({ params, form, file }, { services, actor }) => ({ product: await services.products.attachDocument(params.id, form.kind, file, actor) }),
   }),
 ];

@@ -1,6 +1,4 @@
-import { z } from 'zod';
-import { listSchema } from '../../shared/schemas/common';
-import { createReadingSchema, readingQuerySchema, readingSchema } from '../../shared/schemas/reading';
+import { createReadingSchema, readingListSchema, readingQuerySchema, readingResponseSchema } from '../../shared/schemas/reading';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 /** Conditions in a site's booths and at its racks are that site's. */
@@ -12,7 +10,7 @@ export const readingRoutes: ApiRoute[] = [
     access: { sensorOr: 'readings:write' },
     sites: 'site',
     body: createReadingSchema,
-    response: { status: 201, schema: z.object({ reading: readingSchema }) },
+    response: { status: 201, schema: readingResponseSchema },
     handler: async ({ body }, { services, sensor, user }) => {
       const source = sensor ? { userId: null, sensorBoothId: sensor.boothId } : { userId: user!.id };
       return { reading: await services.readings.record(body, source) };
@@ -25,7 +23,7 @@ export const readingRoutes: ApiRoute[] = [
     access: 'booths:read',
     sites: 'site',
     query: readingQuerySchema,
-    response: { status: 200, schema: listSchema(readingSchema) },
+    response: { status: 200, schema: readingListSchema },
     handler: ({ query }, { services }) => services.readings.list(query),
   }),
 ];

@@ -1,8 +1,5 @@
-import { z } from 'zod';
-import { shopSettingsSchema, updateShopSettingsSchema } from '../../shared/schemas/settings';
+import { shopSettingsResponseSchema, updateShopSettingsSchema } from '../../shared/schemas/settings';
 import { defineRoute, type ApiRoute } from '../registry/route';
-
-const settingsEnvelope = z.object({ settings: shopSettingsSchema });
 
 /** The shop's settings are the group's (one timezone and one set of planning defaults). */
 export const settingsRoutes: ApiRoute[] = [
@@ -12,7 +9,7 @@ export const settingsRoutes: ApiRoute[] = [
     summary: 'Shop settings',
     access: 'settings:read',
     sites: 'group',
-    response: { status: 200, schema: settingsEnvelope },
+    response: { status: 200, schema: shopSettingsResponseSchema },
     handler: async (_input, { services }) => ({ settings: await services.settings.get() }),
   }),
   defineRoute({
@@ -22,7 +19,7 @@ export const settingsRoutes: ApiRoute[] = [
     access: 'settings:write',
     sites: 'group',
     body: updateShopSettingsSchema,
-    response: { status: 200, schema: settingsEnvelope },
+    response: { status: 200, schema: shopSettingsResponseSchema },
     handler: async ({ body }, { services, actor }) => ({ settings: await services.settings.update(body, actor) }),
   }),
 ];

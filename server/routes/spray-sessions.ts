@@ -1,12 +1,16 @@
-import { z } from 'zod';
 import { can } from '../../shared/permissions';
-import { createMixSchema, mixSchema } from '../../shared/schemas/checklist';
-import { idParamsSchema, listSchema } from '../../shared/schemas/common';
-import { createSpraySessionSchema, spraySessionCautionsSchema, spraySessionQuerySchema, spraySessionSchema, updateSpraySessionSchema } from '../../shared/schemas/spray-session';
-import { sessionFitnessSchema } from '../../shared/schemas/upkeep';
+import { createMixSchema, mixListSchema, mixResponseSchema } from '../../shared/schemas/checklist';
+import { idParamsSchema } from '../../shared/schemas/common';
+import {
+  createSpraySessionSchema,
+  spraySessionCautionsSchema,
+  spraySessionListSchema,
+  spraySessionQuerySchema,
+  spraySessionResponseSchema,
+  updateSpraySessionSchema,
+} from '../../shared/schemas/spray-session';
+import { sessionFitnessResponseSchema } from '../../shared/schemas/upkeep';
 import { defineRoute, type ApiRoute } from '../registry/route';
-
-const spraySessionEnvelope = z.object({ spraySession: spraySessionSchema });
 
 /** Spray sessions belong to their booth's site, and so do their pots and cautions. */
 export const spraySessionRoutes: ApiRoute[] = [
@@ -17,7 +21,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     access: 'spray-sessions:read',
     sites: 'site',
     query: spraySessionQuerySchema,
-    response: { status: 200, schema: listSchema(spraySessionSchema) },
+    response: { status: 200, schema: spraySessionListSchema },
     handler: ({ query }, { services }) => services.spraySessions.list(query),
   }),
   defineRoute({
@@ -27,7 +31,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     access: 'spray-sessions:write',
     sites: 'site',
     body: createSpraySessionSchema,
-    response: { status: 201, schema: spraySessionEnvelope },
+    response: { status: 201, schema: spraySessionResponseSchema },
     handler: async ({ body }, { services, actor }) => ({ spraySession: await services.spraySessions.create(body, actor) }),
   }),
   defineRoute({
@@ -37,7 +41,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     access: 'spray-sessions:read',
     sites: 'site',
     params: idParamsSchema,
-    response: { status: 200, schema: spraySessionEnvelope },
+    response: { status: 200, schema: spraySessionResponseSchema },
     handler: async ({ params }, { services }) => ({ spraySession: await services.spraySessions.get(params.id) }),
   }),
   defineRoute({
@@ -48,7 +52,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     body: updateSpraySessionSchema,
-    response: { status: 200, schema: spraySessionEnvelope },
+    response: { status: 200, schema: spraySessionResponseSchema },
     handler: async ({ params, body }, { services, actor, user }) => {
       const spraySessionActor = { ...actor, mayOverride: can(user?.role, 'spray-sessions:write') };
       return { spraySession: await services.spraySessions.update(params.id, body, spraySessionActor) };
@@ -71,7 +75,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     access: 'upkeep:read',
     sites: 'site',
     params: idParamsSchema,
-    response: { status: 200, schema: z.object({ fitness: sessionFitnessSchema }) },
+    response: { status: 200, schema: sessionFitnessResponseSchema },
     handler: async ({ params }, { services, user }) => ({ fitness: await services.fitness.forSpraySession(params.id, user) }),
   }),
   defineRoute({
@@ -81,7 +85,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     access: 'spray-sessions:read',
     sites: 'site',
     params: idParamsSchema,
-    response: { status: 200, schema: z.object({ items: z.array(mixSchema) }) },
+    response: { status: 200, schema: mixListSchema },
     handler: async ({ params }, { services }) => ({ items: await services.mixes.list(params.id) }),
   }),
   defineRoute({
@@ -92,7 +96,7 @@ export const spraySessionRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     body: createMixSchema,
-    response: { status: 201, schema: z.object({ mix: mixSchema }) },
+    response: { status: 201, schema: mixResponseSchema },
     handler: async ({ params, body }, { services, runner }) => ({ mix: await services.mixes.create(params.id, body, runner) }),
   }),
 ];

@@ -1,20 +1,19 @@
-import { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
 import {
-  boothUpkeepSchema,
+  boothUpkeepResponseSchema,
   createExtractionTestSchema,
   createFilterBankSchema,
   createFilterChangeSchema,
   createFireInspectionSchema,
   createGaugeReadingSchema,
-  extractionTestSchema,
-  filterBankSchema,
-  filterChangeSchema,
-  fireInspectionSchema,
-  gaugeReadingSchema,
+  extractionTestResponseSchema,
+  filterBankResponseSchema,
+  filterChangeResponseSchema,
+  fireInspectionResponseSchema,
+  gaugeReadingResponseSchema,
   updateFilterBankSchema,
   upkeepDueQuerySchema,
-  upkeepDueSchema,
+  upkeepDueResponseSchema,
 } from '../../shared/schemas/upkeep';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
@@ -23,21 +22,23 @@ export const upkeepRoutes: ApiRoute[] = [
   defineRoute({
     method: 'get',
     path: '/api/booths/:id/upkeep',
-    summary: 'A booth’s upkeep: filter banks with what their gauges say, the last extraction test and fire inspection with their due dates, and the recent record',
+    summary:
+      'A booth’s upkeep: filter banks with what their gauges say, the last extraction test and fire inspection with their due dates, and the recent record',
     access: 'upkeep:read',
     sites: 'site',
     params: idParamsSchema,
-    response: { status: 200, schema: z.object({ upkeep: boothUpkeepSchema }) },
+    response: { status: 200, schema: boothUpkeepResponseSchema },
     handler: async ({ params }, { services }) => ({ upkeep: await services.upkeep.overview(params.id) }),
   }),
   defineRoute({
     method: 'get',
     path: '/api/upkeep/due',
-    summary: 'Booths and people not fit to spray or due soon (?withinDays; an admin ?siteId); a sprayer sees only their own crew records',
+    summary:
+      'Booths and people not fit to spray or due soon (?withinDays; an admin ?siteId); a sprayer sees only their own crew records',
     access: 'upkeep:read',
     sites: 'site',
     query: upkeepDueQuerySchema,
-    response: { status: 200, schema: z.object({ due: upkeepDueSchema }) },
+    response: { status: 200, schema: upkeepDueResponseSchema },
     handler: async ({ query }, { services, user }) => ({ due: await services.upkeepDue.due(user!, query.withinDays) }),
   }),
   defineRoute({
@@ -47,7 +48,7 @@ export const upkeepRoutes: ApiRoute[] = [
     access: 'upkeep:write',
     sites: 'site',
     body: createFilterBankSchema,
-    response: { status: 201, schema: z.object({ filterBank: filterBankSchema }) },
+    response: { status: 201, schema: filterBankResponseSchema },
     handler: async ({ body }, { services, actor }) => ({ filterBank: await services.upkeep.createBank(body, actor) }),
   }),
   defineRoute({
@@ -58,17 +59,20 @@ export const upkeepRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     body: updateFilterBankSchema,
-    response: { status: 200, schema: z.object({ filterBank: filterBankSchema }) },
-    handler: async ({ params, body }, { services, actor }) => ({ filterBank: await services.upkeep.updateBank(params.id, body, actor) }),
+    response: { status: 200, schema: filterBankResponseSchema },
+    handler: async ({ params, body }, { services, actor }) => ({
+      filterBank: await services.upkeep.updateBank(params.id, body, actor),
+    }),
   }),
   defineRoute({
     method: 'post',
     path: '/api/readings/filter-gauge',
-    summary: 'Record a filter gauge reading (signed in, or the booth’s sensor with Authorization: Bearer <token>, for its own booth’s banks)',
+    summary:
+      'Record a filter gauge reading (signed in, or the booth’s sensor with Authorization: Bearer <token>, for its own booth’s banks)',
     access: { sensorOr: 'upkeep:log' },
     sites: 'site',
     body: createGaugeReadingSchema,
-    response: { status: 201, schema: z.object({ reading: gaugeReadingSchema }) },
+    response: { status: 201, schema: gaugeReadingResponseSchema },
     handler: async ({ body }, { services, sensor, actor }) => {
       const source = sensor ? { actor: null, sensorBoothId: sensor.boothId } : { actor };
       return { reading: await services.upkeep.recordGaugeReading(body, source) };
@@ -81,18 +85,23 @@ export const upkeepRoutes: ApiRoute[] = [
     access: 'upkeep:log',
     sites: 'site',
     body: createFilterChangeSchema,
-    response: { status: 201, schema: z.object({ filterChange: filterChangeSchema }) },
-    handler: async ({ body }, { services, actor }) => ({ filterChange: await services.upkeep.recordFilterChange(body, actor) }),
+    response: { status: 201, schema: filterChangeResponseSchema },
+    handler: async ({ body }, { services, actor }) => ({
+      filterChange: await services.upkeep.recordFilterChange(body, actor),
+    }),
   }),
   defineRoute({
     method: 'post',
     path: '/api/extraction-tests',
-    summary: 'Record an extraction test: face velocity at points across the face (the mean is worked out), clearance time measured, who tested, next due',
+    summary:
+      'Record an extraction test: face velocity at points across the face (the mean is worked out), clearance time measured, who tested, next due',
     access: 'upkeep:write',
     sites: 'site',
     body: createExtractionTestSchema,
-    response: { status: 201, schema: z.object({ extractionTest: extractionTestSchema }) },
-    handler: async ({ body }, { services, actor }) => ({ extractionTest: await services.upkeep.recordExtractionTest(body, actor) }),
+    response: { status: 201, schema: extractionTestResponseSchema },
+    handler: async ({ body }, { services, actor }) => ({
+      extractionTest: await services.upkeep.recordExtractionTest(body, actor),
+    }),
   }),
   defineRoute({
     method: 'post',
@@ -101,7 +110,9 @@ export const upkeepRoutes: ApiRoute[] = [
     access: 'upkeep:write',
     sites: 'site',
     body: createFireInspectionSchema,
-    response: { status: 201, schema: z.object({ fireInspection: fireInspectionSchema }) },
-    handler: async ({ body }, { services, actor }) => ({ fireInspection: await services.upkeep.recordFireInspection(body, actor) }),
+    response: { status: 201, schema: fireInspectionResponseSchema },
+    handler: async ({ body }, { services, actor }) => ({
+      fireInspection: await services.upkeep.recordFireInspection(body, actor),
+    }),
   }),
 ];

@@ -1,11 +1,9 @@
 import { z } from 'zod';
-import { idParamsSchema, listSchema, pageFields } from '../../shared/schemas/common';
+import { idParamsSchema, pageFields } from '../../shared/schemas/common';
 import { siteFilterFields } from '../../shared/schemas/site';
-import { createUserSchema, updateUserSchema, userSchema } from '../../shared/schemas/user';
+import { createUserSchema, updateUserSchema, userListSchema, userResponseSchema } from '../../shared/schemas/user';
 import { renewSignIn } from '../auth/passport';
 import { defineRoute, type ApiRoute } from '../registry/route';
-
-const userEnvelope = z.object({ user: userSchema });
 
 export const userRoutes: ApiRoute[] = [
   defineRoute({
@@ -15,7 +13,7 @@ export const userRoutes: ApiRoute[] = [
     access: 'users:read',
     sites: 'site',
     query: z.object({ ...pageFields(50, 200), ...siteFilterFields }),
-    response: { status: 200, schema: listSchema(userSchema) },
+    response: { status: 200, schema: userListSchema },
     handler: ({ query }, { services }) => services.users.list(query),
   }),
   defineRoute({
@@ -25,7 +23,7 @@ export const userRoutes: ApiRoute[] = [
     access: 'users:write',
     sites: 'site',
     body: createUserSchema,
-    response: { status: 201, schema: userEnvelope },
+    response: { status: 201, schema: userResponseSchema },
     handler: async ({ body }, { services, actor }) => ({ user: await services.users.create(body, actor) }),
   }),
   defineRoute({
@@ -36,7 +34,7 @@ export const userRoutes: ApiRoute[] = [
     sites: 'site',
     params: idParamsSchema,
     body: updateUserSchema,
-    response: { status: 200, schema: userEnvelope },
+    response: { status: 200, schema: userResponseSchema },
     handler: async ({ params, body }, { services, actor, user, req }) => {
       const changed = await services.users.update(params.id, body, actor);
       if (body.password && params.id === user!.id) await renewSignIn(req);

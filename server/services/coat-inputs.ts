@@ -1,5 +1,7 @@
 import { In } from 'typeorm';
 import { computeCoatRecord, type CoatRecord, type CoatWarning } from '../../shared/finishing/coat-record';
+import { coatDryingTempC } from '../../shared/finishing/drying-temperature';
+import { potWarnings } from '../../shared/finishing/pot-life';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { CreateCoatInput } from '../../shared/schemas/coat';
 import { calendarDateIn } from '../../shared/time';
@@ -12,14 +14,13 @@ import { partsSeenBy } from './part-sites';
 
 export type CoatFields = Omit<Required<CreateCoatInput>, 'idempotencyKey'>;
 
-/** Heated racks dry faster: use the coolest heated rack when every part sits on one, else the booth air. */
+/** Heated racks dry faster: the shared rule picks the drying temperature from the parts' racks and the booth air. */
 async function dryingTemperature(tx: SiteData, parts: PartEntity[], fields: CoatFields): Promise<number> {
   if (fields.dryingTempC !== null) return fields.dryingTempC;
-  const rackIds = [...new Set(parts.map((p) => p.rackId))];
-  if (rackIds.includes(null)) return fields.airTempC;
-  const racks = await tx.racks.findBy({ id: In(rackIds as number[]) });
-  const heated = racks.map((r) => r.dryingTempC);
-  return heated.every((t): t is number => t !== null) ? Math.min(...heated) : fields.airTempC;
+  const rackIds = [...new Set(parts.flatMap((p) => (p.rackId === null ? [] : [p.rackId])))];
+  const racks = rackIds.length ? await tx.racks.findBy({ id: In(rackIds) }) : [];
+  const tempOf = new Map(racks.map((r) => [r.id, r.dryingTempC]));
+  return coatDryingTempC(parts.map((p) => (p.rackId === null ? null : (tempOf.get(p.rackId) ?? null))), fields.airTempC);
 }
 
 /** The spray session must be one of the scope's; a part on another site's rack is not its booth's to coat. */
@@ -53,10 +54,7 @@ async function mixWarnings(tx: SiteData, fields: CoatFields): Promise<CoatWarnin
   if (fields.mixId === null) return [];
   const mix = await tx.mixes.findOneBy({ id: fields.mixId });
   if (!mix || mix.productId !== fields.productId) throw new AppError('validation_failed', 'That mix is not a mix of this product', { mixId: 'Choose a mix of the product sprayed' });
-  const sprayedAt = new Date(fields.sprayedAt).toISOString();
-  if (mix.potLifeEndsAt && sprayedAt > mix.potLifeEndsAt) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot was past its pot life when this coat went on.' }];
-  if (sprayedAt < mix.inductionEndsAt) return [{ code: 'induction-not-over', verdict: 'caution', message: 'The pot had not finished its induction (stand) time.' }];
-  return [];
+  return potWarnings(mix, new Date(fields.sprayedAt));
 }
 
 /**

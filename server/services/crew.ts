@@ -1,7 +1,7 @@
 import { In } from 'typeorm';
 import { recordStatus } from '../../shared/finishing/fitness';
 import { nextDueDate, worseStatus, type DueStatus } from '../../shared/finishing/upkeep-due';
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import { createCrewRecordSchema, type CreateCrewRecordInput, type CrewDetail, type CrewRecord, type CrewStatus } from '../../shared/schemas/crew';
 import type { ShopSettings } from '../../shared/schemas/settings';
 import type { SiteData } from '../data/site-data';
@@ -56,7 +56,7 @@ export function createCrewService(data: SiteData, settings: SettingsService, clo
 
   return {
     /** The person's own records, or anyone's for an admin. */
-    async detail(userId: number, viewer: Pick<SessionUser, 'id' | 'role'>): Promise<CrewDetail> {
+    async detail(userId: number, viewer: Pick<SignedInUser, 'id' | 'role'>): Promise<CrewDetail> {
       if (viewer.id !== userId && viewer.role !== 'admin') throw new AppError('forbidden', 'Only the person themself and the owner see these records; a lead sees their status on the crew list');
       const user = await person(userId);
       const rows = await data.crewRecords.find({ where: { userId }, order: { doneOn: 'DESC', id: 'DESC' } });

@@ -12,6 +12,7 @@ import type { FinishStepEntity } from '../db/entities/finish-step.entity';
 import type { FinishSystemEntity } from '../db/entities/finish-system.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import type { EventBus } from './events';
 import { recordAudit, type Actor } from './audit';
 
 function toStepDto(step: FinishStepEntity, productNames: Map<number, string>) {
@@ -53,7 +54,13 @@ async function writeSteps(tx: SiteData, finishSystemId: number, steps: FinishSte
 }
 
 /** Finish systems are the group's, like the data sheets they name. */
-export function createFinishSystemService(data: SiteData, clock: Clock = systemClock) {
+export function createFinishSystemService(data: SiteData, clock: Clock = systemClock, events?: EventBus) {
+  // After the transaction commits; finish systems are the group's.
+  const published = (system: FinishSystem): FinishSystem => {
+    events?.publish({ type: 'finish-system.changed', id: system.id, siteId: null });
+    return system;
+  };
+
   async function getWith(tx: SiteData, id: number): Promise<FinishSystem> {
     const system = await tx.finishSystems.findOneBy({ id });
     if (!system) throw notFound('Finish system');
@@ -71,27 +78,31 @@ export function createFinishSystemService(data: SiteData, clock: Clock = systemC
     async create(input: CreateFinishSystemInput, actor: Actor): Promise<FinishSystem> {
       const { steps, ...fields } = createFinishSystemSchema.parse(input);
       const now = clock.now();
-      return data.transaction(async (tx) => {
-        const system = await tx.finishSystems.save(tx.finishSystems.create({ ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
-        await writeSteps(tx, system.id, steps);
-        await recordAudit(tx, actor, { action: 'create', entity: 'finish-system', entityId: system.id, summary: `Added finish system ${system.name}` }, now);
-        return getWith(tx, system.id);
-      });
+      return data
+        .transaction(async (tx) => {
+          const system = await tx.finishSystems.save(tx.finishSystems.create({ ...fields, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+          await writeSteps(tx, system.id, steps);
+          await recordAudit(tx, actor, { action: 'create', entity: 'finish-system', entityId: system.id, summary: `Added finish system ${system.name}` }, now);
+          return getWith(tx, system.id);
+        })
+        .then(published);
     },
 
     async update(id: number, patch: UpdateFinishSystemInput, actor: Actor): Promise<FinishSystem> {
       const now = clock.now();
-      return data.transaction(async (tx) => {
-        const system = await tx.finishSystems.findOneBy({ id });
-        if (!system) throw notFound('Finish system');
-        const { steps, ...fields } = patch;
-        Object.assign(system, fields, { updatedAt: now.toISOString() });
-        await tx.finishSystems.save(system);
-        if (steps) await writeSteps(tx, id, steps);
-        const summary = `Changed finish system ${system.name}${steps ? ` (now ${steps.length} steps)` : ''}`;
-        await recordAudit(tx, actor, { action: 'update', entity: 'finish-system', entityId: id, summary, changes: { ...fields, ...(steps ? { steps } : {}) } }, now);
-        return getWith(tx, id);
-      });
+      return data
+        .transaction(async (tx) => {
+          const system = await tx.finishSystems.findOneBy({ id });
+          if (!system) throw notFound('Finish system');
+          const { steps, ...fields } = patch;
+          Object.assign(system, fields, { updatedAt: now.toISOString() });
+          await tx.finishSystems.save(system);
+          if (steps) await writeSteps(tx, id, steps);
+          const summary = `Changed finish system ${system.name}${steps ? ` (now ${steps.length} steps)` : ''}`;
+          await recordAudit(tx, actor, { action: 'update', entity: 'finish-system', entityId: id, summary, changes: { ...fields, ...(steps ? { steps } : {}) } }, now);
+          return getWith(tx, id);
+        })
+        .then(published);
     },
   };
 }

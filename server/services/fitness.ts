@@ -2,7 +2,7 @@ import { deferToSdsLine, respiratorLevel, type RespiratorLevel } from '../../sha
 import type { ChecklistProduct } from '../../shared/finishing/checklist';
 import { assessFitness, type FitnessAssessment } from '../../shared/finishing/fitness';
 import { can } from '../../shared/permissions';
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import type { ShopSettings } from '../../shared/schemas/settings';
 import type { SessionFitness } from '../../shared/schemas/upkeep';
 import type { SiteData } from '../data/site-data';
@@ -17,7 +17,7 @@ import { boothFacts, crewRecordsOf, shopDay, sprayerFacts } from './upkeep-facts
 const levels: RespiratorLevel[] = ['air-fed', 'vapour-and-particulate', 'particulate'];
 
 /** Who may see the assigned sprayer's protection records in a session's fitness: the admin, a lead, the sprayer themself. */
-export function seesCrewOf(viewer: Pick<SessionUser, 'id' | 'role'> | null, spraySession: Pick<SpraySessionEntity, 'sprayerId'>): boolean {
+export function seesCrewOf(viewer: Pick<SignedInUser, 'id' | 'role'> | null, spraySession: Pick<SpraySessionEntity, 'sprayerId'>): boolean {
   if (!viewer || spraySession.sprayerId === null) return true;
   return can(viewer.role, 'crew:status') || viewer.id === spraySession.sprayerId;
 }
@@ -47,7 +47,7 @@ export async function fitnessOf(
 
 export function createFitnessService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
   return {
-    async forSpraySession(id: number, viewer: Pick<SessionUser, 'id' | 'role'> | null): Promise<SessionFitness> {
+    async forSpraySession(id: number, viewer: Pick<SignedInUser, 'id' | 'role'> | null): Promise<SessionFitness> {
       const spraySession = await data.spraySessions.findOneBy({ id });
       const booth = spraySession && (await data.booths.findOneBy({ id: spraySession.boothId }));
       if (!spraySession || !booth) throw notFound('Spray session');

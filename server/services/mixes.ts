@@ -1,19 +1,13 @@
 import { In } from 'typeorm';
 import { mixQuantities } from '../../shared/finishing/material';
-import { mixTimes } from '../../shared/finishing/pot-life';
+import { mixTimes, potLifeReferenceTempC } from '../../shared/finishing/pot-life';
 import { createMixSchema, type CreateMixInput, type Mix } from '../../shared/schemas/checklist';
 import type { SiteData } from '../data/site-data';
 import type { MixEntity } from '../db/entities/mix.entity';
-import type { ProductEntity } from '../db/entities/product.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { assertHappenedNearNow } from '../lib/instant-window';
 import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session-runner';
-
-/** Pot life on a data sheet is quoted at its reference temperature: the row nearest 20 °C. */
-export function potLifeReferenceTempC(product: ProductEntity): number {
-  return [...product.dryingTimes].sort((a, b) => Math.abs(a.tempC - 20) - Math.abs(b.tempC - 20))[0].tempC;
-}
 
 function toMixDto(mix: MixEntity, productName: string): Mix {
   const { id, spraySessionId, productId, lotIds, baseL, hardenerL, thinnerL, mixedAt, tempC, inductionEndsAt, potLifeEndsAt, potLifeWarningAt, recordedByName } = mix;
@@ -36,7 +30,7 @@ export function createMixService(data: SiteData, clock: Clock = systemClock) {
         const quantities = mixQuantities({ wantedL: fields.wantedL, ratio: { base: product.mixBaseParts, hardener: product.mixHardenerParts }, thinningPct: fields.thinningPct, thinnerBasis: 'on-mix' });
         const mixedAt = new Date(fields.mixedAt ?? clock.now());
         const times = product.potLifeMin
-          ? mixTimes({ mixedAt, inductionMin: product.inductionMin, potLifeMin: product.potLifeMin, refTempC: potLifeReferenceTempC(product), tempC: fields.tempC })
+          ? mixTimes({ mixedAt, inductionMin: product.inductionMin, potLifeMin: product.potLifeMin, refTempC: potLifeReferenceTempC(product.dryingTimes), tempC: fields.tempC })
           : null;
         const mix = await tx.mixes.save(
           tx.mixes.create({

@@ -14,6 +14,7 @@ import type { SiteData } from '../data/site-data';
 import type { ProductEntity } from '../db/entities/product.entity';
 import { AppError, notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
+import type { EventBus } from './events';
 import { changedFields, recordAudit, type Actor } from './audit';
 import { toFileRef, type FileService, type Upload } from './files';
 import { toLotDto, toProductDto } from './product-dto';
@@ -29,7 +30,13 @@ async function forgetUnusedFile(tx: SiteData, fileId: number): Promise<string | 
 }
 
 /** Data sheets, their lots and documents are the group's: every site sprays from the same sheets. */
-export function createProductService(data: SiteData, files: FileService, settings: SettingsService, clock: Clock = systemClock) {
+export function createProductService(data: SiteData, files: FileService, settings: SettingsService, clock: Clock = systemClock, events?: EventBus) {
+  // After the transaction commits, so a screen that refetches sees the change. Data sheets are the group's.
+  const published = <T>(id: number, result: T): T => {
+    events?.publish({ type: 'product.changed', id, siteId: null });
+    return result;
+  };
+
   async function today(): Promise<string> {
     return calendarDateIn(clock.now(), (await settings.get()).timezone);
   }
@@ -76,7 +83,7 @@ export function createProductService(data: SiteData, files: FileService, setting
         await recordAudit(tx, actor, { action: 'create', entity: 'product', entityId: product.id, summary: `Added data sheet ${product.name}` }, now);
         return product.id;
       });
-      return this.get(id);
+      return published(id, await this.get(id));
     },
 
     async update(id: number, patch: UpdateProductInput, actor: Actor): Promise<Product> {
@@ -90,7 +97,7 @@ export function createProductService(data: SiteData, files: FileService, setting
         await tx.products.save(product);
         await recordAudit(tx, actor, { action: 'update', entity: 'product', entityId: id, summary: `Changed data sheet ${product.name}`, changes }, now);
       });
-      return this.get(id);
+      return published(id, await this.get(id));
     },
 
     async addLot(productId: number, input: CreateLotInput & { expiresOn: string | null }, actor: Actor): Promise<Lot> {
@@ -104,7 +111,7 @@ export function createProductService(data: SiteData, files: FileService, setting
         await recordAudit(tx, actor, { action: 'create', entity: 'lot', entityId: saved.id, summary: `Added lot ${saved.lotNumber} of ${product.name}` }, now);
         return saved;
       });
-      return toLotDto(lot, await today());
+      return published(productId, toLotDto(lot, await today()));
     },
 
     /**
@@ -134,7 +141,7 @@ export function createProductService(data: SiteData, files: FileService, setting
         throw error;
       }
       if (replaced) await files.discard(replaced);
-      return this.get(productId);
+      return published(productId, await this.get(productId));
     },
   };
 }

@@ -1,6 +1,6 @@
 import { respiratorLevel, sessionCautions, type Caution } from '../../shared/finishing/cautions';
 import type { FitnessFinding } from '../../shared/finishing/fitness';
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import type { SiteData } from '../data/site-data';
 import { notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
@@ -23,7 +23,7 @@ const fitnessCaution = (finding: FitnessFinding): Caution => ({
  */
 export function createSpraySessionCautionService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
   return {
-    async forSpraySession(id: number, viewer: Pick<SessionUser, 'id' | 'role'> | null = null) {
+    async forSpraySession(id: number, viewer: Pick<SignedInUser, 'id' | 'role'> | null = null) {
       const spraySession = await data.spraySessions.findOneBy({ id });
       const booth = spraySession && (await data.booths.findOneBy({ id: spraySession.boothId }));
       if (!spraySession || !booth) throw notFound('Spray session');

@@ -2,7 +2,7 @@ import { In } from 'typeorm';
 import { recordStatus } from '../../shared/finishing/fitness';
 import { dueStatus } from '../../shared/finishing/upkeep-due';
 import { can } from '../../shared/permissions';
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import type { ShopSettings } from '../../shared/schemas/settings';
 import type { UpkeepDue, UpkeepDueItem } from '../../shared/schemas/upkeep';
 import type { SiteData } from '../data/site-data';
@@ -70,7 +70,7 @@ const plain = ({ kind, status, message }: KeyedItem): UpkeepDueItem => ({ kind, 
 /** For the lead's Today board: booths and people of the caller's sites that are not fit to spray, or will not be soon. */
 export function createUpkeepDueService(data: SiteData, settings: SettingsService, clock: Clock = systemClock) {
   return {
-    async due(viewer: Pick<SessionUser, 'id' | 'role'>, withinDays?: number): Promise<UpkeepDue> {
+    async due(viewer: Pick<SignedInUser, 'id' | 'role'>, withinDays?: number): Promise<UpkeepDue> {
       const shop: ShopSettings = await settings.get();
       const w: Window = { today: shopDay(clock.now(), shop), withinDays: withinDays ?? shop.upkeepDueSoonDays };
       const booths = await data.booths.find({ order: { name: 'ASC', id: 'ASC' } });

@@ -1,4 +1,4 @@
-import type { SessionUser } from '../../shared/schemas/auth';
+import type { SignedInUser } from '../../shared/schemas/auth';
 import type { List, PageQuery } from '../../shared/schemas/common';
 import { notifyPrefsOf } from '../../shared/schemas/notification';
 import type { CreateUserInput, UpdateMeInput, UpdateUserInput, User } from '../../shared/schemas/user';
@@ -14,7 +14,7 @@ import { siteForWrite } from '../lib/site-scope';
 import { changedFields, recordAudit, type Actor } from './audit';
 
 /** What the sign-in session carries about its user. */
-export function toSignedInUser(user: UserEntity): SessionUser {
+export function toSignedInUser(user: UserEntity): SignedInUser {
   return { id: user.id, email: user.email, name: user.name, role: user.role, units: user.units, siteId: user.siteId, notify: notifyPrefsOf(user.role, user.notify) };
 }
 
@@ -81,7 +81,7 @@ export function createUserService(data: SiteData, clock: Clock = systemClock) {
       return toUserDto(await applyUpdate(id, patch, actor, 'Changed user'));
     },
 
-    async updateSelf(id: number, patch: UpdateMeInput, actor: Actor): Promise<SessionUser> {
+    async updateSelf(id: number, patch: UpdateMeInput, actor: Actor): Promise<SignedInUser> {
       return toSignedInUser(await applyUpdate(id, patch, actor, 'Changed own preferences'));
     },
   };

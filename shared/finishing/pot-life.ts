@@ -51,3 +51,21 @@ export function mixTimes({ mixedAt, inductionMin, potLifeMin, refTempC, tempC }:
         : 'Estimate: data sheet times scaled by the rule that they halve for every 10 °C warmer. A large or warm batch can gel sooner.',
   };
 }
+
+/** The temperature a data sheet quotes pot life at: its drying-times row nearest 20 °C. A sheet with no rows gives none. */
+export function potLifeReferenceTempC(dryingTimes: readonly { tempC: number }[]): number {
+  const nearest = [...dryingTimes].sort((a, b) => Math.abs(a.tempC - 20) - Math.abs(b.tempC - 20))[0];
+  if (!nearest) throw new FinishingInputError('dryingTimes', 'The data sheet has no drying times, so the temperature its pot life is quoted at is not known');
+  return nearest.tempC;
+}
+
+export type PotWarning = { code: 'pot-life-expired' | 'induction-not-over'; verdict: 'stop' | 'caution'; message: string };
+
+/** A coat from a pot past its pot life is a stop to acknowledge; one from a pot still standing, a caution. */
+export function potWarnings(mix: { inductionEndsAt: string; potLifeEndsAt: string | null }, sprayedAt: Date): PotWarning[] {
+  requireInstant('sprayedAt', sprayedAt, 'when the coat was sprayed');
+  const at = sprayedAt.getTime();
+  if (mix.potLifeEndsAt && at > Date.parse(mix.potLifeEndsAt)) return [{ code: 'pot-life-expired', verdict: 'stop', message: 'The pot was past its pot life when this coat went on.' }];
+  if (at < Date.parse(mix.inductionEndsAt)) return [{ code: 'induction-not-over', verdict: 'caution', message: 'The pot had not finished its induction (stand) time.' }];
+  return [];
+}

@@ -70,7 +70,7 @@ export function partReadiness(input: ReadinessInput): PartReadiness {
   const nextCoat = coatSteps.find((index) => index > last.stepIndex && !doneSteps.has(index));
   if (nextCoat === undefined) {
     const move = { nextStep: null, nextStepIndex: null, nextWindow: null, abradeRequired: false, recoatWindowMissed: false };
-    return { ...shared, ...move, state: collected ? 'collected' : dryingState(last, now) };
+    return { ...shared, ...move, state: collected ? 'collected' : dryingStateAt(last, now) };
   }
   return { ...shared, ...betweenCoats(input, last, nextCoat), state: collected ? 'collected' : 'in-finish' };
 }
@@ -87,7 +87,7 @@ function beforeFirstCoat({ steps, abradedAt = [], now }: ReadinessInput): NextMo
 }
 
 function betweenCoats({ steps, abradedAt = [], now }: ReadinessInput, last: PartCoat, nextCoat: number): NextMove {
-  const missed = last.recoatClosesAt !== null && now.getTime() >= last.recoatClosesAt.getTime();
+  const missed = recoatWindowClosed(last.recoatClosesAt, now);
   const abraded = abradedAt
     .filter((at) => at.getTime() > last.sprayedAt.getTime() && at.getTime() <= now.getTime())
     .sort((a, b) => a.getTime() - b.getTime())
@@ -109,12 +109,32 @@ function betweenCoats({ steps, abradedAt = [], now }: ReadinessInput, last: Part
   return { nextStep: steps[nextCoat], nextStepIndex: nextCoat, nextWindow: window, abradeRequired: false, recoatWindowMissed: false };
 }
 
-function dryingState(last: PartCoat, now: Date): ReadinessState {
-  const t = now.getTime();
-  if (t < last.handleAt.getTime()) return 'drying';
-  if (t < last.packAt.getTime()) return 'ready-to-handle';
-  if (t < last.fullCureAt.getTime()) return 'ready-to-pack';
-  return 'cured';
+/** The last coat's times that move a part along once every coat is on. */
+export type DryingInstants = { handleAt: Date | null; packAt: Date | null; fullCureAt: Date | null };
+
+const afterLastCoat: readonly ReadinessState[] = ['drying', 'ready-to-handle', 'ready-to-pack', 'cured'];
+
+/** Where a part with every coat on stands at `now`: each state begins at its instant. */
+export function dryingStateAt(times: DryingInstants, now: Date): ReadinessState {
+  const passed = (at: Date | null) => at !== null && at.getTime() <= now.getTime();
+  if (passed(times.fullCureAt)) return 'cured';
+  if (passed(times.packAt)) return 'ready-to-pack';
+  return passed(times.handleAt) ? 'ready-to-handle' : 'drying';
+}
+
+/**
+ * A state worked out earlier (the server's answer), moved on to `now`: a drying part becomes
+ * ready as its instants pass, never going back; every other state stays until the next answer.
+ */
+export function readinessMovedOn(state: ReadinessState, times: DryingInstants, now: Date): ReadinessState {
+  const from = afterLastCoat.indexOf(state);
+  if (from < 0) return state;
+  return afterLastCoat[Math.max(from, afterLastCoat.indexOf(dryingStateAt(times, now)))];
+}
+
+/** A recoat window has closed once its closing instant is reached; a window with no closing time never closes. */
+export function recoatWindowClosed(closesAt: Date | null, now: Date): boolean {
+  return closesAt !== null && now.getTime() >= closesAt.getTime();
 }
 
 /** The coat furthest along the finish system; a re-spray of the same step counts from its latest spraying. */

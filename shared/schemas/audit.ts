@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { listSchema } from './common';
 
 export const auditEntrySchema = z.object({
   id: z.number().int(),
@@ -11,3 +12,5 @@ export const auditEntrySchema = z.object({
   summary: z.string(),
 });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
+
+export const auditListSchema = listSchema(auditEntrySchema);

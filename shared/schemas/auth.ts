@@ -11,7 +11,7 @@ export const loginSchema = z.object({
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
-export const sessionUserSchema = z.object({
+export const signedInUserSchema = z.object({
   id: z.number().int(),
   email: z.string(),
   name: z.string(),
@@ -20,7 +20,7 @@ export const sessionUserSchema = z.object({
   siteId: z.number().int(),
   notify: notifyPrefsSchema.optional(),
 });
-export type SessionUser = z.infer<typeof sessionUserSchema>;
+export type SignedInUser = z.infer<typeof signedInUserSchema>;
 
-export const userResponseSchema = z.object({ user: sessionUserSchema });
+export const signedInUserResponseSchema = z.object({ user: signedInUserSchema });
 export const csrfResponseSchema = z.object({ token: z.string() });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requiredTextSchema } from './common';
+import { listSchema, requiredTextSchema } from './common';
 import { siteIdSchema } from './site';
 
 export const boothKinds = ['cross-draft', 'down-draft', 'open-face', 'spray-room'] as const;
@@ -73,3 +73,6 @@ export const boothSchema = boothFieldsSchema.extend({
   updatedAt: z.string(),
 });
 export type Booth = z.infer<typeof boothSchema>;
+
+export const boothResponseSchema = z.object({ booth: boothSchema });
+export const boothListSchema = listSchema(boothSchema);

@@ -54,3 +54,7 @@ export const mixSchema = z.object({
   recordedByName: z.string(),
 });
 export type Mix = z.infer<typeof mixSchema>;
+
+export const mixResponseSchema = z.object({ mix: mixSchema });
+/** The pots of one spray session, newest first (not paged: a session mixes a handful). */
+export const mixListSchema = z.object({ items: z.array(mixSchema) });

@@ -42,3 +42,6 @@ export const coatPhotoQuerySchema = z.object({
     .transform((text) => [...new Set(text.split(',').map(Number))])
     .pipe(z.array(z.number().max(2_147_483_647, 'No record has an id that large'))),
 });
+
+export const coatPhotoResponseSchema = z.object({ photo: coatPhotoSchema });
+export const coatPhotoListSchema = z.object({ items: z.array(coatPhotoSchema) });

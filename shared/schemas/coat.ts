@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, isoInstantSchema, optionalTextSchema, pageFields, queryFlagSchema, requiredTextSchema } from './common';
+import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields, queryFlagSchema, requiredTextSchema } from './common';
 import { siteFilterFields } from './site';
 
 export const acknowledgementSchema = z.object({
@@ -123,3 +123,8 @@ export const coatQuerySchema = z.object({
   ...siteFilterFields,
 });
 export type CoatQuery = z.infer<typeof coatQuerySchema>;
+
+export const coatResponseSchema = z.object({ coat: coatSchema });
+/** POST /api/coats: `replayed` when the idempotency key had already made the record. */
+export const coatCreatedResponseSchema = coatResponseSchema.extend({ replayed: z.boolean() });
+export const coatListSchema = listSchema(coatSchema);

@@ -68,3 +68,7 @@ export type CrewDetail = z.infer<typeof crewDetailSchema>;
 
 export const crewUserParamsSchema = z.object({ userId: idSchema });
 export const crewStatusQuerySchema = z.object(siteFilterFields);
+
+export const crewStatusListSchema = z.object({ items: z.array(crewStatusSchema) });
+export const crewDetailResponseSchema = z.object({ crew: crewDetailSchema });
+export const crewRecordResponseSchema = z.object({ record: crewRecordSchema });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, isoInstantSchema, optionalTextSchema, pageFields } from './common';
+import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields } from './common';
 import { siteFilterFields } from './site';
 
 /**
@@ -38,3 +38,6 @@ export const denibQuerySchema = z.object({
   ...siteFilterFields,
 });
 export type DenibQuery = z.infer<typeof denibQuerySchema>;
+
+export const denibResponseSchema = z.object({ denib: denibSchema });
+export const denibListSchema = listSchema(denibSchema);

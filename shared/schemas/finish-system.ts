@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requiredTextSchema, optionalTextSchema } from './common';
+import { listSchema, optionalTextSchema, requiredTextSchema } from './common';
 
 const gritSchema = z.string().trim().regex(/^P\d{2,4}$/, 'Give the grit as a P-grade, e.g. P320');
 
@@ -50,3 +50,6 @@ export const finishSystemSchema = z.object({
   updatedAt: z.string(),
 });
 export type FinishSystem = z.infer<typeof finishSystemSchema>;
+
+export const finishSystemResponseSchema = z.object({ finishSystem: finishSystemSchema });
+export const finishSystemListSchema = listSchema(finishSystemSchema);

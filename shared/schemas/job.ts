@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { sprayMethodIds } from '../finishing/material';
-import { optionalTextSchema, pageFields, queryNumberSchema, requiredTextSchema } from './common';
+import { listSchema, optionalTextSchema, pageFields, queryNumberSchema, requiredTextSchema } from './common';
 
 /**
  * A job's life cycle: open → in finish (its first coat is on) → ready (every part can be handled)
@@ -111,3 +111,7 @@ export const estimateSchema = z.object({
   }),
 });
 export type Estimate = z.infer<typeof estimateSchema>;
+
+export const jobResponseSchema = z.object({ job: jobSchema });
+export const jobListSchema = listSchema(jobSchema);
+export const estimateResponseSchema = z.object({ estimate: estimateSchema });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Role } from '../permissions';
+import { listSchema } from './common';
 
 export const notificationKinds = ['parts-ready', 'recoat-closing', 'session-changed', 'daily-plan', 'upkeep-due', 'crew-due'] as const;
 export type NotificationKind = (typeof notificationKinds)[number];
@@ -52,3 +53,7 @@ export type Notification = z.infer<typeof notificationSchema>;
 
 export const mailboxMessageSchema = z.object({ id: z.number().int(), receivedAt: z.string(), from: z.string(), to: z.string(), subject: z.string(), text: z.string() });
 export type MailboxMessage = z.infer<typeof mailboxMessageSchema>;
+
+/** The signed-in user's recent notifications (not paged: the last 50). */
+export const myNotificationsSchema = z.object({ items: z.array(notificationSchema) });
+export const mailboxSchema = listSchema(mailboxMessageSchema);

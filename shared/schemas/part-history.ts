@@ -46,3 +46,5 @@ export const partHistorySchema = z.object({
   dryingTempC: z.number(),
 });
 export type PartHistory = z.infer<typeof partHistorySchema>;
+
+export const partHistoryResponseSchema = z.object({ history: partHistorySchema });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { optionalTextSchema, pageFields, requiredTextSchema } from './common';
+import { listSchema, maxId, optionalTextSchema, pageFields, requiredTextSchema } from './common';
 
 export const partFaces = ['one', 'both'] as const;
 export const partFacesSchema = z.enum(partFaces, { error: 'Faces is one or both' });
@@ -68,4 +68,19 @@ export const csvTemplateHeaders = ['label', 'kind', 'lengthMm', 'widthMm', 'thic
 /** A job's parts come in large pages: a kitchen is a few hundred parts, and the tag sheet prints them all. */
 export const partListQuerySchema = z.object({
   ...pageFields(500, 1000),
+});
+
+export const partResponseSchema = z.object({ part: partSchema });
+export const partListSchema = listSchema(partSchema);
+
+/** Most parts one `?ids=` asks for: a spray session plans tens of parts, a large one a few hundred. */
+export const maxPartIds = 500;
+
+/** `?ids=3,5,8`: part ids in plain digits, separated by commas; a repeated id is read once. */
+export const partIdsQuerySchema = z.object({
+  ids: z
+    .string({ error: 'Give the part ids, separated by commas' })
+    .regex(/^[1-9][0-9]{0,9}(,[1-9][0-9]{0,9})*$/, 'Give part ids as whole numbers in plain digits, separated by commas')
+    .transform((text) => [...new Set(text.split(',').map(Number))])
+    .pipe(z.array(z.number().max(maxId, 'No record has an id that large')).max(maxPartIds, `At most ${maxPartIds} parts at once`)),
 });

@@ -30,3 +30,5 @@ export type Plan = z.infer<typeof planSchema>;
 
 export const acceptPlanSchema = z.object({ sessions: z.array(createSpraySessionSchema).min(1, 'Nothing to book').max(500) });
 export const acceptPlanResponseSchema = z.object({ items: z.array(spraySessionSchema) });
+
+export const planResponseSchema = z.object({ plan: planSchema });

@@ -154,3 +154,6 @@ export const productListQuerySchema = z.object({
   ...pageFields(25, 200),
 });
 export type ProductListQuery = z.infer<typeof productListQuerySchema>;
+
+export const productResponseSchema = z.object({ product: productSchema });
+export const lotResponseSchema = z.object({ lot: lotSchema });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requiredTextSchema } from './common';
+import { listSchema, requiredTextSchema } from './common';
 import { siteIdSchema } from './site';
 
 export const rackLocations = ['drying-room', 'booth-side'] as const;
@@ -40,3 +40,6 @@ export const rackSchema = rackFieldsSchema.extend({
   updatedAt: z.string(),
 });
 export type Rack = z.infer<typeof rackSchema>;
+
+export const rackResponseSchema = z.object({ rack: rackSchema });
+export const rackListSchema = listSchema(rackSchema);

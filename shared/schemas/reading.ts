@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, isoInstantSchema, pageFields } from './common';
+import { idSchema, isoInstantSchema, listSchema, pageFields } from './common';
 import { siteFilterFields } from './site';
 
 export const createReadingSchema = z
@@ -33,3 +33,6 @@ export const readingQuerySchema = z.object({
   ...pageFields(50, 500),
   ...siteFilterFields,
 });
+
+export const readingResponseSchema = z.object({ reading: readingSchema });
+export const readingListSchema = listSchema(readingSchema);

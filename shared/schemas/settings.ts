@@ -28,3 +28,5 @@ function isKnownTimeZone(zone: string): boolean {
     return false;
   }
 }
+
+export const shopSettingsResponseSchema = z.object({ settings: shopSettingsSchema });

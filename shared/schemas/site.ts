@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, requiredTextSchema } from './common';
+import { idSchema, listSchema, requiredTextSchema } from './common';
 
 /** A workshop of the group: booths, racks and people belong to one. */
 export const siteFieldsSchema = z.object({
@@ -23,3 +23,6 @@ export const siteIdSchema = z.number({ error: 'Choose a site' }).int().positive(
 /** `?siteId=` on lists and reports: an admin may pick a site; everyone else sees their own. */
 export const siteFilterFields = { siteId: idSchema.optional() };
 export const siteFilterSchema = z.object(siteFilterFields);
+
+export const siteResponseSchema = z.object({ site: siteSchema });
+export const siteListSchema = listSchema(siteSchema);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { checklistResultSchema, checklistSchema } from './checklist';
-import { idSchema, isoInstantSchema, optionalTextSchema, pageFields, requiredTextSchema } from './common';
+import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields, requiredTextSchema } from './common';
 import { siteFilterFields } from './site';
 import { chemistrySchema, hazardSchema } from './product';
 
@@ -137,3 +137,6 @@ export const spraySessionCautionsSchema = z.object({
   cautions: z.array(z.object({ code: z.string(), title: z.string(), message: z.string() })),
 });
 export type SpraySessionCautions = z.infer<typeof spraySessionCautionsSchema>;
+
+export const spraySessionResponseSchema = z.object({ spraySession: spraySessionSchema });
+export const spraySessionListSchema = listSchema(spraySessionSchema);

@@ -149,3 +149,13 @@ export const sessionFitnessSchema = z.object({
   deferLine: z.string(),
 });
 export type SessionFitness = z.infer<typeof sessionFitnessSchema>;
+
+/** The envelopes the upkeep routes answer with, for the server's route table and the client alike. */
+export const boothUpkeepResponseSchema = z.object({ upkeep: boothUpkeepSchema });
+export const upkeepDueResponseSchema = z.object({ due: upkeepDueSchema });
+export const filterBankResponseSchema = z.object({ filterBank: filterBankSchema });
+export const gaugeReadingResponseSchema = z.object({ reading: gaugeReadingSchema });
+export const filterChangeResponseSchema = z.object({ filterChange: filterChangeSchema });
+export const extractionTestResponseSchema = z.object({ extractionTest: extractionTestSchema });
+export const fireInspectionResponseSchema = z.object({ fireInspection: fireInspectionSchema });
+export const sessionFitnessResponseSchema = z.object({ fitness: sessionFitnessSchema });

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { roleSchema } from './auth';
-import { unitSystemSchema, requiredTextSchema } from './common';
+import { listSchema, requiredTextSchema, unitSystemSchema } from './common';
 import { notifyPrefsSchema } from './notification';
 import { siteIdSchema } from './site';
 
@@ -46,3 +46,6 @@ export const updateMeSchema = z
   .object({ name: requiredTextSchema('Enter a name', 120), units: unitSystemSchema, notify: notifyPrefsSchema })
   .partial();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
+
+export const userResponseSchema = z.object({ user: userSchema });
+export const userListSchema = listSchema(userSchema);

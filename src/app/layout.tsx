@@ -2,14 +2,14 @@ import { useEffect, useRef, useState } from 'react';
 import { Link, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import { toast } from 'sonner';
 import { roleLabels } from '../../shared/permissions';
-import { useLogout } from '../features/auth/api/logout';
+import { useLogout } from '../api/auth/logout';
 import { errorMessage } from '../lib/error-messages';
 import { MainNav } from './main-nav';
-import { useSessionUser } from './session-user';
+import { useSignedInUser } from './signed-in-user';
 import { Wordmark } from './wordmark';
 
 function UserBlock({ onSignOut, pending, tone }: { onSignOut: () => void; pending: boolean; tone: 'dark' | 'light' }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const dark = tone === 'dark';
   return (
     <div className="flex items-center gap-3">
@@ -31,7 +31,7 @@ function UserBlock({ onSignOut, pending, tone }: { onSignOut: () => void; pendin
 
 export function AppLayout() {
   const [menuOpen, setMenuOpen] = useState(false);
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const logout = useLogout();
   const navigate = useNavigate();
   const navigation = useNavigation();

@@ -1,13 +1,13 @@
 import { can, type Permission, type Role } from '../../shared/permissions';
 
-export interface NavItem {
+interface NavItem {
   to: string;
   label: string;
   permission?: Permission;
   end?: boolean;
 }
 
-export interface NavGroup {
+interface NavGroup {
   label: string;
   items: NavItem[];
 }

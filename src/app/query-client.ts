@@ -1,5 +1,5 @@
 import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
-import { authKeys } from '../features/auth/api/auth-keys';
+import { authKeys } from '../api/auth/auth-keys';
 import { isApiError } from '../lib/api-client';
 
 /**

@@ -1,8 +1,8 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
-import { useMe } from '../features/auth/api/get-me';
-import { SessionUserProvider } from './session-user';
+import { useMe } from '../api/auth/get-me';
+import { SignedInUserProvider } from './signed-in-user';
 
-export function FullPageStatus({ children }: { children: string }) {
+function FullPageStatus({ children }: { children: string }) {
   return (
     <div className="grid min-h-dvh place-items-center p-6">
       <p role="status" className="text-lg text-maple-700">
@@ -27,8 +27,8 @@ export function RequireAuth() {
     return <Navigate to={`/sign-in${search}`} replace />;
   }
   return (
-    <SessionUserProvider user={me.data}>
+    <SignedInUserProvider user={me.data}>
       <Outlet />
-    </SessionUserProvider>
+    </SignedInUserProvider>
   );
 }

@@ -2,11 +2,11 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { can, roleLabels, type Permission } from '../../shared/permissions';
 import { buttonClasses } from '../components/ui/button';
-import { useSessionUser } from './session-user';
+import { useSignedInUser } from './signed-in-user';
 
 /** For pages reached by typing the address: the nav already hides them from roles without the permission. */
 export function RequirePermission({ permission, children }: { permission: Permission; children: ReactNode }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   if (can(user.role, permission)) return children;
   return (
     <div className="max-w-xl rounded-panel border-2 border-verdict-caution bg-white p-6">

@@ -1,4 +1,4 @@
-import { useShopSettings } from '../features/settings/api/get-settings';
+import { useShopSettings } from '../api/settings/get-settings';
 
 /**
  * The shop's timezone for showing times; null while the settings load. If they cannot be read,

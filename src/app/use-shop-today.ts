@@ -1,5 +1,5 @@
 import { calendarDateIn } from '../../shared/time';
-import { useShopSettings } from '../features/settings/api/get-settings';
+import { useShopSettings } from '../api/settings/get-settings';
 
 /** Today's date where the shop is (due dates are the shop's days, not the device's). */
 export function useShopToday(): string {

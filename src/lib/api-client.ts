@@ -1,9 +1,13 @@
 import type { z } from 'zod';
-import { errorEnvelopeSchema } from '../../shared/errors';
+import { errorCodes, errorEnvelopeSchema, type ErrorCode } from '../../shared/errors';
 import { csrfResponseSchema } from '../../shared/schemas/auth';
 
 /** Codes the server sends (shared/errors.ts) plus two the client itself produces. */
-export type ApiErrorCode = string;
+export type ApiErrorCode = ErrorCode | 'network' | 'bad_response';
+
+/** A code this client does not know (a newer server's) reads as the nearest one it does. */
+const knownCode = (code: string, status: number): ErrorCode =>
+  (errorCodes as readonly string[]).includes(code) ? (code as ErrorCode) : status >= 500 ? 'internal' : 'bad_request';
 
 /** Every failed call ends up as one of these, whatever went wrong on the way. */
 export class ApiError extends Error {
@@ -42,7 +46,7 @@ async function fetchCsrfToken(): Promise<string> {
 }
 
 /** The token is fetched once and shared; a failed fetch is forgotten so the next call tries again. */
-export function getCsrfToken(): Promise<string> {
+function getCsrfToken(): Promise<string> {
   if (!csrfToken) {
     csrfToken = fetchCsrfToken().catch((error: unknown) => {
       csrfToken = null;
@@ -83,7 +87,7 @@ async function toApiError(response: Response): Promise<ApiError> {
     const parsed = errorEnvelopeSchema.safeParse(JSON.parse(text));
     if (parsed.success) {
       const { code, message, fields } = parsed.data.error;
-      return new ApiError(response.status, code, message, fields ?? {});
+      return new ApiError(response.status, knownCode(code, response.status), message, fields ?? {});
     }
   } catch {
     // Not JSON (a proxy page, an empty body): fall through to a generic error.

@@ -1,7 +1,7 @@
 import { useSyncExternalStore } from 'react';
 
 /** Whether the change stream is open: views say "reconnecting…" and poll while it is not. */
-export type LiveStatus = 'off' | 'connecting' | 'live' | 'reconnecting';
+type LiveStatus = 'off' | 'connecting' | 'live' | 'reconnecting';
 
 let status: LiveStatus = 'off';
 const listeners = new Set<() => void>();

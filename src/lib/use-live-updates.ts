@@ -14,7 +14,7 @@ const batchMs = 250;
 const firstReopenMs = 3_000;
 const maxReopenMs = 30_000;
 
-export interface LiveUpdatesOptions {
+interface LiveUpdatesOptions {
   /** Query key prefixes to refresh for a change. */
   keysFor: (change: LiveChange) => readonly QueryKey[];
   /** Everything the live views show: polled while the stream is down, and refreshed after a gap in which changes may have been missed. */

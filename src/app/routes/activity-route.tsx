@@ -1,5 +1,5 @@
 import { AuditPage } from '../../features/audit/components/audit-page';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';

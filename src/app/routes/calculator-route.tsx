@@ -1,9 +1,9 @@
 import { lazy, Suspense } from 'react';
 import { LoadingState, ErrorState } from '../../components/ui/states';
-import { useBooths } from '../../features/booths/api/get-booths';
+import { useBooths } from '../../api/booths/get-booths';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 const CalculatorPage = lazy(() => import('../../features/calculator/components/calculator-page').then((module) => ({ default: module.CalculatorPage })));
 
@@ -11,7 +11,7 @@ const CalculatorPage = lazy(() => import('../../features/calculator/components/c
 const allBooths = { page: 1, pageSize: 200 };
 
 function CalculatorWithBooths() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const booths = useBooths(allBooths);
   if (booths.isPending) return <LoadingState what="the booths for the calculator" />;
   if (booths.isError) return <ErrorState error={booths.error} what="the booths" onRetry={() => booths.refetch()} />;

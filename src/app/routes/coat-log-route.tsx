@@ -3,10 +3,10 @@ import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { CoatLogPage } from '../../features/coat-log/components/coat-log-page';
 import type { CoatLogFilterValues } from '../../features/coat-log/components/coat-log-filters';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 const positive = (text: string | null) => {
   const n = Number(text);
@@ -31,7 +31,7 @@ function useLogAddress() {
 }
 
 function CoatLogWithSettings() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const { filters, page, change } = useLogAddress();
   if (settings.isPending) return <LoadingState what="the shop settings" />;

@@ -2,15 +2,15 @@ import { can } from '../../../shared/permissions';
 import { calendarDateIn } from '../../../shared/time';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { CrewPersonPage } from '../../features/crew/components/crew-person-page';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useIdParam } from './id-param';
 import { NotFoundRoute } from './not-found-route';
 
 function CrewPerson({ userId }: { userId: number }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   if (settings.isPending) return <LoadingState what="the shop settings" />;
   if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;

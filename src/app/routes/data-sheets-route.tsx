@@ -1,13 +1,13 @@
 import { can } from '../../../shared/permissions';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { DataSheetsPage } from '../../features/products/components/data-sheets-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 export function DataSheetsRoute() {
   usePageTitle('Data sheets');
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   return (
     <RequirePermission permission="products:read">

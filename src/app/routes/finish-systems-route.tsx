@@ -1,11 +1,11 @@
 import { can } from '../../../shared/permissions';
 import type { CoatingProducts } from '../../features/finish-systems/components/coating-products';
 import { FinishSystemsPage } from '../../features/finish-systems/components/finish-systems-page';
-import { useProducts } from '../../features/products/api/get-products';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useProducts } from '../../api/products/get-products';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 // The server's largest page; a shop with more coatings than this would need a product search in the step editor.
 const allProducts = { sort: 'name', dir: 'asc', page: 1, pageSize: 200 } as const;
@@ -13,7 +13,7 @@ const allProducts = { sort: 'name', dir: 'asc', page: 1, pageSize: 200 } as cons
 /** Composes two features: the systems, and the data sheets their totals are worked out from. */
 export function FinishSystemsRoute() {
   usePageTitle('Finish systems');
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const canReadProducts = can(user.role, 'products:read');
   const products = useProducts(allProducts, { enabled: canReadProducts });

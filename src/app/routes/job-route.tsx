@@ -1,17 +1,16 @@
 import { Link } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
-import { useRefreshJob } from '../../features/jobs/api/refresh-job';
-import { useJob } from '../../features/jobs/api/get-job';
+import { useJob } from '../../api/jobs/get-job';
 import { EstimatePanel } from '../../features/jobs/components/estimate-panel';
 import { JobOverview } from '../../features/jobs/components/job-overview';
 import { JobReadyTime } from '../../features/jobs/components/job-ready-time';
 import { PartsSection } from '../../features/parts/components/parts-section';
-import { useRacks } from '../../features/racks/api/get-racks';
+import { useRacks } from '../../api/racks/get-racks';
 import { buttonClasses } from '../../components/ui/button';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useShopTimeZone } from '../use-shop-time-zone';
 import { useShopToday } from '../use-shop-today';
 import { useIdParam } from './id-param';
@@ -26,13 +25,12 @@ function BackToJobs() {
 }
 
 function JobView({ jobId }: { jobId: number }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const canWrite = can(user.role, 'jobs:write');
   const shopToday = useShopToday();
   const timeZone = useShopTimeZone();
   const job = useJob(jobId);
   const racks = useRacks({ page: 1, pageSize: 200 });
-  const refreshJob = useRefreshJob(jobId);
   usePageTitle(job.data ? `Job ${job.data.reference}` : 'Job');
 
   if (job.isPending) return <LoadingState what="the job" />;
@@ -51,7 +49,7 @@ function JobView({ jobId }: { jobId: number }) {
     <>
       <JobOverview job={job.data} units={user.units} shopToday={shopToday} canWrite={canWrite} actions={tagsLink} />
       {timeZone && job.data.state !== 'cancelled' && <JobReadyTime jobId={jobId} timeZone={timeZone} units={user.units} />}
-      <PartsSection jobId={jobId} units={user.units} canWrite={canWrite} racks={racks.data?.items} onPartsChanged={refreshJob} actions={importLink} />
+      <PartsSection jobId={jobId} units={user.units} canWrite={canWrite} racks={racks.data?.items} actions={importLink} />
       <EstimatePanel jobId={jobId} units={user.units} />
     </>
   );

@@ -1,4 +1,4 @@
-import { useJob } from '../../features/jobs/api/get-job';
+import { useJob } from '../../api/jobs/get-job';
 import { TagSheetPage } from '../../features/parts/components/tag-sheet-page';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';

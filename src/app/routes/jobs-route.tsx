@@ -3,12 +3,12 @@ import { JobsPage } from '../../features/jobs/components/jobs-page';
 import { FindTagForm } from '../../features/parts/components/find-tag-form';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useShopToday } from '../use-shop-today';
 
 export function JobsRoute() {
   usePageTitle('Jobs');
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const shopToday = useShopToday();
   return (
     <RequirePermission permission="jobs:read">

@@ -1,17 +1,16 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
-import { jobQueryOptions } from '../../features/jobs/api/get-job';
-import { useRefreshJob } from '../../features/jobs/api/refresh-job';
-import { usePart } from '../../features/parts/api/get-part';
-import { usePartHistory } from '../../features/parts/api/get-part-history';
+import { jobQueryOptions } from '../../api/jobs/get-job';
+import { usePart } from '../../api/parts/get-part';
+import { usePartHistory } from '../../api/parts/get-part-history';
 import { PartHistorySection, PartNow } from '../../features/parts/components/part-history';
 import { PartPage } from '../../features/parts/components/part-page';
-import { useRacks } from '../../features/racks/api/get-racks';
+import { useRacks } from '../../api/racks/get-racks';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useShopTimeZone } from '../use-shop-time-zone';
 import { useIdParam } from './id-param';
 import { NotFoundRoute } from './not-found-route';
@@ -30,10 +29,9 @@ function JobLine({ jobId }: { jobId: number }) {
 }
 
 function PartView({ partId }: { partId: number }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const part = usePart(partId);
   const racks = useRacks({ page: 1, pageSize: 200 });
-  const refreshJob = useRefreshJob(part.data?.jobId ?? 0);
   const timeZone = useShopTimeZone();
   const readsReady = can(user.role, 'ready:read');
   const history = usePartHistory(partId, readsReady);
@@ -48,7 +46,6 @@ function PartView({ partId }: { partId: number }) {
         canWrite={can(user.role, 'jobs:write')}
         racks={racks.data?.items}
         job={<JobLine jobId={part.data.jobId} />}
-        onSaved={refreshJob}
         stateNow={history.data?.readiness.state}
         status={timeZone && readsReady ? <PartNow partId={partId} units={user.units} timeZone={timeZone} /> : null}
       />

@@ -1,17 +1,17 @@
 import { useSearchParams } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { PlannerPage } from '../../features/planner/components/planner-page';
 import { SiteSwitcher } from '../../features/sites/components/site-switcher';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 /** The planner needs the shop's clock and planning minutes before it can draw a single slot. */
 function PlannerWithSettings() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const scope = useSiteScope(user);
   // A link from the day's board may name the day to open on (?day=YYYY-MM-DD).

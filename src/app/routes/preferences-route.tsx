@@ -2,11 +2,11 @@ import { roleLabels } from '../../../shared/permissions';
 import { PreferencesForm } from '../../features/auth/components/preferences-form';
 import { PageHeader } from '../../components/ui/page-header';
 import { usePageTitle } from '../../lib/use-page-title';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 export function PreferencesRoute() {
   usePageTitle('My preferences');
-  const user = useSessionUser();
+  const user = useSignedInUser();
   return (
     <>
       <PageHeader

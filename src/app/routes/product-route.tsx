@@ -2,10 +2,10 @@ import { useParams } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { idSchema } from '../../../shared/schemas/common';
 import { ProductPage } from '../../features/products/components/product-page';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { NotFoundRoute } from './not-found-route';
 
 // The shop's planning temperature is the natural first guess; 20 °C until settings have loaded.
@@ -13,7 +13,7 @@ const fallbackTempC = 20;
 
 export function ProductRoute() {
   usePageTitle('Data sheet');
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const id = idSchema.safeParse(useParams().id);
   if (!id.success) return <NotFoundRoute />;

@@ -4,10 +4,10 @@ import { SiteSwitcher } from '../../features/sites/components/site-switcher';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function RacksForSite() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const scope = useSiteScope(user);
   return (
     <RacksPage

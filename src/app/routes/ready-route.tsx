@@ -3,11 +3,11 @@ import { LoadingState } from '../../components/ui/states';
 import { ReadyBoardPage } from '../../features/ready-board/components/ready-board-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useShopTimeZone } from '../use-shop-time-zone';
 
 function ReadyBoardWithClock() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const timeZone = useShopTimeZone();
   if (!timeZone) return <LoadingState what="the ready board" />;
   return <ReadyBoardPage timeZone={timeZone} units={user.units} canCollect={can(user.role, 'parts:collect')} />;

@@ -1,15 +1,15 @@
 import { calendarDateIn } from '../../../shared/time';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { ReportsPage } from '../../features/reports/components/reports-page';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { SiteSwitcher } from '../../features/sites/components/site-switcher';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function ReportsWithSettings() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const scope = useSiteScope(user);
   if (settings.isPending) return <LoadingState what="the shop settings" />;

@@ -1,15 +1,15 @@
 import { can } from '../../../shared/permissions';
 import { PageHeader } from '../../components/ui/page-header';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { ShopSettingsForm } from '../../features/settings/components/shop-settings-form';
 import { ShopSettingsSummary } from '../../features/settings/components/shop-settings-summary';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function ShopSettingsContent() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   const canEdit = can(user.role, 'settings:write');
   return (

@@ -1,5 +1,5 @@
 import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
-import { useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../api/auth/get-me';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { safeNextPath } from '../../lib/safe-next-path';
 import { usePageTitle } from '../../lib/use-page-title';

@@ -1,10 +1,10 @@
 import { SitesPage } from '../../features/sites/components/sites-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function SitesForOwner() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   return <SitesPage homeSiteId={user.siteId} />;
 }
 

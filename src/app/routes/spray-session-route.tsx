@@ -1,15 +1,15 @@
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { SpraySessionPage } from '../../features/spray-session/components/spray-session-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 import { useIdParam } from './id-param';
 import { NotFoundRoute } from './not-found-route';
 
 /** Every time on the page is the shop's, so it waits for the shop's timezone. */
 function SessionWithSettings({ sessionId }: { sessionId: number }) {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   if (settings.isPending) return <LoadingState what="the shop settings" />;
   if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;

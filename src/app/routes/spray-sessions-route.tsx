@@ -1,13 +1,13 @@
 import { can } from '../../../shared/permissions';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { MySessionsPage } from '../../features/spray-session/components/my-sessions-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function SessionsWithSettings() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   if (settings.isPending) return <LoadingState what="the shop settings" />;
   if (settings.isError) return <ErrorState error={settings.error} what="the shop settings" onRetry={() => settings.refetch()} />;

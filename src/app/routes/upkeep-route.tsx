@@ -2,17 +2,17 @@ import { useSearchParams } from 'react-router-dom';
 import { can } from '../../../shared/permissions';
 import { calendarDateIn } from '../../../shared/time';
 import { ErrorState, LoadingState } from '../../components/ui/states';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { SiteSwitcher } from '../../features/sites/components/site-switcher';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { UpkeepPage } from '../../features/upkeep/components/upkeep-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 /** The booth looked at lives in the address (`?booth=`), so a link can point at one booth's record. */
 function UpkeepForSite() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const scope = useSiteScope(user);
   const settings = useShopSettings();
   const [params, setParams] = useSearchParams();

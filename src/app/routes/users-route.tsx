@@ -1,13 +1,13 @@
 import { can } from '../../../shared/permissions';
-import { useShopSettings } from '../../features/settings/api/get-settings';
+import { useShopSettings } from '../../api/settings/get-settings';
 import { useSiteScope } from '../../features/sites/hooks/use-site-scope';
 import { UsersPage } from '../../features/users/components/users-page';
 import { usePageTitle } from '../../lib/use-page-title';
 import { RequirePermission } from '../require-permission';
-import { useSessionUser } from '../session-user';
+import { useSignedInUser } from '../signed-in-user';
 
 function UsersWithDefaults() {
-  const user = useSessionUser();
+  const user = useSignedInUser();
   const settings = useShopSettings();
   // Users are listed across every site, so the switcher has no place here; the names and the form's choice do.
   const { view } = useSiteScope(user);

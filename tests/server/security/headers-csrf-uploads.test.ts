@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../../server/app';
 import type { AppConfig } from '../../../server/config/env';
 import { maxUploadBytes } from '../../../server/services/files';
+import { signInCookieName } from '../../../server/middleware/sign-in-session';
 import { demo, signIn, startTestApp, testSecret, type SignedIn, type TestContext } from '../../helpers/test-app';
 import { createFixtures, pdfBytes, signedOutAgent, type Fixtures } from './fixtures';
 import { isMutating, routeKey, routeTable } from './route-table';
@@ -35,7 +36,7 @@ function appWith(config: Partial<AppConfig>, extra: { clientDir?: string; clock?
   return createApp({ dataSource: ctx.dataSource, config: { ...ctx.config, ...config }, signInSecret: testSecret, logger: pino({ level: 'silent' }), ...extra });
 }
 
-const sessionCookie = (res: Response) => ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('bw.sid='));
+const sessionCookie = (res: Response) => ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${signInCookieName}=`));
 
 function expectSecurityHeaders(res: Response) {
   const csp = res.headers['content-security-policy'] as string;

@@ -113,6 +113,7 @@ export const routeTable: RouteRow[] = [
   row('GET', '/api/jobs/:id/parts', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts` })),
   row('POST', '/api/jobs/:id/parts', s(401, 201, 201, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts`, body: { label: `Filler ${fx.next()}`, lengthMm: 700, widthMm: 60, thicknessMm: 18 } })),
   row('POST', '/api/jobs/:id/parts/import', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/jobs/${fx.jobId}/parts/import`, form: { fields: { preview: 'true' }, file: { name: 'cut.csv', content: Buffer.from(csv) } } }), 'A preview: 200 and nothing saved.'),
+  row('GET', '/api/parts', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts?ids=${fx.partId}` })),
   row('GET', '/api/parts/by-tag/:tag', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts/by-tag/${fx.partTag}` })),
   row('GET', '/api/parts/:id', s(401, 200, 200, 200, 200), (fx) => ({ url: `/api/parts/${fx.partId}` })),
   row('PATCH', '/api/parts/:id', s(401, 200, 200, 403, 403), (fx) => ({ url: `/api/parts/${fx.partId}`, body: { kind: 'panel' } })),

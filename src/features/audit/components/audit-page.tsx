@@ -5,7 +5,8 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { formatShopDateTime } from '../../../lib/shop-time';
-import { useAudit, type AuditEntry } from '../api/get-audit';
+import type { AuditEntry } from '../../../../shared/schemas/audit';
+import { useAudit } from '../../../api/audit/get-audit';
 
 const pageSize = 50;
 const column = createColumnHelper<AuditEntry>();

@@ -2,13 +2,13 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
-import type { SessionUser } from '../../../../shared/schemas/auth';
+import type { SignedInUser } from '../../../../shared/schemas/auth';
 import { notifyPrefsOf } from '../../../../shared/schemas/notification';
 import { updateMeSchema, type UpdateMeInput } from '../../../../shared/schemas/user';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useUpdateMe } from '../api/update-me';
+import { useUpdateMe } from '../../../api/auth/update-me';
 import { NotifyPrefsFieldset } from './notify-prefs-fieldset';
 import { RecentNotifications } from './recent-notifications';
 
@@ -17,12 +17,12 @@ const unitChoices = [
   { value: 'us', label: 'US customary', example: '°F, mils, ft², US gallons, cfm' },
 ] as const;
 
-function formValues(user: SessionUser): UpdateMeInput {
+function formValues(user: SignedInUser): UpdateMeInput {
   return { name: user.name, units: user.units, notify: notifyPrefsOf(user.role, user.notify) };
 }
 
 /** The user's own settings, then what the app has e-mailed them lately (times in `timeZone` when given). */
-export function PreferencesForm({ user, timeZone }: { user: SessionUser; timeZone?: string }) {
+export function PreferencesForm({ user, timeZone }: { user: SignedInUser; timeZone?: string }) {
   const updateMe = useUpdateMe();
   const [formError, setFormError] = useState<string | null>(null);
   const {

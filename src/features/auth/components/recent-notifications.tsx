@@ -1,7 +1,7 @@
 import type { Notification } from '../../../../shared/schemas/notification';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { formatShopDateTime, shopZoneName } from '../../../lib/shop-time';
-import { useMyNotifications } from '../api/get-my-notifications';
+import { useMyNotifications } from '../../../api/notifications/get-my-notifications';
 
 function when(iso: string, timeZone: string): string {
   return `${formatShopDateTime(iso, timeZone)} ${shopZoneName(new Date(iso), timeZone)}`;

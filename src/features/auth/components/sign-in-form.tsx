@@ -5,7 +5,7 @@ import { loginSchema, type LoginInput } from '../../../../shared/schemas/auth';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useLogin } from '../api/login';
+import { useLogin } from '../../../api/auth/login';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const login = useLogin();

@@ -7,8 +7,8 @@ import { boothKindLabels, boothKinds, createBoothSchema, defaultOpeningHours, ty
 import { Button } from '../../../components/ui/button';
 import { asNumber, asNumberOrNull, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateBooth } from '../api/create-booth';
-import { useUpdateBooth } from '../api/update-booth';
+import { useCreateBooth } from '../../../api/booths/create-booth';
+import { useUpdateBooth } from '../../../api/booths/update-booth';
 import { OpeningHoursEditor } from './opening-hours-editor';
 
 type BoothFormInput = z.input<typeof createBoothSchema>;

@@ -6,7 +6,7 @@ import { Dialog } from '../../../components/ui/dialog';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useBooths } from '../api/get-booths';
+import { useBooths } from '../../../api/booths/get-booths';
 import { BoothForm, type BoothSiteChoice } from './booth-form';
 import { BoothsTable } from './booths-table';
 

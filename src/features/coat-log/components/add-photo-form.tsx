@@ -8,7 +8,7 @@ import { addCoatPhotoFieldsSchema, photoSubjectLabels, photoSubjects } from '../
 import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, InputField, SelectField, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useAddCoatPhoto } from '../api/add-coat-photo';
+import { useAddCoatPhoto } from '../../../api/coat-photos/add-coat-photo';
 
 type Input = z.input<typeof addCoatPhotoFieldsSchema>;
 type Output = z.output<typeof addCoatPhotoFieldsSchema>;

@@ -8,7 +8,7 @@ type Cell = string | number | null;
  * One field of RFC 4180 CSV: always quoted, inner quotes doubled. Text that a spreadsheet would
  * run as a formula (=, +, -, @ first) gets a leading apostrophe; numbers are left as numbers.
  */
-export function csvField(value: Cell): string {
+function csvField(value: Cell): string {
   if (value === null) return '""';
   const text = typeof value === 'number' ? String(value) : /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
   return `"${text.replaceAll('"', '""')}"`;

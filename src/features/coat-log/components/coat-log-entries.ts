@@ -1,7 +1,7 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { Denib } from '../../../../shared/schemas/denib';
 
-export type LogEntry = { kind: 'coat'; at: string; coat: Coat } | { kind: 'denib'; at: string; denib: Denib };
+type LogEntry = { kind: 'coat'; at: string; coat: Coat } | { kind: 'denib'; at: string; denib: Denib };
 
 /** Coats and the denibs between them, newest first, as the log lists them. */
 export function logEntries(coats: Coat[], denibs: Denib[]): LogEntry[] {

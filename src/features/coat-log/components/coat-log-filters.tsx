@@ -1,6 +1,9 @@
 import { useId } from 'react';
+import { useJobs } from '../../../api/jobs/get-jobs';
+import { useProducts } from '../../../api/products/get-products';
 import { inputClasses } from '../../../components/ui/field';
-import { useFilterJobs, useFilterProducts } from '../api/get-filter-choices';
+
+const filterChoices = { page: 1, pageSize: 200 };
 
 export interface CoatLogFilterValues {
   jobId?: number;
@@ -30,8 +33,9 @@ function Labelled({ label, children }: { label: string; children: (id: string) =
 const toId = (text: string) => (text ? Number(text) : undefined);
 
 export function CoatLogFilters({ value, onChange }: CoatLogFiltersProps) {
-  const jobs = useFilterJobs();
-  const products = useFilterProducts();
+  // The choices: the latest 200 jobs, and the data sheets by name.
+  const jobs = useJobs(filterChoices);
+  const products = useProducts(filterChoices);
   const set = (patch: Partial<CoatLogFilterValues>) => onChange({ ...value, ...patch });
   return (
     <form role="search" aria-label="Filter the coat log" onSubmit={(e) => e.preventDefault()} className="mb-4 grid gap-3 rounded-panel border border-maple-300 bg-white p-4 sm:grid-cols-2 xl:grid-cols-5">

@@ -9,9 +9,9 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { errorMessage } from '../../../lib/error-messages';
-import type { CoatLogQuery } from '../api/coat-log-keys';
-import { useCoatPhotos } from '../api/get-coat-photos';
-import { getAllCoats, useCoats } from '../api/get-coats';
+import type { CoatFilters } from '../../../api/coats/coat-keys';
+import { getAllCoats, useCoats } from '../../../api/coats/get-coats';
+import { useCoatPhotos } from '../../../api/coat-photos/get-coat-photos';
 import { usePageDenibs } from '../api/get-page-denibs';
 import { formatShopDateTime } from '../../../lib/shop-time';
 import { AddPhotoForm } from './add-photo-form';
@@ -25,7 +25,7 @@ import { CorrectionForm } from './correction-form';
 
 const pageSize = 25;
 
-function toQuery(filters: CoatLogFilterValues, timeZone: string): Omit<CoatLogQuery, 'page' | 'pageSize'> {
+function toQuery(filters: CoatLogFilterValues, timeZone: string): Omit<CoatFilters, 'page' | 'pageSize'> {
   return { jobId: filters.jobId, productId: filters.productId, from: shopDayStart(filters.from, timeZone), to: shopDayStart(filters.to, timeZone, 1), history: filters.history };
 }
 

@@ -7,7 +7,7 @@ import { correctCoatSchema, type Coat } from '../../../../shared/schemas/coat';
 import { Button } from '../../../components/ui/button';
 import { asNumber, asNumberOrNull, FieldShell, FormAlert, InputField, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCorrectCoat } from '../api/correct-coat';
+import { useCorrectCoat } from '../../../api/coats/correct-coat';
 
 type CorrectionInput = z.input<typeof correctCoatSchema>;
 type Correction = z.output<typeof correctCoatSchema>;
@@ -15,18 +15,15 @@ const editable = ['wetFilmUm', 'thinningPct', 'airTempC', 'relativeHumidityPct',
 const fieldNames = [...editable, 'reason'];
 
 /**
- * The whole coat as it should have been, not just the changed fields: the server's correction
- * schema fills any field left out with its create default (thinning 0, no step, no lot), so a
- * partial correction would quietly wipe them. Drying temperature goes as null so the server works
- * it out again from the racks or the corrected air temperature, as it did the first time.
+ * The boxes on the form and the reason; the server keeps every field a correction leaves out
+ * (parts, product, step, lot, pot, when sprayed). Drying temperature goes as null so the server
+ * works it out again from the racks or the corrected air temperature, as it did the first time.
  */
-function restated(coat: Coat, values: Correction): Correction {
-  // The reasons given for the first version's stops carry over; a correction does not erase them.
+function correctionOf(coat: Coat, values: Correction): Correction {
+  // A correction starts with no acknowledgements, so the reasons given for the first version's stops are sent again.
   const acknowledgements = coat.warnings.flatMap((w) => (w.acknowledgedReason ? [{ code: w.code, reason: w.acknowledgedReason }] : []));
-  const { partIds, productId, sprayedAt, stepPosition, lotId, mixId } = coat;
-  // Only the boxes on the form: the parsed values carry the schema's defaults for everything else.
   const edited = Object.fromEntries(editable.map((key) => [key, values[key]]));
-  return { partIds, productId, sprayedAt, stepPosition, lotId, mixId, dryingTempC: null, acknowledgements, ...edited, reason: values.reason };
+  return { ...edited, dryingTempC: null, acknowledgements, reason: values.reason };
 }
 
 export function CorrectionForm({ coat, onDone }: { coat: Coat; onDone: () => void }) {
@@ -42,7 +39,7 @@ export function CorrectionForm({ coat, onDone }: { coat: Coat; onDone: () => voi
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     try {
-      const corrected = await correct.mutateAsync({ id: coat.id, correction: restated(coat, values) });
+      const corrected = await correct.mutateAsync({ id: coat.id, correction: correctionOf(coat, values) });
       toast.success(`Coat ${coat.id} is corrected by record ${corrected.id}. The first version stays in the history.`);
       onDone();
     } catch (error) {

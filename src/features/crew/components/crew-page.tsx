@@ -6,7 +6,7 @@ import { buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { StatusBadge } from '../../../components/ui/status-badge';
-import { useCrew } from '../api/get-crew';
+import { useCrew } from '../../../api/crew/get-crew';
 import { crewLabel, crewTone } from './crew-format';
 
 interface CrewPageProps {

@@ -6,7 +6,7 @@ import { Dialog } from '../../../components/ui/dialog';
 import { PageHeader } from '../../../components/ui/page-header';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
 import { StatusBadge } from '../../../components/ui/status-badge';
-import { useCrewPerson } from '../api/get-crew-person';
+import { useCrewPerson } from '../../../api/crew/get-crew-person';
 import { crewLabel, crewTone, dayWords } from './crew-format';
 import { CrewRecordForm } from './crew-record-form';
 

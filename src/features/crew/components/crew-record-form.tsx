@@ -7,7 +7,7 @@ import { createCrewRecordSchema, crewRecordKindLabels, crewRecordKinds, type Cre
 import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, InputField, SelectField, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useRecordCrew } from '../api/record-crew';
+import { useRecordCrew } from '../../../api/crew/record-crew';
 
 /** Every field any kind may have; the shared schema keeps only those of the kind chosen. */
 interface FlatInput {

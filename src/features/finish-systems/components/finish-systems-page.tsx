@@ -7,7 +7,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { TemperatureField } from '../../../components/ui/temperature-field';
-import { useFinishSystems } from '../api/get-finish-systems';
+import { useFinishSystems } from '../../../api/finish-systems/get-finish-systems';
 import type { CoatingProducts } from './coating-products';
 import { FinishSystemCard } from './finish-system-card';
 import { FinishSystemForm } from './finish-system-form';

@@ -5,7 +5,7 @@ import { inputClasses } from '../../../components/ui/field';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { isApiError } from '../../../lib/api-client';
 import { formatQuantity } from '../../../lib/units-display';
-import { useJobEstimate } from '../api/get-job-estimate';
+import { useJobEstimate } from '../../../api/jobs/get-job-estimate';
 import { missingDataWords } from './estimate-format';
 import { EstimateTable } from './estimate-table';
 
@@ -51,7 +51,7 @@ export function EstimatePanel({ jobId, units }: { jobId: number; units: UnitSyst
   const [method, setMethod] = useState<SprayMethod>('hvlp');
   const [te, setTe] = useState(String(sprayMethods.hvlp.transferEfficiencyPct));
   const typedTe = parseTransferEfficiency(te);
-  const estimate = useJobEstimate(jobId, method, typedTe === sprayMethods[method].transferEfficiencyPct ? undefined : typedTe);
+  const estimate = useJobEstimate(jobId, { method, transferEfficiencyPct: typedTe === sprayMethods[method].transferEfficiencyPct ? undefined : typedTe });
   const chooseMethod = (next: SprayMethod) => {
     setMethod(next);
     setTe(String(sprayMethods[next].transferEfficiencyPct));

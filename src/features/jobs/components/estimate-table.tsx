@@ -1,6 +1,6 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../lib/units-display';
-import type { JobEstimate } from '../api/get-job-estimate';
+import type { Estimate as JobEstimate } from '../../../../shared/schemas/job';
 import { litres, money, vocMass } from './estimate-format';
 
 type Step = JobEstimate['steps'][number];

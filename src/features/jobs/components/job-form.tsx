@@ -8,9 +8,9 @@ import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, inputClasses, InputField, SelectField } from '../../../components/ui/field';
 import { LoadingState } from '../../../components/ui/states';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateJob } from '../api/create-job';
-import { useFinishSystemChoices } from '../api/get-finish-system-choices';
-import { useUpdateJob } from '../api/update-job';
+import { useCreateJob } from '../../../api/jobs/create-job';
+import { useFinishSystems } from '../../../api/finish-systems/get-finish-systems';
+import { useUpdateJob } from '../../../api/jobs/update-job';
 import { jobStateOptions } from './job-format';
 
 type JobFormInput = z.input<typeof createJobSchema>;
@@ -36,7 +36,7 @@ interface JobFormProps {
  * Waits for the finish systems first: a select only shows its saved value if that option exists when the form starts.
  */
 export function JobForm(props: JobFormProps) {
-  const systems = useFinishSystemChoices();
+  const systems = useFinishSystems();
   if (systems.isPending) return <LoadingState what="the finish systems" />;
   const options: Option[] = [
     { value: '', label: 'None chosen yet' },

@@ -9,7 +9,7 @@ export const jobStateLabels: Record<JobState, string> = {
 };
 
 /** What each state means, for the state filter and the job form. */
-export const jobStateHints: Record<JobState, string> = {
+const jobStateHints: Record<JobState, string> = {
   open: 'No coat yet',
   'in-finish': 'Coats going on or drying',
   ready: 'Every part can be handled',
@@ -37,7 +37,7 @@ export function formatDueDate(isoDate: string): string {
   return new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(at);
 }
 
-export interface DueWords {
+interface DueWords {
   date: string;
   relation: string;
   overdue: boolean;

@@ -2,7 +2,7 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import { ErrorState } from '../../../components/ui/states';
 import { jobReadyLines } from '../../../lib/ready-time-words';
 import { useNow } from '../../../lib/use-now';
-import { useJobReadyTime } from '../api/get-job-ready-time';
+import { useJobReadyTime } from '../../../api/ready/get-ready';
 
 /** For the assembler and the lead: when the whole job can be handled and packed, and what that assumes. */
 export function JobReadyTime({ jobId, timeZone, units }: { jobId: number; timeZone: string; units: UnitSystem }) {

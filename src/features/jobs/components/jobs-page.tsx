@@ -7,7 +7,7 @@ import { Dialog } from '../../../components/ui/dialog';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useJobs } from '../api/get-jobs';
+import { useJobs } from '../../../api/jobs/get-jobs';
 import type { JobStateFilter } from './job-format';
 import { JobForm } from './job-form';
 import { JobsFilters } from './jobs-filters';

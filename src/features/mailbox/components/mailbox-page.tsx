@@ -1,7 +1,7 @@
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { errorMessage } from '../../../lib/error-messages';
-import { isNoMailbox, useMailbox } from '../api/get-mailbox';
+import { isNoMailbox, useMailbox } from '../../../api/mailbox/get-mailbox';
 import { MailboxMessageItem } from './mailbox-message-item';
 
 function MailboxContent({ timeZone }: { timeZone: string }) {

@@ -7,7 +7,7 @@ import { FormAlert } from '../../../components/ui/field';
 import { PageHeader } from '../../../components/ui/page-header';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
-import { useCommitPartsImport, type ImportPreview } from '../api/import-parts';
+import { partsTemplateHref, useCommitPartsImport, type ImportPreview } from '../../../api/parts/import-parts';
 import { ColumnMapping } from './column-mapping';
 import { ImportErrors } from './import-errors';
 import { plainMessage, type FieldMapping, type PartField } from './import-mapping';
@@ -38,7 +38,7 @@ function FilePicker({ fileName, checking, onFile }: { fileName?: string; checkin
       <p className="mb-3 max-w-3xl text-maple-700">
         A CSV file of up to 2 MB whose first row names the columns; commas, semicolons or tabs between values. Sizes in mm. Nothing is saved until you
         press Import.{' '}
-        <a href="/api/jobs/parts-template.csv" download className="font-semibold text-lacquer-800 underline underline-offset-4">
+        <a href={partsTemplateHref} download className="font-semibold text-lacquer-800 underline underline-offset-4">
           Download the template CSV
         </a>
       </p>

@@ -5,7 +5,8 @@ import { Button } from '../../../components/ui/button';
 import { inputClasses } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
-import { normaliseTag, partByTagQueryOptions } from '../api/get-part-by-tag';
+import { normaliseTag } from '../../../api/parts/normalise-tag';
+import { partByTagQueryOptions } from '../../../api/parts/get-part-by-tag';
 
 /** For when a camera cannot read a tag: type the code printed under it and go to the part. */
 export function FindTagForm() {

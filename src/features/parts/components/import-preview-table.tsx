@@ -1,5 +1,5 @@
 import type { ImportRowError } from '../../../../shared/schemas/part';
-import type { ImportPreview } from '../api/import-parts';
+import type { ImportPreview } from '../../../api/parts/import-parts';
 import { fieldLabel } from './import-mapping';
 
 const th = 'whitespace-nowrap border-b border-maple-300 px-3 py-2 text-sm font-semibold text-maple-800';

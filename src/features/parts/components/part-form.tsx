@@ -7,8 +7,8 @@ import { createPartSchema, type Part } from '../../../../shared/schemas/part';
 import { Button } from '../../../components/ui/button';
 import { asNumber, FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreatePart } from '../api/create-part';
-import { useUpdatePart } from '../api/update-part';
+import { useCreatePart } from '../../../api/parts/create-part';
+import { useUpdatePart } from '../../../api/parts/update-part';
 import { CoatedSurfaces, RackPlace, type PartFormInput, type PartFormOutput, type RackChoice } from './part-form-fields';
 
 const fieldNames = Object.keys(createPartSchema.shape);

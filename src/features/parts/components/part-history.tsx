@@ -4,7 +4,7 @@ import { formatQuantity } from '../../../../shared/units';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
 import { formatShopDateTime } from '../../../lib/shop-time';
 import { useNow } from '../../../lib/use-now';
-import { usePartHistory } from '../api/get-part-history';
+import { usePartHistory } from '../../../api/parts/get-part-history';
 import { partNowLines, stepStatuses, type StepStatus } from './part-now-words';
 
 interface Props {

@@ -17,7 +17,6 @@ interface PartPageProps {
   racks: RackChoice[] | undefined;
   /** The part's job in a line, with a link to it; supplied by the route. */
   job: ReactNode;
-  onSaved: () => void;
   /** The state as worked out now (it moves on with the clock); the stored one until that is known. */
   stateNow?: string;
   /** What the part needs next and when it is ready, shown above its facts; supplied by the route. */
@@ -34,7 +33,7 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
 }
 
 /** What a scanned rack tag opens: large, plain facts for someone at the rack with gloves on. */
-export function PartPage({ part, units, canWrite, racks, job, onSaved, stateNow, status }: PartPageProps) {
+export function PartPage({ part, units, canWrite, racks, job, stateNow, status }: PartPageProps) {
   const [editing, setEditing] = useState(false);
   return (
     <>
@@ -67,7 +66,7 @@ export function PartPage({ part, units, canWrite, racks, job, onSaved, stateNow,
       {canWrite && (
         <Dialog open={editing} onClose={() => setEditing(false)} wide title={`Edit ${part.label}`}>
           {racks ? (
-            <PartForm jobId={part.jobId} part={part} racks={racks} units={units} onDone={(saved) => { setEditing(false); if (saved) onSaved(); }} />
+            <PartForm jobId={part.jobId} part={part} racks={racks} units={units} onDone={() => setEditing(false)} />
           ) : (
             <LoadingState what="the racks" />
           )}

@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { formatQuantity } from '../../../lib/units-display';
-import { useJobParts } from '../api/get-parts';
+import { useJobParts } from '../../../api/parts/get-job-parts';
 import { partTotals } from './part-format';
 import { PartForm } from './part-form';
 import type { RackChoice } from './part-form-fields';
@@ -18,7 +18,6 @@ interface PartsSectionProps {
   /** Undefined while the racks load; the part form waits for them. */
   racks: RackChoice[] | undefined;
   /** Called after a part is saved, so the route can refresh what is worked out from the parts. */
-  onPartsChanged: () => void;
   /** More ways to add parts (the cut-list import link), supplied by the route. */
   actions?: ReactNode;
 }
@@ -44,14 +43,11 @@ function Totals({ parts, units }: { parts: Part[]; units: UnitSystem }) {
   );
 }
 
-export function PartsSection({ jobId, units, canWrite, racks, onPartsChanged, actions }: PartsSectionProps) {
+export function PartsSection({ jobId, units, canWrite, racks, actions }: PartsSectionProps) {
   const parts = useJobParts(jobId);
   const [editing, setEditing] = useState<Editing>(null);
   const edit = useCallback((part: Part) => setEditing({ part }), []);
-  const done = (saved?: Part) => {
-    setEditing(null);
-    if (saved) onPartsChanged();
-  };
+  const done = () => setEditing(null);
 
   return (
     <section aria-labelledby="parts-heading">

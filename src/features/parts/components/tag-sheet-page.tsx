@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useJobParts } from '../api/get-parts';
+import { useJobParts } from '../../../api/parts/get-job-parts';
 import { RackTag } from './rack-tag';
 import { useQrCodes } from './use-qr-codes';
 

@@ -1,6 +1,6 @@
 import { useRef, useState } from 'react';
 import { errorMessage } from '../../../lib/error-messages';
-import { usePreviewPartsImport, type ImportPreview } from '../api/import-parts';
+import { usePreviewPartsImport, type ImportPreview } from '../../../api/parts/import-parts';
 import { emptyMapping, guessMapping, type FieldMapping } from './import-mapping';
 
 interface ImportState {

@@ -5,9 +5,9 @@ import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
 import { errorMessage } from '../../../lib/error-messages';
-import { useAcceptPlan } from '../api/accept-plan';
+import { useAcceptPlan } from '../../../api/planner/accept-plan';
 import { usePlannableJobs } from '../api/get-plannable-jobs';
-import { useProposePlan } from '../api/propose-plan';
+import { useProposePlan } from '../../../api/planner/propose-plan';
 import { AutoPlanProposal } from './auto-plan-proposal';
 
 interface AutoPlanDialogProps {

@@ -9,9 +9,9 @@ import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, inputClasses, SelectField } from '../../../components/ui/field';
 import { errorMessage } from '../../../lib/error-messages';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateSpraySession } from '../api/create-spray-session';
-import type { PlannerSession } from '../api/get-spray-sessions';
-import { useUpdateSpraySession } from '../api/update-spray-session';
+import { useCreateSpraySession } from '../../../api/spray-sessions/create-spray-session';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 import { needsOverrideReason } from '../utils/booking-errors';
 import { sessionWhen } from '../utils/session-time';
 import { DurationSuggestion } from './duration-suggestion';
@@ -23,7 +23,7 @@ import { SprayerField, type SprayerViewer } from './sprayer-field';
 type BookingInput = z.input<typeof createSpraySessionSchema>;
 type BookingOutput = z.output<typeof createSpraySessionSchema>;
 
-export type BookingTarget = { kind: 'new'; start: string; end: string; boothId: number | null } | { kind: 'edit'; session: PlannerSession };
+export type BookingTarget = { kind: 'new'; start: string; end: string; boothId: number | null } | { kind: 'edit'; session: SpraySession };
 export interface PlanningSettings {
   timezone: string;
   setupMin: number;
@@ -46,7 +46,7 @@ interface BookingFormProps {
   booths: Booth[];
   settings: PlanningSettings;
   viewer: SprayerViewer;
-  onDone: (saved: PlannerSession | null) => void;
+  onDone: (saved: SpraySession | null) => void;
 }
 
 /** Book a session, or change one: booth, times on the shop clock, sprayer, parts and notes. */

@@ -5,7 +5,7 @@ import { overrideSchema } from '../../../../shared/schemas/spray-session';
 import { Dialog } from '../../../components/ui/dialog';
 import { FormAlert } from '../../../components/ui/field';
 import { errorMessage } from '../../../lib/error-messages';
-import { useUpdateSpraySession } from '../api/update-spray-session';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 import { useUndoMove, type PendingMove } from '../hooks/use-calendar-moves';
 import { sessionWhen } from '../utils/session-time';
 import { OverrideReasonPanel } from './override-reason-panel';

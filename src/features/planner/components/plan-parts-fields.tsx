@@ -2,9 +2,9 @@ import { useId, useState } from 'react';
 import type { FinishSystem } from '../../../../shared/schemas/finish-system';
 import { inputClasses } from '../../../components/ui/field';
 import { formatNumber } from '../../../lib/units-display';
-import { useJobParts } from '../api/get-job-parts';
+import { useJobParts } from '../../../api/parts/get-job-parts';
 import { usePlannableJobs } from '../api/get-plannable-jobs';
-import { usePlannerFinishSystems } from '../api/get-planner-finish-systems';
+import { useFinishSystems } from '../../../api/finish-systems/get-finish-systems';
 
 export interface PartsPlan {
   items: { partId: number; stepPosition: number | null }[];
@@ -28,7 +28,7 @@ interface PlanPartsFieldsProps {
 export function PlanPartsFields({ onPlan, keeping }: PlanPartsFieldsProps) {
   const ids = { job: useId(), step: useId() };
   const jobs = usePlannableJobs();
-  const systems = usePlannerFinishSystems();
+  const systems = useFinishSystems();
   const [jobId, setJobId] = useState<number | null>(null);
   const [stepPosition, setStepPosition] = useState<number | null>(null);
   const [chosen, setChosen] = useState<number[]>([]);

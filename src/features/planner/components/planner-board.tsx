@@ -1,7 +1,7 @@
 import type { EventInput } from '@fullcalendar/core';
 import { useMemo } from 'react';
 import type { Booth } from '../../../../shared/schemas/booth';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { businessHoursFor } from '../utils/business-hours';
 import type { PlannerView } from '../utils/calendar-range';
 import { toCalendarEvent } from '../utils/session-events';
@@ -17,7 +17,7 @@ interface PlannerBoardProps extends Omit<CalendarHandlers, 'onSelectRange'> {
   title: string;
   timeZone: string;
   booths: Booth[];
-  sessions: PlannerSession[];
+  sessions: SpraySession[];
   canWrite: boolean;
   /** Each booth's look, from every booth at the site (not only those shown). */
   identities: Map<number, BoothIdentity>;
@@ -35,7 +35,7 @@ export function PlannerBoard({ view, day, title, timeZone, booths, sessions, can
   const eventsByBooth = useMemo(() => {
     const byBooth = new Map<number, EventInput[]>();
     for (const event of events) {
-      const { boothId } = event.extendedProps?.session as PlannerSession;
+      const { boothId } = event.extendedProps?.session as SpraySession;
       byBooth.set(boothId, [...(byBooth.get(boothId) ?? []), event]);
     }
     return byBooth;

@@ -5,7 +5,8 @@ import { Button } from '../../../components/ui/button';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
 import { boothIdentities } from '../../../lib/booth-identity';
 import { errorMessage } from '../../../lib/error-messages';
-import { useSpraySessions, type PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import { useSpraySessions } from '../../../api/spray-sessions/get-spray-sessions';
 import { useCalendarMoves } from '../hooks/use-calendar-moves';
 import { useNarrowScreen } from '../hooks/use-narrow-screen';
 import { rangeTitle, stepDay, visibleRange, type PlannerView } from '../utils/calendar-range';
@@ -24,7 +25,7 @@ interface PlannerCalendarProps {
   day: string;
   onDay: (day: string) => void;
   onBook: (start: string, end: string, boothId: number | null) => void;
-  onOpen: (session: PlannerSession) => void;
+  onOpen: (session: SpraySession) => void;
 }
 
 function Problem({ message, onDismiss }: { message: string; onDismiss: () => void }) {
@@ -53,7 +54,7 @@ export function PlannerCalendar({ settings, booths, siteId, canWrite, day, onDay
   const narrow = useNarrowScreen();
   const view = narrow ? 'day' : chosenView;
   const boothId = boothFilter === 'all' ? undefined : boothFilter;
-  const sessions = useSpraySessions({ ...visibleRange(view, day, timeZone), boothId, siteId }, !interacting);
+  const sessions = useSpraySessions({ ...visibleRange(view, day, timeZone), boothId, siteId }, { enabled: !interacting });
   const moves = useCalendarMoves(timeZone);
   const title = rangeTitle(view, day);
   const shownBooths = boothId ? booths.filter((booth) => booth.id === boothId) : booths;

@@ -1,6 +1,6 @@
 import type { Booth } from '../../../../shared/schemas/booth';
 import { Dialog } from '../../../components/ui/dialog';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { BookingForm, type BookingTarget, type PlanningSettings } from './booking-form';
 import { SessionSummary } from './session-summary';
 
@@ -17,11 +17,11 @@ interface PlannerDialogsProps {
   settings: PlanningSettings;
   booths: Booth[];
   booking: BookingTarget | null;
-  opened: PlannerSession | undefined;
-  onBooked: (saved: PlannerSession | null) => void;
+  opened: SpraySession | undefined;
+  onBooked: (saved: SpraySession | null) => void;
   onCloseSummary: () => void;
-  onChangeBooking: (session: PlannerSession) => void;
-  onCancelSession: (session: PlannerSession) => void;
+  onChangeBooking: (session: SpraySession) => void;
+  onCancelSession: (session: SpraySession) => void;
 }
 
 export function PlannerDialogs({ viewer, settings, booths, booking, opened, ...handlers }: PlannerDialogsProps) {

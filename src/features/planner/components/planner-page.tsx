@@ -3,8 +3,8 @@ import { calendarDateIn } from '../../../../shared/time';
 import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { usePlannerBooths } from '../api/get-planner-booths';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import { useBooths } from '../../../api/booths/get-booths';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { useCancelSession } from '../hooks/use-cancel-session';
 import { shopWallToInstant } from '../utils/shop-wall-clock';
 import type { BookingTarget, PlanningSettings } from './booking-form';
@@ -27,9 +27,9 @@ export function PlannerPage({ settings, viewer, siteId, siteSwitcher, initialDay
   const timeZone = settings.timezone;
   const [day, setDay] = useState(() => initialDay ?? calendarDateIn(new Date(), timeZone));
   const [booking, setBooking] = useState<BookingTarget | null>(null);
-  const [opened, setOpened] = useState<PlannerSession | undefined>(undefined);
+  const [opened, setOpened] = useState<SpraySession | undefined>(undefined);
   const [autoPlanning, setAutoPlanning] = useState(false);
-  const booths = usePlannerBooths(siteId);
+  const booths = useBooths({ page: 1, pageSize: 200, siteId });
   const cancelSession = useCancelSession(timeZone);
 
   const bookBlank = () => {
@@ -37,7 +37,7 @@ export function PlannerPage({ settings, viewer, siteId, siteSwitcher, initialDay
     const end = shopWallToInstant(day, '09:00', timeZone).toISOString();
     setBooking({ kind: 'new', start, end, boothId: null });
   };
-  const booked = (saved: PlannerSession | null) => {
+  const booked = (saved: SpraySession | null) => {
     setBooking(null);
     // Show where the new booking landed, so the lead sees it on the calendar.
     if (saved) setDay(calendarDateIn(new Date(saved.start), timeZone));

@@ -2,7 +2,7 @@ import type { EventContentArg } from '@fullcalendar/core';
 import { spraySessionStateLabels } from '../../../../shared/schemas/spray-session';
 import type { BoothIdentity } from '../../../lib/booth-identity';
 import { coatHeadline, coatMaterial, partsWords } from '../../../lib/session-work-words';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { sprayerWords, stateChipColours } from '../utils/session-events';
 
 /** The recoat-window shading shown while a session is dragged; named once, where each stretch begins. */
@@ -26,7 +26,7 @@ function NewSelection({ arg }: { arg: EventContentArg }) {
  * job and coat, product and colour, parts, sprayer, then booth. Text wraps rather than being
  * cut, so blocks side by side stay readable.
  */
-function SessionBlock({ arg, session, identity }: { arg: EventContentArg; session: PlannerSession; identity: BoothIdentity | undefined }) {
+function SessionBlock({ arg, session, identity }: { arg: EventContentArg; session: SpraySession; identity: BoothIdentity | undefined }) {
   const cancelled = session.state === 'cancelled';
   const struck = cancelled ? 'line-through' : '';
   const chip = stateChipColours[session.state];
@@ -55,7 +55,7 @@ function SessionBlock({ arg, session, identity }: { arg: EventContentArg; sessio
 }
 
 export function SessionEventContent({ arg }: { arg: EventContentArg }) {
-  const { session, identity, recoat } = arg.event.extendedProps as { session?: PlannerSession; identity?: BoothIdentity; recoat?: boolean };
+  const { session, identity, recoat } = arg.event.extendedProps as { session?: SpraySession; identity?: BoothIdentity; recoat?: boolean };
   if (recoat) return <WindowLabel arg={arg} />;
   if (!session) return <NewSelection arg={arg} />;
   return <SessionBlock arg={arg} session={session} identity={identity} />;

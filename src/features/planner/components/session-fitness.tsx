@@ -1,5 +1,5 @@
 import { FitnessFindings } from '../../../components/safety/fitness-findings';
-import { useSessionFitness } from '../api/get-session-fitness';
+import { useSessionFitness } from '../../../api/spray-sessions/get-session-fitness';
 
 /** Before the session: is the booth kept up and is the assigned sprayer's protection in date, for what its products need. */
 export function SessionFitness({ spraySessionId, enabled }: { spraySessionId: number; enabled: boolean }) {

@@ -2,12 +2,12 @@ import { spraySessionStateLabels } from '../../../../shared/schemas/spray-sessio
 import { BoothMark } from '../../../components/ui/booth-mark';
 import type { BoothIdentity } from '../../../lib/booth-identity';
 import { sessionWorkLine } from '../../../lib/session-work-words';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { sprayerWords } from '../utils/session-events';
 import { sessionWhen } from '../utils/session-time';
 
 interface SessionListProps {
-  sessions: PlannerSession[];
+  sessions: SpraySession[];
   timeZone: string;
   title: string;
   identities: Map<number, BoothIdentity>;

@@ -5,8 +5,8 @@ import { spraySessionStateLabels } from '../../../../shared/schemas/spray-sessio
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
 import { sessionWorkLine } from '../../../lib/session-work-words';
-import { useSpraySession } from '../api/get-spray-session';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import { useSpraySession } from '../../../api/spray-sessions/get-spray-session';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { useSessionPlan, type SessionPlan } from '../hooks/use-session-plan';
 import { isMovable, sprayerWords } from '../utils/session-events';
 import { sessionWhen } from '../utils/session-time';
@@ -15,7 +15,7 @@ import { SessionFitness } from './session-fitness';
 
 interface SessionSummaryProps {
   /** The calendar's copy, shown while the live one loads. */
-  shown: PlannerSession;
+  shown: SpraySession;
   booth: Booth | undefined;
   timeZone: string;
   canWrite: boolean;
@@ -60,7 +60,7 @@ function PlannedParts({ plan, count, sprayed, timeZone }: { plan: SessionPlan; c
   );
 }
 
-function windowWords(window: NonNullable<PlannerSession['work']['recoatWindow']>, timeZone: string): string {
+function windowWords(window: NonNullable<SpraySession['work']['recoatWindow']>, timeZone: string): string {
   const opens = `opens ${formatShopDateTime(window.opensAt, timeZone)}`;
   const closes = window.closesAt ? `, closes ${formatShopDateTime(window.closesAt, timeZone)}` : ', no closing time';
   return `${opens}${closes}${window.projected ? ' (worked out from the booked coat before)' : ''}`;

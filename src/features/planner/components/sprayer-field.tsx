@@ -1,8 +1,8 @@
 import type { UseFormRegisterReturn } from 'react-hook-form';
 import type { Sprayer } from '../../../../shared/schemas/sprayer';
 import { SelectField } from '../../../components/ui/field';
-import { useSprayers } from '../api/get-sprayers';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import { useSprayers } from '../../../api/sprayers/get-sprayers';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 
 export interface SprayerViewer {
   id: number;
@@ -13,7 +13,7 @@ export interface SprayerViewer {
  * Who a session can be given to: nobody yet, or an active sprayer or lead of the booth's site.
  * A session already given to someone keeps that choice on offer while the list loads.
  */
-export function sprayerOptions(viewer: SprayerViewer, sprayers: Sprayer[] | undefined, current: Pick<PlannerSession, 'sprayerId' | 'sprayerName'> | undefined) {
+function sprayerOptions(viewer: SprayerViewer, sprayers: Sprayer[] | undefined, current: Pick<SpraySession, 'sprayerId' | 'sprayerName'> | undefined) {
   const options: { value: number | ''; label: string }[] = [{ value: '', label: 'Not assigned yet' }];
   for (const s of sprayers ?? []) options.push({ value: s.id, label: s.id === viewer.id ? `${s.name} (me)` : `${s.name}${s.role === 'lead' ? ' (lead)' : ''}` });
   if (current?.sprayerId && !options.some((o) => o.value === current.sprayerId)) {
@@ -25,7 +25,7 @@ export function sprayerOptions(viewer: SprayerViewer, sprayers: Sprayer[] | unde
 interface SprayerFieldProps {
   boothId: number | undefined;
   viewer: SprayerViewer;
-  current: Pick<PlannerSession, 'sprayerId' | 'sprayerName'> | undefined;
+  current: Pick<SpraySession, 'sprayerId' | 'sprayerName'> | undefined;
   registration: UseFormRegisterReturn;
   error: string | undefined;
   className?: string;

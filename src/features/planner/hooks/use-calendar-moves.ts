@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { toast } from 'sonner';
 import { errorMessage } from '../../../lib/error-messages';
-import type { PlannerSession } from '../api/get-spray-sessions';
-import { useUpdateSpraySession } from '../api/update-spray-session';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 import type { SessionMoveArg } from '../components/booth-calendar';
 import { needsOverrideReason } from '../utils/booking-errors';
 import { sessionWhen } from '../utils/session-time';
@@ -13,7 +13,7 @@ export interface PendingMove {
   end: string;
   message: string;
   /** Where it was, so the move can be undone. */
-  before: PlannerSession;
+  before: SpraySession;
 }
 
 /**
@@ -22,14 +22,14 @@ export interface PendingMove {
  */
 export function useUndoMove(timeZone: string) {
   const updateSession = useUpdateSpraySession();
-  const undo = (before: PlannerSession) =>
+  const undo = (before: SpraySession) =>
     updateSession
       .mutateAsync({ id: before.id, changes: { start: before.start, end: before.end, boothId: before.boothId, ...(before.overrideReason ? { override: { reason: before.overrideReason } } : {}) } })
       .then(
         () => toast.success(`Put back: ${before.boothName}, ${sessionWhen(before, timeZone)}.`),
         (error: unknown) => toast.error(`Could not undo: ${errorMessage(error)}`),
       );
-  return (saved: PlannerSession, before: PlannerSession) =>
+  return (saved: SpraySession, before: SpraySession) =>
     toast.success(`Moved: ${saved.boothName}, ${sessionWhen(saved, timeZone)}.`, { duration: 10_000, action: { label: 'Undo', onClick: () => void undo(before) } });
 }
 
@@ -46,7 +46,7 @@ export function useCalendarMoves(timeZone: string) {
 
   const onMove = (arg: SessionMoveArg) => {
     const { event } = arg;
-    const before = event.extendedProps.session as PlannerSession;
+    const before = event.extendedProps.session as SpraySession;
     if (!event.start || !event.end) return arg.revert();
     const move = { id: Number(event.id), start: event.start.toISOString(), end: event.end.toISOString() };
     setProblem(null);

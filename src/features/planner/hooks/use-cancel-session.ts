@@ -1,7 +1,7 @@
 import { toast } from 'sonner';
 import { errorMessage } from '../../../lib/error-messages';
-import type { PlannerSession } from '../api/get-spray-sessions';
-import { useUpdateSpraySession } from '../api/update-spray-session';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 import { sessionWhen } from '../utils/session-time';
 
 /**
@@ -11,13 +11,13 @@ import { sessionWhen } from '../utils/session-time';
 export function useCancelSession(timeZone: string) {
   const updateSession = useUpdateSpraySession();
 
-  const restore = (session: PlannerSession) =>
+  const restore = (session: SpraySession) =>
     updateSession.mutateAsync({ id: session.id, changes: { state: 'planned' } }).then(
       () => toast.success(`Back in the plan: ${session.boothName}, ${sessionWhen(session, timeZone)}.`),
       (error: unknown) => toast.error(`Could not undo: ${errorMessage(error)}`),
     );
 
-  return (session: PlannerSession) =>
+  return (session: SpraySession) =>
     updateSession.mutateAsync({ id: session.id, changes: { state: 'cancelled' } }).then(
       () =>
         toast.success(`Cancelled: ${session.boothName}, ${sessionWhen(session, timeZone)}.`, {

@@ -1,6 +1,6 @@
 import type { CalendarApi, EventMountArg } from '@fullcalendar/core';
 import { useRef } from 'react';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { recoatSourceId, recoatWindowSource } from '../utils/recoat-window-events';
 
 const hide = (calendar: CalendarApi) => calendar.getEventSourceById(recoatSourceId)?.remove();
@@ -15,7 +15,7 @@ export function useRecoatShading(timeZone: string, canWrite: boolean) {
 
   const pressed = (calendar: CalendarApi, id: string) => {
     // The calendar's own copy, so a block mounted before the last refresh shows today's window.
-    const session = calendar.getEventById(id)?.extendedProps.session as PlannerSession | undefined;
+    const session = calendar.getEventById(id)?.extendedProps.session as SpraySession | undefined;
     const source = session && recoatWindowSource(session, timeZone);
     if (!source) return;
     hide(calendar);

@@ -17,7 +17,7 @@ export function mondayOf(day: string): string {
 }
 
 /** First and last shop days on screen. */
-export function visibleDays(view: PlannerView, day: string): { first: string; afterLast: string } {
+function visibleDays(view: PlannerView, day: string): { first: string; afterLast: string } {
   const first = view === 'week' ? mondayOf(day) : day;
   return { first, afterLast: addDays(first, view === 'week' ? 7 : 1) };
 }

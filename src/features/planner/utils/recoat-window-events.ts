@@ -1,5 +1,5 @@
 import type { EventSourceInput } from '@fullcalendar/core';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 
 /** Background shading reaches this far either side of the window, past anything a week view shows. */
 const reachMs = 21 * 86_400_000;
@@ -19,7 +19,7 @@ function dayAndTime(ms: number, timeZone: string): string {
  * The session's recoat window as shading behind the calendar: too soon before it opens, the
  * window itself, and closed (denib first) after it closes. Null when the parts wait for nothing.
  */
-export function recoatWindowSource(session: PlannerSession, timeZone: string): EventSourceInput | null {
+export function recoatWindowSource(session: SpraySession, timeZone: string): EventSourceInput | null {
   const window = session.work.recoatWindow;
   if (!window) return null;
   const opens = Date.parse(window.opensAt);

@@ -1,7 +1,7 @@
 import type { EventInput } from '@fullcalendar/core';
 import { spraySessionStateLabels, type SpraySessionState } from '../../../../shared/schemas/spray-session';
 import { boothIdentity, type BoothIdentity } from '../../../lib/booth-identity';
-import type { PlannerSession } from '../api/get-spray-sessions';
+import type { SpraySession } from '../../../../shared/schemas/spray-session';
 
 /** State chips: the colour only backs up the word (tailwind tokens: lacquer, verdict, maple). */
 export const stateChipColours: Record<SpraySessionState, { background: string; text: string }> = {
@@ -13,20 +13,20 @@ export const stateChipColours: Record<SpraySessionState, { background: string; t
   cancelled: { background: '#ffffff', text: '#3f362a' },
 };
 
-export const sprayerWords = (session: Pick<PlannerSession, 'sprayerName'>) => session.sprayerName ?? 'No sprayer yet';
+export const sprayerWords = (session: Pick<SpraySession, 'sprayerName'>) => session.sprayerName ?? 'No sprayer yet';
 
 /** "Booth 1 · Planned · Mina Castell": booth, state and sprayer in words, never by colour alone. */
-export function sessionLabel(session: PlannerSession): string {
+function sessionLabel(session: SpraySession): string {
   return [session.boothName, spraySessionStateLabels[session.state], sprayerWords(session)].join(' · ');
 }
 
 /** Only a session still at "planned" may be dragged: once checks start, the booth is in use. */
-export function isMovable(session: PlannerSession): boolean {
+export function isMovable(session: SpraySession): boolean {
   return session.state === 'planned';
 }
 
 /** A block takes its booth's look: the booth's tint, its patterned band and ink, whatever its state. */
-export function toCalendarEvent(session: PlannerSession, canWrite: boolean, identity: BoothIdentity = boothIdentity(0)): EventInput {
+export function toCalendarEvent(session: SpraySession, canWrite: boolean, identity: BoothIdentity = boothIdentity(0)): EventInput {
   const cancelled = session.state === 'cancelled';
   return {
     id: String(session.id),

@@ -17,7 +17,3 @@ export function sessionWhen({ start, end }: { start: string; end: string }, time
   const to = new Date(end);
   return `${shopDay(from, timeZone)}, ${formatShopClock(from, timeZone)}–${formatShopClock(to, timeZone)} ${shopZoneName(from, timeZone)}`;
 }
-
-export function minutesBetween(start: string, end: string): number {
-  return Math.round((Date.parse(end) - Date.parse(start)) / 60_000);
-}

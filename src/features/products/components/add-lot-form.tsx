@@ -7,7 +7,7 @@ import { createLotSchema } from '../../../../shared/schemas/product';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useAddLot } from '../api/add-lot';
+import { useAddLot } from '../../../api/products/add-lot';
 
 type LotInput = z.input<typeof createLotSchema>;
 type LotOutput = z.output<typeof createLotSchema>;

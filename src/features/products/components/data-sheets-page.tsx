@@ -6,7 +6,7 @@ import { inputClasses } from '../../../components/ui/field';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useProducts } from '../api/get-products';
+import { useProducts } from '../../../api/products/get-products';
 import { ProductsTable, type ProductSort } from './products-table';
 import { useDebouncedValue } from './use-debounced-value';
 

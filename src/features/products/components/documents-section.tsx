@@ -6,8 +6,9 @@ import { FieldShell, inputClasses } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
 import { formatShopDateTime } from '../../../lib/shop-time';
-import { useUploadDocument, type DocumentKind } from '../api/upload-document';
-import { documentTitles, fileHref, fileSizeWords } from './product-format';
+import { useUploadDocument, type DocumentKind } from '../../../api/products/upload-document';
+import { fileHref } from '../../../api/files/file-href';
+import { documentTitles, fileSizeWords } from './product-format';
 
 // The server's own limit (20 MB); checked here too so a large file is not sent only to be refused.
 const maxBytes = 20 * 1024 * 1024;

@@ -1,5 +1,6 @@
 import { hazardLabels, type Hazard, type Lot, type Product } from '../../../../shared/schemas/product';
-import { documentTitles, fileHref } from './product-format';
+import { fileHref } from '../../../api/files/file-href';
+import { documentTitles } from './product-format';
 
 export function HazardWords({ hazards }: { hazards: Hazard[] }) {
   if (hazards.length === 0) return <span className="text-maple-700">None flagged</span>;

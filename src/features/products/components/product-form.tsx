@@ -6,8 +6,8 @@ import { createProductSchema, type Product } from '../../../../shared/schemas/pr
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateProduct } from '../api/create-product';
-import { useUpdateProduct } from '../api/update-product';
+import { useCreateProduct } from '../../../api/products/create-product';
+import { useUpdateProduct } from '../../../api/products/update-product';
 import { DryingTimesEditor } from './drying-times-editor';
 import { ProductIdentityFields } from './product-identity-fields';
 import { ProductLimitsFields } from './product-limits-fields';

@@ -1,4 +1,4 @@
-import type { FileRef, ProductKind } from '../../../../shared/schemas/product';
+import type { ProductKind } from '../../../../shared/schemas/product';
 
 export const productKindLabels: Record<ProductKind, string> = {
   primer: 'Primer',
@@ -26,9 +26,6 @@ export function fileSizeWords(bytes: number): string {
   if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024)} KB`;
   return `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 }
-
-/** The download address; the server sends the file back under its original name. */
-export const fileHref = (file: FileRef) => `/api/files/${file.id}`;
 
 export const documentTitles = {
   tds: { short: 'TDS', long: 'technical data sheet' },

@@ -4,7 +4,7 @@ import { chemistryLabels } from '../../../../shared/schemas/product';
 import { buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { useProduct } from '../api/get-product';
+import { useProduct } from '../../../api/products/get-product';
 import { DocumentsSection } from './documents-section';
 import { DryingPreview } from './drying-preview';
 import { LotsSection } from './lots-section';

@@ -7,8 +7,8 @@ import { createRackSchema, rackLocationLabels, rackLocations, type Rack } from '
 import { Button } from '../../../components/ui/button';
 import { asNumber, asNumberOrNull, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateRack } from '../api/create-rack';
-import { useUpdateRack } from '../api/update-rack';
+import { useCreateRack } from '../../../api/racks/create-rack';
+import { useUpdateRack } from '../../../api/racks/update-rack';
 
 type RackFormInput = z.input<typeof createRackSchema>;
 type RackFormOutput = z.output<typeof createRackSchema>;

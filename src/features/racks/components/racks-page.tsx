@@ -6,7 +6,7 @@ import { Dialog } from '../../../components/ui/dialog';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Pagination } from '../../../components/ui/pagination';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useRacks } from '../api/get-racks';
+import { useRacks } from '../../../api/racks/get-racks';
 import { RackForm, type RackSiteChoice } from './rack-form';
 import { RacksTable } from './racks-table';
 

@@ -1,4 +1,4 @@
-import type { ReadinessState } from '../../../../shared/finishing/readiness';
+import { readinessMovedOn, recoatWindowClosed, type ReadinessState } from '../../../../shared/finishing/readiness';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 
 export const stateLabels: Record<ReadinessState, string> = {
@@ -23,21 +23,15 @@ export interface BoardPart extends ReadyPart {
   windowMissed: boolean;
 }
 
-const afterLastCoat: readonly ReadinessState[] = ['drying', 'ready-to-handle', 'ready-to-pack', 'cured'];
+const instant = (iso: string | null) => (iso === null ? null : new Date(iso));
 
-const passed = (iso: string | null, now: number) => iso !== null && Date.parse(iso) <= now;
-
-/** Same rule as the server (a state begins at its instant), and never behind what the server said. */
+/** The server's answer moved on to `now` by the shared rule (a state begins at its instant; never behind the answer). */
 export function stateAt(part: ReadyPart, now: Date): ReadinessState {
-  const from = afterLastCoat.indexOf(part.state);
-  if (from < 0) return part.state;
-  const t = now.getTime();
-  const reached = passed(part.fullCureAt, t) ? 3 : passed(part.packAt, t) ? 2 : passed(part.handleAt, t) ? 1 : 0;
-  return afterLastCoat[Math.max(from, reached)];
+  return readinessMovedOn(part.state, { handleAt: instant(part.handleAt), packAt: instant(part.packAt), fullCureAt: instant(part.fullCureAt) }, now);
 }
 
 export function toBoardPart(part: ReadyPart, now: Date): BoardPart {
-  const windowMissed = part.state === 'in-finish' && passed(part.nextWindowClosesAt, now.getTime());
+  const windowMissed = part.state === 'in-finish' && recoatWindowClosed(instant(part.nextWindowClosesAt), now);
   return { ...part, shownState: stateAt(part, now), windowMissed };
 }
 

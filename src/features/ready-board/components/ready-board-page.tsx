@@ -6,7 +6,7 @@ import { Button, buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { useReadyChoices } from './use-ready-choices';
-import { useReadyParts } from '../api/get-ready-parts';
+import { useReady } from '../../../api/ready/get-ready';
 import { matchesState, useBoardFilters, type BoardFilters } from './board-filters';
 import { groupByJob, groupByRack } from './board-groups';
 import { LiveNote } from './live-note';
@@ -90,7 +90,7 @@ const collectedShownDays = 30;
 export function ReadyBoardPage({ timeZone, units, canCollect }: { timeZone: string; units: UnitSystem; canCollect: boolean }) {
   const [filters, setFilters] = useBoardFilters();
   const showsCollected = filters.state === 'any' || filters.state === 'collected';
-  const ready = useReadyParts({ jobId: filters.jobId, rackId: filters.rackId, ...(showsCollected ? { collectedDays: collectedShownDays } : {}) });
+  const ready = useReady({ jobId: filters.jobId, rackId: filters.rackId, ...(showsCollected ? { collectedDays: collectedShownDays } : {}) });
   const { jobs, racks } = useReadyChoices();
   const now = useBoardClock(upcomingInstants(ready.data?.items ?? []), () => void ready.refetch());
   return (

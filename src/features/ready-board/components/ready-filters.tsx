@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import { readinessStates } from '../../../../shared/finishing/readiness';
 import { inputClasses } from '../../../components/ui/field';
-import type { JobChoice, RackChoice } from '../api/get-ready-choices';
+import type { JobChoice, RackChoice } from './use-ready-choices';
 import type { BoardFilters, StateFilter } from './board-filters';
 import type { GroupBy } from './board-groups';
 import { stateLabels } from './readiness';

@@ -1,7 +1,7 @@
 import { toast } from 'sonner';
 import { errorMessage } from '../../../lib/error-messages';
-import { useCollectPart } from '../api/collect-part';
-import { useUncollectPart } from '../api/uncollect-part';
+import { useCollectPart } from '../../../api/parts/collect-part';
+import { useUncollectPart } from '../../../api/parts/collect-part';
 import type { BoardPart } from './readiness';
 
 /**

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import { formatShopClock, formatShopDate } from '../../../lib/shop-time';
 import { livePollMs } from '../../../lib/use-live-updates';
-import { useReadyParts } from '../api/get-ready-parts';
+import { useReady } from '../../../api/ready/get-ready';
 import { LiveNote } from './live-note';
 import { toBoardPart, upcomingInstants } from './readiness';
 import { useBoardClock } from './use-board-clock';
@@ -39,7 +39,7 @@ function WallJobs({ summary }: { summary: WallSummary }) {
 /** The ready board for a screen on the workshop wall: no controls, large type, keeps itself current. */
 export function WallBoard({ timeZone }: { timeZone: string }) {
   // Polls in the background too: a wall screen is often an unfocused window.
-  const ready = useReadyParts({}, { inBackground: true });
+  const ready = useReady({}, { inBackground: true });
   const items = ready.data?.items;
   const now = useBoardClock(upcomingInstants(items ?? []), () => void ready.refetch());
   const summary = useMemo(() => summariseForWall((items ?? []).map((part) => toBoardPart(part, now)), nextCount), [items, now]);

@@ -1,7 +1,7 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { AreaSprayedReport as Report } from '../../../../shared/schemas/report';
-import { useAreaSprayedReport } from '../api/get-area-sprayed-report';
-import type { ReportParams } from '../api/report-keys';
+import { useAreaSprayedReport } from '../../../api/reports/get-area-sprayed-report';
+import type { ReportParams } from '../../../api/reports/report-keys';
 import { areaWords, capitalised, percentWords, shown, symbolOf } from '../utils/report-format';
 import { weekShortWords, weekWords } from '../utils/report-range';
 import { stackRows, weeksIn } from '../utils/report-series';

@@ -1,6 +1,6 @@
 import type { BoothUseReport as Report } from '../../../../shared/schemas/report';
-import { useBoothUseReport } from '../api/get-booth-use-report';
-import type { ReportParams } from '../api/report-keys';
+import { useBoothUseReport } from '../../../api/reports/get-booth-use-report';
+import type { ReportParams } from '../../../api/reports/report-keys';
 import { hoursWords, percentWords } from '../utils/report-format';
 import { weekWords } from '../utils/report-range';
 import { weeksIn, type ChartRow } from '../utils/report-series';

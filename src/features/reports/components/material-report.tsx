@@ -1,7 +1,7 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { MaterialReport as Report } from '../../../../shared/schemas/report';
-import { useMaterialReport } from '../api/get-material-report';
-import type { ReportParams } from '../api/report-keys';
+import { useMaterialReport } from '../../../api/reports/get-material-report';
+import type { ReportParams } from '../../../api/reports/report-keys';
 import { litresWords, shown, symbolOf } from '../utils/report-format';
 import { ChartFrame } from './chart-frame';
 import { ReportEmpty } from './report-empty';

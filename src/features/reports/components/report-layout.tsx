@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { formatShopDateTime } from '../../../lib/shop-time';
 
-export interface KeyFigure {
+interface KeyFigure {
   label: string;
   value: ReactNode;
   /** Marks a figure that needs attention (over a threshold, coats outside limits); always with words. */

@@ -1,5 +1,5 @@
 import { FieldShell, inputClasses } from '../../../components/ui/field';
-import type { ReportKind } from '../api/report-keys';
+import type { ReportKind } from '../../../api/reports/report-keys';
 import type { AreaGrouping, ReportAddress } from '../hooks/use-report-address';
 
 export interface Choice {

@@ -1,5 +1,5 @@
 import { useRef, type KeyboardEvent } from 'react';
-import { reportKinds, type ReportKind } from '../api/report-keys';
+import { reportKinds, type ReportKind } from '../../../api/reports/report-keys';
 import { reportCatalogue } from '../utils/report-catalogue';
 
 export const reportPanelId = 'report-panel';

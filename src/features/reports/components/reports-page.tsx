@@ -3,9 +3,9 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useBoothChoices } from '../api/get-booth-choices';
-import { useJobChoices } from '../api/get-job-choices';
-import { reportCsvHref } from '../api/report-url';
+import { useBooths } from '../../../api/booths/get-booths';
+import { useJobs } from '../../../api/jobs/get-jobs';
+import { reportCsvHref } from '../../../api/reports/report-url';
 import { useReportAddress, type ReportAddress } from '../hooks/use-report-address';
 import { reportCatalogue } from '../utils/report-catalogue';
 import { quickRange, rangeWords } from '../utils/report-range';
@@ -42,7 +42,7 @@ function optionWords(address: ReportAddress, booths: Choice[], jobs: Choice[], c
 }
 
 /** In place of a report that cannot be asked for yet: a bad range, or the booths still loading or missing. */
-function WhyNoReport({ address, booths }: { address: ReportAddress; booths: ReturnType<typeof useBoothChoices> }) {
+function WhyNoReport({ address, booths }: { address: ReportAddress; booths: ReturnType<typeof useBooths> }) {
   const errors = Object.values(rangeErrors(address));
   if (errors.length > 0) return <EmptyState title="Check the date range">{errors.join('. ')}.</EmptyState>;
   if (booths.isPending) return <LoadingState what="the booths" />;
@@ -52,8 +52,8 @@ function WhyNoReport({ address, booths }: { address: ReportAddress; booths: Retu
 
 export function ReportsPage({ shopName, timeZone, today, units, siteId, siteSwitcher }: ReportsPageProps) {
   const [address, change] = useReportAddress(today);
-  const boothQuery = useBoothChoices(siteId);
-  const jobQuery = useJobChoices();
+  const boothQuery = useBooths({ page: 1, pageSize: 200, siteId });
+  const jobQuery = useJobs({ page: 1, pageSize: 200 });
   const booths = (boothQuery.data?.items ?? []).map((b) => ({ id: b.id, label: b.name }));
   const jobs = (jobQuery.data?.items ?? []).map((j) => ({ id: j.id, label: `${j.reference} · ${j.customer}` }));
   const conditionsBoothId = address.boothId ?? booths[0]?.id;

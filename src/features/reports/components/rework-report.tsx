@@ -1,6 +1,6 @@
 import type { ReworkReport as Report } from '../../../../shared/schemas/report';
-import { useReworkReport } from '../api/get-rework-report';
-import type { ReportParams } from '../api/report-keys';
+import { useReworkReport } from '../../../api/reports/get-rework-report';
+import type { ReportParams } from '../../../api/reports/report-keys';
 import { percentWords, reworkKindWords, reworkReasonWords } from '../utils/report-format';
 import { monthWords } from '../utils/report-range';
 import { monthsIn, stackRows } from '../utils/report-series';

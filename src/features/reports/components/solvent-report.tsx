@@ -1,7 +1,7 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SolventReport as Report } from '../../../../shared/schemas/report';
-import { useSolventReport } from '../api/get-solvent-report';
-import type { ReportParams } from '../api/report-keys';
+import { useSolventReport } from '../../../api/reports/get-solvent-report';
+import type { ReportParams } from '../../../api/reports/report-keys';
 import { litresWords, percentWords, vocShown, vocUnit, vocWords } from '../utils/report-format';
 import { monthWords } from '../utils/report-range';
 import { everyMonth } from '../utils/solvent-months';

@@ -1,6 +1,6 @@
 import type { UpkeepReport as Report } from '../../../../shared/schemas/report';
-import { useUpkeepReport } from '../api/get-upkeep-report';
-import type { ReportParams } from '../api/report-keys';
+import { useUpkeepReport } from '../../../api/reports/get-upkeep-report';
+import type { ReportParams } from '../../../api/reports/report-keys';
 import { ReportEmpty } from './report-empty';
 import { ReportLayout } from './report-layout';
 import { ReportStatus } from './report-status';

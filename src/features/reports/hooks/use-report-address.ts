@@ -1,6 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
 import { areaGroupings } from '../../../../shared/schemas/report';
-import { reportKinds, type ReportKind } from '../api/report-keys';
+import { reportKinds, type ReportKind } from '../../../api/reports/report-keys';
 import { quickRange, type DateRange } from '../utils/report-range';
 
 export type AreaGrouping = (typeof areaGroupings)[number];

@@ -1,4 +1,4 @@
-import type { ReportKind } from '../api/report-keys';
+import type { ReportKind } from '../../../api/reports/report-keys';
 
 interface ReportEntry {
   /** The word on the tab. */

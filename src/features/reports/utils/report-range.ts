@@ -65,7 +65,7 @@ const weekFormat = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', day: 'num
 const asDate = (day: string) => new Date(`${day.slice(0, 10)}T00:00:00Z`);
 
 /** A calendar date as people read it: "3 Mar 2026". Dates are calendar days, so no zone shifts them. */
-export const dayWords = (day: string) => dayFormat.format(asDate(day));
+const dayWords = (day: string) => dayFormat.format(asDate(day));
 
 /** "Mar 2026" for a month key ("2026-03" or a date in it). */
 export const monthWords = (month: string) => shortMonthFormat.format(asDate(`${month.slice(0, 7)}-01`));

@@ -1,5 +1,5 @@
 import { reportRangeQuerySchema } from '../../../../shared/schemas/report';
-import type { ReportKind, ReportParams } from '../api/report-keys';
+import type { ReportKind, ReportParams } from '../../../api/reports/report-keys';
 import type { ReportAddress } from '../hooks/use-report-address';
 
 export type ReportRequest = { [K in ReportKind]: { kind: K; params: ReportParams[K] } }[ReportKind];

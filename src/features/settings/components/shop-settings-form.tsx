@@ -7,7 +7,7 @@ import { Button } from '../../../components/ui/button';
 import { asNumber, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { listTimeZones } from '../../../lib/shop-time';
-import { useUpdateShopSettings } from '../api/update-settings';
+import { useUpdateShopSettings } from '../../../api/settings/update-settings';
 
 const fieldNames = Object.keys(shopSettingsSchema.shape);
 const unitOptions = [

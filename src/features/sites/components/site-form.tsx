@@ -6,8 +6,8 @@ import { createSiteSchema, type CreateSiteInput, type Site } from '../../../../s
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateSite } from '../api/create-site';
-import { useUpdateSite } from '../api/update-site';
+import { useCreateSite } from '../../../api/sites/create-site';
+import { useUpdateSite } from '../../../api/sites/update-site';
 
 const fieldNames = Object.keys(createSiteSchema.shape);
 

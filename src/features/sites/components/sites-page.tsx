@@ -4,8 +4,8 @@ import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useSiteCounts } from '../api/get-site-counts';
-import { useSites } from '../api/get-sites';
+import { useSiteCounts } from '../../../api/sites/get-site-counts';
+import { useSites } from '../../../api/sites/get-sites';
 import { SiteForm } from './site-form';
 import { SitesTable } from './sites-table';
 

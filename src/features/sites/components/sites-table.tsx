@@ -3,7 +3,7 @@ import { useMemo } from 'react';
 import type { Site } from '../../../../shared/schemas/site';
 import { Button } from '../../../components/ui/button';
 import { DataTable } from '../../../components/ui/data-table';
-import type { SiteCounts } from '../api/get-site-counts';
+import type { SiteCounts } from '../../../api/sites/get-site-counts';
 
 const column = createColumnHelper<Site>();
 

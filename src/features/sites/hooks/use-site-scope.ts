@@ -1,6 +1,6 @@
 import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { useSites } from '../api/get-sites';
+import { useSites } from '../../../api/sites/get-sites';
 import { siteFilterFrom, siteViewFor, type SiteView, type SiteViewer } from '../utils/site-view';
 
 export interface SiteScope {

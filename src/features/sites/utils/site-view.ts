@@ -1,7 +1,7 @@
 import { seesAllSites, type Role } from '../../../../shared/permissions';
 import type { Site } from '../../../../shared/schemas/site';
 
-export interface SiteOption {
+interface SiteOption {
   value: number;
   label: string;
 }

@@ -4,7 +4,7 @@ import type { Booth } from '../../../../shared/schemas/booth';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/error-messages';
-import { useUpdateSpraySession } from '../api/update-spray-session';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 import { useNow } from '../../../lib/use-now';
 import { shopWhen } from '../utils/session-format';
 import { Countdown } from './countdown';

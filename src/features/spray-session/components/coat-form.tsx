@@ -9,7 +9,7 @@ import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useOnline } from '../../../lib/use-online';
-import { useCoatForm } from '../hooks/use-coat-form';
+import { coatEntryFields, useCoatForm } from '../hooks/use-coat-form';
 import { useCoatPreview } from '../hooks/use-coat-preview';
 import type { PendingCoat } from '../hooks/use-pending-coats';
 import { useRecordCoat } from '../hooks/use-record-coat';
@@ -60,15 +60,13 @@ function keepEnterFromSubmitting(event: React.KeyboardEvent<HTMLFormElement>) {
   if (event.key === 'Enter' && event.target instanceof HTMLInputElement) event.preventDefault();
 }
 
-const fieldNames = ['partIds', 'airTempC', 'relativeHumidityPct', 'surfaceTempC', 'thinningPct', 'wetFilmUm', 'stepPosition', 'lotId', 'mixId', 'notes', 'reworkReason'];
-
 export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, reading, queue, units, timeZone }: CoatFormProps) {
   const coat = useCoatForm(session, plan, planned, due, mixes, reading);
   const online = useOnline();
   const { form, values, step, product } = coat;
   const { register, control, handleSubmit, setError, setValue, formState } = form;
   const preview = useCoatPreview({ coat, sessionCoats, units, timeZone });
-  const { record, pending } = useRecordCoat(session.id, queue);
+  const { record, pending } = useRecordCoat(queue);
   const stops = useStopReasons(preview.warnings);
   const [formError, setFormError] = useState<string | null>(null);
 
@@ -79,7 +77,7 @@ export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, rea
     if (coat.mixedSystems) return setFormError('These parts follow different finish systems. Record them as separate coats.');
     const body = { ...entry, spraySessionId: session.id, productId: product.id, sprayedAt: new Date().toISOString(), dryingTempC: null, acknowledgements: acks, idempotencyKey: newIdempotencyKey() };
     const outcome = await record(body, `${product.name} on ${entry.partIds.length === 1 ? '1 part' : `${entry.partIds.length} parts`}`);
-    if (outcome.kind === 'failed') return setFormError(applyServerErrors(outcome.error, setError, fieldNames));
+    if (outcome.kind === 'failed') return setFormError(applyServerErrors(outcome.error, setError, coatEntryFields));
     if (outcome.kind === 'saved') toast.success(`Coat recorded on ${entry.partIds.length === 1 ? '1 part' : `${entry.partIds.length} parts`}. Its drying times are below.`);
     else toast.warning('No connection: the coat is kept on this tablet and will be sent when the connection is back.');
     setValue('wetFilmUm', null);

@@ -8,7 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { FieldShell, FormAlert, inputClasses, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useOnline } from '../../../lib/use-online';
-import { useCreateDenib } from '../api/create-denib';
+import { useCreateDenib } from '../../../api/denibs/create-denib';
 import type { PickedPart } from '../utils/picked-part';
 import { PartChecklist } from './part-checklist';
 
@@ -39,7 +39,7 @@ interface DenibFormProps {
 
 /** Which parts were sanded, with what and when; the signed-in person is recorded as who. */
 export function DenibForm({ sessionId, parts, needing, grit, onDone }: DenibFormProps) {
-  const createDenib = useCreateDenib(sessionId);
+  const createDenib = useCreateDenib();
   const online = useOnline();
   const [formError, setFormError] = useState<string | null>(null);
   const { control, register, handleSubmit, setError, formState } = useForm<DenibEntryInput, unknown, DenibEntry>({

@@ -17,7 +17,7 @@ interface PotState {
 }
 
 /** Standing, usable, use soon or over: what the sprayer needs to know about a pot at a glance. */
-export function potState(mix: Mix, now: Date, timeZone: string): PotState {
+function potState(mix: Mix, now: Date, timeZone: string): PotState {
   const t = now.getTime();
   if (t < Date.parse(mix.inductionEndsAt)) {
     return { verdict: 'caution', short: 'Standing', words: `Standing (induction): use from ${shopWhen(mix.inductionEndsAt, timeZone, now)}`, until: mix.inductionEndsAt, label: 'Induction' };

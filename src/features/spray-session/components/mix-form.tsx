@@ -9,7 +9,7 @@ import type { Product } from '../../../../shared/schemas/product';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateMix } from '../api/create-mix';
+import { useCreateMix } from '../../../api/mixes/create-mix';
 import { LotChoice } from './lot-choice';
 import { MixPreview } from './mix-preview';
 import { StepperField } from './stepper-field';
@@ -27,7 +27,7 @@ interface MixFormProps {
 }
 
 export function MixForm({ sessionId, products, airTempC, units, onDone }: MixFormProps) {
-  const createMix = useCreateMix(sessionId);
+  const createMix = useCreateMix();
   const [formError, setFormError] = useState<string | null>(null);
   const first = products[0];
   const { control, register, handleSubmit, setError, setValue, formState } = useForm<MixInput, unknown, MixOutput>({
@@ -41,7 +41,7 @@ export function MixForm({ sessionId, products, airTempC, units, onDone }: MixFor
   const onSubmit = handleSubmit(async (input) => {
     setFormError(null);
     try {
-      const mix = await createMix.mutateAsync({ sessionId, input });
+      const mix = await createMix.mutateAsync({ spraySessionId: sessionId, input });
       toast.success(`Mix recorded: ${mix.totalL.toFixed(2)} L of ${mix.productName}.`);
       onDone();
     } catch (error) {

@@ -1,5 +1,5 @@
 import { mixQuantities } from '../../../../shared/finishing/material';
-import { mixTimes } from '../../../../shared/finishing/pot-life';
+import { mixTimes, potLifeReferenceTempC } from '../../../../shared/finishing/pot-life';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
 import { formatQuantity } from '../../../../shared/units';
@@ -13,14 +13,11 @@ interface MixPreviewProps {
   units: UnitSystem;
 }
 
-/** Pot life on a data sheet is quoted at its reference row: the one nearest 20 °C, as the server takes it. */
-const referenceTempC = (product: Product) => [...product.dryingTimes].sort((a, b) => Math.abs(a.tempC - 20) - Math.abs(b.tempC - 20))[0]?.tempC ?? 20;
-
 function potLifeWords(product: Product, tempC: number | null | undefined): string | null {
   if (!product.potLifeMin || typeof tempC !== 'number') return null;
   try {
     const mixedAt = new Date(0);
-    const times = mixTimes({ mixedAt, inductionMin: product.inductionMin, potLifeMin: product.potLifeMin, refTempC: referenceTempC(product), tempC });
+    const times = mixTimes({ mixedAt, inductionMin: product.inductionMin, potLifeMin: product.potLifeMin, refTempC: potLifeReferenceTempC(product.dryingTimes), tempC });
     const induction = product.inductionMin > 0 ? `stand ${formatMinutes(times.inductionEndsAt.getTime() / 60_000)}, then ` : '';
     return `At this temperature: ${induction}use within about ${formatMinutes(times.potLifeEndsAt.getTime() / 60_000)}.`;
   } catch {

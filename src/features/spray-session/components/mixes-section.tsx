@@ -3,7 +3,7 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
 import { Button } from '../../../components/ui/button';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useMixes } from '../api/get-mixes';
+import { useMixes } from '../../../api/mixes/get-mixes';
 import { useNow } from '../../../lib/use-now';
 import { MixCard } from './mix-card';
 import { MixForm } from './mix-form';

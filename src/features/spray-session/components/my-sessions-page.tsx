@@ -6,7 +6,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
 import { sessionWorkLine } from '../../../lib/session-work-words';
 import { formatShopDate } from '../../../lib/shop-time';
-import { useSpraySessions } from '../api/get-spray-sessions';
+import { useSpraySessions } from '../../../api/spray-sessions/get-spray-sessions';
 import { sessionSpan } from '../utils/session-format';
 import { SessionStateBadge } from './session-header';
 

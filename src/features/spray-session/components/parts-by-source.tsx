@@ -1,9 +1,12 @@
 import { useId, useState } from 'react';
+import { useJobs } from '../../../api/jobs/get-jobs';
+import { useRacks } from '../../../api/racks/get-racks';
+import { useReady } from '../../../api/ready/get-ready';
 import { inputClasses } from '../../../components/ui/field';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { useReadyParts } from '../api/get-ready-parts';
-import { useOpenJobs } from '../api/get-session-jobs';
-import { useRacks } from '../api/get-racks';
+
+// A shop's open job book and its racks fit one page each.
+const onePage = { page: 1, pageSize: 200 };
 import { fromReady, type PickedPart } from '../utils/picked-part';
 import { PartChecklist } from './part-checklist';
 
@@ -13,10 +16,10 @@ interface SourceProps {
 }
 
 function ReadyList({ filter, chosen, onChange }: SourceProps & { filter: { jobId: number } | { rackId: number } }) {
-  const ready = useReadyParts(filter);
+  const ready = useReady(filter);
   if (ready.isPending) return <LoadingState what="the parts" />;
   if (ready.isError) return <ErrorState error={ready.error} what="the parts" onRetry={() => ready.refetch()} />;
-  const parts = ready.data.map(fromReady);
+  const parts = ready.data.items.map(fromReady);
   return <PartChecklist parts={parts} chosen={chosen} onChange={(next) => onChange(next, parts)} label="Parts" />;
 }
 
@@ -40,7 +43,7 @@ function Chooser({ label, options, value, onChange }: { label: string; options: 
 }
 
 export function PartsByJob(props: SourceProps) {
-  const jobs = useOpenJobs(true);
+  const jobs = useJobs(onePage);
   const [jobId, setJobId] = useState<number | null>(null);
   if (jobs.isPending) return <LoadingState what="the jobs" />;
   if (jobs.isError) return <ErrorState error={jobs.error} what="the jobs" onRetry={() => jobs.refetch()} />;
@@ -54,7 +57,7 @@ export function PartsByJob(props: SourceProps) {
 }
 
 export function PartsByRack(props: SourceProps) {
-  const racks = useRacks();
+  const racks = useRacks(onePage);
   const [rackId, setRackId] = useState<number | null>(null);
   if (racks.isPending) return <LoadingState what="the racks" />;
   if (racks.isError) return <ErrorState error={racks.error} what="the racks" onRetry={() => racks.refetch()} />;

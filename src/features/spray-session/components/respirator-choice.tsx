@@ -1,7 +1,7 @@
 import { respiratorKinds } from '../../../../shared/schemas/checklist';
 import type { RespiratorLevel } from '../../../../shared/finishing/cautions';
 
-export const respiratorLabels: Record<RespiratorLevel, string> = {
+const respiratorLabels: Record<RespiratorLevel, string> = {
   'air-fed': 'Air-fed hood or visor',
   'vapour-and-particulate': 'Mask with vapour and particulate filters',
   particulate: 'Mask with particulate filter only',

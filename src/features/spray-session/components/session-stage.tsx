@@ -1,8 +1,7 @@
 import type { Booth } from '../../../../shared/schemas/booth';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
-import type { useSessionCoats } from '../api/get-session-coats';
-import { useSessionDenibs } from '../api/get-session-denibs';
+import { useSessionDenibs, type useSessionCoats } from '../hooks/use-session-records';
 import type { usePendingCoats } from '../hooks/use-pending-coats';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { ChecklistSection } from './checklist-section';

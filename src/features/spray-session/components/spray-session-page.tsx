@@ -3,9 +3,9 @@ import { can } from '../../../../shared/permissions';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { useSessionBooth } from '../api/get-session-booth';
-import { useSessionCoats } from '../api/get-session-coats';
-import { useSpraySession } from '../api/get-spray-session';
+import { useBooth } from '../../../api/booths/get-booth';
+import { useSessionCoats } from '../hooks/use-session-records';
+import { useSpraySession } from '../../../api/spray-sessions/get-spray-session';
 import { usePendingCoats } from '../hooks/use-pending-coats';
 import { useSessionPlan } from '../hooks/use-session-plan';
 import { CautionsPanel } from './cautions-panel';
@@ -25,7 +25,7 @@ interface PageProps {
 }
 
 function LoadedSession({ session, viewer, units, timeZone }: PageProps & { session: SpraySession }) {
-  const booth = useSessionBooth(session.boothId);
+  const booth = useBooth(session.boothId);
   const plan = useSessionPlan(session);
   const coats = useSessionCoats(session.id);
   const pendingCoats = usePendingCoats(session.id);

@@ -4,7 +4,7 @@ import type { Booth } from '../../../../shared/schemas/booth';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { errorMessage } from '../../../lib/error-messages';
-import { useUpdateSpraySession } from '../api/update-spray-session';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 
 /** One big button for the end of spraying; the clearance countdown starts from the moment it is confirmed. */
 export function StopSpraying({ sessionId, booth }: { sessionId: number; booth: Booth }) {

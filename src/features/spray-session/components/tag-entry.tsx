@@ -1,11 +1,11 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useId, useRef, useState, type KeyboardEvent } from 'react';
+import { partQueryOptions } from '../../../api/parts/get-part';
+import { partByTagQueryOptions } from '../../../api/parts/get-part-by-tag';
 import { Button } from '../../../components/ui/button';
 import { inputClasses } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
-import { partByTagQueryOptions } from '../api/get-part-by-tag';
-import { sessionPartQueryOptions } from '../api/get-session-parts';
 import { fromPart, readScannedCode, type PickedPart } from '../utils/picked-part';
 import { canScanTags, TagScanner } from './tag-scanner';
 
@@ -27,7 +27,7 @@ export function TagEntry({ onFound }: { onFound: (part: PickedPart) => void }) {
     busy.current = true;
     setPending(true);
     try {
-      const part = 'partId' in code ? await queryClient.fetchQuery(sessionPartQueryOptions(code.partId)) : await queryClient.fetchQuery(partByTagQueryOptions(code.tag));
+      const part = 'partId' in code ? await queryClient.fetchQuery(partQueryOptions(code.partId)) : await queryClient.fetchQuery(partByTagQueryOptions(code.tag));
       onFound(fromPart(part));
       setText('');
       setScanning(false);

@@ -3,7 +3,7 @@ import type { Verdict } from '../../../../shared/finishing/conditions';
 export const verdictWords: Record<Verdict, string> = { go: 'Go', caution: 'Caution', stop: 'Stop' };
 const glyphs: Record<Verdict, string> = { go: '✓', caution: '!', stop: '✕' };
 
-export const verdictFill: Record<Verdict, string> = {
+const verdictFill: Record<Verdict, string> = {
   go: 'bg-verdict-go text-white',
   caution: 'bg-verdict-caution text-white',
   stop: 'bg-verdict-stop text-white',
@@ -15,11 +15,6 @@ export const verdictBorder: Record<Verdict, string> = {
   stop: 'border-verdict-stop',
 };
 
-export const verdictText: Record<Verdict, string> = {
-  go: 'text-verdict-go',
-  caution: 'text-verdict-caution',
-  stop: 'text-verdict-stop',
-};
 
 /** A verdict always says its word; the colour and the glyph only repeat it. */
 export function VerdictBadge({ verdict, label, large = false }: { verdict: Verdict; label?: string; large?: boolean }) {

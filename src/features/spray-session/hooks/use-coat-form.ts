@@ -11,14 +11,16 @@ import type { PickedPart } from '../utils/picked-part';
 import { useFinishWork } from './use-finish-work';
 import type { SessionPlan } from './use-session-plan';
 
-export const coatEntrySchema = createCoatSchema
+const coatEntrySchema = createCoatSchema
   .pick({ partIds: true, airTempC: true, relativeHumidityPct: true, surfaceTempC: true, thinningPct: true, wetFilmUm: true, stepPosition: true, lotId: true, mixId: true, notes: true, reworkReason: true })
   .refine((coat) => coat.stepPosition !== null, { path: ['stepPosition'], message: 'Choose the step this coat is' });
 export type CoatEntryInput = z.input<typeof coatEntrySchema>;
-export type CoatEntry = z.output<typeof coatEntrySchema>;
+/** The form's fields, where the server's field errors are shown. */
+export const coatEntryFields = Object.keys(coatEntrySchema.shape);
+type CoatEntry = z.output<typeof coatEntrySchema>;
 
 /** Thinner as a share of base + hardener, which is how the mix recorded it. */
-export const thinningOfMix = (mix: Mix) => Math.round((mix.thinnerL / (mix.baseL + mix.hardenerL)) * 1000) / 10;
+const thinningOfMix = (mix: Mix) => Math.round((mix.thinnerL / (mix.baseL + mix.hardenerL)) * 1000) / 10;
 
 function startingConditions(session: SpraySession, reading: Reading | null) {
   const checks = session.checklist;

@@ -1,7 +1,7 @@
 import type { CoatRecord, CoatWarning } from '../../../../shared/finishing/coat-record';
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
-import { useRacks } from '../api/get-racks';
+import { useRacks } from '../../../api/racks/get-racks';
 import { dryingTempOf, previewCoat, previousWindowOf } from '../utils/coat-preview';
 import type { useCoatForm } from './use-coat-form';
 import { useNow } from '../../../lib/use-now';
@@ -22,7 +22,7 @@ interface UseCoatPreviewInput {
 /** The coat record as the server will work it out, refreshed as the form changes and every 15 s (windows open and close). */
 export function useCoatPreview({ coat, sessionCoats, units, timeZone }: UseCoatPreviewInput): CoatPreview {
   const now = useNow(15_000);
-  const racks = useRacks();
+  const racks = useRacks({ page: 1, pageSize: 200 });
   const { values, product, step, chosen, work, productMixes } = coat;
   if (!product) return { record: null, warnings: [], problem: 'Choose the parts and the step to see the dry film, drying times and warnings.' };
   const { airTempC, relativeHumidityPct, surfaceTempC } = values;

@@ -2,11 +2,12 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { toast } from 'sonner';
 import { z } from 'zod';
+import { changedKeys } from '../../../api/changes';
+import { createCoat } from '../../../api/coats/create-coat';
+import { invalidate } from '../../../api/invalidate';
 import { createCoatSchema } from '../../../../shared/schemas/coat';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
-import { createCoat } from '../api/create-coat';
-import { spraySessionKeys } from '../api/spray-session-keys';
 
 const pendingCoatSchema = z.object({
   body: createCoatSchema.extend({ idempotencyKey: z.string().min(8) }),
@@ -83,7 +84,7 @@ export function usePendingCoats(sessionId: number) {
     }
     if (sent > 0) {
       toast.success(sent === 1 ? 'The pending coat is now on the server.' : `${sent} pending coats are now on the server.`);
-      await Promise.all([queryClient.invalidateQueries({ queryKey: spraySessionKeys.coats(sessionId) }), queryClient.invalidateQueries({ queryKey: spraySessionKeys.readyAll() })]);
+      await invalidate(queryClient, changedKeys.coat());
     }
   }, [queryClient, sendOne, sessionId]);
 

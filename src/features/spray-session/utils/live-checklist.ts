@@ -5,7 +5,7 @@ import { sensorIsStale } from '../../../../shared/finishing/day-board';
 import { checklistSchema } from '../../../../shared/schemas/checklist';
 import type { Reading } from '../../../../shared/schemas/reading';
 
-export interface LiveChecklist {
+interface LiveChecklist {
   evaluation: ChecklistEvaluation | null;
   missing: string[];
   dew: { dewPointC: number; surfaceMarginC: number } | null;

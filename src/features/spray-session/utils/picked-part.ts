@@ -1,5 +1,6 @@
 import type { Part } from '../../../../shared/schemas/part';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
+import { normaliseTag } from '../../../api/parts/normalise-tag';
 
 /** What the coat form needs of a part, wherever it was picked from (the plan, a job, a rack or a tag). */
 export interface PickedPart {
@@ -26,6 +27,6 @@ export function readScannedCode(raw: string): { partId: number } | { tag: string
   const text = raw.trim();
   const fromAddress = /\/parts\/(\d+)(?:[/?#]|$)/.exec(text);
   if (fromAddress) return { partId: Number(fromAddress[1]) };
-  const tag = text.replace(/[\s-]/g, '').toUpperCase();
+  const tag = normaliseTag(text);
   return /^[A-Z0-9]{4,16}$/.test(tag) ? { tag } : null;
 }

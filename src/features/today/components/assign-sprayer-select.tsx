@@ -4,7 +4,7 @@ import type { Sprayer } from '../../../../shared/schemas/sprayer';
 import type { TodaySession } from '../../../../shared/schemas/today';
 import { inputClasses } from '../../../components/ui/field';
 import { errorMessage } from '../../../lib/error-messages';
-import { useAssignSprayer } from '../api/assign-sprayer';
+import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
 
 interface AssignSprayerSelectProps {
   session: TodaySession;
@@ -16,12 +16,12 @@ interface AssignSprayerSelectProps {
 /** Give a planned session to someone (or change who has it) without leaving the board. */
 export function AssignSprayerSelect({ session, sprayers, label }: AssignSprayerSelectProps) {
   const id = useId();
-  const assign = useAssignSprayer();
+  const assign = useUpdateSpraySession();
   const change = (value: string) => {
     const sprayerId = value === '' ? null : Number(value);
     const name = sprayers.find((s) => s.id === sprayerId)?.name;
     assign.mutate(
-      { sessionId: session.id, sprayerId },
+      { id: session.id, changes: { sprayerId } },
       {
         onSuccess: () => toast.success(name ? `${name} sprays ${session.boothName} session ${session.id}.` : `Session ${session.id} has no sprayer now.`),
         onError: (error) => toast.error(`Not changed: ${errorMessage(error)}`),

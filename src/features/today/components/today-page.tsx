@@ -1,22 +1,22 @@
 import type { ReactNode } from 'react';
 import { roleLabels } from '../../../../shared/permissions';
-import type { SessionUser } from '../../../../shared/schemas/auth';
+import type { SignedInUser } from '../../../../shared/schemas/auth';
 import type { ShopSettings } from '../../../../shared/schemas/settings';
 import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { useToday } from '../api/get-today';
+import { useToday } from '../../../api/today/get-today';
 import { LeadBoard } from './lead-board';
 import { ShopClock } from './shop-clock';
 import { SprayerBoard } from './sprayer-board';
 
 interface TodayPageProps {
-  user: SessionUser;
+  user: SignedInUser;
   settings: ShopSettings;
   /** An admin looking at one site, and the switcher that chooses it. */
   siteId?: number;
   siteSwitcher?: ReactNode;
 }
 
-const intro: Partial<Record<SessionUser['role'], string>> = {
+const intro: Partial<Record<SignedInUser['role'], string>> = {
   admin: 'The day across your booths: who sprays what, and what needs you.',
   lead: 'The day across your booths: who sprays what, and what needs you.',
   sprayer: 'Your sessions today, and the next thing to do in each.',

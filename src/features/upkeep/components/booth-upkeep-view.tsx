@@ -3,7 +3,7 @@ import type { FilterBank } from '../../../../shared/schemas/upkeep';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useBoothUpkeep } from '../api/get-booth-upkeep';
+import { useBoothUpkeep } from '../../../api/upkeep/get-booth-upkeep';
 import { ExtractionTestForm } from './extraction-test-form';
 import { FilterBankCard, type BankAction } from './filter-bank-card';
 import { FilterBankForm } from './filter-bank-form';

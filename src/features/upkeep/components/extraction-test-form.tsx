@@ -8,7 +8,7 @@ import { createExtractionTestSchema } from '../../../../shared/schemas/upkeep';
 import { Button } from '../../../components/ui/button';
 import { asNumber, asNumberOrNull, FieldShell, FormAlert, InputField, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useRecordExtractionTest } from '../api/record-upkeep';
+import { useRecordExtractionTest } from '../../../api/upkeep/record-extraction-test';
 import { FormActions } from './form-actions';
 import { speed } from './upkeep-format';
 
@@ -57,7 +57,7 @@ export function ExtractionTestForm({ boothId, minFaceVelocityMps, intervalMonths
   const onSubmit = handleSubmit(async ({ points: readings, ...fields }) => {
     setFormError(null);
     try {
-      const { extractionTest } = await record.mutateAsync({ ...fields, faceVelocityPointsMps: readings });
+      const extractionTest = await record.mutateAsync({ ...fields, faceVelocityPointsMps: readings });
       toast.success(`Extraction test recorded: mean ${speed(extractionTest.meanFaceVelocityMps)}.`);
       onDone();
     } catch (error) {

@@ -6,7 +6,8 @@ import type { z } from 'zod';
 import { createFilterBankSchema, filterBankKindLabels, filterBankKinds, type FilterBank } from '../../../../shared/schemas/upkeep';
 import { asNumber, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateFilterBank, useUpdateFilterBank } from '../api/record-upkeep';
+import { useCreateFilterBank } from '../../../api/upkeep/create-filter-bank';
+import { useUpdateFilterBank } from '../../../api/upkeep/update-filter-bank';
 import { FormActions } from './form-actions';
 
 type Input = z.input<typeof createFilterBankSchema>;

@@ -6,7 +6,7 @@ import type { z } from 'zod';
 import { createFireInspectionSchema } from '../../../../shared/schemas/upkeep';
 import { FieldShell, FormAlert, InputField, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useRecordFireInspection } from '../api/record-upkeep';
+import { useRecordFireInspection } from '../../../api/upkeep/record-fire-inspection';
 import { FormActions } from './form-actions';
 
 type Input = z.input<typeof createFireInspectionSchema>;

@@ -6,7 +6,8 @@ import type { z } from 'zod';
 import { createFilterChangeSchema, createGaugeReadingSchema, type FilterBank } from '../../../../shared/schemas/upkeep';
 import { asNumber, asNumberOrNull, FieldShell, FormAlert, InputField, inputClasses } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useRecordFilterChange, useRecordGaugeReading } from '../api/record-upkeep';
+import { useRecordFilterChange } from '../../../api/upkeep/record-filter-change';
+import { useRecordGaugeReading } from '../../../api/upkeep/record-gauge-reading';
 import { FormActions } from './form-actions';
 
 const pressure = { type: 'number', inputMode: 'numeric', step: 'any' } as const;

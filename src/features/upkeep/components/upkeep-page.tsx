@@ -2,8 +2,8 @@ import type { ReactNode } from 'react';
 import { FieldShell, inputClasses } from '../../../components/ui/field';
 import { PageHeader } from '../../../components/ui/page-header';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { useUpkeepBooths } from '../api/get-upkeep-booths';
-import { useUpkeepDue } from '../api/get-upkeep-due';
+import { useBooths } from '../../../api/booths/get-booths';
+import { useUpkeepDue } from '../../../api/upkeep/get-upkeep-due';
 import { BoothUpkeepView } from './booth-upkeep-view';
 import { DueSummary } from './due-summary';
 
@@ -21,7 +21,8 @@ interface UpkeepPageProps {
 
 /** Booth upkeep: fitness to spray across the site, then one booth's filters, tests and record. */
 export function UpkeepPage({ boothId, onBooth, timeZone, today, canLog, canWrite, siteId, siteSwitcher }: UpkeepPageProps) {
-  const booths = useUpkeepBooths(siteId);
+  // Every booth of the site looked at: a shop has a handful.
+  const booths = useBooths({ page: 1, pageSize: 200, siteId });
   const due = useUpkeepDue(siteId);
   const items = booths.data?.items ?? [];
   const chosen = items.find((b) => b.id === boothId) ?? items[0];

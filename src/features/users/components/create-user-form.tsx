@@ -8,7 +8,7 @@ import { createUserSchema } from '../../../../shared/schemas/user';
 import { Button } from '../../../components/ui/button';
 import { asNumber, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useCreateUser } from '../api/create-user';
+import { useCreateUser } from '../../../api/users/create-user';
 import { roleOptions, unitOptions, type UserSiteChoice } from './user-options';
 
 type CreateUserFormInput = z.input<typeof createUserSchema>;

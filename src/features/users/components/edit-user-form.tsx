@@ -6,7 +6,7 @@ import { updateUserSchema, type UpdateUserInput, type User } from '../../../../s
 import { Button } from '../../../components/ui/button';
 import { asNumber, FormAlert, InputField, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useUpdateUser } from '../api/update-user';
+import { useUpdateUser } from '../../../api/users/update-user';
 import { roleOptions, unitOptions, type UserSiteChoice } from './user-options';
 
 const fieldNames = ['name', 'role', 'units', 'siteId'];

@@ -6,7 +6,7 @@ import { updateUserSchema, type User } from '../../../../shared/schemas/user';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, InputField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useUpdateUser } from '../api/update-user';
+import { useUpdateUser } from '../../../api/users/update-user';
 
 const resetPasswordSchema = updateUserSchema.pick({ password: true }).required();
 type ResetPasswordInput = { password: string };

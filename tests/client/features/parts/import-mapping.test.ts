@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { normaliseTag } from '../../../../src/features/parts/api/get-part-by-tag';
+import { normaliseTag } from '../../../../src/api/parts/normalise-tag';
 import { guessMapping, plainMessage } from '../../../../src/features/parts/components/import-mapping';
 import { facesWords, partTotals, spacedTag } from '../../../../src/features/parts/components/part-format';
 

@@ -1,6 +1,6 @@
-export type LegendMark = 'bar' | 'pale-bar' | 'line' | 'dashed-line' | 'point';
+type LegendMark = 'bar' | 'pale-bar' | 'line' | 'dashed-line' | 'point';
 
-export interface LegendEntry {
+interface LegendEntry {
   label: string;
   colour: string;
   mark: LegendMark;

@@ -5,7 +5,7 @@ import { formatNumber } from '../../../../lib/units-display';
  * blue/orange-led qualitative set), led by the app's lacquer green. Never the only cue: each chart
  * has a legend and the table beside it.
  */
-export const seriesColours = ['#1b5246', '#e69f00', '#0072b2', '#cc79a7', '#56b4e9', '#d55e00', '#009e73', '#95805c'];
+const seriesColours = ['#1b5246', '#e69f00', '#0072b2', '#cc79a7', '#56b4e9', '#d55e00', '#009e73', '#95805c'];
 export const colourAt = (index: number) => seriesColours[index % seriesColours.length];
 
 export const stopColour = '#b4232a';

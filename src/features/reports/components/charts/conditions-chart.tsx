@@ -3,14 +3,14 @@ import { ChartLegend } from './chart-legend';
 import { useChartSize } from './chart-size';
 import { axisTick, cautionColour, chartMargin, colourAt, gridStroke, stopColour, valueWith } from './chart-style';
 
-export interface ConditionsChartPoint {
+interface ConditionsChartPoint {
   t: number;
   air: number;
   rh: number;
   margin: number;
 }
 
-export interface ConditionsChartLimits {
+interface ConditionsChartLimits {
   minTemp: number | null;
   maxRh: number | null;
   minMargin: number;

@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequestNoContent, refreshCsrfToken } from '../../lib/api-client';
+import { authKeys } from './auth-keys';
+
+export async function logout(): Promise<void> {
+  await apiRequestNoContent('POST', '/api/auth/logout');
+}
+
+export function useLogout() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: logout,
+    onSettled: async () => {
+      queryClient.clear();
+      queryClient.setQueryData(authKeys.me(), null);
+      await refreshCsrfToken().catch(() => undefined);
+    },
+  });
+}
