@@ -31,6 +31,9 @@ export const pwaOptions: Partial<VitePWAOptions> = {
     navigateFallback: '/index.html',
     navigateFallbackDenylist: [/^\/api\//],
     cleanupOutdatedCaches: true,
+    // The first worker takes over the open page at once, so the session opened right after signing in
+    // is already kept for offline use. A later version still waits for "Reload" (no skipWaiting).
+    clientsClaim: true,
     runtimeCaching: [
       {
         // The reads the booth tablet needs to open a spray session (and its Today and session lists) with no
@@ -38,7 +41,10 @@ export const pwaOptions: Partial<VitePWAOptions> = {
         // and every write are never cached: they are the server's answer or nothing. (The function is
         // copied into the worker as text, so the pattern is written out in it.)
         urlPattern: ({ url, sameOrigin }) =>
-          sameOrigin && /^\/api\/(auth\/me|settings|spray-sessions|booths|coats|denibs|products|finish-systems|jobs|parts|ready|readings|racks|sites|sprayers|today)(\/|$)/.test(url.pathname),
+          sameOrigin &&
+          /^\/api\/(auth\/me|settings|spray-sessions|booths|coats|denibs|products|finish-systems|jobs|parts|ready|readings|racks|sites|sprayers|today)(\/|$)/.test(
+            url.pathname,
+          ),
         method: 'GET',
         handler: 'NetworkFirst',
         options: {
@@ -50,14 +56,20 @@ export const pwaOptions: Partial<VitePWAOptions> = {
             {
               // Only JSON answers are kept (no CSV downloads, no error pages).
               cacheWillUpdate: async ({ response }) =>
-                response.status === 200 && (response.headers.get('content-type') ?? '').includes('application/json') ? response : null,
+                response.status === 200 && (response.headers.get('content-type') ?? '').includes('application/json')
+                  ? response
+                  : null,
               // A copy from the cache says when the server wrote it, so the page can show its age
               // (src/lib/saved-copy.ts reads this header; the function is copied into the worker, so the name is spelt here).
               cachedResponseWillBeUsed: async ({ cachedResponse }) => {
                 if (!cachedResponse) return cachedResponse;
                 const headers = new Headers(cachedResponse.headers);
                 headers.set('x-boothwright-saved-at', cachedResponse.headers.get('date') ?? '');
-                return new Response(await cachedResponse.blob(), { status: cachedResponse.status, statusText: cachedResponse.statusText, headers });
+                return new Response(await cachedResponse.blob(), {
+                  status: cachedResponse.status,
+                  statusText: cachedResponse.statusText,
+                  headers,
+                });
               },
             },
           ],

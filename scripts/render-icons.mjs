@@ -13,11 +13,16 @@ const sizes = [
 ];
 
 const svg = await readFile(path.join(dir, 'boothwright-icon.svg'), 'utf8');
-const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: ['--no-sandbox', '--disable-gpu'] });
+const browser = await chromium.launch({
+  executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+  args: ['--no-sandbox', '--disable-gpu'],
+});
 try {
   for (const { file, size } of sizes) {
     const page = await browser.newPage({ viewport: { width: size, height: size } });
-    await page.setContent(`<style>html,body{margin:0}svg{display:block;width:${size}px;height:${size}px}</style>${svg}`);
+    await page.setContent(
+      `<style>html,body{margin:0}svg{display:block;width:${size}px;height:${size}px}</style>${svg}`,
+    );
     await page.screenshot({ path: path.join(dir, file), omitBackground: false });
     await page.close();
   }

@@ -34,7 +34,11 @@ function subscribe(listener: () => void): () => void {
  * read came fresh from the network. With no network the tablet shows its last copies, and says so.
  */
 export function useSavedCopyTime(): number | null {
-  return useSyncExternalStore(subscribe, () => oldest, () => null);
+  return useSyncExternalStore(
+    subscribe,
+    () => oldest,
+    () => null,
+  );
 }
 
 /** The service worker's store of API answers (pwa.config.ts names it). */

@@ -8,7 +8,12 @@ interface OfflineNoteProps {
   timeZone: string;
 }
 
-const waitingWords = (waiting: number) => (waiting === 0 ? 'nothing waiting to send' : waiting === 1 ? '1 coat waiting to send' : `${waiting} coats waiting to send`);
+const waitingWords = (waiting: number) =>
+  waiting === 0
+    ? 'nothing waiting to send'
+    : waiting === 1
+      ? '1 coat waiting to send'
+      : `${waiting} coats waiting to send`;
 
 /**
  * Said before anything is saved: with no connection, coats wait on the tablet and nothing else can
@@ -20,7 +25,10 @@ export function OfflineNote({ waiting, timeZone }: OfflineNoteProps) {
   if (online && savedAt === null) return null;
   const copy = savedAt === null ? null : shopWhen(new Date(savedAt).toISOString(), timeZone);
   return (
-    <div role="status" className="mb-4 rounded-panel border-4 border-verdict-caution bg-white p-4 text-lg text-maple-900">
+    <div
+      role="status"
+      className="mb-4 rounded-panel border-4 border-verdict-caution bg-white p-4 text-lg text-maple-900"
+    >
       {online ? (
         <p className="font-bold">The server did not answer in time</p>
       ) : (
@@ -30,10 +38,15 @@ export function OfflineNote({ waiting, timeZone }: OfflineNoteProps) {
       )}
       {!online && (
         <p className="font-semibold">
-          This tablet is offline. Coats you record are kept on it and sent by themselves when the connection is back; checks, mixes and denibs need the connection.
+          This tablet is offline. Coats you record are kept on it and sent by themselves when the connection is back;
+          checks, mixes and denibs need the connection.
         </p>
       )}
-      {copy && <p className="mt-1">Showing the copy saved on this tablet at {copy}: anything recorded elsewhere since then is not shown.</p>}
+      {copy && (
+        <p className="mt-1">
+          Showing the copy saved on this tablet at {copy}: anything recorded elsewhere since then is not shown.
+        </p>
+      )}
     </div>
   );
 }

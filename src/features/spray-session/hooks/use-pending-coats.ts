@@ -6,13 +6,27 @@ import { createCoat } from '../../../api/coats/create-coat';
 import { invalidate } from '../../../api/invalidate';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
-import { markRefused, onQueueChange, queueCoat, queuedCoats, removeQueued, type PendingCoat } from '../utils/coat-queue';
+import {
+  markRefused,
+  onQueueChange,
+  queueCoat,
+  queuedCoats,
+  removeQueued,
+  type PendingCoat,
+} from '../utils/coat-queue';
 
 export type { PendingCoat } from '../utils/coat-queue';
 export type QueueCoat = (body: PendingCoat['body'], label: string) => Promise<void>;
 
 /** Answers that say "not now" rather than "not this coat": the coat waits and is sent again later. */
-const tryLater = new Set(['network', 'unauthenticated', 'csrf_invalid', 'too_many_requests', 'internal', 'bad_response']);
+const tryLater = new Set([
+  'network',
+  'unauthenticated',
+  'csrf_invalid',
+  'too_many_requests',
+  'internal',
+  'bad_response',
+]);
 
 let sending: Promise<number> | null = null;
 
@@ -64,7 +78,9 @@ function useResend() {
   return useCallback(async () => {
     const sent = await sendQueued().catch(() => 0);
     if (sent === 0) return;
-    toast.success(sent === 1 ? 'The waiting coat is now on the server.' : `${sent} waiting coats are now on the server.`);
+    toast.success(
+      sent === 1 ? 'The waiting coat is now on the server.' : `${sent} waiting coats are now on the server.`,
+    );
     await invalidate(queryClient, changedKeys.coat());
   }, [queryClient]);
 }
@@ -98,7 +114,10 @@ export function useCoatQueueSender(): void {
 export function usePendingCoats(sessionId: number) {
   const pending = useQueuedCoats().filter((coat) => coat.body.spraySessionId === sessionId);
   const resend = useResend();
-  const add: QueueCoat = useCallback((body, label) => queueCoat({ body, label, queuedAt: new Date().toISOString(), problem: null }), []);
+  const add: QueueCoat = useCallback(
+    (body, label) => queueCoat({ body, label, queuedAt: new Date().toISOString(), problem: null }),
+    [],
+  );
   const discard = useCallback((key: string) => void removeQueued(key), []);
   return { pending, add, discard, resend };
 }

@@ -59,7 +59,11 @@ async function moveLegacyCoats(db: IDBPDatabase<QueueDb>): Promise<void> {
 function database(): Promise<IDBPDatabase<QueueDb>> {
   opened ??= openDB<QueueDb>('boothwright', 1, {
     upgrade(db) {
-      db.createObjectStore(storeName, { keyPath: 'seq', autoIncrement: true }).createIndex('by-key', 'body.idempotencyKey', { unique: true });
+      db.createObjectStore(storeName, { keyPath: 'seq', autoIncrement: true }).createIndex(
+        'by-key',
+        'body.idempotencyKey',
+        { unique: true },
+      );
     },
   })
     .then(async (db) => {
