@@ -31,16 +31,18 @@ function changed(): void {
   channel?.postMessage('changed');
 }
 
+/** Each legacy list that could be read; one that cannot is left where it is, never thrown away. */
 function legacyCoats(): { key: string; coats: PendingCoat[] }[] {
-  const keys = Object.keys(localStorage).filter((key) => key.startsWith(legacyPrefix));
-  return keys.map((key) => {
-    try {
-      const parsed = z.array(pendingCoatSchema).safeParse(JSON.parse(localStorage.getItem(key) ?? '[]'));
-      return { key, coats: parsed.success ? parsed.data : [] };
-    } catch {
-      return { key, coats: [] };
-    }
-  });
+  return Object.keys(localStorage)
+    .filter((key) => key.startsWith(legacyPrefix))
+    .flatMap((key) => {
+      try {
+        const parsed = z.array(pendingCoatSchema).safeParse(JSON.parse(localStorage.getItem(key) ?? '[]'));
+        return parsed.success ? [{ key, coats: parsed.data }] : [];
+      } catch {
+        return [];
+      }
+    });
 }
 
 /** Moves coats an earlier version left in localStorage into the queue once; a coat already there by its key is not added twice. */
