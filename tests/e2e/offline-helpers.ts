@@ -20,6 +20,8 @@ export function launchTablet(userDataDir: string, baseURL: string): Promise<Brow
     ],
     baseURL,
     viewport: { width: 1280, height: 800 },
+    // The other browser tests block workers (playwright.config.ts); this one is about the worker.
+    serviceWorkers: 'allow',
   });
 }
 
