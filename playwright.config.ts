@@ -20,6 +20,10 @@ export default defineConfig({
     baseURL: `http://127.0.0.1:${port}`,
     viewport: { width: 1280, height: 800 },
     trace: 'retain-on-failure',
+    // Each test is a fresh browser, so the service worker would precache the whole shell on every
+    // first visit: load those tests do not check. The offline tablet test launches its own
+    // Chromium with the worker on (tests/e2e/offline-helpers.ts).
+    serviceWorkers: 'block',
     screenshot: 'only-on-failure',
     launchOptions: {
       executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',

@@ -57,8 +57,13 @@ export function createApp(deps: AppDeps): Express {
   return app;
 }
 
+/** The service worker and the manifest are asked for afresh each time, so a new deploy reaches the tablets. */
+function keepWorkerFresh(res: express.Response, filePath: string): void {
+  if (/(^|[/\\])(sw\.js|manifest\.webmanifest)$/.test(filePath)) res.setHeader('Cache-Control', 'no-cache');
+}
+
 function serveClient(app: Express, clientDir: string): void {
-  app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+  app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: keepWorkerFresh }));
   // Every other path is a client route: the router in the browser decides what to show.
   app.get('/{*splat}', (_req, res) => {
     res.sendFile(path.join(clientDir, 'index.html'));

@@ -8,6 +8,7 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
 import { AppProviders } from './app/providers';
 import { createQueryClient } from './app/query-client';
+import { NewVersionNotice } from './app/new-version-notice';
 import { createAppRouter } from './app/router';
 
 const queryClient = createQueryClient();
@@ -19,6 +20,7 @@ createRoot(root).render(
   <StrictMode>
     <AppProviders queryClient={queryClient}>
       <RouterProvider router={router} />
+      <NewVersionNotice />
     </AppProviders>
   </StrictMode>,
 );

@@ -1,6 +1,7 @@
 import type { z } from 'zod';
 import { errorCodes, errorEnvelopeSchema, type ErrorCode } from '../../shared/errors';
 import { csrfResponseSchema } from '../../shared/schemas/auth';
+import { noteReadAnswer } from './saved-copy';
 
 /** Codes the server sends (shared/errors.ts) plus two the client itself produces. */
 export type ApiErrorCode = ErrorCode | 'network' | 'bad_response';
@@ -116,14 +117,18 @@ async function send(method: Method, path: string, options: RequestOptions, retri
   if (options.body !== undefined && !isForm) headers['content-type'] = 'application/json';
   if (method !== 'GET') headers['x-csrf-token'] = await getCsrfToken();
 
-  const response = await safeFetch(buildUrl(path, options.query), {
+  const url = buildUrl(path, options.query);
+  const response = await safeFetch(url, {
     method,
     headers,
     credentials: 'same-origin',
     body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
     signal: options.signal,
   });
-  if (response.ok) return response;
+  if (response.ok) {
+    if (method === 'GET') noteReadAnswer(url, response);
+    return response;
+  }
 
   const error = await toApiError(response);
   if (error.status === 403 && error.code === 'csrf_invalid' && !retried) {

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { signedInUserResponseSchema, type LoginInput } from '../../../shared/schemas/auth';
 import { apiClient, refreshCsrfToken } from '../../lib/api-client';
+import { forgetSavedCopies } from '../../lib/saved-copy';
 import { authKeys } from './auth-keys';
 
 export async function login(input: LoginInput) {
@@ -17,7 +18,7 @@ export function useLogin() {
       // A new sign-in session: drop anything cached for whoever was here before.
       queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });
       queryClient.setQueryData(authKeys.me(), user);
-      await Promise.all([refreshCsrfToken(), queryClient.invalidateQueries({ queryKey: authKeys.me() })]);
+      await Promise.all([refreshCsrfToken(), forgetSavedCopies(), queryClient.invalidateQueries({ queryKey: authKeys.me() })]);
     },
   });
 }

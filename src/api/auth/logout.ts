@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequestNoContent, refreshCsrfToken } from '../../lib/api-client';
+import { forgetSavedCopies } from '../../lib/saved-copy';
 import { authKeys } from './auth-keys';
 
 export async function logout(): Promise<void> {
@@ -13,7 +14,7 @@ export function useLogout() {
     onSettled: async () => {
       queryClient.clear();
       queryClient.setQueryData(authKeys.me(), null);
-      await refreshCsrfToken().catch(() => undefined);
+      await Promise.all([refreshCsrfToken().catch(() => undefined), forgetSavedCopies()]);
     },
   });
 }

@@ -5,7 +5,7 @@ import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { LoadingState } from '../../../components/ui/states';
 import { useLatestReading } from '../../../api/readings/get-readings';
 import { useMixes } from '../../../api/mixes/get-mixes';
-import type { PendingCoat } from '../hooks/use-pending-coats';
+import type { QueueCoat } from '../hooks/use-pending-coats';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { fromPart } from '../utils/picked-part';
 import { partsDueNow } from '../utils/session-plan';
@@ -17,7 +17,7 @@ interface CoatEntrySectionProps {
   sessionCoats: Coat[];
   /** The session's coats are still loading: the parts due cannot be told yet. */
   coatsPending: boolean;
-  queue: (body: PendingCoat['body'], label: string) => void;
+  queue: QueueCoat;
   units: UnitSystem;
   timeZone: string;
 }

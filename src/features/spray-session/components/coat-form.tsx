@@ -11,7 +11,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useOnline } from '../../../lib/use-online';
 import { coatEntryFields, useCoatForm } from '../hooks/use-coat-form';
 import { useCoatPreview } from '../hooks/use-coat-preview';
-import type { PendingCoat } from '../hooks/use-pending-coats';
+import type { QueueCoat } from '../hooks/use-pending-coats';
 import { useRecordCoat } from '../hooks/use-record-coat';
 import { useStopReasons } from '../hooks/use-stop-reasons';
 import type { SessionPlan } from '../hooks/use-session-plan';
@@ -33,7 +33,7 @@ interface CoatFormProps {
   mixes: Mix[];
   sessionCoats: Coat[];
   reading: Reading | null;
-  queue: (body: PendingCoat['body'], label: string) => void;
+  queue: QueueCoat;
   units: UnitSystem;
   timeZone: string;
 }

@@ -37,7 +37,7 @@ function LoadedSession({ session, viewer, units, timeZone }: PageProps & { sessi
   return (
     <div className="mx-auto max-w-6xl">
       <SessionHeader session={session} timeZone={timeZone} partCount={partCount} />
-      <OfflineNote />
+      <OfflineNote waiting={pendingCoats.pending.filter((coat) => coat.problem === null).length} timeZone={timeZone} />
       {!mayRun && session.state !== 'done' && session.state !== 'cancelled' && (
         <p className="mb-4 rounded-panel border border-maple-400 bg-maple-100 p-3">
           You are looking at this session; {session.sprayerName ?? 'the assigned sprayer'} runs it. Ask the finishing lead to change the sprayer if it should be you.

@@ -1,94 +1,99 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useState } from 'react';
 import { toast } from 'sonner';
-import { z } from 'zod';
 import { changedKeys } from '../../../api/changes';
 import { createCoat } from '../../../api/coats/create-coat';
 import { invalidate } from '../../../api/invalidate';
-import { createCoatSchema } from '../../../../shared/schemas/coat';
 import { isApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/error-messages';
+import {
+  markRefused,
+  onQueueChange,
+  queueCoat,
+  queuedCoats,
+  removeQueued,
+  type PendingCoat,
+} from '../utils/coat-queue';
 
-const pendingCoatSchema = z.object({
-  body: createCoatSchema.extend({ idempotencyKey: z.string().min(8) }),
-  label: z.string(),
-  queuedAt: z.string(),
-  /** Set when the server answered but refused the coat: resending cannot help, a person must look. */
-  problem: z.string().nullable(),
-});
-export type PendingCoat = z.infer<typeof pendingCoatSchema>;
+export type { PendingCoat } from '../utils/coat-queue';
+export type QueueCoat = (body: PendingCoat['body'], label: string) => Promise<void>;
 
-const storageKey = (sessionId: number) => `boothwright:pending-coats:session-${sessionId}`;
+/** Answers that say "not now" rather than "not this coat": the coat waits and is sent again later. */
+const tryLater = new Set([
+  'network',
+  'unauthenticated',
+  'csrf_invalid',
+  'too_many_requests',
+  'internal',
+  'bad_response',
+]);
+
+let sending: Promise<number> | null = null;
+
+async function sendEach(): Promise<number> {
+  let sent = 0;
+  for (const coat of (await queuedCoats()).filter((c) => c.problem === null)) {
+    try {
+      // The idempotency key makes a repeat (an answer lost on the way back) return the first record.
+      await createCoat(coat.body);
+      await removeQueued(coat.body.idempotencyKey);
+      sent += 1;
+    } catch (error) {
+      if (isApiError(error) && tryLater.has(error.code)) break;
+      await markRefused(coat.body.idempotencyKey, errorMessage(error));
+    }
+  }
+  return sent;
+}
+
+/** Sends the waiting coats in the order they were recorded, one pass at a time for the whole tab. */
+function sendQueued(): Promise<number> {
+  sending ??= sendEach().finally(() => {
+    sending = null;
+  });
+  return sending;
+}
+
+/** The coats waiting on this tablet, kept current as they are queued, sent or refused. */
+function useQueuedCoats(): PendingCoat[] {
+  const [coats, setCoats] = useState<PendingCoat[]>([]);
+  useEffect(() => {
+    let live = true;
+    const load = () =>
+      void queuedCoats()
+        .then((next) => live && setCoats(next))
+        .catch(() => undefined);
+    load();
+    const stop = onQueueChange(load);
+    return () => {
+      live = false;
+      stop();
+    };
+  }, []);
+  return coats;
+}
+
+function useResend() {
+  const queryClient = useQueryClient();
+  return useCallback(async () => {
+    const sent = await sendQueued().catch(() => 0);
+    if (sent === 0) return;
+    toast.success(
+      sent === 1 ? 'The waiting coat is now on the server.' : `${sent} waiting coats are now on the server.`,
+    );
+    await invalidate(queryClient, changedKeys.coat());
+  }, [queryClient]);
+}
+
 const resendEveryMs = 15_000;
 
-function readStored(sessionId: number): PendingCoat[] {
-  try {
-    const parsed = z.array(pendingCoatSchema).safeParse(JSON.parse(localStorage.getItem(storageKey(sessionId)) ?? '[]'));
-    return parsed.success ? parsed.data : [];
-  } catch {
-    return [];
-  }
-}
-
-function writeStored(sessionId: number, coats: PendingCoat[]): void {
-  if (coats.length === 0) localStorage.removeItem(storageKey(sessionId));
-  else localStorage.setItem(storageKey(sessionId), JSON.stringify(coats));
-}
-
 /**
- * Coats recorded while the booth had no connection. They live in this tablet's storage with their
- * idempotency key and are resent when the browser comes back online and every 15 s; the key makes
- * the server answer a repeat with the first record, so a resend never makes a second coat.
+ * Sends the tablet's waiting coats when the browser comes back online, at start and every 15 s
+ * while any wait, from whatever page is open. Mounted once, in the signed-in layout.
  */
-export function usePendingCoats(sessionId: number) {
-  const queryClient = useQueryClient();
-  const [pending, setPending] = useState(() => readStored(sessionId));
-  const sending = useRef(false);
-
-  const change = useCallback(
-    (edit: (coats: PendingCoat[]) => PendingCoat[]) => {
-      const next = edit(readStored(sessionId));
-      writeStored(sessionId, next);
-      setPending(next);
-    },
-    [sessionId],
-  );
-
-  const sendOne = useCallback(
-    async (coat: PendingCoat): Promise<'sent' | 'offline' | 'refused'> => {
-      try {
-        await createCoat(coat.body);
-        change((coats) => coats.filter((c) => c.body.idempotencyKey !== coat.body.idempotencyKey));
-        return 'sent';
-      } catch (error) {
-        if (isApiError(error) && error.code === 'network') return 'offline';
-        change((coats) => coats.map((c) => (c.body.idempotencyKey === coat.body.idempotencyKey ? { ...c, problem: errorMessage(error) } : c)));
-        return 'refused';
-      }
-    },
-    [change],
-  );
-
-  const resend = useCallback(async () => {
-    if (sending.current) return;
-    sending.current = true;
-    let sent = 0;
-    try {
-      for (const coat of readStored(sessionId).filter((c) => c.problem === null)) {
-        const outcome = await sendOne(coat);
-        if (outcome === 'offline') break;
-        if (outcome === 'sent') sent += 1;
-      }
-    } finally {
-      sending.current = false;
-    }
-    if (sent > 0) {
-      toast.success(sent === 1 ? 'The pending coat is now on the server.' : `${sent} pending coats are now on the server.`);
-      await invalidate(queryClient, changedKeys.coat());
-    }
-  }, [queryClient, sendOne, sessionId]);
-
-  const waiting = pending.some((c) => c.problem === null);
+export function useCoatQueueSender(): void {
+  const waiting = useQueuedCoats().some((coat) => coat.problem === null);
+  const resend = useResend();
   useEffect(() => {
     if (!waiting) return;
     const onOnline = () => void resend();
@@ -100,9 +105,19 @@ export function usePendingCoats(sessionId: number) {
       window.clearInterval(timer);
     };
   }, [waiting, resend]);
+}
 
-  const add = useCallback((body: PendingCoat['body'], label: string) => change((coats) => [...coats, { body, label, queuedAt: new Date().toISOString(), problem: null }]), [change]);
-  const discard = useCallback((key: string) => change((coats) => coats.filter((c) => c.body.idempotencyKey !== key)), [change]);
-
+/**
+ * Coats recorded while the booth had no connection, kept in this tablet's IndexedDB (so they
+ * outlive a closed browser or a restart) with their idempotency key until the server has them.
+ */
+export function usePendingCoats(sessionId: number) {
+  const pending = useQueuedCoats().filter((coat) => coat.body.spraySessionId === sessionId);
+  const resend = useResend();
+  const add: QueueCoat = useCallback(
+    (body, label) => queueCoat({ body, label, queuedAt: new Date().toISOString(), problem: null }),
+    [],
+  );
+  const discard = useCallback((key: string) => void removeQueued(key), []);
   return { pending, add, discard, resend };
 }

@@ -1,0 +1,117 @@
+import { chromium, expect, request, type APIRequestContext, type BrowserContext, type Page } from '@playwright/test';
+import type { Coat } from '../../shared/schemas/coat';
+import type { List } from '../../shared/schemas/common';
+import type { Job } from '../../shared/schemas/job';
+import type { Part } from '../../shared/schemas/part';
+import type { SpraySession } from '../../shared/schemas/spray-session';
+import { demo, demoPassword } from './helpers';
+
+/** Chromium as the browser tests run it, but with a profile on disk, so closing it is a real browser restart. */
+export function launchTablet(userDataDir: string, baseURL: string): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(userDataDir, {
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+    ],
+    baseURL,
+    viewport: { width: 1280, height: 800 },
+    // The other browser tests block workers (playwright.config.ts); this one is about the worker.
+    serviceWorkers: 'allow',
+  });
+}
+
+/**
+ * The console guard of fixtures.ts, for a context the test launches itself (a persistent one is not
+ * made by `browser.newContext`, so the fixture cannot see it). Returns what went wrong.
+ */
+export function guardContext(context: BrowserContext, expected: RegExp[]): string[] {
+  const problems: string[] = [];
+  const watch = (page: Page) => {
+    page.on('console', (message) => {
+      if (message.type() === 'error' && !expected.some((pattern) => pattern.test(message.text())))
+        problems.push(`console error on ${page.url()}: ${message.text()}`);
+    });
+    page.on('pageerror', (error) => problems.push(`page error on ${page.url()}: ${error.message}`));
+    page.on('response', (response) => {
+      if (response.status() >= 500)
+        problems.push(`${response.status()} from ${response.request().method()} ${response.url()}`);
+    });
+  };
+  context.pages().forEach(watch);
+  context.on('page', watch);
+  return problems;
+}
+
+export interface LeadApi {
+  context: APIRequestContext;
+  get: <T>(path: string) => Promise<T>;
+  send: <T>(method: 'POST' | 'PATCH', path: string, body: object) => Promise<T>;
+}
+
+/** The finishing lead's own API session: books what the sprayer works on, and reads what the server holds. */
+export async function leadApi(baseURL: string): Promise<LeadApi> {
+  const context = await request.newContext({ baseURL });
+  const token = async () => (await (await context.get('/api/auth/csrf')).json()).token as string;
+  const login = await context.post('/api/auth/login', {
+    headers: { 'x-csrf-token': await token() },
+    data: { email: demo.lead.email, password: demoPassword },
+  });
+  expect(login.ok()).toBe(true);
+  const csrf = await token();
+  const get = async <T>(path: string): Promise<T> => {
+    const res = await context.get(path);
+    expect(res.ok(), `GET ${path}`).toBe(true);
+    return res.json();
+  };
+  const send = async <T>(method: 'POST' | 'PATCH', path: string, body: object): Promise<T> => {
+    const res = await context.fetch(path, { method, headers: { 'x-csrf-token': csrf }, data: body });
+    expect(res.ok(), `${method} ${path}: ${await res.text()}`).toBe(true);
+    return res.json();
+  };
+  return { context, get, send };
+}
+
+/** Two fresh doors on the demo vanity job (2K PU primer first), booked now in Booth 1 for Mina, the demo sprayer. */
+export async function bookTwoDoors(api: LeadApi): Promise<{ sessionId: number; doors: string[] }> {
+  const now = Date.now();
+  const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
+  const doors = [`Offline door A ${now}`, `Offline door B ${now}`];
+  const parts = [];
+  for (const label of doors)
+    parts.push(
+      (
+        await api.send<{ part: Part }>('POST', `/api/jobs/${job.id}/parts`, {
+          label,
+          lengthMm: 715,
+          widthMm: 496,
+          thicknessMm: 18,
+        })
+      ).part,
+    );
+  // Earlier runs on the same database may have left the sprayer or the booth booked now.
+  const around = { from: new Date(now - 3 * 3_600_000).toISOString(), to: new Date(now + 3 * 3_600_000).toISOString() };
+  const { items } = await api.get<List<SpraySession>>(
+    `/api/spray-sessions?from=${encodeURIComponent(around.from)}&to=${encodeURIComponent(around.to)}`,
+  );
+  for (const old of items)
+    if (old.state !== 'cancelled' && (old.sprayerId === 3 || old.boothId === 1))
+      await api.send('PATCH', `/api/spray-sessions/${old.id}`, { state: 'cancelled' });
+  const { spraySession } = await api.send<{ spraySession: SpraySession }>('POST', '/api/spray-sessions', {
+    boothId: 1,
+    start: new Date(now - 5 * 60_000).toISOString(),
+    end: new Date(now + 2 * 3_600_000).toISOString(),
+    sprayerId: 3,
+    items: parts.map((part) => ({ partId: part.id, stepPosition: 0 })),
+    override: { reason: 'Browser test: booked whatever the hour' },
+  });
+  return { sessionId: spraySession.id, doors };
+}
+
+export async function coatsOnServer(api: LeadApi, sessionId: number): Promise<List<Coat>> {
+  return api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`);
+}
