@@ -1,4 +1,5 @@
-import { chromium, expect, request, type APIRequestContext, type BrowserContext, type Page } from '@playwright/test';
+import { chromium, request, type APIRequestContext, type BrowserContext, type Page } from '@playwright/test';
+import { expect } from './fixtures';
 import type { Coat } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
