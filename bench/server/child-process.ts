@@ -13,7 +13,7 @@ export interface RunningChild {
 /** Asks the probe inside the child for its figures. */
 export function readProbe(child: ChildProcess): Promise<ProbeFigures> {
   return new Promise((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error('the server did not answer the probe')), 10_000);
+    const timer = setTimeout(() => reject(new Error('the server did not answer the probe')), 120_000);
     const answer = (message: unknown) => {
       if ((message as ProbeFigures)?.type !== 'probe') return;
       clearTimeout(timer);
