@@ -1,13 +1,15 @@
 import type { BundleSizes } from './bundle-size';
 import type { LoadResult } from './load/measure';
+import type { TickTiming } from './notification-timing';
 import type { PlannerTiming } from './planner-timing';
 import type { RowCounts } from './seed/bulk-insert';
 
-export const goals = { p99Ms: 50, ratioToBare: 0.3, plannerMs: 200, firstScreenJsKb: 200, residentMb: 200 } as const;
+export const goals = { p99Ms: 50, ratioToBare: 0.3, plannerMs: 200, firstScreenJsKb: 200, residentMb: 200, stallMs: 50, serverMs: 1 } as const;
 
 const mark = (ok: boolean) => (ok ? 'ok  ' : 'MISS');
 const n0 = (n: number) => Math.round(n).toLocaleString('en-GB');
 const n1 = (n: number) => n.toFixed(1);
+const n2 = (n: number) => n.toFixed(2);
 const pad = (text: string, width: number) => (text.length >= width ? text : text + ' '.repeat(width - text.length));
 const lpad = (text: string, width: number) => (text.length >= width ? text : ' '.repeat(width - text.length) + text);
 
@@ -23,7 +25,7 @@ export function printSeed(label: string, counts: RowCounts, seconds: number, boo
 
 /** One line per endpoint: throughput, latency, memory, the ratio to the bare endpoint, and the goals met. */
 export function printLoadTable(results: (LoadResult | { name: string; missing: string })[], bare: LoadResult | null, isRead: (name: string) => boolean): void {
-  console.log(`${pad('endpoint', 30)} ${lpad('alone ms', 9)} ${lpad('req/s', 8)} ${lpad('p50 ms', 8)} ${lpad('p99 ms', 8)} ${lpad('peak RSS', 9)} ${lpad('÷ bare', 7)}  goals: p99 < ${goals.p99Ms} ms · ≥ ${goals.ratioToBare} of bare · RSS < ${goals.residentMb} MB`);
+  console.log(`${pad('endpoint', 30)} ${lpad('alone ms', 9)} ${lpad('req/s', 8)} ${lpad('p50 ms', 8)} ${lpad('p99 ms', 8)} ${lpad('peak RSS', 9)} ${lpad('÷ bare', 7)} ${lpad('srv ms', 7)} ${lpad('cpu ms', 7)} ${lpad('srv p99', 8)} ${lpad('stall', 6)}  goals: p99 < ${goals.p99Ms} ms · ≥ ${goals.ratioToBare} of bare · RSS < ${goals.residentMb} MB · stall ≤ ${goals.stallMs} ms`);
   for (const r of results) {
     if ('missing' in r) {
       console.log(`${pad(r.name, 30)} ${r.missing}`);
@@ -32,12 +34,18 @@ export function printLoadTable(results: (LoadResult | { name: string; missing: s
     const ratio = bare ? r.requestsPerS / bare.requestsPerS : null;
     const answered = r.requests > 0;
     const checks = isRead(r.name) ? [`p99 ${mark(answered && r.p99Ms < goals.p99Ms)}`, `ratio ${mark(ratio !== null && ratio >= goals.ratioToBare)}`] : [];
-    checks.push(`RSS ${mark(r.peakRssMb < goals.residentMb)}`);
+    checks.push(`RSS ${mark(r.peakRssMb < goals.residentMb)}`, `stall ${mark(r.longestStallMs <= goals.stallMs)}`);
     const failed = r.failures > 0 ? `  FAILED: ${r.firstFailure}` : '';
     console.log(
-      `${pad(r.name, 30)} ${lpad(String(r.aloneMs), 9)} ${lpad(n0(r.requestsPerS), 8)} ${lpad(String(r.p50Ms), 8)} ${lpad(String(r.p99Ms), 8)} ${lpad(`${n0(r.peakRssMb)} MB`, 9)} ${lpad(ratio === null ? '' : ratio.toFixed(3), 7)}  ${checks.join('  ')}${failed}`,
+      `${pad(r.name, 30)} ${lpad(String(r.aloneMs), 9)} ${lpad(n0(r.requestsPerS), 8)} ${lpad(String(r.p50Ms), 8)} ${lpad(String(r.p99Ms), 8)} ${lpad(`${n0(r.peakRssMb)} MB`, 9)} ${lpad(ratio === null ? '' : ratio.toFixed(3), 7)} ${lpad(n2(r.serverAloneMs), 7)} ${lpad(n2(r.cpuMsPerRequest), 7)} ${lpad(n1(r.serverP99Ms), 8)} ${lpad(n0(r.longestStallMs), 6)}  ${checks.join('  ')}${failed}`,
     );
   }
+}
+
+/** The longest event-loop stall of the server over every line measured. */
+export function printStalls(results: LoadResult[]): void {
+  const worst = results.reduce((a, b) => (b.longestStallMs > a.longestStallMs ? b : a));
+  console.log(`longest event-loop stall of the server over the whole bench: ${n0(worst.longestStallMs)} ms (during "${worst.name}")  goal ≤ ${goals.stallMs} ms ${mark(worst.longestStallMs <= goals.stallMs)}`);
 }
 
 /** How each read's latency changed from one year to ten years of records. */
@@ -49,6 +57,10 @@ export function printGrowth(oneYear: LoadResult[], tenYears: LoadResult[]): void
     const times = (a: number, b: number) => (a > 0 ? (b / a).toFixed(2) : '–');
     console.log(`${pad(ten.name, 30)} ${lpad(String(one.aloneMs), 9)} ${lpad(String(ten.aloneMs), 10)} ${lpad(times(one.aloneMs, ten.aloneMs), 6)} ${lpad(String(one.p50Ms), 8)} ${lpad(String(ten.p50Ms), 8)} ${lpad(times(one.p50Ms, ten.p50Ms), 6)} ${lpad(String(one.p99Ms), 8)} ${lpad(String(ten.p99Ms), 8)} ${lpad(times(one.p99Ms, ten.p99Ms), 6)}`);
   }
+}
+
+export function printTicks(t: TickTiming): void {
+  console.log(`first tick after start (looks back a day) ${n0(t.firstMs)} ms; the ${t.ticks} after it, a minute apart: median ${n0(t.medianMs)} ms, slowest ${n0(t.maxMs)} ms; longest event-loop stall ${n0(t.longestStallMs)} ms  goal ≤ ${goals.stallMs} ms ${mark(t.longestStallMs <= goals.stallMs)}`);
 }
 
 export function printPlanner(t: PlannerTiming): void {

@@ -4,8 +4,9 @@ import path from 'node:path';
 import { measureBundle } from './bundle-size';
 import { coatCreationTarget, readTargets, reportPath, routeExists } from './load/endpoints';
 import { measure, type LoadResult, type LoadSettings, type Target } from './load/measure';
+import { timeNotificationTicks, type TickTiming } from './notification-timing';
 import { timePlanner } from './planner-timing';
-import { heading, printBundle, printGrowth, printLoadTable, printPlanner, printSeed } from './report';
+import { heading, printBundle, printGrowth, printLoadTable, printPlanner, printSeed, printStalls, printTicks } from './report';
 import { createSyntheticShop, growToTenYears, type SyntheticShop } from './seed/synthetic-shop';
 import { signIn, startAppServer } from './server/app-server';
 import { startBareServer } from './server/bare-server';
@@ -20,7 +21,7 @@ type Line = LoadResult | { name: string; missing: string };
 async function measureBare(dir: string): Promise<LoadResult> {
   const bare = await startBareServer(ports.bare, dir);
   try {
-    return await measure(bare.base, bare.pid, { name: 'bare Express + better-sqlite3', method: 'GET', path: '/one', headers: {} }, load);
+    return await measure(bare, { name: 'bare Express + better-sqlite3', method: 'GET', path: '/one', headers: {} }, load);
   } finally {
     await bare.stop();
   }
@@ -38,12 +39,19 @@ async function measureApp(shop: SyntheticShop, dir: string, withCoatCreation: bo
         lines.push({ name: target.name, missing: `not available (no ${reportPath} in this build)` });
         continue;
       }
-      lines.push(await measure(server.base, server.pid, target, load));
+      lines.push(await measure(server, target, load));
     }
     return lines;
   } finally {
     await server.stop();
   }
+}
+
+/** The scheduler's check on a copy of the database: its ticks record notifications. */
+async function timeTicksOnCopy(shop: SyntheticShop, dir: string): Promise<TickTiming> {
+  const copy = path.join(dir, 'ticks.sqlite');
+  fs.copyFileSync(shop.databasePath, copy);
+  return timeNotificationTicks(copy, new Date(shop.timeline.now.getTime() + 60_000));
 }
 
 // Other work on the machine skews every figure; the load average says how much there was.
@@ -56,6 +64,7 @@ async function main(): Promise<void> {
   console.log(`Boothwright benchmark · ${os.cpus().length} cores · Node ${process.version} · ${new Date().toISOString().slice(0, 16)} UTC · ${loadAverage()}`);
   console.log(`Production server (NODE_ENV=production, SQLite, logging at info) · autocannon ${load.connections} connections × ${load.durationS} s per line, after ${load.warmUpS} s warm-up`);
   console.log(`"alone" is the median latency of the same request sent one at a time for ${load.aloneS} s: the server's own cost, without queueing.`);
+  console.log(`Inside the server (bench/server/probe.ts): "srv ms" the median time from headers read to answer sent and "cpu ms" the process's CPU per request, both one at a time; "srv p99" the same time under the full load; "stall" the longest the event loop was held at once.`);
   const dir = fs.mkdtempSync('/tmp/bench-');
   try {
     heading('Client bundle (vite build)');
@@ -70,6 +79,8 @@ async function main(): Promise<void> {
     const oneYear = await measureApp(shop, dir, false);
     heading('One year of records');
     printLoadTable([bare, ...oneYear], bare, isRead);
+    heading('Notification check (once a minute in the server), one year of records');
+    printTicks(await timeTicksOnCopy(shop, dir));
 
     const grown = growToTenYears(shop);
     heading('Ten years of records');
@@ -80,6 +91,8 @@ async function main(): Promise<void> {
 
     heading('Read latency growth, one year → ten years');
     printGrowth(measured(oneYear), measured(tenYears));
+    heading('Event loop');
+    printStalls(measured([...oneYear, ...tenYears]));
   } finally {
     if (!process.env.BENCH_KEEP) fs.rmSync(dir, { recursive: true, force: true });
   }

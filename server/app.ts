@@ -1,16 +1,16 @@
-import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import pino, { type Logger } from 'pino';
-import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import { buildApiRouter, buildBareApiRouter } from './api';
 import { configurePassport } from './auth/passport';
 import type { AppConfig } from './config/env';
 import { systemClock, type Clock } from './lib/clock';
 import { LiveStreamLimits } from './lib/live-stream-limits';
+import { signInCacheFor } from './auth/sign-in-cache';
 import { errorHandler } from './middleware/error-handler';
+import { requestLog } from './middleware/request-log';
 import { securityHeaders } from './middleware/security';
 import { signInSessionMiddleware } from './middleware/sign-in-session';
 import { runAsOwnWork } from './db/sqlite-gate';
@@ -43,13 +43,15 @@ export function createApp(deps: AppDeps): Express {
   // Each request is its own piece of work: on SQLite none of its queries may run inside another request's transaction.
   app.use((_req, _res, next) => runAsOwnWork(next));
   app.use(securityHeaders(config.trustProxy));
-  app.use(pinoHttp({ logger, genReqId: (req) => (req.headers['x-request-id'] as string) || randomUUID(), autoLogging: config.env !== 'test' }));
+  app.use(requestLog(logger, config.slowRequestMs));
 
-  const auth = configurePassport(dataSource);
-  const services = { clock, events: deps.events ?? new EventBus(), liveStreams: new LiveStreamLimits(config.liveStreams), storage: createFileStorage(config), notifications: deps.notifications };
+  const events = deps.events ?? new EventBus();
+  const signInCache = signInCacheFor(events);
+  const auth = configurePassport(dataSource, signInCache);
+  const services = { clock, events, liveStreams: new LiveStreamLimits(config.liveStreams), storage: createFileStorage(config), notifications: deps.notifications };
   const registry: RegistryDeps = { dataSource, config, services, auth };
   app.use('/api', buildBareApiRouter(registry));
-  app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.signInSecret, config.trustProxy), auth.initialize(), auth.session());
+  app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.signInSecret, config.trustProxy, signInCache), auth.initialize(), auth.session());
   app.use('/api', buildApiRouter(registry));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);

@@ -1,4 +1,5 @@
 import autocannon from 'autocannon';
+import type { RunningChild } from '../server/child-process';
 import { waitUntilIdle, watchMemory } from '../server/memory';
 
 export interface LoadSettings {
@@ -30,6 +31,14 @@ export interface LoadResult {
   /** Answers other than 2xx, plus timeouts and socket errors: any of these spoils the figures. */
   failures: number;
   firstFailure: string | null;
+  /** Inside the server, one request at a time: median time from headers read to answer sent. */
+  serverAloneMs: number;
+  /** The server process's CPU time per request, one request at a time. */
+  cpuMsPerRequest: number;
+  /** Inside the server, under the full load: 99th percentile. */
+  serverP99Ms: number;
+  /** The longest the server's event loop was held at once, from warm-up to the end of this line. */
+  longestStallMs: number;
 }
 
 interface Run {
@@ -75,15 +84,20 @@ async function describeFailure(base: string, target: Target, result: autocannon.
 const warmUpConnections = 4;
 
 /** Warms the endpoint up, then loads it for the set time while watching the server's memory. */
-export async function measure(base: string, pid: number, target: Target, settings: LoadSettings): Promise<LoadResult> {
+export async function measure(server: RunningChild, target: Target, settings: LoadSettings): Promise<LoadResult> {
+  const { base, pid } = server;
+  await server.probe();
   if (settings.warmUpS > 0) await run(base, target, warmUpConnections, settings.warmUpS);
   await waitUntilIdle(pid);
+  const warm = await server.probe();
   const alone = (await run(base, target, 1, settings.aloneS)).result;
+  const inside = await server.probe();
   await waitUntilIdle(pid);
   const memory = watchMemory(pid);
   const { result, firstError } = await run(base, target, settings.connections, settings.durationS);
   const peakRssMb = memory.peakMb();
   await waitUntilIdle(pid);
+  const loaded = await server.probe();
   // No answer at all within the time is a failure too, not a latency of 0. Errors include timeouts.
   const failures = result.non2xx + result.errors + (result.requests.total === 0 ? 1 : 0);
   return {
@@ -96,5 +110,9 @@ export async function measure(base: string, pid: number, target: Target, setting
     requests: result.requests.total,
     failures,
     firstFailure: await describeFailure(base, target, result, firstError, settings.durationS),
+    serverAloneMs: inside.serverP50Ms,
+    cpuMsPerRequest: inside.cpuMsPerRequest,
+    serverP99Ms: loaded.serverP99Ms,
+    longestStallMs: Math.max(warm.loopMaxMs, inside.loopMaxMs, loaded.loopMaxMs),
   };
 }

@@ -8,6 +8,7 @@ import { demoPassword, seedDemoShop } from '../../server/db/seed';
 import { systemActor } from '../../server/services/audit';
 import { createBoothService } from '../../server/services/booths';
 import { createFinishSystemService } from '../../server/services/finish-systems';
+import { EventBus } from '../../server/services/events';
 import { createUserService } from '../../server/services/users';
 import { defaultOpeningHours } from '../../shared/schemas/booth';
 
@@ -54,7 +55,7 @@ async function addBoothSprayersAndSystems(dataSource: DataSource): Promise<void>
     { name: 'Booth 3 (down-draft)', kind: 'down-draft', volumeM3: 90, extractionM3PerH: 27000, mixingFactorK: 3, openFaceAreaM2: 15, minFaceVelocityMps: 0.4, sprayRateM2PerH: 20, openingHours: defaultOpeningHours },
     systemActor,
   );
-  const users = createUserService(openSiteData(dataSource, everySite));
+  const users = createUserService(openSiteData(dataSource, everySite), new EventBus());
   for (const [email, name] of [['sprayer2@larchmere.test', 'Ola Brennan'], ['sprayer3@larchmere.test', 'Sam Dwyer']]) {
     await users.create({ email, name, role: 'sprayer', password: demoPassword }, systemActor);
   }

@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import path from 'node:path';
-import { spawnTsNode, stopChild, waitUntilUp, type RunningChild } from './child-process';
+import { readProbe, spawnTsNode, stopChild, waitUntilUp, type RunningChild } from './child-process';
 
 export interface AppServerOptions {
   databasePath: string;
@@ -34,7 +34,7 @@ export async function startAppServer(options: AppServerOptions): Promise<Running
     await stopChild(child);
     throw error;
   }
-  return { base, pid: child.pid!, stop: () => stopChild(child) };
+  return { base, pid: child.pid!, probe: () => readProbe(child), stop: () => stopChild(child) };
 }
 
 export interface SignedIn {

@@ -1,14 +1,34 @@
 import { spawn, type ChildProcess } from 'node:child_process';
+import path from 'node:path';
+import type { ProbeFigures } from './probe';
 
 export interface RunningChild {
   base: string;
   pid: number;
+  /** The server's own figures since the last read (bench/server/probe.ts). */
+  probe(): Promise<ProbeFigures>;
   stop(): Promise<void>;
 }
 
-/** Node itself with tsx loaded (not the tsx wrapper), so the pid we sample and signal is the server. */
+/** Asks the probe inside the child for its figures. */
+export function readProbe(child: ChildProcess): Promise<ProbeFigures> {
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error('the server did not answer the probe')), 120_000);
+    const answer = (message: unknown) => {
+      if ((message as ProbeFigures)?.type !== 'probe') return;
+      clearTimeout(timer);
+      child.off('message', answer);
+      resolve(message as ProbeFigures);
+    };
+    child.on('message', answer);
+    child.send('probe:read');
+  });
+}
+
+/** Node itself with tsx and the probe loaded (not the tsx wrapper), so the pid we sample and signal is the server. */
 export function spawnTsNode(entry: string, env: NodeJS.ProcessEnv, args: string[] = []): { child: ChildProcess; stderr: () => string } {
-  const child = spawn(process.execPath, ['--import', 'tsx', entry, ...args], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: ['ignore', 'ignore', 'pipe'] });
+  const probe = path.resolve('bench', 'server', 'probe.ts');
+  const child = spawn(process.execPath, ['--import', 'tsx', '--import', probe, entry, ...args], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] });
   let stderr = '';
   child.stderr?.on('data', (chunk: Buffer) => {
     stderr = (stderr + chunk.toString()).slice(-4000);

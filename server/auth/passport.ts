@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm';
 import { UserEntity } from '../db/entities/user.entity';
 import { toSignedInUser } from '../services/users';
 import { hashPassword, verifyPassword } from './passwords';
+import type { SignInCache } from './sign-in-cache';
 
 /** What a session keeps of its sign-in. */
 interface SignIn {
@@ -16,7 +17,7 @@ interface SignIn {
 let decoyHash: Promise<string> | undefined;
 const decoy = () => (decoyHash ??= hashPassword('not-a-real-password-decoy'));
 
-export function configurePassport(dataSource: DataSource): passport.PassportStatic {
+export function configurePassport(dataSource: DataSource, cache: SignInCache): passport.PassportStatic {
   const instance = new passport.Passport();
   const users = dataSource.getRepository(UserEntity);
   instance.use(
@@ -38,11 +39,19 @@ export function configurePassport(dataSource: DataSource): passport.PassportStat
       .then((row) => done(null, { id: user.id, epoch: row?.sessionEpoch ?? 0 } satisfies SignIn))
       .catch(done);
   });
+  // The user as stored, through the sign-in cache (cleared on every instance when the user changes).
+  const userById = async (id: number) => {
+    const held = cache.users.get(id);
+    if (held) return held;
+    const stamp = cache.users.stamp();
+    const user = await users.findOneBy({ id });
+    if (user) cache.users.setRead(id, user, stamp);
+    return user;
+  };
   // A disabled or deleted user's sessions, and those from before a password reset, stop working on their next request.
   instance.deserializeUser((stored: SignIn | number, done) => {
     const { id, epoch } = typeof stored === 'number' ? { id: stored, epoch: 0 } : stored;
-    users
-      .findOneBy({ id })
+    userById(id)
       .then((user) => done(null, user && !user.disabled && user.sessionEpoch === epoch ? toSignedInUser(user) : false))
       .catch(done);
   });

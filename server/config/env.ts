@@ -28,6 +28,7 @@ const envSchema = z.object({
     .enum(['true', 'false'])
     .default('false')
     .transform((v) => v === 'true'),
+  SLOW_REQUEST_MS: z.coerce.number().int().min(1).default(1000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   UPLOAD_DIR: z.string().default(path.join('data', 'uploads')),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
@@ -73,6 +74,8 @@ export interface AppConfig {
   /** Cookies get `secure` when the app sits behind an HTTPS proxy. */
   trustProxy: boolean;
   logLevel: string;
+  /** Requests are logged only when they fail (5xx) or take at least this long. */
+  slowRequestMs: number;
   uploadDir: string;
   loginRateLimit: number;
   /** Failed sign-ins to one account (whatever the address) before it waits a few minutes. */
@@ -106,6 +109,7 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     signInSecret: env.SESSION_SECRET,
     trustProxy: env.TRUST_PROXY,
     logLevel: env.LOG_LEVEL,
+    slowRequestMs: env.SLOW_REQUEST_MS,
     uploadDir: env.UPLOAD_DIR,
     loginRateLimit: env.LOGIN_RATE_LIMIT,
     loginAccountRateLimit: env.LOGIN_ACCOUNT_RATE_LIMIT,

@@ -9,6 +9,7 @@ import { createBoothService } from '../services/booths';
 import type { FileStorage } from '../services/file-storage';
 import { createRackService } from '../services/racks';
 import { createSettingsService } from '../services/settings';
+import { EventBus } from '../services/events';
 import { createUserService } from '../services/users';
 import { UserEntity } from './entities/user.entity';
 import { seedDemoUpkeep } from './demo-upkeep';
@@ -41,7 +42,8 @@ const demoRacks: CreateRackInput[] = [
 /** `storage` (when S3 is configured) takes the demo data sheet instead of `uploadDir`. */
 export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string; storage?: FileStorage }): Promise<{ seeded: boolean }> {
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return { seeded: false };
-  const users = createUserService(openSiteData(dataSource, everySite));
+  // Seeding runs before any server holds a sign-in: nobody listens to its changes.
+  const users = createUserService(openSiteData(dataSource, everySite), new EventBus());
   for (const user of demoUsers) await users.create(user, systemActor);
   await createSettingsService(openSiteData(dataSource, everySite)).update({ shopName: 'Larchmere Joinery', timezone: 'Europe/London', defaultUnits: 'metric', yearlySolventThresholdKg: 150 }, systemActor);
   const booths = createBoothService(openSiteData(dataSource, everySite));

@@ -20,7 +20,7 @@ export function runAsOwnWork<T>(fn: () => T): T {
   return work.run({}, fn);
 }
 
-class Gate {
+export class Gate {
   holder: object | null = null;
   /** Set while a transaction that TypeORM began by itself (save() outside inTransaction) holds the gate. */
   releaseImplicit: (() => void) | null = null;
@@ -92,6 +92,11 @@ export function sqliteGate(dataSource: DataSource): Gate {
     guard(dataSource.createQueryRunner(), gate);
   }
   return gate;
+}
+
+/** Whether the work running now holds the gate (inside its own transaction, say). */
+export function isHoldingConnection(gate: Gate): boolean {
+  return gate.holder !== null && gate.holder === currentWork();
 }
 
 /** Runs `fn` holding the connection as a new piece of work; a call from inside the holder's own work just runs. */

@@ -1,7 +1,8 @@
+import type { Request, RequestHandler, Response } from 'express';
 import helmet from 'helmet';
 
 /** Only our own origin: the built client, its self-hosted fonts and inline styles the calendar and charts set. */
-export function securityHeaders(behindHttpsProxy: boolean) {
+function helmetFor(behindHttpsProxy: boolean): RequestHandler {
   return helmet({
     contentSecurityPolicy: {
       useDefaults: true,
@@ -18,5 +19,25 @@ export function securityHeaders(behindHttpsProxy: boolean) {
         'upgrade-insecure-requests': behindHttpsProxy ? [] : null,
       },
     },
-  });
+  }) as RequestHandler;
+}
+
+/** What helmet sets and removes: the same for every request (no nonces), so worked out once. */
+function headersOf(middleware: RequestHandler): { set: [string, string | string[]][]; removed: string[] } {
+  const set: [string, string | string[]][] = [];
+  const removed: string[] = [];
+  const res = { setHeader: (name: string, value: string | string[]) => set.push([name, value]), removeHeader: (name: string) => removed.push(name) };
+  let done = false;
+  void middleware({ headers: {} } as Request, res as unknown as Response, () => (done = true));
+  if (!done) throw new Error('helmet did not finish synchronously; its headers cannot be worked out once');
+  return { set, removed };
+}
+
+export function securityHeaders(behindHttpsProxy: boolean): RequestHandler {
+  const { set, removed } = headersOf(helmetFor(behindHttpsProxy));
+  return (_req, res, next) => {
+    for (const name of removed) res.removeHeader(name);
+    for (const [name, value] of set) res.setHeader(name, value);
+    next();
+  };
 }

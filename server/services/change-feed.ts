@@ -1,6 +1,6 @@
 import type { LiveStreamLimits } from '../lib/live-stream-limits';
 import { inScope, type SiteScope } from '../lib/site-scope';
-import type { ChangeEvent, EventBus } from './events';
+import { isInternalChange, type ChangeEvent, type EventBus } from './events';
 
 /** The live changes one user may hear of: the whole group's, and those of the sites they see. */
 export function createChangeFeed(scope: SiteScope, events: EventBus, streams: LiveStreamLimits) {
@@ -11,6 +11,7 @@ export function createChangeFeed(scope: SiteScope, events: EventBus, streams: Li
     },
     subscribe(listener: (event: ChangeEvent) => void): () => void {
       return events.subscribe((event) => {
+        if (isInternalChange(event)) return;
         if (event.siteId === null || inScope(scope, event.siteId)) listener(event);
       });
     },

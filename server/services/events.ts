@@ -4,7 +4,7 @@ import type { ChangeEventType } from '../../shared/schemas/change-event';
 /** `siteId` says whose change it is: a stream passes it only to users who see that site (null: the whole group's). */
 type Change<T extends ChangeEventType, Extra = object> = { type: T; id: number; siteId: number | null } & Extra;
 
-/** Only the types the client knows (shared/schemas/change-event.ts), so every one refreshes something there. */
+/** The types the client knows (shared/schemas/change-event.ts), each refreshing something there, and the server's own internal ones. */
 export type ChangeEvent =
   | Change<'coat.created', { partIds: number[] }>
   | Change<'denib.created', { partIds: number[] }>
@@ -12,7 +12,17 @@ export type ChangeEvent =
   | Change<'part.changed'>
   | Change<'reading.created', { boothId: number | null; rackId: number | null }>
   | Change<'product.changed'>
-  | Change<'finish-system.changed'>;
+  | Change<'finish-system.changed'>
+  | InternalChange;
+
+/**
+ * Changes the server tells its own instances about (caches to clear), never sent to a browser:
+ * a user changed (role, password, disabled, …) or a sign-in session ended or changed.
+ */
+export type InternalChange = { type: 'user.changed'; id: number; siteId: null } | { type: 'sign-in.changed'; sid: string; siteId: null };
+
+const internalTypes = new Set<ChangeEvent['type']>(['user.changed', 'sign-in.changed']);
+export const isInternalChange = (event: ChangeEvent): event is InternalChange => internalTypes.has(event.type);
 
 /** In-process change feed for the live views; one per app. */
 export class EventBus {

@@ -3,6 +3,7 @@ import { seesAllSites } from '../../shared/permissions';
 import { notifyPrefsOf, type NotificationKind } from '../../shared/schemas/notification';
 import { calendarDateIn, wallClockIn } from '../../shared/time';
 import type { SiteData } from '../data/site-data';
+import type { CoatEntity } from '../db/entities/coat.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import type { UserEntity } from '../db/entities/user.entity';
 import { readinessOf } from './ready';
@@ -25,7 +26,16 @@ export interface RuleContext {
   dailyPlanHour: number;
   recoatWarningHours: number;
   users: UserEntity[];
+  /**
+   * Coats whose notifications are already recorded for these users (`parts-ready:<coat id>`,
+   * `recoat-closing:<coat id>`): deciding them again would only record the same keys again.
+   */
+  settled?: ReadonlySet<string>;
 }
+
+// Coats are decided a chunk at a time, with a pause between, so a busy day never holds the event loop for long.
+const coatsPerChunk = 100;
+const pause = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 const dayMs = 86_400_000;
 const wants = (user: UserEntity, kind: NotificationKind) => !user.disabled && notifyPrefsOf(user.role, user.notify)[kind];
@@ -40,8 +50,8 @@ async function spraySessionSites(ctx: RuleContext, spraySessions: Pick<SpraySess
   return new Map(booths.map((b) => [b.id, b.siteId]));
 }
 
-/** Coats (current versions) whose `column` instant lies in (from, to], with their parts, jobs and site. */
-async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClosesAt', from: Date, to: Date) {
+/** Coats (current versions) whose `column` instant lies in (from, to], less those already settled. */
+async function coatsBetween(ctx: RuleContext, column: 'handleAt' | 'recoatClosesAt', from: Date, to: Date, settledAs: string) {
   const sqlColumn = column === 'handleAt' ? 'handle_at' : 'recoat_closes_at';
   const coats = await ctx.data.coats
     .select('c')
@@ -49,46 +59,70 @@ async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClos
     .where('n.id IS NULL')
     .andWhere(`c.${sqlColumn} > :from AND c.${sqlColumn} <= :to`, { from: from.toISOString(), to: to.toISOString() })
     .getMany();
+  return coats.filter((c) => !ctx.settled?.has(`${settledAs}:${c.id}`));
+}
+
+/** Some coats with their parts, jobs and site, and the readiness of all their parts read at once. */
+async function withParts(ctx: RuleContext, coats: CoatEntity[]) {
   const links = coats.length ? await ctx.data.coatParts.findBy({ coatId: In(coats.map((c) => c.id)) }) : [];
-  const parts = links.length ? await ctx.data.parts.findBy({ id: In(links.map((l) => l.partId)) }) : [];
+  const parts = links.length ? await ctx.data.parts.findBy({ id: In([...new Set(links.map((l) => l.partId))]) }) : [];
   const jobs = parts.length ? await ctx.data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }) : [];
   const spraySessions = coats.length ? await ctx.data.spraySessions.findBy({ id: In([...new Set(coats.map((c) => c.spraySessionId))]) }) : [];
   const boothSite = await spraySessionSites(ctx, spraySessions);
   const siteOfSession = new Map(spraySessions.map((s) => [s.id, boothSite.get(s.boothId)]));
-  return coats.map((coat) => {
-    const own = parts.filter((p) => links.some((l) => l.coatId === coat.id && l.partId === p.id));
-    return { coat, parts: own, job: jobs.find((j) => j.id === own[0]?.jobId), siteId: siteOfSession.get(coat.spraySessionId) };
+  const jobById = new Map(jobs.map((j) => [j.id, j]));
+  const partIdsOfCoat = new Map<number, Set<number>>();
+  for (const link of links) partIdsOfCoat.set(link.coatId, (partIdsOfCoat.get(link.coatId) ?? new Set()).add(link.partId));
+  const found = coats.map((coat) => {
+    const ids = partIdsOfCoat.get(coat.id);
+    const own = ids ? parts.filter((p) => ids.has(p.id)) : [];
+    return { coat, parts: own, job: own.length ? jobById.get(own[0].jobId) : undefined, siteId: siteOfSession.get(coat.spraySessionId) };
   });
+  return { found, readiness: await readinessOf(ctx.data, parts, ctx.now) };
+}
+
+type Found = Awaited<ReturnType<typeof withParts>>;
+
+/** Decides each coat found, a chunk at a time. */
+async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (found: Found) => DueNotification[]): Promise<DueNotification[]> {
+  const due: DueNotification[] = [];
+  for (let i = 0; i < coats.length; i += coatsPerChunk) {
+    if (i > 0) await pause();
+    due.push(...decide(await withParts(ctx, coats.slice(i, i + coatsPerChunk))));
+  }
+  return due;
 }
 
 /** The last coat of the system is on and the parts have reached handling time. */
 export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
-  const found = await coatsWithParts(ctx, 'handleAt', new Date(ctx.now.getTime() - dayMs), ctx.now);
-  const due: DueNotification[] = [];
-  for (const { coat, parts, job, siteId } of found) {
-    const readiness = await readinessOf(ctx.data, parts, ctx.now);
-    const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
-    if (!job || finished.length === 0) continue;
-    const subject = `Ready to handle: ${job.reference} (${job.customer})`;
-    const body = `${finished.length} part(s) of job ${job.reference} for ${job.customer} can be handled since ${at(coat.handleAt, ctx)}:\n${finished.map((p) => `- ${p.label}`).join('\n')}\n\nCheck the film before stacking; pack after ${at(coat.packAt, ctx)}.`;
-    for (const user of ctx.users.filter((u) => wants(u, 'parts-ready') && ofSite(u, siteId))) due.push({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready', userId: user.id, subject, body, dueAt: coat.handleAt });
-  }
-  return due;
+  const coats = await coatsBetween(ctx, 'handleAt', new Date(ctx.now.getTime() - dayMs), ctx.now, 'parts-ready');
+  return decideInChunks(ctx, coats, ({ found, readiness }) =>
+    found.flatMap(({ coat, parts, job, siteId }) => {
+      const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
+      if (!job || finished.length === 0) return [];
+      const subject = `Ready to handle: ${job.reference} (${job.customer})`;
+      const body = `${finished.length} part(s) of job ${job.reference} for ${job.customer} can be handled since ${at(coat.handleAt, ctx)}:\n${finished.map((p) => `- ${p.label}`).join('\n')}\n\nCheck the film before stacking; pack after ${at(coat.packAt, ctx)}.`;
+      return ctx.users
+        .filter((u) => wants(u, 'parts-ready') && ofSite(u, siteId))
+        .map((user) => ({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready' as const, userId: user.id, subject, body, dueAt: coat.handleAt }));
+    }),
+  );
 }
 
 /** A recoat window closes soon and the parts are still waiting for their next coat. */
 export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]> {
-  const found = await coatsWithParts(ctx, 'recoatClosesAt', ctx.now, new Date(ctx.now.getTime() + ctx.recoatWarningHours * 3_600_000));
-  const due: DueNotification[] = [];
-  for (const { coat, parts, job, siteId } of found) {
-    const readiness = await readinessOf(ctx.data, parts, ctx.now);
-    const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
-    if (!job || waiting.length === 0) continue;
-    const subject = `Recoat window closing ${at(coat.recoatClosesAt!, ctx)}: ${job.reference}`;
-    const body = `${waiting.length} part(s) of ${job.reference} are waiting for their next coat. After ${at(coat.recoatClosesAt!, ctx)} they will need a P320 denib first:\n${waiting.map((p) => `- ${p.label}`).join('\n')}`;
-    for (const user of ctx.users.filter((u) => wants(u, 'recoat-closing') && ofSite(u, siteId))) due.push({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing', userId: user.id, subject, body, dueAt: ctx.now.toISOString() });
-  }
-  return due;
+  const coats = await coatsBetween(ctx, 'recoatClosesAt', ctx.now, new Date(ctx.now.getTime() + ctx.recoatWarningHours * 3_600_000), 'recoat-closing');
+  return decideInChunks(ctx, coats, ({ found, readiness }) =>
+    found.flatMap(({ coat, parts, job, siteId }) => {
+      const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
+      if (!job || waiting.length === 0) return [];
+      const subject = `Recoat window closing ${at(coat.recoatClosesAt!, ctx)}: ${job.reference}`;
+      const body = `${waiting.length} part(s) of ${job.reference} are waiting for their next coat. After ${at(coat.recoatClosesAt!, ctx)} they will need a P320 denib first:\n${waiting.map((p) => `- ${p.label}`).join('\n')}`;
+      return ctx.users
+        .filter((u) => wants(u, 'recoat-closing') && ofSite(u, siteId))
+        .map((user) => ({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing' as const, userId: user.id, subject, body, dueAt: ctx.now.toISOString() }));
+    }),
+  );
 }
 
 /** Each booking, move or cancellation of a sprayer's session in the last day, once per version. */

@@ -2,6 +2,7 @@ import { IsNull } from 'typeorm';
 import type { Notification } from '../../shared/schemas/notification';
 import type { SiteData } from '../data/site-data';
 import type { Mailer } from '../mail/mailer';
+import type { UserEntity } from '../db/entities/user.entity';
 import { notificationRules, type DueNotification } from './notification-rules';
 import type { SettingsService } from './settings';
 
@@ -15,6 +16,8 @@ export interface NotificationOptions {
  * sends every recorded one not yet sent. It runs as the system, across every site (`data`).
  */
 export function createNotificationService(data: SiteData, settings: SettingsService, mailer: Mailer, options: NotificationOptions) {
+  const settled = new SettledCoats();
+
   async function record(due: DueNotification[]): Promise<void> {
     // ON CONFLICT DO NOTHING on the unique key: deciding twice records once.
     await data.notifications.insertNew(due.map((d) => ({ ...d, sentAt: null, lastError: null })));
@@ -42,8 +45,13 @@ export function createNotificationService(data: SiteData, settings: SettingsServ
     async tick(now: Date): Promise<{ sent: number }> {
       const shop = await settings.get();
       const users = await data.users.find();
-      const ctx = { data, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users };
-      for (const rule of notificationRules) await record(await rule(ctx));
+      settled.forUsers(users);
+      const ctx = { data, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users, settled: settled.keys };
+      for (const rule of notificationRules) {
+        const due = await rule(ctx);
+        await record(due);
+        settled.add(due);
+      }
       return { sent: await sendOwed() };
     },
 
@@ -52,6 +60,34 @@ export function createNotificationService(data: SiteData, settings: SettingsServ
       return rows.map(({ id, kind, subject, body, dueAt, sentAt }) => ({ id, kind, subject, body, dueAt, sentAt }));
     },
   };
+}
+
+/** Kinds decided per coat: once recorded for a coat, they are recorded for every user who wants them. */
+const perCoat = /^(parts-ready|recoat-closing):(\d+):\d+$/;
+// A coat leaves both rules' windows within a day or two; this many is far more than that, and then the set starts again.
+const maxSettled = 50_000;
+
+/**
+ * The tick's memory of coats already decided (in this process): their keys are recorded, so
+ * deciding them again on the next tick, once a minute for a day, would change nothing. It holds
+ * only while the users (their roles, sites, choices) are the same: then the same keys would be made.
+ */
+class SettledCoats {
+  readonly keys = new Set<string>();
+  private usersSeen = '';
+
+  forUsers(users: UserEntity[]): void {
+    const seen = JSON.stringify(users.map((u) => [u.id, u.role, u.siteId, u.disabled, u.notify]));
+    if (seen !== this.usersSeen || this.keys.size > maxSettled) this.keys.clear();
+    this.usersSeen = seen;
+  }
+
+  add(due: DueNotification[]): void {
+    for (const d of due) {
+      const match = perCoat.exec(d.dedupeKey);
+      if (match) this.keys.add(`${match[1]}:${match[2]}`);
+    }
+  }
 }
 
 export type NotificationService = ReturnType<typeof createNotificationService>;

@@ -106,7 +106,7 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
   const { clock, events } = deps;
   const set: ServiceSet = lazily<ServiceSet>({
     settings: () => createSettingsService(data, clock),
-    users: () => createUserService(data, clock),
+    users: () => createUserService(data, events, clock),
     sites: () => createSiteService(data, clock),
     booths: () => createBoothService(data, clock),
     racks: () => createRackService(data, clock),

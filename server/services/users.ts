@@ -12,6 +12,7 @@ import { systemClock, type Clock } from '../lib/clock';
 import { paginate } from '../lib/paginate';
 import { siteForWrite } from '../lib/site-scope';
 import { changedFields, recordAudit, type Actor } from './audit';
+import type { EventBus } from './events';
 
 /** What the sign-in session carries about its user. */
 export function toSignedInUser(user: UserEntity): SignedInUser {
@@ -26,7 +27,7 @@ async function requireSite(tx: SiteData, siteId: number): Promise<void> {
   if (!(await tx.sites.existsBy({ id: siteId }))) throw new AppError('validation_failed', 'That site does not exist', { siteId: 'Choose a site' });
 }
 
-export function createUserService(data: SiteData, clock: Clock = systemClock) {
+export function createUserService(data: SiteData, events: EventBus, clock: Clock = systemClock) {
   async function applyUpdate(id: number, patch: UpdateUserInput, actor: Actor, summary: string): Promise<UserEntity> {
     const now = clock.now();
     const { password, ...fields } = patch;
@@ -36,7 +37,7 @@ export function createUserService(data: SiteData, clock: Clock = systemClock) {
       assertStrongPassword(password, [user.email, fields.name ?? user.name]);
     }
     const passwordHash = password ? await hashPassword(password) : undefined;
-    return data.transaction(async (tx) => {
+    const changed = await data.transaction(async (tx) => {
       const user = await tx.users.findOneBy({ id });
       if (!user) throw notFound('User');
       if (fields.siteId !== undefined) await requireSite(tx, fields.siteId);
@@ -48,6 +49,9 @@ export function createUserService(data: SiteData, clock: Clock = systemClock) {
       await recordAudit(tx, actor, { action: 'update', entity: 'user', entityId: id, summary: `${summary} ${user.email}`, changes, siteId: user.siteId }, now);
       return user;
     });
+    // Every instance forgets the signed-in user it holds: a new role, site or password counts from the next request.
+    events.publish({ type: 'user.changed', id, siteId: null });
+    return changed;
   }
 
   return {

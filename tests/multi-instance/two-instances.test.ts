@@ -58,6 +58,19 @@ describe.skipIf(!pgUrl)('two app instances on one PostgreSQL database (skipped w
     expect(me.body.user.email).toBe('lead@larchmere.test');
   });
 
+  it('ends a sign-in on the other instance at once when it signs out or its user changes on one', async () => {
+    const sprayer = await signInAt(a.base, 'sprayer@larchmere.test');
+    expect((await call(b.base, sprayer, '/api/auth/me')).status).toBe(200);
+    expect((await call(a.base, sprayer, '/api/auth/logout', { method: 'POST', body: {} })).status).toBe(204);
+    // Each instance holds sign-ins for a few seconds; the shared change feed clears them.
+    await waitUntil('instance B forgets the ended sign-in', async () => (await call(b.base, sprayer, '/api/auth/me')).status === 401, 2000);
+    const assembler = await signInAt(a.base, 'assembler@larchmere.test');
+    const before = await json(await call(b.base, assembler, '/api/auth/me'));
+    expect(before.body.user.units).toBe('metric');
+    expect((await call(a.base, assembler, '/api/auth/me', { method: 'PATCH', body: { units: 'us' } })).status).toBe(200);
+    await waitUntil('instance B sees the changed user', async () => (await json(await call(b.base, assembler, '/api/auth/me'))).body.user.units === 'us', 2000);
+  });
+
   it('lets exactly one of several bookings of one slot, sent to both instances at once, succeed', async () => {
     const boothId = await newBooth('Race booth');
     for (const day of ['05', '06', '07', '08']) {

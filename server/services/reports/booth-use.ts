@@ -1,7 +1,7 @@
 import type { SiteData } from '../../data/site-data';
 import type { BoothUseQuery, BoothUseReport } from '../../../shared/schemas/report';
 import { bucketsFor, shopRange } from './buckets';
-import { Statement, inSite, isCurrentCoat, num, round } from './sql';
+import { Statement, inSiteBooths, isCurrentCoat, num, round } from './sql';
 
 type Row = { week_start: string; booth_id: number; sessions: unknown; booked_hours: unknown; sprayed_hours: unknown };
 
@@ -23,7 +23,7 @@ export async function boothUseReport(data: SiteData, query: BoothUseQuery, timeZ
       FROM spray_sessions ss
       WHERE ss.state <> 'cancelled' AND ss.start_at >= ${sql.param(range.startsAt)} AND ss.start_at < ${sql.param(range.endsAt)}
         ${query.boothId ? `AND ss.booth_id = ${sql.param(query.boothId)}` : ''}
-        ${inSite(sql, 'ss.id', query.siteId)}
+        ${inSiteBooths(sql, 'ss.booth_id', query.siteId)}
     )
     SELECT b.label AS week_start, s.booth_id, COUNT(*) AS sessions,
       SUM(${sql.hoursBetween('s.start_at', 's.end_at')}) AS booked_hours,

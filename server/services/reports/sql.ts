@@ -36,6 +36,12 @@ export function inSite(sql: Statement, spraySessionIdColumn: string, siteId: num
   return `AND ${spraySessionIdColumn} IN (SELECT st.id FROM spray_sessions st JOIN booths bs ON bs.id = st.booth_id WHERE bs.site_id = ${sql.param(siteId)})`;
 }
 
+/** Rows of a booth of the site, for rows that carry their booth: the site's few booths, not all its sessions. */
+export function inSiteBooths(sql: Statement, boothIdColumn: string, siteId: number | undefined): string {
+  if (siteId === undefined) return '';
+  return `AND ${boothIdColumn} IN (SELECT bs.id FROM booths bs WHERE bs.site_id = ${sql.param(siteId)})`;
+}
+
 /** A coat version that no correction has replaced. */
 export function isCurrentCoat(alias: string): string {
   return `NOT EXISTS (SELECT 1 FROM coats n WHERE n.replaces_id = ${alias}.id)`;

@@ -86,8 +86,10 @@ describe('GET /api/auth/me and sign-out', () => {
   it('stops a disabled user’s existing session on their next request', async () => {
     const { agent } = await signIn(ctx.app, demo.assembler);
     await agent.get('/api/auth/me').expect(200);
-    await ctx.dataSource.getRepository(UserEntity).update({ email: demo.assembler }, { disabled: true });
+    const admin = await signIn(ctx.app, demo.admin);
+    const { id } = await ctx.dataSource.getRepository(UserEntity).findOneByOrFail({ email: demo.assembler });
+    await admin.agent.patch(`/api/users/${id}`).set('x-csrf-token', admin.csrf).send({ disabled: true }).expect(200);
     await agent.get('/api/auth/me').expect(401);
-    await ctx.dataSource.getRepository(UserEntity).update({ email: demo.assembler }, { disabled: false });
+    await admin.agent.patch(`/api/users/${id}`).set('x-csrf-token', admin.csrf).send({ disabled: false }).expect(200);
   });
 });

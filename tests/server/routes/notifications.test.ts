@@ -66,6 +66,20 @@ describe('e-mail notifications', () => {
     expect(runtime.mailbox!.messages.length).toBeGreaterThan(before);
   });
 
+  it('still tells someone who asks for "ready to handle" later that day, after the others were told', async () => {
+    const sprayer = await signIn(ctx.app, demo.sprayer);
+    const readyTo = (email: string) => runtime.mailbox!.messages.filter((m) => m.subject.startsWith('Ready to handle') && m.to.includes(email));
+    // A second tick with nothing new sends nothing: the coat is decided.
+    await runtime.service.tick(new Date(at('2027-03-01T10:06:00Z')));
+    expect(readyTo('sprayer@larchmere.test')).toHaveLength(0);
+    const me = (await sprayer.agent.get('/api/auth/me').expect(200)).body.user;
+    await sprayer.agent.patch('/api/auth/me').set('x-csrf-token', sprayer.csrf).send({ notify: { ...me.notify, 'parts-ready': true } }).expect(200);
+    await runtime.service.tick(new Date(at('2027-03-01T10:07:00Z')));
+    await waitFor(() => readyTo('sprayer@larchmere.test').length > 0);
+    expect(readyTo('sprayer@larchmere.test')[0].subject).toContain('LJ-26-102');
+    await sprayer.agent.patch('/api/auth/me').set('x-csrf-token', sprayer.csrf).send({ notify: me.notify }).expect(200);
+  });
+
   it('warns before a recoat window closes while parts still wait for their next coat', async () => {
     // Demo 2K PU primer at 20 °C: the recoat window closes 1440 min after the coat.
     const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];
