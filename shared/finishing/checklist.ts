@@ -5,7 +5,8 @@ import { assessConditions, worstVerdict, type Verdict } from './conditions';
 import type { FitnessFinding } from './fitness';
 
 export type ChecklistProduct = CautionProduct & { minApplicationTempC: number | null; maxRelativeHumidityPct: number | null };
-export type ChecklistEvaluation = { verdict: Verdict; problems: string[] };
+/** `notes` are readings within their limits but close to them: information, not problems. */
+export type ChecklistEvaluation = { verdict: Verdict; problems: string[]; notes: string[] };
 
 const respiratorRank = { particulate: 0, 'vapour-and-particulate': 1, 'air-fed': 2 } as const;
 
@@ -37,6 +38,7 @@ export function evaluateChecklist(checklist: Checklist, booth: { minFaceVelocity
   const equipment = [...equipmentProblems(checklist, booth.minFaceVelocityMps, products), ...fitness.filter((f) => f.severity === 'stop').map((f) => f.message)];
   const conditions = assessConditions({ airTempC: checklist.airTempC, relativeHumidityPct: checklist.relativeHumidityPct, surfaceTempC: checklist.surfaceTempC, ...strictestLimits(products) });
   const conditionProblems = conditions.checks.filter((c) => c.verdict !== 'go').map((c) => c.message);
+  const notes = conditions.checks.filter((c) => c.info).map((c) => c.message);
   const verdict = worstVerdict([equipment.length ? 'stop' : 'go', conditions.verdict]);
-  return { verdict, problems: [...equipment, ...conditionProblems] };
+  return { verdict, problems: [...equipment, ...conditionProblems], notes };
 }
