@@ -2,9 +2,11 @@ import { In, LessThanOrEqual, MoreThan } from 'typeorm';
 import { seesAllSites } from '../../shared/permissions';
 import { notifyPrefsOf, type NotificationKind } from '../../shared/schemas/notification';
 import { calendarDateIn, wallClockIn } from '../../shared/time';
+import { denibWords, shopDateWords, shopSpanWords, type ShopFormat } from '../../shared/words';
 import type { SiteData } from '../data/site-data';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import type { UserEntity } from '../db/entities/user.entity';
+import { coatSentence, momentWords, namesFor, partList, partsOfJob, timeWords, type CoatStory } from './notification-words';
 import { readinessOf } from './ready';
 import { crewDue, upkeepDue } from './upkeep-notifications';
 
@@ -22,6 +24,10 @@ export interface RuleContext {
   data: SiteData;
   now: Date;
   timeZone: string;
+  /** The shop's zone and locale: every time in an e-mail is shop time, written as the shop writes it. */
+  shop: ShopFormat;
+  /** Where people open the app, for a link to the page an e-mail is about. */
+  publicUrl: string;
   dailyPlanHour: number;
   recoatWarningHours: number;
   users: UserEntity[];
@@ -29,7 +35,7 @@ export interface RuleContext {
 
 const dayMs = 86_400_000;
 const wants = (user: UserEntity, kind: NotificationKind) => !user.disabled && notifyPrefsOf(user.role, user.notify)[kind];
-const at = (iso: string, ctx: RuleContext) => wallClockIn(new Date(iso), ctx.timeZone).time;
+const link = (ctx: RuleContext, path: string) => `${ctx.publicUrl}${path}`;
 /** An admin hears about every site; everyone else about their own. */
 const ofSite = (user: UserEntity, siteId: number | undefined) => seesAllSites(user.role) || user.siteId === siteId;
 
@@ -40,8 +46,14 @@ async function spraySessionSites(ctx: RuleContext, spraySessions: Pick<SpraySess
   return new Map(booths.map((b) => [b.id, b.siteId]));
 }
 
-/** Coats (current versions) whose `column` instant lies in (from, to], with their parts, jobs and site. */
-async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClosesAt', from: Date, to: Date) {
+async function boothNames(ctx: RuleContext, spraySessions: Pick<SpraySessionEntity, 'boothId'>[]): Promise<Map<number, string>> {
+  const ids = [...new Set(spraySessions.map((s) => s.boothId))];
+  const booths = ids.length ? await ctx.data.booths.findBy({ id: In(ids) }) : [];
+  return new Map(booths.map((b) => [b.id, b.name]));
+}
+
+/** Coats (current versions) whose `column` instant lies in (from, to], with their parts, job, site, booth and product. */
+async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClosesAt', from: Date, to: Date): Promise<CoatStory[]> {
   const sqlColumn = column === 'handleAt' ? 'handle_at' : 'recoat_closes_at';
   const coats = await ctx.data.coats
     .select('c')
@@ -55,9 +67,12 @@ async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClos
   const spraySessions = coats.length ? await ctx.data.spraySessions.findBy({ id: In([...new Set(coats.map((c) => c.spraySessionId))]) }) : [];
   const boothSite = await spraySessionSites(ctx, spraySessions);
   const siteOfSession = new Map(spraySessions.map((s) => [s.id, boothSite.get(s.boothId)]));
+  const boothOfSession = new Map(spraySessions.map((s) => [s.id, s.boothId]));
+  const names = await namesFor(ctx.data, coats, boothOfSession);
   return coats.map((coat) => {
     const own = parts.filter((p) => links.some((l) => l.coatId === coat.id && l.partId === p.id));
-    return { coat, parts: own, job: jobs.find((j) => j.id === own[0]?.jobId), siteId: siteOfSession.get(coat.spraySessionId) };
+    const boothName = names.booths.get(boothOfSession.get(coat.spraySessionId) ?? -1) ?? 'the booth';
+    return { coat, parts: own, job: jobs.find((j) => j.id === own[0]?.jobId), siteId: siteOfSession.get(coat.spraySessionId), boothName, productName: names.products.get(coat.productId) ?? 'the product' };
   });
 }
 
@@ -65,12 +80,19 @@ async function coatsWithParts(ctx: RuleContext, column: 'handleAt' | 'recoatClos
 export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
   const found = await coatsWithParts(ctx, 'handleAt', new Date(ctx.now.getTime() - dayMs), ctx.now);
   const due: DueNotification[] = [];
-  for (const { coat, parts, job, siteId } of found) {
+  for (const story of found) {
+    const { coat, parts, job, siteId } = story;
     const readiness = await readinessOf(ctx.data, parts, ctx.now);
     const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
     if (!job || finished.length === 0) continue;
     const subject = `Ready to handle: ${job.reference} (${job.customer})`;
-    const body = `${finished.length} part(s) of job ${job.reference} for ${job.customer} can be handled since ${at(coat.handleAt, ctx)}:\n${finished.map((p) => `- ${p.label}`).join('\n')}\n\nCheck the film before stacking; pack after ${at(coat.packAt, ctx)}.`;
+    const body = [
+      `${partsOfJob(finished.length, job)} can be handled since ${momentWords(coat.handleAt, ctx.shop)}, after ${await coatSentence(ctx.data, story, ctx.shop)}:`,
+      partList(finished),
+      '',
+      `Check the film before stacking; pack from ${momentWords(coat.packAt, ctx.shop)}.`,
+      `Ready board: ${link(ctx, `/ready?jobId=${job.id}`)}`,
+    ].join('\n');
     for (const user of ctx.users.filter((u) => wants(u, 'parts-ready') && ofSite(u, siteId))) due.push({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready', userId: user.id, subject, body, dueAt: coat.handleAt });
   }
   return due;
@@ -80,12 +102,20 @@ export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
 export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]> {
   const found = await coatsWithParts(ctx, 'recoatClosesAt', ctx.now, new Date(ctx.now.getTime() + ctx.recoatWarningHours * 3_600_000));
   const due: DueNotification[] = [];
-  for (const { coat, parts, job, siteId } of found) {
+  for (const story of found) {
+    const { coat, parts, job, siteId } = story;
     const readiness = await readinessOf(ctx.data, parts, ctx.now);
     const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
     if (!job || waiting.length === 0) continue;
-    const subject = `Recoat window closing ${at(coat.recoatClosesAt!, ctx)}: ${job.reference}`;
-    const body = `${waiting.length} part(s) of ${job.reference} are waiting for their next coat. After ${at(coat.recoatClosesAt!, ctx)} they will need a P320 denib first:\n${waiting.map((p) => `- ${p.label}`).join('\n')}`;
+    const subject = `Recoat window closing ${timeWords(coat.recoatClosesAt!, ctx.shop)}: ${job.reference} (${job.customer})`;
+    const body = [
+      `${partsOfJob(waiting.length, job)} are waiting for their next coat after ${await coatSentence(ctx.data, story, ctx.shop)}.`,
+      `The recoat window closes ${momentWords(coat.recoatClosesAt!, ctx.shop)}; after that they need a ${denibWords('P320')} first:`,
+      partList(waiting),
+      '',
+      `Book the next coat: ${link(ctx, `/planner`)}`,
+      `The job: ${link(ctx, `/jobs/${job.id}`)}`,
+    ].join('\n');
     for (const user of ctx.users.filter((u) => wants(u, 'recoat-closing') && ofSite(u, siteId))) due.push({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing', userId: user.id, subject, body, dueAt: ctx.now.toISOString() });
   }
   return due;
@@ -94,12 +124,15 @@ export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]
 /** Each booking, move or cancellation of a sprayer's session in the last day, once per version. */
 export async function spraySessionChanges(ctx: RuleContext): Promise<DueNotification[]> {
   const spraySessions = await ctx.data.spraySessions.find({ where: { updatedAt: MoreThan(new Date(ctx.now.getTime() - dayMs).toISOString()) } });
+  const booths = await boothNames(ctx, spraySessions);
   return spraySessions.flatMap((s) => {
     const user = ctx.users.find((u) => u.id === s.sprayerId);
     if (!user || !wants(user, 'session-changed') || ['spraying', 'clearing', 'done', 'checking'].includes(s.state)) return [];
     const what = s.state === 'cancelled' ? 'cancelled' : 'booked or moved';
-    const when = `${calendarDateIn(new Date(s.startAt), ctx.timeZone)} ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}`;
-    return [{ dedupeKey: `session:${s.id}:${s.updatedAt}:${s.state}`, kind: 'session-changed' as const, userId: user.id, subject: `Spray session ${what}: ${when}`, body: `Spray session ${s.id} is ${what}: ${when}.`, dueAt: s.updatedAt }];
+    const booth = booths.get(s.boothId) ?? 'the booth';
+    const when = shopSpanWords(new Date(s.startAt), new Date(s.endAt), ctx.shop);
+    const body = `Your spray session in ${booth}, ${when}, is ${what}.\n\nThe session: ${link(ctx, `/spray-sessions/${s.id}`)}`;
+    return [{ dedupeKey: `session:${s.id}:${s.updatedAt}:${s.state}`, kind: 'session-changed' as const, userId: user.id, subject: `Spray session ${what}: ${booth}, ${when}`, body, dueAt: s.updatedAt }];
   });
 }
 
@@ -113,13 +146,16 @@ export async function dailyPlan(ctx: RuleContext): Promise<DueNotification[]> {
   });
   const today = spraySessions.filter((s) => s.state !== 'cancelled' && calendarDateIn(new Date(s.startAt), ctx.timeZone) === clock.date);
   const boothSite = await spraySessionSites(ctx, today);
+  const booths = await boothNames(ctx, today);
   const linesFor = (user: UserEntity) => {
     const own = today.filter((s) => ofSite(user, boothSite.get(s.boothId)));
-    return own.length ? own.map((s) => `- ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}: session ${s.id} (booth ${s.boothId})`).join('\n') : 'No spray sessions are booked today.';
+    const lines = own.map((s) => `- ${timeWords(s.startAt, ctx.shop)}–${timeWords(s.endAt, ctx.shop)}: ${booths.get(s.boothId) ?? 'a booth'} (${link(ctx, `/spray-sessions/${s.id}`)})`);
+    return own.length ? `${lines.join('\n')}\n\nThe planner: ${link(ctx, '/planner')}` : 'No spray sessions are booked today.';
   };
+  const day = shopDateWords(ctx.now, ctx.shop);
   return ctx.users
     .filter((u) => wants(u, 'daily-plan'))
-    .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${clock.date}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
+    .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${day}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
 }
 
 export const notificationRules = [partsReady, recoatClosing, spraySessionChanges, dailyPlan, upkeepDue, crewDue];

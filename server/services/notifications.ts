@@ -4,9 +4,12 @@ import type { SiteData } from '../data/site-data';
 import type { Mailer } from '../mail/mailer';
 import { notificationRules, type DueNotification } from './notification-rules';
 import type { SettingsService } from './settings';
+import { shopFormatOf } from '../../shared/words';
 
 export interface NotificationOptions {
   recoatWarningHours: number;
+  /** Where people open the app: e-mails link to the page they are about. */
+  publicUrl: string;
 }
 
 /**
@@ -42,7 +45,7 @@ export function createNotificationService(data: SiteData, settings: SettingsServ
     async tick(now: Date): Promise<{ sent: number }> {
       const shop = await settings.get();
       const users = await data.users.find();
-      const ctx = { data, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users };
+      const ctx = { data, now, timeZone: shop.timezone, shop: shopFormatOf(shop), publicUrl: options.publicUrl, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users };
       for (const rule of notificationRules) await record(await rule(ctx));
       return { sent: await sendOwed() };
     },
