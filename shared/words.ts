@@ -62,6 +62,11 @@ export const shopTimeWords = (instant: Date, shop: ShopFormat) => format(shop.lo
 /** The shop's day, as its locale writes it ("Tue 3 Mar"). */
 export const shopDateWords = (instant: Date, shop: ShopFormat) => format(shop.locale, shop.timeZone, dateOptions).format(instant);
 
+/** A shop calendar date (YYYY-MM-DD) as the locale writes it ("Wed 3 Mar 2027"); a date has no zone. */
+export function calendarDateWords(date: string, locale: string): string {
+  return format(locale, 'UTC', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(`${date}T12:00:00Z`));
+}
+
 /** "Tue 3 Mar, 09:15". */
 export const shopMomentWords = (instant: Date, shop: ShopFormat) => `${shopDateWords(instant, shop)}, ${shopTimeWords(instant, shop)}`;
 
@@ -92,6 +97,14 @@ export const respiratorWords: Record<RespiratorLevel, string> = {
 /** How a job's material estimate is worked out, in a sentence for the page that shows it. */
 export const estimateBasisWords =
   'One coat of each coat step over the coated area of every part, allowing for overspray, thinned with the least thinner the data sheet allows. Order a little over: real losses vary with part shape and the sprayer.';
+
+/** Why a coat counts as outside its limits, in a few words (the conditions report's reason codes). */
+export const outsideReasonWords: Record<'air-too-cold' | 'surface-too-cold' | 'rh-too-high' | 'dew-point-margin', string> = {
+  'air-too-cold': 'air too cold',
+  'surface-too-cold': 'surface too cold',
+  'rh-too-high': 'humidity too high',
+  'dew-point-margin': 'surface too close to the dew point',
+};
 
 /** Column headers of the reports' CSV downloads, SI units named in each. */
 export const csvHeaders = {

@@ -3,6 +3,7 @@ import type { CautionProduct } from './cautions';
 import { respiratorLevel } from './cautions';
 import { assessConditions, worstVerdict, type Verdict } from './conditions';
 import type { FitnessFinding } from './fitness';
+import { respiratorWords } from '../words';
 
 export type ChecklistProduct = CautionProduct & { minApplicationTempC: number | null; maxRelativeHumidityPct: number | null };
 /** `notes` are readings within their limits but close to them: information, not problems. */
@@ -25,7 +26,7 @@ function equipmentProblems(checklist: Checklist, minFaceVelocityMps: number, pro
   else if (checklist.faceVelocityMps < minFaceVelocityMps) problems.push(`Face velocity ${checklist.faceVelocityMps.toFixed(2)} m/s is below the booth's minimum of ${minFaceVelocityMps.toFixed(2)} m/s.`);
   const needed = respiratorLevel(products);
   if (!checklist.respiratorFitted) problems.push('Respiratory protection is not fitted.');
-  else if (respiratorRank[checklist.respiratorKind] < respiratorRank[needed]) problems.push(`The products need ${needed.replaceAll('-', ' ')} protection, more than ${checklist.respiratorKind.replaceAll('-', ' ')}.`);
+  else if (respiratorRank[checklist.respiratorKind] < respiratorRank[needed]) problems.push(`These products need ${respiratorWords[needed]}; ${respiratorWords[checklist.respiratorKind]} is not enough.`);
   return problems;
 }
 

@@ -141,11 +141,18 @@ describe('rework', () => {
 });
 
 describe('CSV, ranges and roles', () => {
-  it('exports the table as CSV', async () => {
+  it('exports the table as CSV with headers people read', async () => {
     const res = await lead.agent.get('/api/reports/solvent?from=2025-03-01&to=2025-04-30&format=csv').expect(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/boothwright-solvent-2025-03-01-to-2025-04-30\.csv/);
-    expect(res.text.split('\r\n')).toEqual(['month,litres,voc_kg,running_total_kg,threshold_kg,litres_without_voc', '2025-03,4,1.26,1.68,150,1', '2025-04,2,0.84,2.52,150,0', '']);
+    expect(res.text.split('\r\n')).toEqual(['Month,Litres mixed,VOC (kg),VOC this year (kg),Yearly threshold (kg),Litres without a VOC figure', '2025-03,4,1.26,1.68,150,1', '2025-04,2,0.84,2.52,150,0', '']);
+  });
+
+  it('names a coat outside limits by its time and product, with its reasons in words, never its id', async () => {
+    const res = await lead.agent.get(`/api/reports/conditions?from=2025-03-24&to=2025-03-24&boothId=${fx.booth1}&format=csv`).expect(200);
+    const lines = res.text.split('\r\n');
+    expect(lines[0]).toBe('Time,Row,Readings,Air (°C),Relative humidity (%),Surface above dew point (°C),Product,Outside limits because');
+    expect(lines).toContain('2025-03-24T10:00:00.000Z,coat outside limits,,12,85,2.4,Fixture primer,air too cold; surface too cold; humidity too high; surface too close to the dew point');
   });
 
   it('refuses a backwards or too long range with field messages', async () => {

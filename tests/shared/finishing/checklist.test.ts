@@ -29,3 +29,12 @@ describe('evaluateChecklist and the dew-point limit', () => {
     expect(result).toEqual({ verdict: 'go', problems: [], notes: [] });
   });
 });
+
+describe('evaluateChecklist and respiratory protection', () => {
+  it('says in plain words which protection the products need and that what is worn is not enough', () => {
+    // An isocyanate product calls for air-fed protection (UK HSE guidance on isocyanate spraying; see cautions.ts).
+    const twoPack = { name: '2K topcoat', chemistry: 'two-component-polyurethane' as const, hazards: ['isocyanate' as const], minApplicationTempC: null, maxRelativeHumidityPct: null };
+    const result = evaluateChecklist({ ...checks, airTempC: 20, relativeHumidityPct: 50, surfaceTempC: 19 }, booth, [twoPack]);
+    expect(result.problems).toEqual(['These products need air-fed protection; a respirator with vapour and particulate filters is not enough.']);
+  });
+});
