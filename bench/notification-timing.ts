@@ -24,7 +24,7 @@ export async function timeNotificationTicks(databasePath: string, now: Date, tic
   const dataSource = await openDataSource({ kind: 'sqlite', path: databasePath }, { migrate: false });
   try {
     const data = openSiteData(dataSource, everySite);
-    const service = createNotificationService(data, createSettingsService(data), noMail, { recoatWarningHours: 2 });
+    const service = createNotificationService(data, createSettingsService(data), noMail, { recoatWarningHours: 2, publicUrl: 'http://localhost:3000' });
     const times: number[] = [];
     const stalls = monitorEventLoopDelay({ resolution: 5 });
     for (let i = 0; i <= ticks; i++) {

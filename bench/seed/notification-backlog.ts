@@ -16,7 +16,7 @@ const alreadySent: Mailer = { send: async () => undefined, close: () => undefine
 export async function settleNotifications(databasePath: string, now: Date): Promise<number> {
   const dataSource = await openDataSource({ kind: 'sqlite', path: databasePath }, { migrate: false });
   try {
-    const service = createNotificationService(openSiteData(dataSource, everySite), createSettingsService(openSiteData(dataSource, everySite)), alreadySent, { recoatWarningHours: 2 });
+    const service = createNotificationService(openSiteData(dataSource, everySite), createSettingsService(openSiteData(dataSource, everySite)), alreadySent, { recoatWarningHours: 2, publicUrl: 'http://localhost:3000' });
     let total = 0;
     for (let sent = -1; sent !== 0; ) {
       sent = (await service.tick(now)).sent;

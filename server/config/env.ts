@@ -39,6 +39,7 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Boothwright <boothwright@localhost>'),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   RECOAT_WARNING_HOURS: z.coerce.number().min(0.25).max(48).default(2),
+  PUBLIC_URL: optionalText.pipe(z.url('PUBLIC_URL must be the address people open Boothwright at, such as https://finish.example.com').optional()),
   CLIENT_DIR: z.string().default(path.join('dist', 'client')),
   NOTIFICATION_SCHEDULE: z.string().default('0 * * * * *').refine(isCronPattern, 'NOTIFICATION_SCHEDULE must be a cron pattern, e.g. "0 * * * * *" (each minute)'),
   S3_BUCKET: optionalText,
@@ -87,6 +88,8 @@ export interface AppConfig {
   mailFrom: string;
   fakeSmtpPort: number;
   recoatWarningHours: number;
+  /** The address people open the app at, for links in e-mails (no trailing slash). */
+  publicUrl: string;
   /** The built client to serve. */
   clientDir: string;
   /** When the notification scheduler ticks (croner pattern with seconds). */
@@ -118,6 +121,7 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     mailFrom: env.MAIL_FROM,
     fakeSmtpPort: env.FAKE_SMTP_PORT,
     recoatWarningHours: env.RECOAT_WARNING_HOURS,
+    publicUrl: (env.PUBLIC_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ''),
     clientDir: env.CLIENT_DIR,
     notificationSchedule: env.NOTIFICATION_SCHEDULE,
     s3: s3Config(env),

@@ -27,7 +27,7 @@ export async function startNotifications(dataSource: DataSource, config: AppConf
   const mailer = createMailer(config.smtpUrl ? { url: config.smtpUrl } : { port: mailbox!.port }, config.mailFrom);
   // The scheduler decides for every site; each rule sends a site's news to that site's people.
   const data = openSiteData(dataSource, everySite);
-  const service = createNotificationService(data, createSettingsService(data), mailer, { recoatWarningHours: config.recoatWarningHours });
+  const service = createNotificationService(data, createSettingsService(data), mailer, { recoatWarningHours: config.recoatWarningHours, publicUrl: config.publicUrl });
   // protect: a slow tick is never overlapped by the next one, so nothing is sent twice by this process.
   const job = options.schedule ? new Cron(config.notificationSchedule, { protect: true }, () => scheduledTick(dataSource, service, logger)) : null;
   return {

@@ -31,7 +31,7 @@ async function loadReferences(tx: SiteData, fields: CoatFields) {
     tx.parts.findBy({ id: In(fields.partIds) }),
   ]);
   if (!spraySession) throw new AppError('validation_failed', 'That spray session does not exist', { spraySessionId: 'Choose a spray session' });
-  if (spraySession.state === 'cancelled') throw new AppError('conflict', `Spray session ${spraySession.id} was cancelled; log the coat on the session that ran`);
+  if (spraySession.state === 'cancelled') throw new AppError('conflict', 'This spray session was cancelled; log the coat on the session that ran');
   if (!product) throw new AppError('validation_failed', 'That product does not exist', { productId: 'Choose a product' });
   if (parts.length !== new Set(fields.partIds).size) throw new AppError('validation_failed', 'One or more parts do not exist', { partIds: 'Choose parts that exist' });
   const booth = await tx.booths.findOneBy({ id: spraySession.boothId });

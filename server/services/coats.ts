@@ -115,7 +115,7 @@ export function createCoatService(data: SiteData, settings: SettingsService, eve
         const old = await tx.coats.findOneBy({ id });
         if (!old) throw notFound('Coat record');
         const newer = await tx.acrossSites.coats.findOneBy({ replacesId: id });
-        if (newer) throw new AppError('conflict', `Coat record ${id} was already corrected by record ${newer.id}; correct that one`);
+        if (newer) throw new AppError('conflict', `This coat was already corrected (by ${newer.recordedByName}, version ${newer.version}); correct the newest version instead`);
         const [current] = await toCoatDtos(tx, [old]);
         const merged = createCoatSchema.parse({ ...current, acknowledgements: [], idempotencyKey: null, ...changes });
         const { idempotencyKey: _key, ...fields } = merged;

@@ -38,7 +38,7 @@ export async function toDenibDtos(data: SiteData, denibs: DenibEntity[]): Promis
 async function checkReferences(tx: SiteData, input: ReturnType<typeof createDenibSchema.parse>, now: Date): Promise<number | null> {
   const spraySession = await tx.spraySessions.findOneBy({ id: input.spraySessionId });
   if (!spraySession) throw new AppError('validation_failed', 'That spray session does not exist', { spraySessionId: 'Choose a spray session' });
-  if (spraySession.state === 'cancelled') throw new AppError('conflict', `Spray session ${spraySession.id} was cancelled; record the denib on the session that ran`);
+  if (spraySession.state === 'cancelled') throw new AppError('conflict', 'This spray session was cancelled; record the denib on the session that ran');
   const partIds = [...new Set(input.partIds)];
   const parts = await tx.parts.findBy({ id: In(partIds) });
   if (parts.length !== partIds.length) throw new AppError('validation_failed', 'One or more parts do not exist', { partIds: 'Choose parts that exist' });

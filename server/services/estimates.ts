@@ -4,12 +4,13 @@ import { sprayMethods } from '../../shared/finishing/material';
 import type { EstimateQuery } from '../../shared/schemas/job';
 import type { SiteData } from '../data/site-data';
 import { AppError, notFound } from '../lib/app-error';
+import type { SettingsService } from './settings';
 
 /** Material for a whole job: jobs and their parts are the group's, wherever they are sprayed. */
-export function createEstimateService(data: SiteData) {
+export function createEstimateService(data: SiteData, settings: SettingsService) {
   return {
-    /** Litres, mix, VOC and cost of every coat step of the job's finish system over all its parts. */
-    async forJob(jobId: number, query: EstimateQuery): Promise<MaterialEstimate & { method: string }> {
+    /** Litres, mix, VOC and cost (in the shop's currency) of every coat step of the job's finish system over all its parts. */
+    async forJob(jobId: number, query: EstimateQuery): Promise<MaterialEstimate & { method: string; currency: string }> {
       const job = await data.jobs.findOneBy({ id: jobId });
       if (!job) throw notFound('Job');
       if (!job.finishSystemId) throw new AppError('conflict', `Job ${job.reference} has no finish system yet; choose one to estimate material`);
@@ -27,7 +28,7 @@ export function createEstimateService(data: SiteData) {
         transferEfficiencyPct,
         steps: steps.map((s) => ({ position: s.position, dryFilmUm: s.dryFilmUm!, product: byId.get(s.productId!)! })),
       });
-      return { ...estimate, method: query.method };
+      return { ...estimate, method: query.method, currency: (await settings.get()).currency };
     },
   };
 }

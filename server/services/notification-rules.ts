@@ -2,10 +2,12 @@ import { In, LessThanOrEqual, MoreThan } from 'typeorm';
 import { seesAllSites } from '../../shared/permissions';
 import { notifyPrefsOf, type NotificationKind } from '../../shared/schemas/notification';
 import { calendarDateIn, wallClockIn } from '../../shared/time';
+import { denibWords, shopDateWords, shopSpanWords, type ShopFormat } from '../../shared/words';
 import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import type { UserEntity } from '../db/entities/user.entity';
+import { coatSentence, momentWords, namesFor, partList, partsOfJob, timeWords, type CoatStory } from './notification-words';
 import { readinessOf } from './ready';
 import { crewDue, upkeepDue } from './upkeep-notifications';
 
@@ -23,6 +25,10 @@ export interface RuleContext {
   data: SiteData;
   now: Date;
   timeZone: string;
+  /** The shop's zone and locale: every time in an e-mail is shop time, written as the shop writes it. */
+  shop: ShopFormat;
+  /** Where people open the app, for a link to the page an e-mail is about. */
+  publicUrl: string;
   dailyPlanHour: number;
   recoatWarningHours: number;
   users: UserEntity[];
@@ -39,7 +45,7 @@ const pause = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 const dayMs = 86_400_000;
 const wants = (user: UserEntity, kind: NotificationKind) => !user.disabled && notifyPrefsOf(user.role, user.notify)[kind];
-const at = (iso: string, ctx: RuleContext) => wallClockIn(new Date(iso), ctx.timeZone).time;
+const link = (ctx: RuleContext, path: string) => `${ctx.publicUrl}${path}`;
 /** An admin hears about every site; everyone else about their own. */
 const ofSite = (user: UserEntity, siteId: number | undefined) => seesAllSites(user.role) || user.siteId === siteId;
 
@@ -48,6 +54,12 @@ async function spraySessionSites(ctx: RuleContext, spraySessions: Pick<SpraySess
   const boothIds = [...new Set(spraySessions.map((s) => s.boothId))];
   const booths = boothIds.length ? await ctx.data.booths.findBy({ id: In(boothIds) }) : [];
   return new Map(booths.map((b) => [b.id, b.siteId]));
+}
+
+async function boothNames(ctx: RuleContext, spraySessions: Pick<SpraySessionEntity, 'boothId'>[]): Promise<Map<number, string>> {
+  const ids = [...new Set(spraySessions.map((s) => s.boothId))];
+  const booths = ids.length ? await ctx.data.booths.findBy({ id: In(ids) }) : [];
+  return new Map(booths.map((b) => [b.id, b.name]));
 }
 
 /** Coats (current versions) whose `column` instant lies in (from, to], less those already settled. */
@@ -62,8 +74,8 @@ async function coatsBetween(ctx: RuleContext, column: 'handleAt' | 'recoatCloses
   return coats.filter((c) => !ctx.settled?.has(`${settledAs}:${c.id}`));
 }
 
-/** Some coats with their parts, jobs and site, and the readiness of all their parts read at once. */
-async function withParts(ctx: RuleContext, coats: CoatEntity[]) {
+/** Some coats with their parts, job, site, booth and product, and the readiness of all their parts read at once. */
+async function withParts(ctx: RuleContext, coats: CoatEntity[]): Promise<{ found: CoatStory[]; readiness: Awaited<ReturnType<typeof readinessOf>> }> {
   const links = coats.length ? await ctx.data.coatParts.findBy({ coatId: In(coats.map((c) => c.id)) }) : [];
   const parts = links.length ? await ctx.data.parts.findBy({ id: In([...new Set(links.map((l) => l.partId))]) }) : [];
   const jobs = parts.length ? await ctx.data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }) : [];
@@ -71,12 +83,16 @@ async function withParts(ctx: RuleContext, coats: CoatEntity[]) {
   const boothSite = await spraySessionSites(ctx, spraySessions);
   const siteOfSession = new Map(spraySessions.map((s) => [s.id, boothSite.get(s.boothId)]));
   const jobById = new Map(jobs.map((j) => [j.id, j]));
+  const boothOfSession = new Map(spraySessions.map((s) => [s.id, s.boothId]));
+  const names = await namesFor(ctx.data, coats, boothOfSession);
   const partIdsOfCoat = new Map<number, Set<number>>();
   for (const link of links) partIdsOfCoat.set(link.coatId, (partIdsOfCoat.get(link.coatId) ?? new Set()).add(link.partId));
   const found = coats.map((coat) => {
     const ids = partIdsOfCoat.get(coat.id);
     const own = ids ? parts.filter((p) => ids.has(p.id)) : [];
-    return { coat, parts: own, job: own.length ? jobById.get(own[0].jobId) : undefined, siteId: siteOfSession.get(coat.spraySessionId) };
+    const boothName = names.booths.get(boothOfSession.get(coat.spraySessionId) ?? -1) ?? 'the booth';
+    const productName = names.products.get(coat.productId) ?? 'the product';
+    return { coat, parts: own, job: own.length ? jobById.get(own[0].jobId) : undefined, siteId: siteOfSession.get(coat.spraySessionId), boothName, productName };
   });
   return { found, readiness: await readinessOf(ctx.data, parts, ctx.now) };
 }
@@ -84,11 +100,12 @@ async function withParts(ctx: RuleContext, coats: CoatEntity[]) {
 type Found = Awaited<ReturnType<typeof withParts>>;
 
 /** Decides each coat found, a chunk at a time. */
-async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (found: Found) => DueNotification[]): Promise<DueNotification[]> {
+async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (story: CoatStory, readiness: Found['readiness']) => Promise<DueNotification[]>): Promise<DueNotification[]> {
   const due: DueNotification[] = [];
   for (let i = 0; i < coats.length; i += coatsPerChunk) {
     if (i > 0) await pause();
-    due.push(...decide(await withParts(ctx, coats.slice(i, i + coatsPerChunk))));
+    const { found, readiness } = await withParts(ctx, coats.slice(i, i + coatsPerChunk));
+    for (const story of found) due.push(...(await decide(story, readiness)));
   }
   return due;
 }
@@ -96,44 +113,58 @@ async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (fo
 /** The last coat of the system is on and the parts have reached handling time. */
 export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
   const coats = await coatsBetween(ctx, 'handleAt', new Date(ctx.now.getTime() - dayMs), ctx.now, 'parts-ready');
-  return decideInChunks(ctx, coats, ({ found, readiness }) =>
-    found.flatMap(({ coat, parts, job, siteId }) => {
-      const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
-      if (!job || finished.length === 0) return [];
-      const subject = `Ready to handle: ${job.reference} (${job.customer})`;
-      const body = `${finished.length} part(s) of job ${job.reference} for ${job.customer} can be handled since ${at(coat.handleAt, ctx)}:\n${finished.map((p) => `- ${p.label}`).join('\n')}\n\nCheck the film before stacking; pack after ${at(coat.packAt, ctx)}.`;
-      return ctx.users
-        .filter((u) => wants(u, 'parts-ready') && ofSite(u, siteId))
-        .map((user) => ({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready' as const, userId: user.id, subject, body, dueAt: coat.handleAt }));
-    }),
-  );
+  return decideInChunks(ctx, coats, async (story, readiness) => {
+    const { coat, parts, job, siteId } = story;
+    const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
+    if (!job || finished.length === 0) return [];
+    const subject = `Ready to handle: ${job.reference} (${job.customer})`;
+    const body = [
+      `${partsOfJob(finished.length, job)} can be handled since ${momentWords(coat.handleAt, ctx.shop)}, after ${await coatSentence(ctx.data, story, ctx.shop)}:`,
+      partList(finished),
+      '',
+      `Check the film before stacking; pack from ${momentWords(coat.packAt, ctx.shop)}.`,
+      `Ready board: ${link(ctx, `/ready?jobId=${job.id}`)}`,
+    ].join('\n');
+    return ctx.users
+      .filter((u) => wants(u, 'parts-ready') && ofSite(u, siteId))
+      .map((user) => ({ dedupeKey: `parts-ready:${coat.id}:${user.id}`, kind: 'parts-ready' as const, userId: user.id, subject, body, dueAt: coat.handleAt }));
+  });
 }
 
 /** A recoat window closes soon and the parts are still waiting for their next coat. */
 export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]> {
   const coats = await coatsBetween(ctx, 'recoatClosesAt', ctx.now, new Date(ctx.now.getTime() + ctx.recoatWarningHours * 3_600_000), 'recoat-closing');
-  return decideInChunks(ctx, coats, ({ found, readiness }) =>
-    found.flatMap(({ coat, parts, job, siteId }) => {
-      const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
-      if (!job || waiting.length === 0) return [];
-      const subject = `Recoat window closing ${at(coat.recoatClosesAt!, ctx)}: ${job.reference}`;
-      const body = `${waiting.length} part(s) of ${job.reference} are waiting for their next coat. After ${at(coat.recoatClosesAt!, ctx)} they will need a P320 denib first:\n${waiting.map((p) => `- ${p.label}`).join('\n')}`;
-      return ctx.users
-        .filter((u) => wants(u, 'recoat-closing') && ofSite(u, siteId))
-        .map((user) => ({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing' as const, userId: user.id, subject, body, dueAt: ctx.now.toISOString() }));
-    }),
-  );
+  return decideInChunks(ctx, coats, async (story, readiness) => {
+    const { coat, parts, job, siteId } = story;
+    const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
+    if (!job || waiting.length === 0) return [];
+    const subject = `Recoat window closing ${timeWords(coat.recoatClosesAt!, ctx.shop)}: ${job.reference} (${job.customer})`;
+    const body = [
+      `${partsOfJob(waiting.length, job)} are waiting for their next coat after ${await coatSentence(ctx.data, story, ctx.shop)}.`,
+      `The recoat window closes ${momentWords(coat.recoatClosesAt!, ctx.shop)}; after that they need a ${denibWords('P320')} first:`,
+      partList(waiting),
+      '',
+      `Book the next coat: ${link(ctx, `/planner`)}`,
+      `The job: ${link(ctx, `/jobs/${job.id}`)}`,
+    ].join('\n');
+    return ctx.users
+      .filter((u) => wants(u, 'recoat-closing') && ofSite(u, siteId))
+      .map((user) => ({ dedupeKey: `recoat-closing:${coat.id}:${user.id}`, kind: 'recoat-closing' as const, userId: user.id, subject, body, dueAt: ctx.now.toISOString() }));
+  });
 }
 
 /** Each booking, move or cancellation of a sprayer's session in the last day, once per version. */
 export async function spraySessionChanges(ctx: RuleContext): Promise<DueNotification[]> {
   const spraySessions = await ctx.data.spraySessions.find({ where: { updatedAt: MoreThan(new Date(ctx.now.getTime() - dayMs).toISOString()) } });
+  const booths = await boothNames(ctx, spraySessions);
   return spraySessions.flatMap((s) => {
     const user = ctx.users.find((u) => u.id === s.sprayerId);
     if (!user || !wants(user, 'session-changed') || ['spraying', 'clearing', 'done', 'checking'].includes(s.state)) return [];
     const what = s.state === 'cancelled' ? 'cancelled' : 'booked or moved';
-    const when = `${calendarDateIn(new Date(s.startAt), ctx.timeZone)} ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}`;
-    return [{ dedupeKey: `session:${s.id}:${s.updatedAt}:${s.state}`, kind: 'session-changed' as const, userId: user.id, subject: `Spray session ${what}: ${when}`, body: `Spray session ${s.id} is ${what}: ${when}.`, dueAt: s.updatedAt }];
+    const booth = booths.get(s.boothId) ?? 'the booth';
+    const when = shopSpanWords(new Date(s.startAt), new Date(s.endAt), ctx.shop);
+    const body = `Your spray session in ${booth}, ${when}, is ${what}.\n\nThe session: ${link(ctx, `/spray-sessions/${s.id}`)}`;
+    return [{ dedupeKey: `session:${s.id}:${s.updatedAt}:${s.state}`, kind: 'session-changed' as const, userId: user.id, subject: `Spray session ${what}: ${booth}, ${when}`, body, dueAt: s.updatedAt }];
   });
 }
 
@@ -147,13 +178,16 @@ export async function dailyPlan(ctx: RuleContext): Promise<DueNotification[]> {
   });
   const today = spraySessions.filter((s) => s.state !== 'cancelled' && calendarDateIn(new Date(s.startAt), ctx.timeZone) === clock.date);
   const boothSite = await spraySessionSites(ctx, today);
+  const booths = await boothNames(ctx, today);
   const linesFor = (user: UserEntity) => {
     const own = today.filter((s) => ofSite(user, boothSite.get(s.boothId)));
-    return own.length ? own.map((s) => `- ${at(s.startAt, ctx)}–${at(s.endAt, ctx)}: session ${s.id} (booth ${s.boothId})`).join('\n') : 'No spray sessions are booked today.';
+    const lines = own.map((s) => `- ${timeWords(s.startAt, ctx.shop)}–${timeWords(s.endAt, ctx.shop)}: ${booths.get(s.boothId) ?? 'a booth'} (${link(ctx, `/spray-sessions/${s.id}`)})`);
+    return own.length ? `${lines.join('\n')}\n\nThe planner: ${link(ctx, '/planner')}` : 'No spray sessions are booked today.';
   };
+  const day = shopDateWords(ctx.now, ctx.shop);
   return ctx.users
     .filter((u) => wants(u, 'daily-plan'))
-    .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${clock.date}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
+    .map((u) => ({ dedupeKey: `daily-plan:${clock.date}:${u.id}`, kind: 'daily-plan' as const, userId: u.id, subject: `Today’s booth plan, ${day}`, body: linesFor(u), dueAt: ctx.now.toISOString() }));
 }
 
 export const notificationRules = [partsReady, recoatClosing, spraySessionChanges, dailyPlan, upkeepDue, crewDue];

@@ -5,9 +5,12 @@ import type { Mailer } from '../mail/mailer';
 import type { UserEntity } from '../db/entities/user.entity';
 import { notificationRules, type DueNotification } from './notification-rules';
 import type { SettingsService } from './settings';
+import { shopFormatOf } from '../../shared/words';
 
 export interface NotificationOptions {
   recoatWarningHours: number;
+  /** Where people open the app: e-mails link to the page they are about. */
+  publicUrl: string;
 }
 
 /**
@@ -46,7 +49,7 @@ export function createNotificationService(data: SiteData, settings: SettingsServ
       const shop = await settings.get();
       const users = await data.users.find();
       settled.forUsers(users);
-      const ctx = { data, now, timeZone: shop.timezone, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users, settled: settled.keys };
+      const ctx = { data, now, timeZone: shop.timezone, shop: shopFormatOf(shop), publicUrl: options.publicUrl, dailyPlanHour: shop.dailyPlanHour, recoatWarningHours: options.recoatWarningHours, users, settled: settled.keys };
       for (const rule of notificationRules) {
         const due = await rule(ctx);
         await record(due);

@@ -1,5 +1,5 @@
 import { In } from 'typeorm';
-import type { FinishStep, PartCoat } from '../../shared/finishing/readiness';
+import type { FinishStep, PartCoat, ReadinessInput } from '../../shared/finishing/readiness';
 import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
@@ -65,20 +65,30 @@ export async function stepsByJob(data: SiteData, parts: Pick<PartEntity, 'jobId'
 }
 
 /** Coats as the readiness maths reads them; coats logged outside the finish system are left out. */
+function coatInstants(c: CoatEntity): Omit<PartCoat, 'stepIndex'> {
+  return {
+    sprayedAt: new Date(c.sprayedAt),
+    flashOffEndsAt: new Date(c.flashOffEndsAt),
+    recoatOpensAt: new Date(c.recoatOpensAt),
+    recoatClosesAt: c.recoatClosesAt ? new Date(c.recoatClosesAt) : null,
+    touchDryAt: new Date(c.touchDryAt),
+    handleAt: new Date(c.handleAt),
+    packAt: new Date(c.packAt),
+    fullCureAt: new Date(c.fullCureAt),
+  };
+}
+
 export function toPartCoats(coats: CoatEntity[], steps: FinishStep[]): PartCoat[] {
   return coats
     .filter((c) => c.stepPosition !== null && steps[c.stepPosition]?.kind === 'coat')
-    .map((c) => ({
-      stepIndex: c.stepPosition!,
-      sprayedAt: new Date(c.sprayedAt),
-      flashOffEndsAt: new Date(c.flashOffEndsAt),
-      recoatOpensAt: new Date(c.recoatOpensAt),
-      recoatClosesAt: c.recoatClosesAt ? new Date(c.recoatClosesAt) : null,
-      touchDryAt: new Date(c.touchDryAt),
-      handleAt: new Date(c.handleAt),
-      packAt: new Date(c.packAt),
-      fullCureAt: new Date(c.fullCureAt),
-    }));
+    .map((c) => ({ stepIndex: c.stepPosition!, ...coatInstants(c) }));
+}
+
+/** Coats that match no coat step of the system: a part with no finish system is dried from these. */
+export function unplannedPartCoats(coats: CoatEntity[], steps: FinishStep[]): NonNullable<ReadinessInput['unplannedCoats']> {
+  return coats
+    .filter((c) => c.stepPosition === null || steps[c.stepPosition]?.kind !== 'coat')
+    .map(coatInstants);
 }
 
 /** The first coat step of the system not yet done on the part, or null when all are done. */

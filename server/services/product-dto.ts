@@ -26,6 +26,7 @@ export function toProductDto(p: ProductEntity, lots: ProductLotEntity[], files: 
     mixHardenerParts: p.mixHardenerParts,
     thinnerMinPct: p.thinnerMinPct,
     thinnerMaxPct: p.thinnerMaxPct,
+    thinningRangeGiven: p.thinningRangeGiven,
     inductionMin: p.inductionMin,
     potLifeMin: p.potLifeMin,
     dryFilmPerCoatUm: p.dryFilmPerCoatUm,

@@ -2,6 +2,7 @@ import { In } from 'typeorm';
 import type { List } from '../../shared/schemas/common';
 import {
   createProductSchema,
+  storedThinning,
   type CreateLotInput,
   type CreateProductInput,
   type Lot,
@@ -19,6 +20,11 @@ import { changedFields, recordAudit, type Actor } from './audit';
 import { toFileRef, type FileService, type Upload } from './files';
 import { toLotDto, toProductDto } from './product-dto';
 import type { SettingsService } from './settings';
+
+/** The stored range as a client sends it: null for a range the data sheet does not give. */
+function thinningAsSent(product: ProductEntity): { thinnerMinPct: number | null; thinnerMaxPct: number | null } {
+  return product.thinningRangeGiven ? { thinnerMinPct: product.thinnerMinPct, thinnerMaxPct: product.thinnerMaxPct } : { thinnerMinPct: null, thinnerMaxPct: null };
+}
 
 /** Deletes a file's record when no product points at it any more; returns the stored name whose bytes can go. */
 async function forgetUnusedFile(tx: SiteData, fileId: number): Promise<string | null> {
@@ -79,7 +85,7 @@ export function createProductService(data: SiteData, files: FileService, setting
       const fields = createProductSchema.parse(input);
       const now = clock.now();
       const id = await data.transaction(async (tx) => {
-        const product = await tx.products.save(tx.products.create({ ...fields, tdsFileId: null, sdsFileId: null, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
+        const product = await tx.products.save(tx.products.create({ ...fields, ...storedThinning(fields), tdsFileId: null, sdsFileId: null, createdAt: now.toISOString(), updatedAt: now.toISOString() }));
         await recordAudit(tx, actor, { action: 'create', entity: 'product', entityId: product.id, summary: `Added data sheet ${product.name}` }, now);
         return product.id;
       });
@@ -91,9 +97,11 @@ export function createProductService(data: SiteData, files: FileService, setting
       await data.transaction(async (tx) => {
         const product = await findOrFail(tx, id);
         // Checks that span fields (thinner range, colder-is-slower) must hold for the product as it will be.
-        createProductSchema.parse({ ...product, ...patch });
-        const changes = changedFields(product, patch as Partial<ProductEntity>);
-        Object.assign(product, patch, { updatedAt: now.toISOString() });
+        const asWillBe = createProductSchema.parse({ ...product, ...thinningAsSent(product), ...patch });
+        const touchesThinning = patch.thinnerMinPct !== undefined || patch.thinnerMaxPct !== undefined;
+        const next = { ...patch, ...(touchesThinning ? storedThinning(asWillBe) : {}) } as Partial<ProductEntity>;
+        const changes = changedFields(product, next);
+        Object.assign(product, next, { updatedAt: now.toISOString() });
         await tx.products.save(product);
         await recordAudit(tx, actor, { action: 'update', entity: 'product', entityId: id, summary: `Changed data sheet ${product.name}`, changes }, now);
       });

@@ -4,7 +4,7 @@ import { partReadiness, type FinishStep, type PartReadiness, type ReadinessInput
 import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
-import { currentCoatsByPart, denibTimesByPart, stepsByJob, toPartCoats } from './part-coats';
+import { currentCoatsByPart, denibTimesByPart, stepsByJob, toPartCoats, unplannedPartCoats } from './part-coats';
 
 export interface PartFacts {
   steps: FinishStep[];
@@ -29,7 +29,7 @@ export async function partFactsOf(data: SiteData, parts: PartEntity[], now: Date
       const system = steps.get(part.jobId) ?? [];
       const partCoats = coats.get(part.id) ?? [];
       const collectedAt = part.collectedAt ? new Date(part.collectedAt) : null;
-      const input = { steps: system, coats: toPartCoats(partCoats, system), abradedAt: denibs.get(part.id) ?? [], collectedAt, now };
+      const input = { steps: system, coats: toPartCoats(partCoats, system), unplannedCoats: unplannedPartCoats(partCoats, system), abradedAt: denibs.get(part.id) ?? [], collectedAt, now };
       return [part.id, { steps: system, coats: partCoats, input }];
     }),
   );

@@ -117,7 +117,7 @@ export function createServiceSet(data: SiteData, deps: ServiceDeps): ServiceSet 
     parts: () => createPartService(data, clock, events),
     partImport: () => createPartImportService(data, set.parts),
     partHistory: () => createPartHistoryService(data, set.settings, clock),
-    estimates: () => createEstimateService(data),
+    estimates: () => createEstimateService(data, set.settings),
     spraySessions: () => createSpraySessionService(data, set.settings, events, clock),
     cautions: () => createSpraySessionCautionService(data, set.settings, clock),
     sprayers: () => createSprayerService(data),

@@ -7,6 +7,8 @@ import { changedFields, recordAudit, type Actor } from './audit';
 export const defaultShopSettings: ShopSettings = {
   shopName: 'My finishing shop',
   timezone: 'Europe/London',
+  locale: 'en-GB',
+  currency: 'GBP',
   defaultUnits: 'metric',
   planningDryingTempC: 20,
   setupMin: 15,
@@ -26,10 +28,10 @@ export const defaultShopSettings: ShopSettings = {
 };
 
 function toSettingsDto(row: ShopSettingsEntity): ShopSettings {
-  const { shopName, timezone, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour } = row;
+  const { shopName, timezone, locale, currency, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour } = row;
   const { extractionTestMonths, fireInspectionMonths, fitTestMonths, healthSurveillanceMonths, upkeepDueSoonDays } = row;
   return {
-    ...{ shopName, timezone, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour },
+    ...{ shopName, timezone, locale, currency, defaultUnits, planningDryingTempC, setupMin, cleanDownMin, yearlySolventThresholdKg, dailyPlanHour },
     ...{ extractionTestMonths, fireInspectionMonths, fitTestMonths, healthSurveillanceMonths, upkeepDueSoonDays },
   };
 }

@@ -2,7 +2,8 @@ import { openingHoursProblem } from '../../shared/finishing/opening-hours';
 import type { SiteData } from '../data/site-data';
 import type { BoothEntity } from '../db/entities/booth.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { calendarDateIn } from '../../shared/time';
+import { In } from 'typeorm';
+import { shopMomentWords, shopSpanWords, type ShopFormat } from '../../shared/words';
 import { AppError } from '../lib/app-error';
 
 export interface Slot {
@@ -13,13 +14,15 @@ export interface Slot {
   sprayerId: number | null;
 }
 
-const clock = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
-const timeOnly = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
-
-/** "Tue 6 Jul, 09:00–09:55", or both dates when the span crosses midnight. */
-function span(startIso: string, endIso: string, timeZone: string): string {
-  const sameDay = calendarDateIn(new Date(startIso), timeZone) === calendarDateIn(new Date(endIso), timeZone);
-  return `${clock(startIso, timeZone)}–${sameDay ? timeOnly(endIso, timeZone) : clock(endIso, timeZone)}`;
+/** " for LJ-26-101" (or "… and LJ-26-104"), naming the jobs a session sprays; "" when none is planned in it. */
+async function jobsWords(tx: SiteData, spraySessionId: number): Promise<string> {
+  const whole = tx.acrossSites;
+  const items = await whole.spraySessionItems.findBy({ spraySessionId });
+  const parts = items.length ? await whole.parts.findBy({ id: In([...new Set(items.map((i) => i.partId))]) }) : [];
+  const jobs = parts.length ? await whole.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }) : [];
+  const references = jobs.map((j) => j.reference).sort();
+  if (references.length === 0) return '';
+  return ` for ${references.length === 1 ? references[0] : `${references.slice(0, -1).join(', ')} and ${references.at(-1)}`}`;
 }
 
 /** A clash is a fact of the booth and the person, whichever site's sessions it is with. */
@@ -34,20 +37,23 @@ async function overlapping(tx: SiteData, slot: Slot, column: 'booth_id' | 'spray
 }
 
 /** Never overridable: one booth, one session at a time; one sprayer, one booth at a time. */
-export async function assertNoClash(tx: SiteData, slot: Slot, booth: BoothEntity, timeZone: string): Promise<void> {
+export async function assertNoClash(tx: SiteData, slot: Slot, booth: BoothEntity, shop: ShopFormat): Promise<void> {
   if (tx.sql.dialect === 'postgres') {
     // Serialise bookings of one booth across every app instance until this transaction ends.
     await tx.sql.query('SELECT pg_advisory_xact_lock(7301, $1)', [slot.boothId]);
   }
   const clash = await overlapping(tx, slot, 'booth_id', slot.boothId);
   if (clash) {
-    throw new AppError('conflict', `${booth.name} is already booked ${span(clash.startAt, clash.endAt, timeZone)} (spray session ${clash.id})`, { start: 'Overlaps another spray session of this booth' });
+    const when = shopSpanWords(new Date(clash.startAt), new Date(clash.endAt), shop);
+    throw new AppError('conflict', `${booth.name} is already booked ${when}${await jobsWords(tx, clash.id)}`, { start: 'Overlaps another spray session of this booth' });
   }
   if (slot.sprayerId === null) return;
   const busy = await overlapping(tx, slot, 'sprayer_id', slot.sprayerId);
   if (busy) {
     const sprayer = await tx.forSite(booth.siteId).users.findOneBy({ id: slot.sprayerId });
-    throw new AppError('conflict', `${sprayer?.name ?? 'The sprayer'} is already booked then (spray session ${busy.id}, ${clock(busy.startAt, timeZone)})`, { sprayerId: 'Already booked at that time' });
+    const where = await tx.acrossSites.booths.findOneBy({ id: busy.boothId });
+    const session = `${where?.name ?? 'another booth'} from ${shopMomentWords(new Date(busy.startAt), shop)}${await jobsWords(tx, busy.id)}`;
+    throw new AppError('conflict', `${sprayer?.name ?? 'The sprayer'} is already booked then: ${session}`, { sprayerId: 'Already booked at that time' });
   }
 }
 

@@ -20,6 +20,7 @@ import type { SettingsService } from './settings';
 import { changeState, recordChecklist, type SpraySessionActor } from './spray-session-progress';
 import { toSpraySessionDtos } from './spray-session-dto';
 import { assertNoClash, assertOpen } from './spray-session-rules';
+import { shopFormatOf, shopSpanWords, spraySessionWords, type ShopFormat } from '../../shared/words';
 import { assertSprayerFor } from './sprayers';
 
 /** Planned parts must exist, and a part placed at another site is not the booth's site's to plan. */
@@ -52,18 +53,19 @@ async function boothOrFail(tx: SiteData, boothId: number): Promise<BoothEntity> 
   return booth;
 }
 
-async function insertSpraySession(tx: SiteData, fields: SpraySessionFields, actor: Actor, timezone: string, now: string): Promise<{ spraySession: SpraySessionEntity; siteId: number }> {
+async function insertSpraySession(tx: SiteData, fields: SpraySessionFields, actor: Actor, shop: ShopFormat, now: string): Promise<{ spraySession: SpraySessionEntity; siteId: number }> {
+  const timezone = shop.timeZone;
   const slot = { boothId: fields.boothId, startAt: new Date(fields.start).toISOString(), endAt: new Date(fields.end).toISOString(), sprayerId: fields.sprayerId };
   const booth = await boothOrFail(tx, fields.boothId);
   await assertSprayerFor(tx, fields.sprayerId, booth);
   assertOpen(slot, booth, timezone, fields.override?.reason ?? null);
-  await assertNoClash(tx, slot, booth, timezone);
+  await assertNoClash(tx, slot, booth, shop);
   await assertRackSpace(tx.forSite(booth.siteId), fields.items.map((i) => i.partId), new Date(now), fields.override?.reason ?? null);
   const spraySession = await tx.spraySessions.save(
     tx.spraySessions.create({ ...slot, state: 'planned', notes: fields.notes, checklist: null, overrideReason: fields.override?.reason ?? null, sprayingStartedAt: null, clearingStartedAt: null, createdAt: now, updatedAt: now }),
   );
   await writeItems(tx, booth, spraySession.id, fields.items);
-  const summary = `Booked ${booth.name} ${slot.startAt}–${slot.endAt}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;
+  const summary = `Booked ${booth.name} ${shopSpanWords(new Date(slot.startAt), new Date(slot.endAt), shop)}${fields.override ? ` (override: ${fields.override.reason})` : ''}`;
   await recordAudit(tx, actor, { action: 'create', entity: 'spray-session', entityId: spraySession.id, summary, siteId: booth.siteId }, new Date(now));
   return { spraySession, siteId: booth.siteId };
 }
@@ -104,9 +106,9 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
 
     async create(input: CreateSpraySessionInput, actor: Actor): Promise<SpraySession> {
       const fields = createSpraySessionSchema.parse(input);
-      const { timezone } = await settings.get();
+      const shop = shopFormatOf(await settings.get());
       const { created, siteId } = await data.transaction(async (tx) => {
-        const inserted = await insertSpraySession(tx, fields, actor, timezone, clock.now().toISOString());
+        const inserted = await insertSpraySession(tx, fields, actor, shop, clock.now().toISOString());
         return { created: await getWith(tx, inserted.spraySession.id), siteId: inserted.siteId };
       });
       events.publish({ type: 'spray-session.changed', id: created.id, siteId });
@@ -116,10 +118,10 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
     /** Books every session of an accepted plan, or none of them. */
     async createAll(inputs: CreateSpraySessionInput[], actor: Actor): Promise<SpraySession[]> {
       const all = inputs.map((input) => createSpraySessionSchema.parse(input));
-      const { timezone } = await settings.get();
+      const shop = shopFormatOf(await settings.get());
       const inserted = await data.transaction(async (tx) => {
         const rows: { spraySession: SpraySessionEntity; siteId: number }[] = [];
-        for (const fields of all) rows.push(await insertSpraySession(tx, fields, actor, timezone, clock.now().toISOString()));
+        for (const fields of all) rows.push(await insertSpraySession(tx, fields, actor, shop, clock.now().toISOString()));
         return { dtos: await toDtos(tx, rows.map((r) => r.spraySession)), siteIds: rows.map((r) => r.siteId) };
       });
       inserted.dtos.forEach((spraySession, i) => events.publish({ type: 'spray-session.changed', id: spraySession.id, siteId: inserted.siteIds[i] }));
@@ -150,14 +152,14 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
       if (moved) await assertSprayerFor(tx, slot.sprayerId, booth);
       // Giving a session to someone else leaves its hours alone: a booking already made outside them stands.
       if (retimed) assertOpen(slot, booth, timezone, patch.override?.reason ?? null);
-      if ((moved || patch.state === 'planned') && (patch.state ?? spraySession.state) !== 'cancelled') await assertNoClash(tx, slot, booth, timezone);
+      if ((moved || patch.state === 'planned') && (patch.state ?? spraySession.state) !== 'cancelled') await assertNoClash(tx, slot, booth, shopFormatOf(shop));
       Object.assign(spraySession, { ...slot, notes: patch.notes ?? spraySession.notes, updatedAt: now });
       if (patch.override) spraySession.overrideReason = patch.override.reason;
       if (patch.checklist) spraySession.checklist = await recordChecklist(tx, spraySession, booth, patch.checklist, actor, shop, clock.now());
       if (patch.state && patch.state !== spraySession.state) changeState(spraySession, patch.state, now);
       await tx.spraySessions.save(spraySession);
       if (patch.items) await writeItems(tx, booth, id, patch.items);
-      const summary = `Changed spray session ${id} on ${booth.name}${patch.state ? ` (now ${patch.state})` : ''}`;
+      const summary = `Changed the spray session ${spraySessionWords({ boothName: booth.name, startAt: new Date(spraySession.startAt) }, shopFormatOf(shop))}${patch.state ? ` (now ${patch.state})` : ''}`;
       await recordAudit(tx, actor, { action: 'update', entity: 'spray-session', entityId: id, summary, changes: { ...patch }, siteId: booth.siteId }, new Date(now));
       return { dto: await getWith(tx, id), siteId: booth.siteId };
     });

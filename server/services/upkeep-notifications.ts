@@ -3,6 +3,7 @@ import { notifyPrefsOf, type NotificationKind } from '../../shared/schemas/notif
 import type { ShopSettings } from '../../shared/schemas/settings';
 import type { UserEntity } from '../db/entities/user.entity';
 import type { DueNotification, RuleContext } from './notification-rules';
+import { calendarDateWords } from '../../shared/words';
 import { boothDueItems, crewDueItems, crewOfScope, type KeyedItem, type Window } from './upkeep-due';
 import { crewRecordsOf, shopDay } from './upkeep-facts';
 
@@ -26,7 +27,7 @@ export async function upkeepDue(ctx: RuleContext): Promise<DueNotification[]> {
     const items = (await boothDueItems(ctx.data, booth, w)).filter(mailable);
     for (const item of items) {
       const subject = `Booth upkeep: ${booth.name}, ${item.kind.replaceAll('-', ' ')} ${item.status.replaceAll('-', ' ')}`;
-      const body = `${booth.name}:\n${lines([item])}${item.dueOn ? `\nDue on ${item.dueOn}.` : ''}\n\n${closing}`;
+      const body = `${booth.name}:\n${lines([item])}${item.dueOn ? `\nDue on ${calendarDateWords(item.dueOn, ctx.shop.locale)}.` : ''}\n\n${closing}\n\nBooth upkeep: ${ctx.publicUrl}/upkeep`;
       for (const user of ctx.users.filter((u) => wants(u, 'upkeep-due') && ofSite(u, booth.siteId) && can(u.role, 'upkeep:read'))) {
         due.push({ dedupeKey: `upkeep-due:${booth.id}:${item.key}:${user.id}`, kind: 'upkeep-due', userId: user.id, subject, body, dueAt: ctx.now.toISOString() });
       }
@@ -47,12 +48,12 @@ export async function crewDue(ctx: RuleContext): Promise<DueNotification[]> {
   for (const person of people) {
     const items = crewDueItems(latest.get(person.id)!, w).filter(mailable);
     for (const item of items) {
-      const dated = item.dueOn ? ` It is due on ${item.dueOn}.` : '';
+      const dated = item.dueOn ? ` It is due on ${calendarDateWords(item.dueOn, ctx.shop.locale)}.` : '';
       if (wants(person, 'crew-due')) {
-        due.push({ dedupeKey: `crew-due:${item.key}:${person.id}`, kind: 'crew-due', userId: person.id, subject: `Your records: ${item.message}`, body: `${item.message.replace('The ', 'Your ')}${dated}\nAsk the owner to book it.`, dueAt: ctx.now.toISOString() });
+        due.push({ dedupeKey: `crew-due:${item.key}:${person.id}`, kind: 'crew-due', userId: person.id, subject: `Your records: ${item.message}`, body: `${item.message.replace('The ', 'Your ')}${dated}\nAsk the owner to book it.\n\nYour records: ${ctx.publicUrl}/crew/${person.id}`, dueAt: ctx.now.toISOString() });
       }
       for (const reader of ctx.users.filter((u) => u.id !== person.id && wants(u, 'crew-due') && can(u.role, 'crew:status') && ofSite(u, person.siteId))) {
-        due.push({ dedupeKey: `crew-due:${item.key}:${reader.id}`, kind: 'crew-due', userId: reader.id, subject: `Crew records: ${person.name}`, body: `${person.name}: ${item.message.replace('The ', 'their ')}`, dueAt: ctx.now.toISOString() });
+        due.push({ dedupeKey: `crew-due:${item.key}:${reader.id}`, kind: 'crew-due', userId: reader.id, subject: `Crew records: ${person.name}`, body: `${person.name}: ${item.message.replace('The ', 'their ')}\n\nCrew records: ${ctx.publicUrl}/crew`, dueAt: ctx.now.toISOString() });
       }
     }
   }

@@ -1,9 +1,10 @@
-import { calendarDateIn, wallClockIn } from '../time';
+import { calendarDateIn } from '../time';
 import { findSlot, type Interval, type RackLoad, type SlotContext, type Taken } from './auto-plan-slots';
 import type { DryingRow } from './drying-row-schema';
 import { adjustDryingTimes } from './drying-times';
 import type { RecoatWindow } from './readiness';
 import { projectedRecoatWindow, sharedRecoatWindow } from './recoat-window';
+import { calendarDateWords, coatOfWords, denibWords, shopMomentWords, upperFirst } from '../words';
 
 export type { PlanBooth } from './auto-plan-slots';
 export type PlanStep = { position: number; kind: 'coat'; productName: string; dryingTimes: DryingRow[] } | { position: number; kind: 'abrade'; grit: string };
@@ -31,6 +32,8 @@ export type PlanJob = {
 };
 
 export type PlanInput = SlotContext & {
+  /** The shop's locale for times in the notes (BCP 47); en-GB when not given. */
+  locale?: string;
   planningTempC: number;
   /** Time to denib between coats, off the booth: common practice, no published source. */
   abradeMin: number;
@@ -49,10 +52,13 @@ type PartState = { window: RecoatWindow | null; freeAt: Date; packAt: Date | nul
 type JobWalk = { job: PlanJob; parts: Map<number, PartState>; abradeDue: boolean; sessions: PlannedSession[]; notes: string[] };
 
 const later = (a: Date, b: Date | null | undefined) => (b && b > a ? b : a);
-const shopTime = (at: Date, timeZone: string) => {
-  const clock = wallClockIn(at, timeZone);
-  return `${clock.date} ${clock.time}`;
-};
+const shopTime = (at: Date, input: PlanInput) => shopMomentWords(at, { timeZone: input.timeZone, locale: input.locale ?? 'en-GB' });
+
+/** "Coat 2 of 3": the step's place among the job's coat steps, as the other screens say it. */
+function coatLabel(job: PlanJob, step: { position: number }): string {
+  const coats = job.steps.filter((s) => s.kind === 'coat').map((s) => s.position);
+  return upperFirst(coatOfWords(coats.indexOf(step.position) + 1, coats.length));
+}
 
 /** The parts whose step `position` is on record, booked, or still to be planned. */
 function split(walk: JobWalk, position: number) {
@@ -67,9 +73,9 @@ function followBooked(input: PlanInput, walk: JobWalk, step: CoatStep, booked: B
   for (const session of booked) {
     const after = projectedRecoatWindow(session.end, step.dryingTimes, input.planningTempC);
     const before = sharedRecoatWindow(session.partIds.flatMap((id) => walk.parts.get(id)?.window ?? []));
-    walk.notes.push(`Step ${step.position + 1} (${step.productName}) is already booked ${shopTime(session.start, input.timeZone)}; not proposed again.`);
-    if (before && session.start < before.opensAt) walk.notes.push(`That session starts before the previous coat’s recoat window opens (${shopTime(before.opensAt, input.timeZone)}).`);
-    if (before?.closesAt && session.start > before.closesAt) walk.notes.push(`That session starts after the previous coat’s recoat window closes (${shopTime(before.closesAt, input.timeZone)}): denib first.`);
+    walk.notes.push(`${coatLabel(walk.job, step)} (${step.productName}) is already booked ${shopTime(session.start, input)}; not proposed again.`);
+    if (before && session.start < before.opensAt) walk.notes.push(`That session starts before the previous coat’s recoat window opens (${shopTime(before.opensAt, input)}).`);
+    if (before?.closesAt && session.start > before.closesAt) walk.notes.push(`That session starts after the previous coat’s recoat window closes (${shopTime(before.closesAt, input)}): denib first.`);
     for (const id of session.partIds) {
       if (!recorded.has(id)) walk.parts.set(id, { window: after, freeAt: session.end, packAt: after.packAt });
     }
@@ -87,11 +93,11 @@ function proposeStep(input: PlanInput, taken: Taken, walk: JobWalk, step: CoatSt
   const footprintM2 = needing.reduce((sum, p) => sum + p.footprintM2, 0);
   let slot = findSlot(input, taken, earliest, areaM2, footprintM2, times.handleMin);
   if (slot && !walk.abradeDue && window?.closesAt && slot.start > window.closesAt) {
-    walk.notes.push(`Step ${step.position + 1}: no booth time before the recoat window closes (${shopTime(window.closesAt, input.timeZone)}); the plan adds a P320 denib first.`);
+    walk.notes.push(`${coatLabel(walk.job, step)} (${step.productName}): no booth time before the recoat window closes (${shopTime(window.closesAt, input)}); the plan adds a ${denibWords('P320')} first.`);
     slot = findSlot(input, taken, new Date(earliest.getTime() + input.abradeMin * 60_000), areaM2, footprintM2, times.handleMin);
   }
   if (!slot) {
-    walk.notes.push(`Step ${step.position + 1} (${step.productName}): no free booth time with rack space in the next ${input.horizonDays} days.`);
+    walk.notes.push(`${coatLabel(walk.job, step)} (${step.productName}): no free booth time with rack space in the next ${input.horizonDays} days.`);
     return false;
   }
   const partIds = needing.map((p) => p.id);
@@ -128,7 +134,7 @@ function planJob(input: PlanInput, taken: Taken, job: PlanJob): { sessions: Plan
   const packTimes = [...walk.parts.values()].map((s) => s.packAt);
   const finishesAt = packTimes.some((t) => t === null) ? null : packTimes.reduce<Date | null>((a, b) => (a ? later(a, b) : b), null);
   const dueDateMet = finishesAt !== null && calendarDateIn(finishesAt, input.timeZone) <= job.dueDate;
-  if (finishesAt && !dueDateMet) walk.notes.push(`Ready to pack ${calendarDateIn(finishesAt, input.timeZone)}, after the due date ${job.dueDate}.`);
+  if (finishesAt && !dueDateMet) walk.notes.push(`Ready to pack ${shopTime(finishesAt, input)}, after the due date ${calendarDateWords(job.dueDate, input.locale ?? 'en-GB')}.`);
   return { sessions: walk.sessions, plan: { jobId: job.id, reference: job.reference, dueDate: job.dueDate, finishesAt, dueDateMet, notes: walk.notes } };
 }
 

@@ -3,9 +3,11 @@ import type { CautionProduct } from './cautions';
 import { respiratorLevel } from './cautions';
 import { assessConditions, worstVerdict, type Verdict } from './conditions';
 import type { FitnessFinding } from './fitness';
+import { respiratorWords } from '../words';
 
 export type ChecklistProduct = CautionProduct & { minApplicationTempC: number | null; maxRelativeHumidityPct: number | null };
-export type ChecklistEvaluation = { verdict: Verdict; problems: string[] };
+/** `notes` are readings within their limits but close to them: information, not problems. */
+export type ChecklistEvaluation = { verdict: Verdict; problems: string[]; notes: string[] };
 
 const respiratorRank = { particulate: 0, 'vapour-and-particulate': 1, 'air-fed': 2 } as const;
 
@@ -24,7 +26,7 @@ function equipmentProblems(checklist: Checklist, minFaceVelocityMps: number, pro
   else if (checklist.faceVelocityMps < minFaceVelocityMps) problems.push(`Face velocity ${checklist.faceVelocityMps.toFixed(2)} m/s is below the booth's minimum of ${minFaceVelocityMps.toFixed(2)} m/s.`);
   const needed = respiratorLevel(products);
   if (!checklist.respiratorFitted) problems.push('Respiratory protection is not fitted.');
-  else if (respiratorRank[checklist.respiratorKind] < respiratorRank[needed]) problems.push(`The products need ${needed.replaceAll('-', ' ')} protection, more than ${checklist.respiratorKind.replaceAll('-', ' ')}.`);
+  else if (respiratorRank[checklist.respiratorKind] < respiratorRank[needed]) problems.push(`These products need ${respiratorWords[needed]}; ${respiratorWords[checklist.respiratorKind]} is not enough.`);
   return problems;
 }
 
@@ -37,6 +39,7 @@ export function evaluateChecklist(checklist: Checklist, booth: { minFaceVelocity
   const equipment = [...equipmentProblems(checklist, booth.minFaceVelocityMps, products), ...fitness.filter((f) => f.severity === 'stop').map((f) => f.message)];
   const conditions = assessConditions({ airTempC: checklist.airTempC, relativeHumidityPct: checklist.relativeHumidityPct, surfaceTempC: checklist.surfaceTempC, ...strictestLimits(products) });
   const conditionProblems = conditions.checks.filter((c) => c.verdict !== 'go').map((c) => c.message);
+  const notes = conditions.checks.filter((c) => c.info).map((c) => c.message);
   const verdict = worstVerdict([equipment.length ? 'stop' : 'go', conditions.verdict]);
-  return { verdict, problems: [...equipment, ...conditionProblems] };
+  return { verdict, problems: [...equipment, ...conditionProblems], notes };
 }

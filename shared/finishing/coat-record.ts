@@ -16,6 +16,8 @@ export type CoatRecordInput = {
     maxRelativeHumidityPct: number | null;
     thinnerMinPct: number;
     thinnerMaxPct: number;
+    /** False when the data sheet gives no thinning range: then thinning is not checked. */
+    thinningRangeGiven: boolean;
     dryFilmPerCoatUm: number | null;
   };
   sprayedAt: Date;
@@ -65,8 +67,8 @@ function windowWarnings(sprayedAt: Date, window: CoatRecordInput['previousWindow
 
 function materialWarnings(input: CoatRecordInput): CoatWarning[] {
   const warnings: CoatWarning[] = [];
-  const { thinnerMinPct, thinnerMaxPct } = input.product;
-  if (input.thinningPct < thinnerMinPct || input.thinningPct > Math.max(thinnerMaxPct, thinnerMinPct)) {
+  const { thinnerMinPct, thinnerMaxPct, thinningRangeGiven } = input.product;
+  if (thinningRangeGiven && (input.thinningPct < thinnerMinPct || input.thinningPct > Math.max(thinnerMaxPct, thinnerMinPct))) {
     warnings.push({ code: 'thinning-outside-range', verdict: 'caution', message: `Thinning ${input.thinningPct} % is outside the data sheet’s ${thinnerMinPct}–${thinnerMaxPct} %.` });
   }
   if (input.lotExpired) warnings.push({ code: 'lot-expired', verdict: 'stop', message: 'The product lot is past its expiry date.' });

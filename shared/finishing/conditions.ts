@@ -4,7 +4,11 @@ import { formatQuantity } from '../units';
 import { requireBetween, requireFinite } from './validate';
 
 export type Verdict = 'go' | 'caution' | 'stop';
-export type ConditionCheck = { code: string; verdict: Verdict; message: string };
+/**
+ * One rule's verdict. `info` marks a go that sits close to its limit: worth showing on the
+ * calculator and the pre-spray checks, never a warning on a coat (the reading is within limits).
+ */
+export type ConditionCheck = { code: string; verdict: Verdict; info: boolean; message: string };
 
 // Magnus form over liquid water with the Alduchov–Eskridge (1996) coefficients, fitted for −40…+50 °C.
 const magnusA = 17.625;
@@ -12,11 +16,12 @@ const magnusB = 243.04;
 
 /**
  * The margins the verdicts use. Below 3 °C surface-above-dew-point is the coating trade's
- * stop line. 3–5 °C is a caution band because some data sheets ask for 5 °C and a part's
- * surface reading drifts as cold stock warms. Product limits get a 5-point RH and 2 °C band
- * so the sprayer hears before the limit is reached, not after.
+ * limit (ISO 8502-4 practice): a stop. At or above it the surface is within limits; up to 5 °C
+ * the check adds information (some data sheets ask for 5 °C, and a cold part's surface reading
+ * drifts as it warms), which is not a warning. Product limits get the same kind of information
+ * band (5 points of RH, 2 °C) so the sprayer hears before the limit is reached, not after.
  */
-export const conditionMargins = { stopBelowC: 3, goFromC: 5, humidityBandPct: 5, temperatureBandC: 2 } as const;
+export const conditionMargins = { stopBelowC: 3, infoBelowC: 5, humidityBandPct: 5, temperatureBandC: 2 } as const;
 
 /** Used when no product is chosen: the general application limits coating guides give (air 10 °C, RH 85 %). */
 export const generalApplicationLimits = { minApplicationTempC: 10, maxRelativeHumidityPct: 85 } as const;
@@ -55,7 +60,10 @@ export type ConditionsAssessment = {
   checks: ConditionCheck[];
 };
 
-/** Go / caution / stop for spraying now, with one check per rule so the sprayer sees which one bites. */
+/**
+ * Go or stop for spraying now, with one check per rule so the sprayer sees which one bites. A
+ * reading within its limit is a go (with `info` when it is close); only one outside is a stop.
+ */
 export function assessConditions(input: ConditionsInput): ConditionsAssessment {
   requireBetween('surfaceTempC', input.surfaceTempC, 'the surface temperature', -40, 80);
   if (input.minApplicationTempC != null) {
@@ -97,6 +105,7 @@ function dewPointCheck(marginC: number, dewPoint: number, units: UnitSystem): Co
     return {
       code: 'dew-point-margin',
       verdict: 'stop',
+      info: false,
       message: `The surface is ${where} (${dew}): moisture will condense on the part and spoil the finish. ${fix}`,
     };
   }
@@ -104,17 +113,19 @@ function dewPointCheck(marginC: number, dewPoint: number, units: UnitSystem): Co
     return {
       code: 'dew-point-margin',
       verdict: 'stop',
+      info: false,
       message: `The surface is only ${margin} above the dew point (${dew}). Moisture can condense on the part and spoil the finish. ${fix}`,
     };
   }
-  if (marginC < conditionMargins.goFromC) {
+  if (marginC < conditionMargins.infoBelowC) {
     return {
       code: 'dew-point-margin',
-      verdict: 'caution',
-      message: `The surface is ${margin} above the dew point (${dew}): allowed, but close. Check cold parts again before spraying; some data sheets ask for more.`,
+      verdict: 'go',
+      info: true,
+      message: `The surface is ${margin} above the dew point (${dew}): within the ${needed} limit. Check cold parts again before spraying; some data sheets ask for more.`,
     };
   }
-  return { code: 'dew-point-margin', verdict: 'go', message: `The surface is ${margin} above the dew point (${dew}).` };
+  return { code: 'dew-point-margin', verdict: 'go', info: false, message: `The surface is ${margin} above the dew point (${dew}).` };
 }
 
 function humidityCheck(rhPct: number, productMax: number | null | undefined): ConditionCheck {
@@ -125,17 +136,19 @@ function humidityCheck(rhPct: number, productMax: number | null | undefined): Co
     return {
       code: 'relative-humidity',
       verdict: 'stop',
+      info: false,
       message: `Humidity ${rh} is above ${whose} of ${max} %. The film can blush, stay soft or (with 2K) gas. Do not spray until the air is drier.`,
     };
   }
   if (rhPct >= max - conditionMargins.humidityBandPct) {
     return {
       code: 'relative-humidity',
-      verdict: 'caution',
-      message: `Humidity ${rh} is close to ${whose} of ${max} %. Expect slower drying; watch for blushing.`,
+      verdict: 'go',
+      info: true,
+      message: `Humidity ${rh} is within ${whose} of ${max} %, but close to it. Expect slower drying; watch for blushing.`,
     };
   }
-  return { code: 'relative-humidity', verdict: 'go', message: `Humidity ${rh} is within ${whose} of ${max} %.` };
+  return { code: 'relative-humidity', verdict: 'go', info: false, message: `Humidity ${rh} is within ${whose} of ${max} %.` };
 }
 
 function temperatureCheck(
@@ -152,15 +165,17 @@ function temperatureCheck(
     return {
       code,
       verdict: 'stop',
+      info: false,
       message: `${subject} at ${shown} is below ${whose} of ${minShown}. The coating may not flow, dry or cure. Warm it up first.`,
     };
   }
   if (tempC <= min + conditionMargins.temperatureBandC) {
     return {
       code,
-      verdict: 'caution',
+      verdict: 'go',
+      info: true,
       message: `${subject} at ${shown} is only just above ${whose} of ${minShown}. Drying will be slow; allow extra time.`,
     };
   }
-  return { code, verdict: 'go', message: `${subject} at ${shown} is above ${whose} of ${minShown}.` };
+  return { code, verdict: 'go', info: false, message: `${subject} at ${shown} is above ${whose} of ${minShown}.` };
 }

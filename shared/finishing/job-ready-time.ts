@@ -67,7 +67,11 @@ export function partReadyTime(input: PartReadyInput, options: ReadyTimeOptions):
   const readiness = partReadiness(input);
   const remaining = remainingCoatSteps(input.steps, input);
   const none = { readiness, coatsRemaining: remaining.length, nextCoatAt: null, warnings: [] };
-  if (readiness.coatsTotal === 0) return { ...none, handleAt: null, packAt: null, projected: false, unknown: true };
+  if (readiness.coatsTotal === 0) {
+    // No finish system: the coats on record (if any) give the times; what else is to come is unknown.
+    const known = readiness.handleAt !== null;
+    return { ...none, handleAt: readiness.handleAt, packAt: readiness.packAt, projected: false, unknown: !known };
+  }
   if (remaining.length === 0) return { ...none, handleAt: readiness.handleAt, packAt: readiness.packAt, projected: false, unknown: false };
   const tail = input.steps.slice(remaining[0]).flatMap((step, offset): SystemTimeStep[] => {
     const index = remaining[0] + offset;

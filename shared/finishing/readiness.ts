@@ -21,6 +21,12 @@ export type ReadinessState = (typeof readinessStates)[number];
 export type ReadinessInput = {
   steps: FinishStep[];
   coats: PartCoat[];
+  /**
+   * Coats on record that match no coat step of the finish system (the job has none, or had none
+   * when they were sprayed). A part whose job has no finish system takes its state and its handle,
+   * pack and cure times from the latest of them; with a system they are not counted.
+   */
+  unplannedCoats?: (CoatInstants & { sprayedAt: Date })[];
   /** When the part was denibbed or scuffed (denib records); only an abrade after the latest coat counts, or any before the first. */
   abradedAt?: Date[];
   collectedAt?: Date | null;
@@ -66,6 +72,7 @@ export function partReadiness(input: ReadinessInput): PartReadiness {
     packAt: last?.packAt ?? null,
     fullCureAt: last?.fullCureAt ?? null,
   };
+  if (coatSteps.length === 0 && input.unplannedCoats?.length) return withoutSystem(input.unplannedCoats, collected, now);
   if (!last) return { ...shared, ...beforeFirstCoat(input), state: collected ? 'collected' : 'waiting' };
   const nextCoat = coatSteps.find((index) => index > last.stepIndex && !doneSteps.has(index));
   if (nextCoat === undefined) {
@@ -73,6 +80,25 @@ export function partReadiness(input: ReadinessInput): PartReadiness {
     return { ...shared, ...move, state: collected ? 'collected' : dryingStateAt(last, now) };
   }
   return { ...shared, ...betweenCoats(input, last, nextCoat), state: collected ? 'collected' : 'in-finish' };
+}
+
+/** A part with no finish system: its coats still dry, so it is handled, packed and cured from the latest one. */
+function withoutSystem(coats: NonNullable<ReadinessInput['unplannedCoats']>, collected: boolean, now: Date): PartReadiness {
+  coats.forEach((coat, i) => requireInstant(`unplannedCoats.${i}.sprayedAt`, coat.sprayedAt, 'when the coat was sprayed'));
+  const last = coats.reduce((latest, coat) => (coat.sprayedAt.getTime() > latest.sprayedAt.getTime() ? coat : latest));
+  return {
+    state: collected ? 'collected' : dryingStateAt(last, now),
+    coatsDone: coats.length,
+    coatsTotal: 0,
+    nextStep: null,
+    nextStepIndex: null,
+    nextWindow: null,
+    abradeRequired: false,
+    recoatWindowMissed: false,
+    handleAt: last.handleAt,
+    packAt: last.packAt,
+    fullCureAt: last.fullCureAt,
+  };
 }
 
 /** A system that starts by sanding the bare part asks for that first, until a sanding is on record. */

@@ -21,6 +21,8 @@ export type Checklist = z.infer<typeof checklistSchema>;
 export const checklistResultSchema = checklistSchema.extend({
   verdict: z.enum(['go', 'caution', 'stop']),
   problems: z.array(z.string()),
+  /** Readings within their limits but close to them: information, not problems (absent on checklists recorded before notes existed). */
+  notes: z.array(z.string()).optional(),
   completedAt: z.string(),
   completedByName: z.string(),
 });

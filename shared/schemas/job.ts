@@ -88,6 +88,8 @@ export const estimateSchema = z.object({
   areaM2: z.number(),
   transferEfficiencyPct: z.number(),
   method: z.string(),
+  /** The shop's currency (ISO 4217) that every cost is in; format with moneyWords (shared/words.ts). */
+  currency: z.string(),
   steps: z.array(
     z.object({
       position: z.number().int(),

@@ -59,8 +59,9 @@ export const productFieldsSchema = z.object({
   mixBaseParts: z.number().positive('Base parts must be more than 0').max(100),
   /** 0 for a one-component product. */
   mixHardenerParts: z.number().min(0, 'Hardener parts cannot be negative').max(100),
-  thinnerMinPct: z.number().min(0).max(100),
-  thinnerMaxPct: z.number().min(0).max(100),
+  /** The data sheet's thinning range; null when it gives none (then thinning is not checked). 0–0 means "do not thin". */
+  thinnerMinPct: z.number().min(0).max(100).nullable(),
+  thinnerMaxPct: z.number().min(0).max(100).nullable(),
   inductionMin: z.number().min(0).max(240),
   potLifeMin: optionalNumber(z.number().positive('Pot life must be more than 0').max(7 * 24 * 60)),
   dryFilmPerCoatUm: optionalNumber(z.number().positive('Dry film must be more than 0').max(1000)),
@@ -77,7 +78,11 @@ export const productFieldsSchema = z.object({
 type ProductChecks = Partial<z.infer<typeof productFieldsSchema>>;
 
 function checkProduct(product: ProductChecks, ctx: z.RefinementCtx): void {
-  if (product.thinnerMinPct !== undefined && product.thinnerMaxPct !== undefined && product.thinnerMaxPct < product.thinnerMinPct) {
+  const { thinnerMinPct: least, thinnerMaxPct: most } = product;
+  if (typeof least === 'number' && most === null) {
+    ctx.addIssue({ code: 'custom', message: 'Give the most thinner too, or leave both blank if the data sheet gives no range', path: ['thinnerMaxPct'] });
+  }
+  if (typeof least === 'number' && typeof most === 'number' && most < least) {
     ctx.addIssue({ code: 'custom', message: 'The most thinner cannot be less than the least', path: ['thinnerMaxPct'] });
   }
   const shrinking = product.dryingTimes ? timesShrinkingWithCold(product.dryingTimes) : null;
@@ -93,8 +98,8 @@ export const createProductSchema = productFieldsSchema
     densityKgPerL: f.densityKgPerL.default(null),
     mixBaseParts: f.mixBaseParts.default(1),
     mixHardenerParts: f.mixHardenerParts.default(0),
-    thinnerMinPct: f.thinnerMinPct.default(0),
-    thinnerMaxPct: f.thinnerMaxPct.default(0),
+    thinnerMinPct: f.thinnerMinPct.default(null),
+    thinnerMaxPct: f.thinnerMaxPct.default(null),
     inductionMin: f.inductionMin.default(0),
     potLifeMin: f.potLifeMin.default(null),
     dryFilmPerCoatUm: f.dryFilmPerCoatUm.default(null),
@@ -110,6 +115,12 @@ export const createProductSchema = productFieldsSchema
 export type CreateProductInput = z.input<typeof createProductSchema>;
 
 export const updateProductSchema = productFieldsSchema.partial().superRefine(checkProduct);
+
+/** The thinning range as stored: a missing least is 0; no range at all is 0–0, not given. */
+export function storedThinning(fields: { thinnerMinPct: number | null; thinnerMaxPct: number | null }): { thinnerMinPct: number; thinnerMaxPct: number; thinningRangeGiven: boolean } {
+  if (fields.thinnerMaxPct === null) return { thinnerMinPct: 0, thinnerMaxPct: 0, thinningRangeGiven: false };
+  return { thinnerMinPct: fields.thinnerMinPct ?? 0, thinnerMaxPct: fields.thinnerMaxPct, thinningRangeGiven: true };
+}
 export type UpdateProductInput = z.infer<typeof updateProductSchema>;
 
 export const lotSchema = z.object({
@@ -136,6 +147,11 @@ export const documentKinds = ['tds', 'sds'] as const;
 export const documentKindSchema = z.enum(documentKinds, { error: 'Say whether this is the technical or the safety data sheet' });
 
 export const productSchema = productFieldsSchema.extend({
+  /** 0 when the data sheet gives no range (see thinningRangeGiven), as before that flag existed. */
+  thinnerMinPct: z.number(),
+  thinnerMaxPct: z.number(),
+  /** False when the data sheet gives no thinning range: thinning is then not checked. */
+  thinningRangeGiven: z.boolean(),
   id: z.number().int(),
   lots: z.array(lotSchema),
   tdsFile: fileRefSchema.nullable(),

@@ -4,6 +4,10 @@ import { unitSystemSchema, requiredTextSchema } from './common';
 export const shopSettingsSchema = z.object({
   shopName: requiredTextSchema('Enter the shop name', 120),
   timezone: z.string().refine(isKnownTimeZone, 'Unknown timezone'),
+  /** How dates, times and numbers are written for the shop (BCP 47, e.g. en-GB). */
+  locale: z.string().max(35).refine(isKnownLocale, 'Give a language and region such as en-GB or de-DE'),
+  /** The currency prices and costs are in (ISO 4217, e.g. GBP). */
+  currency: z.string().refine(isKnownCurrency, 'Give a three-letter currency code such as GBP, EUR or USD'),
   defaultUnits: unitSystemSchema,
   planningDryingTempC: z.number().min(5).max(60),
   setupMin: z.number().int().min(0).max(240),
@@ -19,6 +23,18 @@ export const shopSettingsSchema = z.object({
 });
 export type ShopSettings = z.infer<typeof shopSettingsSchema>;
 export const updateShopSettingsSchema = shopSettingsSchema.partial();
+
+function isKnownLocale(locale: string): boolean {
+  try {
+    return Intl.getCanonicalLocales(locale).length === 1;
+  } catch {
+    return false;
+  }
+}
+
+function isKnownCurrency(code: string): boolean {
+  return /^[A-Z]{3}$/.test(code) && Intl.supportedValuesOf('currency').includes(code);
+}
 
 function isKnownTimeZone(zone: string): boolean {
   try {

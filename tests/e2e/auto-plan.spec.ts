@@ -25,8 +25,8 @@ test('a lead auto-plans a job’s coats and books them all at once', async ({ pa
   await dialog.getByRole('button', { name: 'Propose a plan' }).click();
   await expect(dialog.getByText('Nothing to book: every chosen job is finished, already booked, or could not be fitted (see above).')).toBeVisible();
   const job = dialog.getByRole('list', { name: 'Jobs in the proposal' });
-  await expect(job).toContainText('Step 1 (Kestrel 2K PU Primer White) is already booked');
-  await expect(job).toContainText('Step 4 (Kestrel 2K PU Topcoat Satin) is already booked');
+  await expect(job).toContainText('Coat 1 of 3 (Kestrel 2K PU Primer White) is already booked');
+  await expect(job).toContainText('Coat 3 of 3 (Kestrel 2K PU Topcoat Satin) is already booked');
 });
 
 test('a sprayer has no auto-plan button', async ({ page }) => {

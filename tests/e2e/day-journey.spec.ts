@@ -53,7 +53,7 @@ test('a lead plans, a sprayer sprays and an assembler collects a job in one day,
   const proposed = autoPlan.getByRole('table', { name: 'Proposed spray sessions' });
   await expect(proposed.getByRole('row')).toHaveCount(2);
   await expect(proposed).toContainText(topcoat);
-  await expect(autoPlan.getByRole('list', { name: 'Jobs in the proposal' })).toContainText(`Step 1 (${primer}) is already booked`);
+  await expect(autoPlan.getByRole('list', { name: 'Jobs in the proposal' })).toContainText(`Coat 1 of 2 (${primer}) is already booked`);
   await autoPlan.getByRole('button', { name: 'Book this session' }).click();
   await expect(lead.getByText('Booked 1 spray session')).toBeVisible();
 

@@ -88,7 +88,7 @@ test.describe('spray session', () => {
     // The wrong mask for an isocyanate primer: stop, and spraying cannot start.
     await fillChecklist(page, /vapour and particulate filters/);
     await expect(page.getByText('Stop: do not spray')).toBeVisible();
-    await expect(page.getByText('The products need air fed protection, more than vapour and particulate.')).toBeVisible();
+    await expect(page.getByText('These products need air-fed protection; a respirator with vapour and particulate filters is not enough.')).toBeVisible();
     await expect(page.getByText(/Dew point\s*9\.3 °C/)).toBeVisible();
     const start = page.getByRole('button', { name: 'Start spraying' });
     await expect(start).toBeDisabled();

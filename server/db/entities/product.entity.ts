@@ -39,6 +39,10 @@ export class ProductEntity {
   @Column({ type: 'double precision', default: 0 })
   thinnerMaxPct: number;
 
+  /** False when the data sheet gives no thinning range (min and max are then 0 and not checked). */
+  @Column({ type: 'boolean', default: true })
+  thinningRangeGiven: boolean;
+
   @Column({ type: 'double precision', default: 0 })
   inductionMin: number;
 

@@ -16,6 +16,12 @@ export class ShopSettingsEntity {
   @Column({ type: 'varchar', length: 10 })
   defaultUnits: UnitSystem;
 
+  @Column({ type: 'varchar', length: 35, default: 'en-GB' })
+  locale: string;
+
+  @Column({ type: 'varchar', length: 3, default: 'GBP' })
+  currency: string;
+
   @Column({ type: 'double precision' })
   planningDryingTempC: number;
 

@@ -43,7 +43,7 @@ async function addPart(dataSource: DataSource, jobId: number, label: string, coa
   return part.id;
 }
 
-async function addSession(dataSource: DataSource, boothId: number, start: string, end: string, extra: Partial<SpraySessionEntity> = {}): Promise<number> {
+export async function addSession(dataSource: DataSource, boothId: number, start: string, end: string, extra: Partial<SpraySessionEntity> = {}): Promise<number> {
   const row = await dataSource.getRepository(SpraySessionEntity).save({
     boothId, startAt: iso(start), endAt: iso(end), sprayerId: null, state: 'done', notes: '', checklist: null, overrideReason: null,
     sprayingStartedAt: null, clearingStartedAt: null, createdAt: iso(start), updatedAt: iso(start), ...extra,
@@ -56,7 +56,7 @@ interface CoatRow {
   air: number; surface: number; rh: number; dew: number; replaces?: number; reason?: string; rework?: CoatEntity['reworkReason'];
 }
 
-async function addCoat(dataSource: DataSource, c: CoatRow): Promise<number> {
+export async function addCoat(dataSource: DataSource, c: CoatRow): Promise<number> {
   const at = iso(c.at);
   const coat = await dataSource.getRepository(CoatEntity).save({
     spraySessionId: c.session, productId: c.product, lotId: null, stepPosition: c.step, mixId: null, sprayedAt: at,
@@ -65,7 +65,7 @@ async function addCoat(dataSource: DataSource, c: CoatRow): Promise<number> {
     warnings: [], notes: '', reworkReason: c.rework ?? null, version: c.replaces ? 2 : 1, replacesId: c.replaces ?? null, correctionReason: c.reason ?? null,
     recordedById: null, recordedByName: 'Fixture', recordedAt: at, idempotencyKey: null,
   });
-  await dataSource.getRepository(CoatPartEntity).insert(c.parts.map((partId) => ({ coatId: coat.id, partId })));
+  if (c.parts.length) await dataSource.getRepository(CoatPartEntity).insert(c.parts.map((partId) => ({ coatId: coat.id, partId })));
   return coat.id;
 }
 

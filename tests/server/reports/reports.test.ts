@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
-import { buildReportFixture, type ReportFixture } from './report-fixture';
+import { addCoat, addSession, buildReportFixture, type ReportFixture } from './report-fixture';
 
 // Every expected value below is worked by hand from the rows in report-fixture.ts (sums of the
 // fixture's areas, hours and litres); no figure comes from running the code under test.
@@ -82,6 +82,20 @@ describe('conditions', () => {
     expect(report.points.map((p: { at: string }) => p.at)).toEqual(['2025-03-24', '2025-03-26']);
     await lead.agent.get('/api/reports/conditions?from=2025-03-01&to=2025-03-31&boothId=9999').expect(404);
   });
+
+  it('lists a coat as outside only below the 3 °C dew-point margin, not one just above it', async () => {
+    // The design limit is a surface at least 3 °C above the dew point (ISO 8502-4 practice; coating
+    // application guides, secondary sources). Surface 12.7 and 12.5 °C over a 9.6 °C dew point: 3.1 and 2.9 °C.
+    // The fixture topcoat's data sheet gives no temperature or humidity limits, so only the margin can bite.
+    const session = await addSession(ctx.dataSource, fx.booth2, '2025-05-12T08:00:00Z', '2025-05-12T12:00:00Z');
+    const within = { session, product: fx.topcoat, parts: [], step: null, air: 20, rh: 50, dew: 9.6 };
+    await addCoat(ctx.dataSource, { ...within, at: '2025-05-12T09:00:00Z', surface: 12.7 });
+    const below = await addCoat(ctx.dataSource, { ...within, at: '2025-05-12T10:00:00Z', surface: 12.5 });
+    const report = await get(`/api/reports/conditions?from=2025-05-12&to=2025-05-12&boothId=${fx.booth2}`);
+    expect(report.coatCount).toBe(2);
+    expect(report.coatsOutside).toEqual([expect.objectContaining({ coatId: below, dewPointMarginC: 2.9, reasons: ['dew-point-margin'] })]);
+    expect(report.points.map((p: { dewPointMarginC: number }) => p.dewPointMarginC)).toEqual([3.1, 2.9]);
+  });
 });
 
 describe('solvent and VOC', () => {
@@ -127,11 +141,18 @@ describe('rework', () => {
 });
 
 describe('CSV, ranges and roles', () => {
-  it('exports the table as CSV', async () => {
+  it('exports the table as CSV with headers people read', async () => {
     const res = await lead.agent.get('/api/reports/solvent?from=2025-03-01&to=2025-04-30&format=csv').expect(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/boothwright-solvent-2025-03-01-to-2025-04-30\.csv/);
-    expect(res.text.split('\r\n')).toEqual(['month,litres,voc_kg,running_total_kg,threshold_kg,litres_without_voc', '2025-03,4,1.26,1.68,150,1', '2025-04,2,0.84,2.52,150,0', '']);
+    expect(res.text.split('\r\n')).toEqual(['Month,Litres mixed,VOC (kg),VOC this year (kg),Yearly threshold (kg),Litres without a VOC figure', '2025-03,4,1.26,1.68,150,1', '2025-04,2,0.84,2.52,150,0', '']);
+  });
+
+  it('names a coat outside limits by its time and product, with its reasons in words, never its id', async () => {
+    const res = await lead.agent.get(`/api/reports/conditions?from=2025-03-24&to=2025-03-24&boothId=${fx.booth1}&format=csv`).expect(200);
+    const lines = res.text.split('\r\n');
+    expect(lines[0]).toBe('Time,Row,Readings,Air (°C),Relative humidity (%),Surface above dew point (°C),Product,Outside limits because');
+    expect(lines).toContain('2025-03-24T10:00:00.000Z,coat outside limits,,12,85,2.4,Fixture primer,air too cold; surface too cold; humidity too high; surface too close to the dew point');
   });
 
   it('refuses a backwards or too long range with field messages', async () => {

@@ -1,5 +1,6 @@
 import psychrolib from 'psychrolib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dewPointC } from '../../../shared/finishing/conditions';
 import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
 
 let ctx: TestContext;
@@ -77,6 +78,20 @@ describe('POST /api/coats', () => {
     expect(codes).toEqual(expect.arrayContaining(['relative-humidity', 'dew-point-margin']));
     const humidity = res.body.coat.warnings.find((w: { code: string }) => w.code === 'relative-humidity');
     expect(humidity.acknowledgedReason).toBe('Dehumidifier running, lead agreed');
+  });
+
+  it('records a coat 3.1 °C above the dew point with no warning: the limit is 3 °C', async () => {
+    // Design limit: surface at least 3 °C above the dew point (ISO 8502-4 practice; trade-reference §1.2).
+    // Dew point at 20 °C / 50 % RH from the shared Magnus formula, checked against PsychroLib in conditions.test.ts.
+    const surfaceTempC = Math.round((dewPointC(20, 50) + 3.1) * 100) / 100;
+    // Two first coats on parts of another job, so no recoat window or film target comes into it.
+    const job = (await lead.agent.get('/api/jobs?q=LJ-26-101')).body.items[0];
+    const [first, second] = (await lead.agent.get(`/api/jobs/${job.id}/parts`)).body.items.map((p: { id: number }) => p.id);
+    const sent = (partId: number, surface: number) => coat({ partIds: [partId], sprayedAt: '2027-03-01T11:35:00Z', surfaceTempC: surface, wetFilmUm: null });
+    const res = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(sent(first, surfaceTempC)).expect(201);
+    expect(res.body.coat.warnings).toEqual([]);
+    const below = await sprayer.agent.post('/api/coats').set('x-csrf-token', sprayer.csrf).send(sent(second, surfaceTempC - 0.2)).expect(201);
+    expect(below.body.coat.warnings.map((w: { code: string }) => w.code)).toEqual(['dew-point-margin']);
   });
 
   it('returns the first record, not a second, when a device resends with the same idempotency key', async () => {

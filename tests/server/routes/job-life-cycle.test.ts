@@ -141,4 +141,20 @@ describe('GET /api/ready', () => {
     const bad = await assembler.agent.get('/api/ready?collectedDays=400').expect(400);
     expect(bad.body.error.fields).toHaveProperty('collectedDays');
   });
+
+  it('dries a part whose job has no finish system from its coats: handle, pack and cure times on the board', async () => {
+    at('2027-04-16T09:00:00Z');
+    const created = await post(lead, '/api/jobs', { customer: 'Life Cycle Ltd', reference: 'LC-7', dueDate: '2027-04-20', finishSystemId: null }).expect(201);
+    const partId = (await post(lead, `/api/jobs/${created.body.job.id}/parts`, { label: 'Loose panel', lengthMm: 800, widthMm: 400, thicknessMm: 18, rackId, shelf: 9 }).expect(201)).body.part.id;
+    await coat([partId], '2027-04-16T09:00:00Z');
+    at('2027-04-16T10:00:00Z');
+    const board = (await assembler.agent.get(`/api/ready?jobId=${created.body.job.id}`).expect(200)).body;
+    // The demo primer's 20 °C row: handle 180 min, pack 480 min, full cure 168 h after the coat.
+    expect(board.items[0]).toMatchObject({ state: 'drying', coatsDone: 1, coatsTotal: 0, handleAt: '2027-04-16T12:00:00.000Z', packAt: '2027-04-16T17:00:00.000Z', fullCureAt: '2027-04-23T09:00:00.000Z' });
+    expect(board.jobs[0]).toMatchObject({ handleAt: '2027-04-16T12:00:00.000Z', packAt: '2027-04-16T17:00:00.000Z', partsUnknown: 0 });
+    at('2027-04-16T12:00:00Z');
+    const later = (await assembler.agent.get(`/api/ready?jobId=${created.body.job.id}`).expect(200)).body;
+    expect(later.items[0]).toMatchObject({ state: 'ready-to-handle' });
+    expect(await job(created.body.job.id)).toMatchObject({ state: 'in-finish' });
+  });
 });

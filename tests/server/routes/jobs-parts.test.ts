@@ -95,6 +95,8 @@ describe('GET /api/jobs/:id/estimate', () => {
     const res = await agent.get(`/api/jobs/${jobs.body.items[0].id}/estimate?method=hvlp`).expect(200);
     const { estimate } = res.body;
     expect(estimate.transferEfficiencyPct).toBe(60);
+    // Costs are in the shop's currency, from its settings.
+    expect(estimate.currency).toBe('GBP');
     expect(estimate.steps.map((s: { productName: string }) => s.productName)).toEqual(['Kestrel 2K PU Primer White', 'Kestrel 2K PU Topcoat Satin', 'Kestrel 2K PU Topcoat Satin']);
     // Primer: area × DFT / (VS × 10 × TE) — the spreading-rate relation of the film module.
     const primer = estimate.steps[0];

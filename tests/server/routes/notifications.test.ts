@@ -47,6 +47,10 @@ describe('e-mail notifications', () => {
     await waitFor(() => runtime.mailbox!.messages.some((m) => m.subject.startsWith('Spray session booked')));
     const mail = runtime.mailbox!.messages.find((m) => m.subject.startsWith('Spray session booked'))!;
     expect(mail.to).toContain('sprayer@larchmere.test');
+    // Named as people name it: the booth and its shop time (en-GB, no zone name), with a link to its page.
+    expect(mail.subject).toMatch(/^Spray session booked or moved: Mail booth, \w{3} \d{1,2} \w{3}, \d\d:\d\d–\d\d:\d\d$/);
+    expect(mail.text).toContain(`${ctx.config.publicUrl}/spray-sessions/${sessionId}`);
+    expect(`${mail.subject} ${mail.text}`).not.toMatch(/GMT|BST|session \d|\d{4}-\d\d-\d\d/);
   });
 
   it('sends "ready to handle" once the last coat can be handled, not before', async () => {
@@ -63,6 +67,9 @@ describe('e-mail notifications', () => {
     expect(ready.map((m) => m.to).join(' ')).toMatch(/assembler@larchmere.test/);
     expect(ready[0].subject).toContain('LJ-26-102');
     expect(ready[0].text).toContain('Drawer 1 front');
+    // Which coat, of what, where and when, and a link to the board.
+    expect(ready[0].text).toMatch(/^2 parts of LJ-26-102 \(Morrow & Daughters Cabinetmakers\) can be handled since \w{3} \d{1,2} \w{3}, 10:00, after coat 2 of 2 \(Kestrel Precat Clear Matt\), sprayed in Mail booth on \w{3} \d{1,2} \w{3}, 09:00:/);
+    expect(ready[0].text).toMatch(/\/ready\?jobId=\d+\s*$/);
     expect(runtime.mailbox!.messages.length).toBeGreaterThan(before);
   });
 
@@ -90,7 +97,9 @@ describe('e-mail notifications', () => {
     await waitFor(() => runtime.mailbox!.messages.some((m) => m.subject.startsWith('Recoat window closing')));
     const warning = runtime.mailbox!.messages.find((m) => m.subject.startsWith('Recoat window closing'))!;
     expect(warning.subject).toContain('LJ-26-105');
-    expect(warning.text).toMatch(/P320/);
+    expect(warning.text).toContain('they need a denib with P320 first');
+    expect(warning.text).toMatch(/after coat 1 of \d \(Kestrel 2K PU Primer White\), sprayed in Mail booth on/);
+    expect(warning.text).toContain(`${ctx.config.publicUrl}/jobs/${job.id}`);
   });
 
   it('sends nothing twice after a restart, and still sends what fell due while it was down', async () => {

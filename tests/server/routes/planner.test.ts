@@ -78,7 +78,7 @@ describe('proposals start from what is booked and what is sprayed', () => {
 
     const again = await propose();
     expect(again.sessions.map((s) => s.stepPosition)).toEqual([2]);
-    expect(again.jobs[0].notes[0]).toMatch(/^Step 1 \(Kestrel Sanding Sealer NC\) is already booked/);
+    expect(again.jobs[0].notes[0]).toMatch(/^Coat 1 of \d \(Kestrel Sanding Sealer NC\) is already booked \w{3} \d{1,2} \w{3}, \d\d:\d\d; not proposed again\.$/);
     // The sealer's recoat opens 30 min after it goes on at 20 °C (its data sheet row), then a 30 min denib.
     expect(Date.parse(again.sessions[0].start) - Date.parse(sealerSession.end)).toBeGreaterThanOrEqual(60 * 60_000);
   });

@@ -50,6 +50,32 @@ describe('POST /api/products', () => {
   });
 });
 
+describe('the thinning range', () => {
+  it('is "not given" when left out or blank, "do not thin" at 0–0 %, and can be cleared again', async () => {
+    const { agent, csrf } = await signIn(ctx.app, demo.lead);
+    const create = async (name: string, extra: object) => (await agent.post('/api/products').set('x-csrf-token', csrf).send({ ...newProduct, name, ...extra }).expect(201)).body.product;
+    expect(await create('No range', {})).toMatchObject({ thinnerMinPct: 0, thinnerMaxPct: 0, thinningRangeGiven: false });
+    expect(await create('Blank range', { thinnerMinPct: null, thinnerMaxPct: null })).toMatchObject({ thinningRangeGiven: false });
+    expect(await create('Do not thin', { thinnerMinPct: 0, thinnerMaxPct: 0 })).toMatchObject({ thinnerMinPct: 0, thinnerMaxPct: 0, thinningRangeGiven: true });
+    const upTo = await create('Up to 10', { thinnerMaxPct: 10 });
+    expect(upTo).toMatchObject({ thinnerMinPct: 0, thinnerMaxPct: 10, thinningRangeGiven: true });
+    const cleared = await agent.patch(`/api/products/${upTo.id}`).set('x-csrf-token', csrf).send({ thinnerMinPct: null, thinnerMaxPct: null }).expect(200);
+    expect(cleared.body.product).toMatchObject({ thinnerMinPct: 0, thinnerMaxPct: 0, thinningRangeGiven: false });
+    const untouched = await agent.patch(`/api/products/${upTo.id}`).set('x-csrf-token', csrf).send({ makerRef: 'X-1' }).expect(200);
+    expect(untouched.body.product).toMatchObject({ makerRef: 'X-1', thinningRangeGiven: false });
+    const again = await agent.patch(`/api/products/${upTo.id}`).set('x-csrf-token', csrf).send({ thinnerMinPct: 5, thinnerMaxPct: 15 }).expect(200);
+    expect(again.body.product).toMatchObject({ thinnerMinPct: 5, thinnerMaxPct: 15, thinningRangeGiven: true });
+  });
+
+  it('answers 400 on the most thinner when only the least is given, or the most is below it', async () => {
+    const { agent, csrf } = await signIn(ctx.app, demo.lead);
+    const half = await agent.post('/api/products').set('x-csrf-token', csrf).send({ ...newProduct, name: 'Half range', thinnerMinPct: 5 }).expect(400);
+    expect(half.body.error.fields.thinnerMaxPct).toMatch(/leave both blank/);
+    const backwards = await agent.post('/api/products').set('x-csrf-token', csrf).send({ ...newProduct, name: 'Backwards', thinnerMinPct: 10, thinnerMaxPct: 5 }).expect(400);
+    expect(backwards.body.error.fields.thinnerMaxPct).toMatch(/cannot be less than the least/);
+  });
+});
+
 describe('GET /api/products', () => {
   it('searches, sorts and pages on the server', async () => {
     const { agent } = await signIn(ctx.app, demo.sprayer);

@@ -38,7 +38,7 @@ describe('the pre-spray checklist', () => {
     // The planned step is the demo 2K PU primer, which contains isocyanate: air-fed protection.
     const res = await patch(sprayer, { checklist: { ...goodChecklist, respiratorKind: 'vapour-and-particulate' } }).expect(200);
     expect(res.body.spraySession.checklist.verdict).toBe('stop');
-    expect(res.body.spraySession.checklist.problems.join(' ')).toMatch(/air fed/);
+    expect(res.body.spraySession.checklist.problems.join(' ')).toMatch(/These products need air-fed protection; a respirator with vapour and particulate filters is not enough\./);
     await patch(sprayer, { state: 'spraying' }).expect(409);
     await patch(sprayer, { checklist: { ...goodChecklist, respiratorKind: 'vapour-and-particulate', overrideReason: 'I say so' } }).expect(403);
   });

@@ -16,13 +16,14 @@ afterAll(async () => ctx.close());
 const book = (who: SignedIn, body: object) => who.agent.post('/api/spray-sessions').set('x-csrf-token', who.csrf).send(body);
 
 describe('POST /api/spray-sessions', () => {
-  it('books a slot and answers 409 naming the session when another overlaps it', async () => {
+  it('books a slot and answers 409 naming the booth and the session’s time in shop time when another overlaps it', async () => {
     const first = await book(lead, { boothId, start: '2027-03-01T09:00:00Z', end: '2027-03-01T10:00:00Z' }).expect(201);
     expect(first.body.spraySession).toMatchObject({ boothId, state: 'planned', start: '2027-03-01T09:00:00.000Z', sprayerId: null });
     const clash = await book(lead, { boothId, start: '2027-03-01T09:30:00+00:00', end: '2027-03-01T11:00:00+00:00' }).expect(409);
     expect(clash.body.error.code).toBe('conflict');
-    // Europe/London in March is GMT: the clash reads "Mon 1 Mar, 09:00–10:00 (spray session N)".
-    expect(clash.body.error.message).toContain(`Mon 1 Mar, 09:00–10:00 (spray session ${first.body.spraySession.id})`);
+    // Europe/London in March is GMT, the shop's locale en-GB: the clash reads "Mon 1 Mar, 09:00–10:00", no id, no zone.
+    expect(clash.body.error.message).toMatch(/ is already booked Mon 1 Mar, 09:00–10:00$/);
+    expect(clash.body.error.message).not.toMatch(/spray session|GMT|\d{4}-\d\d/);
     // Touching ends do not overlap.
     await book(lead, { boothId, start: '2027-03-01T10:00:00Z', end: '2027-03-01T10:30:00Z' }).expect(201);
   });
@@ -50,10 +51,13 @@ describe('POST /api/spray-sessions', () => {
     await book(lead, { boothId: 2, start: '2027-03-22T06:30:00Z', end: '2027-03-22T07:30:00Z' }).expect(409);
   });
 
-  it('refuses to book one sprayer in two booths at once', async () => {
-    await book(lead, { boothId, start: '2027-03-03T09:00:00Z', end: '2027-03-03T10:00:00Z', sprayerId: 3 }).expect(201);
+  it('refuses to book one sprayer in two booths at once, naming the other booking by booth, start and job', async () => {
+    const job = (await lead.agent.get('/api/jobs?q=LJ-26-105')).body.items[0];
+    const partId = (await lead.agent.get(`/api/jobs/${job.id}/parts`)).body.items[1].id;
+    await book(lead, { boothId, start: '2027-03-03T09:00:00Z', end: '2027-03-03T10:00:00Z', sprayerId: 3, items: [{ partId, stepPosition: null }] }).expect(201);
     const res = await book(lead, { boothId: 1, start: '2027-03-03T09:30:00Z', end: '2027-03-03T10:30:00Z', sprayerId: 3 }).expect(409);
     expect(res.body.error.fields).toHaveProperty('sprayerId');
+    expect(res.body.error.message).toMatch(/^Mina Castell is already booked then: .+ from Wed 3 Mar, 09:00 for LJ-26-105$/);
   });
 
   it('answers 400 for an end before the start and for times without an offset', async () => {

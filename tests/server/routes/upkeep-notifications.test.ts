@@ -31,7 +31,9 @@ describe('due-soon e-mails', () => {
     const subjects = mails('lead@larchmere.test', /Booth upkeep/).map((m) => m.subject);
     expect(subjects).toEqual(expect.arrayContaining(['Booth upkeep: Booth 1 (cross-draft), filter near limit', 'Booth upkeep: Back spray room, extraction test due soon']));
     const extraction = mails('lead@larchmere.test', /extraction test due soon/)[0];
-    expect(extraction.text).toMatch(/Due on \d{4}-\d{2}-\d{2}/);
+    // A date in the shop's locale (en-GB), never ISO; and a link to the upkeep page.
+    expect(extraction.text).toMatch(/Due on \w{3}, \d{1,2} \w{3} \d{4}\./);
+    expect(extraction.text).toContain(`${ctx.config.publicUrl}/upkeep`);
     expect(extraction.text).toContain('Follow your local regulations');
     // The sprayer did not ask for upkeep e-mails (their default), and a second tick sends nothing again.
     expect(mails('sprayer@larchmere.test', /Booth upkeep/)).toEqual([]);
@@ -44,10 +46,10 @@ describe('due-soon e-mails', () => {
   it('tells the sprayer their own fit test is due with its date, and the lead only that it is due', async () => {
     const own = mails('sprayer@larchmere.test', /Your records/);
     expect(own.map((m) => m.subject)).toEqual(['Your records: The face-fit test is due soon.']);
-    expect(own[0].text).toMatch(/Your face-fit test is due soon\. It is due on \d{4}-\d{2}-\d{2}\./);
+    expect(own[0].text).toMatch(/Your face-fit test is due soon\. It is due on \w{3}, \d{1,2} \w{3} \d{4}\./);
     const forLead = mails('lead@larchmere.test', /Crew records: Mina Castell/);
     expect(forLead).toHaveLength(1);
-    expect(forLead[0].text.trim()).toBe('Mina Castell: their face-fit test is due soon.');
+    expect(forLead[0].text.trim()).toBe(`Mina Castell: their face-fit test is due soon.\n\nCrew records: ${ctx.config.publicUrl}/crew`);
   });
 
   it('sends nothing to someone who turned the e-mail off', async () => {

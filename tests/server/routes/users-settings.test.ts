@@ -66,4 +66,14 @@ describe('/api/settings', () => {
     const res = await admin.agent.patch('/api/settings').set('x-csrf-token', admin.csrf).send({ timezone: 'Mars/Olympus' }).expect(400);
     expect(res.body.error.fields.timezone).toBe('Unknown timezone');
   });
+
+  it('keeps the shop’s locale and currency (en-GB and GBP until changed), refusing ones that do not exist', async () => {
+    const admin = await signIn(ctx.app, demo.admin);
+    expect((await admin.agent.get('/api/settings').expect(200)).body.settings).toMatchObject({ locale: 'en-GB', currency: 'GBP' });
+    const changed = await admin.agent.patch('/api/settings').set('x-csrf-token', admin.csrf).send({ locale: 'de-DE', currency: 'EUR' }).expect(200);
+    expect(changed.body.settings).toMatchObject({ locale: 'de-DE', currency: 'EUR' });
+    const bad = await admin.agent.patch('/api/settings').set('x-csrf-token', admin.csrf).send({ locale: 'not a locale!', currency: 'XYZ1' }).expect(400);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual(['currency', 'locale']);
+    await admin.agent.patch('/api/settings').set('x-csrf-token', admin.csrf).send({ locale: 'en-GB', currency: 'GBP' }).expect(200);
+  });
 });

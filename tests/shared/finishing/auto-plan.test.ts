@@ -77,7 +77,7 @@ describe('autoPlan', () => {
   it('says in words when a due date is missed and when a step cannot fit', () => {
     const late = autoPlan(input({ jobs: [job({ dueDate: '2027-01-03' })] }));
     expect(late.jobs[0].dueDateMet).toBe(false);
-    expect(late.jobs[0].notes.join(' ')).toMatch(/after the due date 2027-01-03/);
+    expect(late.jobs[0].notes.join(' ')).toMatch(/after the due date Sun, 3 Jan 2027/);
     const closed = autoPlan(input({ booths: [{ id: 7, name: 'B', openingHours: [{ weekday: 6, opens: '07:00', closes: '07:30' }], sprayRateM2PerH: 24 }] }));
     expect(closed.sessions).toHaveLength(0);
     expect(closed.jobs[0].notes[0]).toMatch(/no free booth time/);
@@ -106,7 +106,7 @@ describe('autoPlan, starting from what is on record and booked', () => {
     // The booked primer ends 14:05; its window opens 120 min later at 16:05, the denib makes it 16:35,
     // and 16:35 + 65 min runs past the 17:00 close, so the topcoat goes first thing Tuesday, 07:00–08:05.
     expect(slots(plan)).toEqual([[2, '2027-01-05T07:00:00.000Z', '2027-01-05T08:05:00.000Z']]);
-    expect(plan.jobs[0].notes[0]).toBe('Step 1 (Primer) is already booked 2027-01-04 13:00; not proposed again.');
+    expect(plan.jobs[0].notes[0]).toBe('Coat 1 of 2 (Primer) is already booked Mon 4 Jan, 13:00; not proposed again.');
     // Pack 480 min after Tuesday 08:05 = 16:05.
     expect(plan.jobs[0].finishesAt).toEqual(at('2027-01-05T16:05:00Z'));
   });
@@ -135,7 +135,7 @@ describe('autoPlan, starting from what is on record and booked', () => {
     const plan = autoPlan(input({ jobs: [job({ steps: [primer, topcoat], parts: [part(1, [missed]), part(2, [missed])] })] }));
     // The first free slot (08:00) is after the 07:00 close, so the 30 min denib comes first: 08:30.
     expect(slots(plan)).toEqual([[2, '2027-01-04T08:30:00.000Z', '2027-01-04T09:35:00.000Z']]);
-    expect(plan.jobs[0].notes[0]).toMatch(/recoat window closes \(2027-01-04 07:00\); the plan adds a P320 denib first/);
+    expect(plan.jobs[0].notes[0]).toMatch(/^Coat 2 of 2 \(Topcoat\): no booth time before the recoat window closes \(Mon 4 Jan, 07:00\); the plan adds a denib with P320 first/);
   });
 
   it('reads the job’s finish from its bookings when every remaining coat is booked', () => {
@@ -156,6 +156,6 @@ describe('autoPlan, starting from what is on record and booked', () => {
       { stepPosition: 2, start: at('2027-01-04T09:30:00Z'), end: at('2027-01-04T10:35:00Z'), partIds: [1, 2] },
     ];
     const plan = autoPlan(input({ jobs: [job({ booked })] }));
-    expect(plan.jobs[0].notes).toContain('That session starts before the previous coat’s recoat window opens (2027-01-04 11:05).');
+    expect(plan.jobs[0].notes).toContain('That session starts before the previous coat’s recoat window opens (Mon 4 Jan, 11:05).');
   });
 });

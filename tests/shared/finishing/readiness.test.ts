@@ -28,6 +28,16 @@ const coat = (stepIndex: number, sprayedAt: Date, dryingTimes: DryingTimes = tim
 });
 
 describe('partReadiness', () => {
+  it('dries a part with no finish system from its latest coat', () => {
+    // Times from the coat itself (coatTimes: sprayed + handle 120 min, pack 720 min, cure 168 h).
+    const loose = [coatTimes(start, times), coatTimes(hours(1), times)].map((t, i) => ({ ...t, sprayedAt: i === 0 ? start : hours(1) }));
+    expect(partReadiness({ steps: [], coats: [], unplannedCoats: loose, now: hours(2) })).toMatchObject({ state: 'drying', coatsDone: 2, coatsTotal: 0, nextStep: null, handleAt: hours(3), packAt: hours(13), fullCureAt: hours(169) });
+    expect(partReadiness({ steps: [], coats: [], unplannedCoats: loose, now: hours(3) }).state).toBe('ready-to-handle');
+    expect(partReadiness({ steps: [], coats: [], unplannedCoats: [], now: hours(3) })).toMatchObject({ state: 'waiting', coatsDone: 0, handleAt: null });
+    // With a finish system, coats outside it do not count.
+    expect(partReadiness({ steps, coats: [], unplannedCoats: loose, now: hours(2) })).toMatchObject({ state: 'waiting', coatsDone: 0 });
+  });
+
   it('is waiting before the first coat', () => {
     const result = partReadiness({ steps, coats: [], now: start });
     expect(result).toMatchObject({ state: 'waiting', coatsDone: 0, coatsTotal: 3, nextStepIndex: 0, abradeRequired: false, handleAt: null });

@@ -1,0 +1,118 @@
+/**
+ * The words Boothwright shows people, one per thing, in one place: screens, e-mails, CSV headers
+ * and API messages take them from here. The trade's own terms: coat, denib, flash-off, recoat
+ * window, pot life, dry film. Things are named as people name them (booth and start time, job
+ * reference, coat n of m, product and mixing time), never by a database id.
+ */
+import type { RespiratorLevel } from './finishing/cautions';
+
+export const terms = {
+  coat: 'coat',
+  denib: 'denib',
+  flashOff: 'flash-off',
+  recoatWindow: 'recoat window',
+  potLife: 'pot life',
+  dryFilm: 'dry film',
+  wetFilm: 'wet film',
+  spraySession: 'spray session',
+  mix: 'mix',
+  dewPoint: 'dew point',
+  clearanceTime: 'clearance time',
+} as const;
+
+/** How the shop reads dates, times and money: its timezone, its locale (BCP 47) and its currency (ISO 4217). */
+export type ShopFormat = { timeZone: string; locale: string };
+
+/** The format of a shop's settings. */
+export const shopFormatOf = (settings: { timezone: string; locale: string }): ShopFormat => ({ timeZone: settings.timezone, locale: settings.locale });
+
+export const upperFirst = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
+/** "coat 2 of 3": the coat's place among the coat steps of its finish system. */
+export function coatOfWords(coatNumber: number, coatsTotal: number): string {
+  return coatsTotal > 0 ? `coat ${coatNumber} of ${coatsTotal}` : `coat ${coatNumber}`;
+}
+
+/** "denib with P320": sanding between coats. */
+export const denibWords = (grit: string) => `denib with ${grit}`;
+
+/** "Denib with P320 needed". */
+export const denibNeededWords = (grit: string) => `${upperFirst(denibWords(grit))} needed`;
+
+/** "1 part", "3 parts". */
+export const partsWords = (count: number) => `${count} ${count === 1 ? 'part' : 'parts'}`;
+
+const formats = new Map<string, Intl.DateTimeFormat>();
+function format(locale: string, timeZone: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = `${locale}|${timeZone}|${JSON.stringify(options)}`;
+  let found = formats.get(key);
+  if (!found) {
+    found = new Intl.DateTimeFormat(locale, { timeZone, ...options });
+    formats.set(key, found);
+  }
+  return found;
+}
+
+const timeOptions: Intl.DateTimeFormatOptions = { hour: '2-digit', minute: '2-digit' };
+const dateOptions: Intl.DateTimeFormatOptions = { weekday: 'short', day: 'numeric', month: 'short' };
+
+/** The wall-clock time in the shop, as its locale writes it ("09:15"); no zone name, the shop has one. */
+export const shopTimeWords = (instant: Date, shop: ShopFormat) => format(shop.locale, shop.timeZone, timeOptions).format(instant);
+
+/** The shop's day, as its locale writes it ("Tue 3 Mar"). */
+export const shopDateWords = (instant: Date, shop: ShopFormat) => format(shop.locale, shop.timeZone, dateOptions).format(instant);
+
+/** A shop calendar date (YYYY-MM-DD) as the locale writes it ("Wed 3 Mar 2027"); a date has no zone. */
+export function calendarDateWords(date: string, locale: string): string {
+  return format(locale, 'UTC', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(`${date}T12:00:00Z`));
+}
+
+/** "Tue 3 Mar, 09:15". */
+export const shopMomentWords = (instant: Date, shop: ShopFormat) => `${shopDateWords(instant, shop)}, ${shopTimeWords(instant, shop)}`;
+
+/** "Tue 3 Mar, 09:00–12:00"; a span past midnight names both days. */
+export function shopSpanWords(start: Date, end: Date, shop: ShopFormat): string {
+  const sameDay = shopDateWords(start, shop) === shopDateWords(end, shop);
+  return `${shopMomentWords(start, shop)}–${sameDay ? shopTimeWords(end, shop) : shopMomentWords(end, shop)}`;
+}
+
+/** A spray session as people name it: "Booth 1, Tue 3 Mar, 09:00". */
+export const spraySessionWords = (session: { boothName: string; startAt: Date }, shop: ShopFormat) => `${session.boothName}, ${shopMomentWords(session.startAt, shop)}`;
+
+/** A mix (a pot) as people name it: "Kestrel 2K PU Primer White mixed at 09:15". */
+export const mixWords = (mix: { productName: string; mixedAt: Date }, shop: ShopFormat) => `${mix.productName} mixed at ${shopTimeWords(mix.mixedAt, shop)}`;
+
+/** Money in the shop's currency and locale ("£12.40", "12,40 €"). */
+export function moneyWords(amount: number, currency: string, locale: string): string {
+  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(amount);
+}
+
+/** The respiratory protection a level calls for, as a noun phrase. */
+export const respiratorWords: Record<RespiratorLevel, string> = {
+  'air-fed': 'air-fed protection',
+  'vapour-and-particulate': 'a respirator with vapour and particulate filters',
+  particulate: 'a particulate respirator',
+};
+
+/** How a job's material estimate is worked out, in a sentence for the page that shows it. */
+export const estimateBasisWords =
+  'One coat of each coat step over the coated area of every part, allowing for overspray, thinned with the least thinner the data sheet allows. Order a little over: real losses vary with part shape and the sprayer.';
+
+/** Why a coat counts as outside its limits, in a few words (the conditions report's reason codes). */
+export const outsideReasonWords: Record<'air-too-cold' | 'surface-too-cold' | 'rh-too-high' | 'dew-point-margin', string> = {
+  'air-too-cold': 'air too cold',
+  'surface-too-cold': 'surface too cold',
+  'rh-too-high': 'humidity too high',
+  'dew-point-margin': 'surface too close to the dew point',
+};
+
+/** Column headers of the reports' CSV downloads, SI units named in each. */
+export const csvHeaders = {
+  boothUse: ['Week starting', 'Booth', 'Spray sessions', 'Hours booked', 'Hours sprayed'],
+  areaSprayed: (groupBy: string) => ['Week starting', upperFirst(groupBy), 'Coats', 'Area (m²)'],
+  conditions: ['Time', 'Row', 'Readings', 'Air (°C)', 'Relative humidity (%)', 'Surface above dew point (°C)', 'Product', 'Outside limits because'],
+  solvent: ['Month', 'Litres mixed', 'VOC (kg)', 'VOC this year (kg)', 'Yearly threshold (kg)', 'Litres without a VOC figure'],
+  material: ['Job', 'Customer', 'Product', 'Estimated (L)', 'Used (L)'],
+  rework: ['Month', 'Kind', 'Reason', 'Coats'],
+  upkeep: ['Booth', 'Record', 'Done', 'Due', 'Done by the due date'],
+} as const;
