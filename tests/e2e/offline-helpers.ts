@@ -77,10 +77,20 @@ export async function leadApi(baseURL: string): Promise<LeadApi> {
   return { context, get, send };
 }
 
-/** Two fresh doors on the demo vanity job (2K PU primer first), booked now in Booth 1 for Mina, the demo sprayer. */
+/**
+ * Two fresh doors on a job of their own with the demo vanity job's system (2K PU primer first),
+ * booked now in Booth 1 for Mina, the demo sprayer. Other tests count the demo job's parts.
+ */
 export async function bookTwoDoors(api: LeadApi): Promise<{ sessionId: number; doors: string[] }> {
   const now = Date.now();
-  const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
+  const vanity = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
+  const dueDate = new Date(now + 14 * 86_400_000).toISOString().slice(0, 10);
+  const { job } = await api.send<{ job: Job }>('POST', '/api/jobs', {
+    customer: 'Offline tablet test',
+    reference: `OFF-${now.toString(36).toUpperCase()}`,
+    dueDate,
+    finishSystemId: vanity.finishSystemId,
+  });
   const doors = [`Offline door A ${now}`, `Offline door B ${now}`];
   const parts = [];
   for (const label of doors)
