@@ -116,3 +116,11 @@ export const csvHeaders = {
   rework: ['Month', 'Kind', 'Reason', 'Coats'],
   upkeep: ['Booth', 'Record', 'Done', 'Due', 'Done by the due date'],
 } as const;
+
+/** A data sheet's thinning range in words: "5–10 %", "do not thin", or that it gives none (then thinning is not checked). */
+export function thinningRangeWords(product: { thinnerMinPct: number; thinnerMaxPct: number; thinningRangeGiven: boolean }): string {
+  if (!product.thinningRangeGiven) return 'no thinning range given';
+  if (product.thinnerMaxPct === 0) return 'do not thin';
+  if (product.thinnerMinPct === product.thinnerMaxPct) return `${product.thinnerMinPct} %`;
+  return `${product.thinnerMinPct}–${product.thinnerMaxPct} %`;
+}

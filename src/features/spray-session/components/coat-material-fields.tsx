@@ -2,6 +2,7 @@ import { Controller, type Control, type FieldErrors, type UseFormRegister } from
 import type { Mix } from '../../../../shared/schemas/checklist';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
+import { thinningRangeWords } from '../../../../shared/words';
 import { asNumberOrNull, SelectField } from '../../../components/ui/field';
 import type { CoatEntryInput } from '../hooks/use-coat-form';
 import { shopWhen } from '../utils/session-format';
@@ -46,7 +47,7 @@ export function CoatMaterialFields({ control, register, errors, steps, partsChos
             digits={1}
             value={field.value}
             onChange={(v) => field.onChange(v ?? 0)}
-            hint={product ? `Data sheet: ${product.thinnerMinPct}–${product.thinnerMaxPct} %` : undefined}
+            hint={product ? `Data sheet: ${thinningRangeWords(product)}` : undefined}
             error={errors.thinningPct?.message}
           />
         )}
