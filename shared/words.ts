@@ -33,6 +33,13 @@ export function coatOfWords(coatNumber: number, coatsTotal: number): string {
   return coatsTotal > 0 ? `coat ${coatNumber} of ${coatsTotal}` : `coat ${coatNumber}`;
 }
 
+/** "coat 2 of 3" for the step at a position of a finish system, counting its coat steps only; null when that step is not a coat. */
+export function coatAtStepWords(steps: ReadonlyArray<{ position: number; kind: string }>, position: number): string | null {
+  const coats = steps.filter((step) => step.kind === 'coat');
+  const index = coats.findIndex((step) => step.position === position);
+  return index < 0 ? null : coatOfWords(index + 1, coats.length);
+}
+
 /** "denib with P320": sanding between coats. */
 export const denibWords = (grit: string) => `denib with ${grit}`;
 
