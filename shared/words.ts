@@ -33,6 +33,13 @@ export function coatOfWords(coatNumber: number, coatsTotal: number): string {
   return coatsTotal > 0 ? `coat ${coatNumber} of ${coatsTotal}` : `coat ${coatNumber}`;
 }
 
+/** "coat 2 of 3" for the step at a position of a finish system, counting its coat steps only; null when that step is not a coat. */
+export function coatAtStepWords(steps: ReadonlyArray<{ position: number; kind: string }>, position: number): string | null {
+  const coats = steps.filter((step) => step.kind === 'coat');
+  const index = coats.findIndex((step) => step.position === position);
+  return index < 0 ? null : coatOfWords(index + 1, coats.length);
+}
+
 /** "denib with P320": sanding between coats. */
 export const denibWords = (grit: string) => `denib with ${grit}`;
 
@@ -116,3 +123,11 @@ export const csvHeaders = {
   rework: ['Month', 'Kind', 'Reason', 'Coats'],
   upkeep: ['Booth', 'Record', 'Done', 'Due', 'Done by the due date'],
 } as const;
+
+/** A data sheet's thinning range in words: "5–10 %", "do not thin", or that it gives none (then thinning is not checked). */
+export function thinningRangeWords(product: { thinnerMinPct: number; thinnerMaxPct: number; thinningRangeGiven: boolean }): string {
+  if (!product.thinningRangeGiven) return 'no thinning range given';
+  if (product.thinnerMaxPct === 0) return 'do not thin';
+  if (product.thinnerMinPct === product.thinnerMaxPct) return `${product.thinnerMinPct} %`;
+  return `${product.thinnerMinPct}–${product.thinnerMaxPct} %`;
+}

@@ -44,6 +44,9 @@ test.describe('data sheets', () => {
     await page.getByRole('button', { name: 'Save data sheet' }).click();
     await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
     await expect(page).toHaveURL(/\/data-sheets\/\d+$/);
+    // No thinning range was typed: the saved sheet opens with both boxes still blank (no thinning check), not 0–0 %.
+    await expect(page.getByLabel('Thinner, least')).toHaveValue('');
+    await expect(page.getByLabel('Thinner, most')).toHaveValue('');
 
     // Halfway between the two rows the times are interpolated, and the page says so.
     const preview = page.getByRole('region', { name: 'Drying at another temperature' });

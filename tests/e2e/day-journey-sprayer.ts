@@ -34,7 +34,7 @@ export async function recordMix(page: Page, product: string) {
   await page.getByLabel('Product', { exact: true }).selectOption({ label: product });
   await box(page, 'Amount to mix').fill('1.5');
   await tap(page.getByRole('button', { name: 'Record mix' }));
-  await expect(page.getByRole('article', { name: new RegExp(`^Mix \\d+: ${product}`) })).toBeVisible();
+  await expect(page.getByRole('article', { name: new RegExp(`^Mix: ${product} mixed at \\d{2}:\\d{2}$`) })).toBeVisible();
 }
 
 /** Records the coat the form holds with a comb reading; the form must hold no stop to answer. */

@@ -90,9 +90,9 @@ test('a lead plans, a sprayer sprays and an assembler collects a job in one day,
   // Denib, then the topcoat in the same session once the primer's recoat window opens.
   await recordDenib(sprayer, 2);
   await tap(coatForm(sprayer).getByRole('button', { name: 'Tick all 2' }));
-  await expect(coatForm(sprayer).getByLabel('Step').locator('option:checked')).toHaveText(new RegExp(`^Step 3: ${topcoat}`));
+  await expect(coatForm(sprayer).getByLabel('Coat', { exact: true }).locator('option:checked')).toHaveText(new RegExp(`^Coat 2 of 2: ${topcoat}`));
   await recordMix(sprayer, topcoat);
-  await expect(coatForm(sprayer).getByLabel('Mix (pot)').locator('option:checked')).toHaveText(/^Mix \d+: 1\.50 L/);
+  await expect(coatForm(sprayer).getByLabel('Mix (pot)').locator('option:checked')).toHaveText(/ mixed at \d{2}:\d{2}, 1\.50 L$/);
   // The stop stands until the window opens, and goes by itself: the only wait is the data sheet's.
   await expect(coatForm(sprayer).getByText(/not ready to recoat until/)).toBeHidden({ timeout: 60_000 });
   await recordCoat(sprayer, 100, 1);

@@ -96,8 +96,10 @@ test.describe('jobs and parts', () => {
 
     // The estimate follows the finish system's coats; a method change brings its transfer efficiency.
     const estimate = page.getByRole('region', { name: 'Material per coat step' });
-    await expect(estimate.getByRole('row', { name: /Coat 1/ })).toContainText('Kestrel 2K PU Primer White');
-    await expect(estimate.getByRole('row', { name: /Coat 3/ })).toContainText('Kestrel 2K PU Topcoat Satin');
+    await expect(estimate.getByRole('row', { name: /Coat 1 of 3/ })).toContainText('Kestrel 2K PU Primer White');
+    await expect(estimate.getByRole('row', { name: /Coat 3 of 3/ })).toContainText('Kestrel 2K PU Topcoat Satin');
+    // Costs are in the shop's currency, written as its locale writes money.
+    await expect(estimate.getByRole('row', { name: /All steps/ })).toContainText(/£\d+\.\d{2}/);
     await page.getByLabel('Spray method').selectOption('airless');
     await expect(page.getByLabel('Transfer efficiency')).toHaveValue('45');
     await expect(page.getByText(/at 45 % transfer efficiency \(Airless\)/)).toBeVisible();

@@ -23,7 +23,7 @@ async function checkAndStartSpraying(page: Page) {
   await page.getByRole('button', { name: 'Record a mix' }).click();
   await box(page, 'Amount to mix').fill('3');
   await page.getByRole('button', { name: 'Record mix' }).click();
-  await expect(page.getByRole('article', { name: /^Mix \d+: Kestrel 2K PU Primer White/ })).toBeVisible();
+  await expect(page.getByRole('article', { name: /^Mix: Kestrel 2K PU Primer White mixed at \d{2}:\d{2}$/ })).toBeVisible();
 }
 
 async function recordOfflineCoat(page: Page, door: string) {

@@ -75,7 +75,8 @@ test.describe('booth planner', () => {
     const event = calendarEvent(page, '10:00 - 11:00');
     await expect(event).toContainText('Planned');
     await event.click();
-    const summary = page.getByRole('dialog', { name: /^Spray session \d+$/ });
+    // Named as people name it: booth and start time, never a record number.
+    const summary = page.getByRole('dialog', { name: /^Spray session: .+, \w{3} \d{1,2} \w{3}, 10:00$/ });
     await expect(summary).toContainText(/Booked outside opening hours because:\s*Rush order for Ardent Bathrooms; overtime agreed/);
     await expect(summary.getByRole('heading', { name: 'Safety cautions' })).toBeVisible();
     await expect(summary).toContainText('Not worked out: no products are known for this session yet.');
@@ -97,7 +98,7 @@ test.describe('booth planner', () => {
     await page.screenshot({ path: '/tmp/shots/planner-sprayer-1024.png', fullPage: true });
 
     await event.click();
-    const summary = page.getByRole('dialog', { name: /^Spray session \d+$/ });
+    const summary = page.getByRole('dialog', { name: /^Spray session: .+, 09:00$/ });
     await expect(summary).toContainText('Planned parts (8)');
     await expect(summary).toContainText('Kestrel 2K PU Primer White');
     // The primer is an isocyanate: the strictest protection, and the SDS has the last word.
@@ -184,9 +185,9 @@ test.describe('booth planner, dragging', () => {
     await signIn(page, 'lead', '/planner');
     await page.getByLabel('Go to day').fill(tuesday);
     await calendarEvent(page, 'LJ-26-105').filter({ hasText: /^11:00 - / }).click();
-    const summary = page.getByRole('dialog', { name: /^Spray session \d+$/ });
+    const summary = page.getByRole('dialog', { name: /^Spray session: .+, 11:00$/ });
     await summary.getByRole('button', { name: 'Change booking' }).click();
-    const form = page.getByRole('dialog', { name: /^Change spray session \d+$/ });
+    const form = page.getByRole('dialog', { name: /^Change the spray session: .+, 11:00$/ });
     await expect(form.getByText('Keeps its 8 planned parts unless you choose others.')).toBeVisible();
     await form.getByLabel('Sprayer').selectOption({ label: 'Dev Okafor (me)' });
     await form.getByRole('button', { name: 'Save changes' }).click();

@@ -118,7 +118,7 @@ test.describe('ready board', () => {
     await expect(door).toContainText('1 of 3 coats on', { timeout: 4_000 });
     await expect(door).toContainText('In finish');
     // Coats remain: the card says what is next, never a handle time.
-    await expect(door).toContainText('Denib P320 needed, then coat 2 of 3');
+    await expect(door).toContainText('Denib with P320 needed, then coat 2 of 3');
     await expect(door).toContainText(/Window opens \d\d:\d\d \(in .+\)|Window open until/);
     await expect(door).toContainText(/Ready to handle from about .+ \(estimate, 2 coats to go\)/);
     await expect(door).not.toContainText(/Handle in/);
@@ -268,16 +268,16 @@ test.describe('ready board', () => {
     await signIn(page, 'assembler', `/parts/${part.id}`);
     await expect(page.getByRole('heading', { name: part.label, level: 1 })).toBeVisible();
     const now = page.getByRole('region', { name: 'Now' });
-    await expect(now).toContainText('Next: denib P320, then coat 2 of 3 (Kestrel 2K PU Topcoat Satin)');
+    await expect(now).toContainText('Next: denib with P320, then coat 2 of 3 (Kestrel 2K PU Topcoat Satin)');
     await expect(now).toContainText(/Window for the next coat opens \d\d:\d\d \(in .+\)|Window open until/);
     await expect(now).toContainText(/Ready to handle from about .+; ready to pack from about .+\. An estimate: 2 coats to go/);
     const steps = page.getByRole('region', { name: 'Finish system' });
-    await expect(steps.getByRole('listitem').nth(0)).toContainText('Step 1: Kestrel 2K PU Primer White, 60 µm dry');
+    await expect(steps.getByRole('listitem').nth(0)).toContainText('Coat 1 of 3: Kestrel 2K PU Primer White, 60 µm dry');
     await expect(steps.getByRole('listitem').nth(0)).toContainText('by Mina Castell');
-    await expect(steps.getByRole('listitem').nth(1)).toContainText('Step 2: Denib P320');
+    await expect(steps.getByRole('listitem').nth(1)).toContainText('Denib with P320');
     await expect(steps.getByRole('listitem').nth(1)).toContainText('Next');
     const log = page.getByRole('region', { name: 'Coats and denibs' });
-    await expect(log).toContainText('Coat: Kestrel 2K PU Primer White, step 1');
+    await expect(log).toContainText('Coat: Kestrel 2K PU Primer White, coat 1 of 3');
     await page.screenshot({ path: `${shotsDir}/part-page-assembler-390.png`, fullPage: true });
 
     // The sprayer denibs it; the open page follows without a reload.
@@ -285,7 +285,7 @@ test.describe('ready board', () => {
     await expect(now).toContainText('Next: coat 2 of 3 (Kestrel 2K PU Topcoat Satin)', { timeout: 5_000 });
     await expect(now).toContainText(/Denibbed \d\d:\d\d/);
     await expect(steps.getByRole('listitem').nth(1)).toContainText('Done');
-    await expect(log).toContainText('Denib P320');
+    await expect(log).toContainText('Denib with P320');
     await page.setViewportSize({ width: 1024, height: 768 });
     await page.screenshot({ path: `${shotsDir}/part-page-assembler-1024.png`, fullPage: true });
   });

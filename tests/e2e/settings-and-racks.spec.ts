@@ -65,10 +65,24 @@ test.describe('settings', () => {
     await expect(row).toContainText('Disabled');
   });
 
+  test('the owner picks the shop’s language and region and its currency from short lists', async ({ page }) => {
+    await signIn(page, 'admin', '/settings/shop');
+    const locale = page.getByLabel('Language and region');
+    const currency = page.getByLabel('Currency');
+    await expect(locale).toHaveValue('en-GB');
+    await expect(currency).toHaveValue('GBP');
+    await expect(locale.getByRole('option')).toHaveText(['English (United Kingdom)', 'English (Ireland)', 'English (United States)', 'German (Germany)', 'French (France)', 'Dutch (Netherlands)']);
+    await expect(currency.getByRole('option')).toHaveText(['Pound sterling (£)', 'Euro (€)', 'US dollar ($)']);
+    await currency.selectOption('EUR');
+    await expect(page.getByRole('button', { name: 'Save shop settings' })).toBeEnabled();
+  });
+
   test('a sprayer reads the shop settings but cannot change them', async ({ page }) => {
     await signIn(page, 'sprayer', '/settings/shop');
     await expect(page.getByText('Only the owner can change them')).toBeVisible();
     await expect(page.getByText('Europe/London')).toBeVisible();
+    await expect(page.getByText('English (United Kingdom)')).toBeVisible();
+    await expect(page.getByText('Pound sterling (£)')).toBeVisible();
     await expect(page.getByRole('button', { name: 'Save shop settings' })).toHaveCount(0);
   });
 

@@ -107,7 +107,7 @@ test.describe('spray session', () => {
     await expect(box(page, 'Thinner')).toHaveValue('10');
     await expect(page.getByText('Pour 1.82 L base, 0.91 L hardener and 0.27 L thinner: 3.00 L in all.')).toBeVisible();
     await page.getByRole('button', { name: 'Record mix' }).click();
-    const mix = page.getByRole('article', { name: /^Mix \d+: Kestrel 2K PU Primer White/ });
+    const mix = page.getByRole('article', { name: /^Mix: Kestrel 2K PU Primer White mixed at \d{2}:\d{2}$/ });
     await expect(mix).toContainText('Base1.82 L');
     await expect(mix).toContainText('Hardener0.91 L');
     await expect(mix).toContainText('Thinner0.27 L');
@@ -116,7 +116,7 @@ test.describe('spray session', () => {
     // The first coat: the planned door, its planned primer step, the new pot.
     const coatForm = page.getByRole('region', { name: 'Record a coat' });
     await expect(coatForm.getByRole('button', { name: `Remove ${partLabel}` })).toBeVisible();
-    await expect(coatForm.getByLabel('Step')).toHaveValue('0');
+    await expect(coatForm.getByLabel('Coat', { exact: true })).toHaveValue('0');
     // A typed tag code: an unknown one is refused in words, the door's own is found (and not added twice).
     await coatForm.getByRole('button', { name: 'Scan or type a tag' }).click();
     await coatForm.getByRole('textbox', { name: 'Tag code' }).fill('zzzz 2222');
@@ -137,7 +137,7 @@ test.describe('spray session', () => {
     await expect(latest).toContainText('dry film 57 µm');
     await expect(latest.getByText('Handle from').locator('..')).toContainText(clock(first.handleAt));
     await expect(latest).toContainText(/Flash-off until \d{2}:\d{2}/);
-    await expect(latest).toContainText(`Next on ${partLabel}: denib P320, then coat 2 of 3`);
+    await expect(latest).toContainText(`Next on ${partLabel}: denib with P320, then coat 2 of 3`);
     // The door has just had its planned step: the form does not offer it again by itself.
     await expect(coatForm.getByText('No parts chosen yet.')).toBeVisible();
 
@@ -148,8 +148,8 @@ test.describe('spray session', () => {
     await coatForm.getByRole('button', { name: 'Planned parts' }).click();
     await coatForm.getByRole('checkbox', { name: new RegExp(partLabel) }).check();
     // Chosen by hand, the door's step follows it to its next coat; the sprayer means a second pass of the first.
-    await expect(coatForm.getByLabel('Step')).toHaveValue('2');
-    await coatForm.getByLabel('Step').selectOption('0');
+    await expect(coatForm.getByLabel('Coat', { exact: true })).toHaveValue('2');
+    await coatForm.getByLabel('Coat', { exact: true }).selectOption('0');
     await box(coatForm, 'Wet film reading').fill('150');
     await expect(coatForm.getByText(/not ready to recoat until/)).toBeVisible();
     await coatForm.getByLabel('Why this coat goes on anyway').fill('Second pass on the edges while the first is wet');
@@ -297,7 +297,7 @@ test.describe('between coats', () => {
     await expect(denibs.getByLabel('Grit')).toHaveValue('P320');
     await denibs.getByLabel('Notes').fill('Faces and edges, tack rag after');
     await denibs.getByRole('button', { name: 'Record denib' }).click();
-    await expect(page.getByText('Denib P320 recorded on 2 parts.')).toBeVisible();
+    await expect(page.getByText('Denib with P320 recorded on 2 parts.')).toBeVisible();
     await expect(denibs).toContainText('No planned part needs a denib right now.');
     await expect(coatForm.getByRole('note')).toHaveCount(0);
     const denibCard = page.getByRole('article', { name: /^Denib \d+$/ });
@@ -333,7 +333,7 @@ test.describe('between coats', () => {
     await page.goto(`/coat-log?job=${jobId}`);
     const [denib] = (await api.get<List<{ id: number }>>(`/api/denibs?spraySessionId=${sessionId}`)).items;
     const denibRow = page.getByRole('row', { name: `Denib ${denib.id}`, exact: true });
-    await expect(denibRow).toContainText('Denib P320 · 2 parts');
+    await expect(denibRow).toContainText('Denib with P320 · 2 parts');
     await expect(denibRow).toContainText('Mina Castell');
     await expect(page.getByRole('row', { name: `Coat ${coat.id}` })).toContainText('Reason for the stops: Customer collecting tonight; parts warmed after');
     const rows = await page.getByRole('row').evaluateAll((all) => all.map((row) => row.getAttribute('aria-label') ?? ''));

@@ -60,7 +60,7 @@ test('a lead sees the day per booth, gives an unassigned session to a sprayer, a
   await expect(page.getByRole('status').filter({ hasText: /sessions? without a sprayer/ })).toBeVisible();
 
   await session.getByLabel(`Sprayer for ${sprayRoom}, ${hours}`).selectOption({ label: 'Mina Castell' });
-  await expect(page.getByText(/Mina Castell sprays Back spray room session \d+\./)).toBeVisible();
+  await expect(page.getByText(/^Mina Castell sprays Back spray room, \w{3} \d{1,2} \w{3}, \d{2}:\d{2}\.$/)).toBeVisible();
   await expect(session).not.toContainText('No sprayer yet');
   await expect(session.getByLabel(`Sprayer for ${sprayRoom}, ${hours}`)).toHaveValue(/\d+/);
 

@@ -132,10 +132,11 @@ test.describe('booth upkeep and crew records', () => {
     const problems = watchConsole(page);
     await signIn(page, 'sprayer');
     await mainNav(page).getByRole('link', { name: 'Coat log' }).click();
-    const addButton = page.getByRole('button', { name: /^Add a photo to coat \d+$/ }).first();
-    const coatId = (await addButton.getAttribute('aria-label'))!.replace('Add a photo to coat ', '');
+    // A coat is named by its product and when it was sprayed, never by a record number.
+    const addButton = page.getByRole('button', { name: /^Add a photo to the .+ coat sprayed \w{3} \d{1,2} \w{3}, \d{2}:\d{2}$/ }).first();
+    const coatName = (await addButton.getAttribute('aria-label'))!.replace('Add a photo to ', '');
     await addButton.click();
-    const dialog = page.getByRole('dialog', { name: `Add a photo to coat ${coatId}` });
+    const dialog = page.getByRole('dialog', { name: `Add a photo to ${coatName}` });
     await expect(dialog.getByLabel('Photo')).toHaveAttribute('capture', 'environment');
     await expect(dialog.getByLabel('Photo')).toHaveAttribute('accept', 'image/*');
     await dialog.getByRole('button', { name: 'Add photo' }).click();
@@ -150,8 +151,8 @@ test.describe('booth upkeep and crew records', () => {
     const thumbnail = page.getByRole('button', { name: 'Open photo: A defect, Dust nib, top rail' });
     await expect(thumbnail).toBeVisible();
     await thumbnail.click();
-    const viewer = page.getByRole('dialog', { name: `Photo of coat ${coatId}` });
-    await expect(viewer.getByRole('img', { name: `A defect on coat ${coatId}: Dust nib, top rail` })).toBeVisible();
+    const viewer = page.getByRole('dialog', { name: `Photo of ${coatName}` });
+    await expect(viewer.getByRole('img', { name: 'A defect on this coat: Dust nib, top rail' })).toBeVisible();
     await expect(viewer.getByRole('link', { name: 'Open full size' })).toHaveAttribute('href', /^\/api\/coat-photos\/\d+$/);
     await expect(viewer).toContainText('Mina Castell');
     expect(problems).toEqual([]);

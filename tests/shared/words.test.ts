@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { calendarDateWords, coatOfWords, denibNeededWords, denibWords, mixWords, moneyWords, partsWords, shopMomentWords, shopSpanWords, shopTimeWords, spraySessionWords } from '../../shared/words';
+import { calendarDateWords, coatAtStepWords, coatOfWords, denibNeededWords, denibWords, mixWords, moneyWords, partsWords, shopMomentWords, shopSpanWords, shopTimeWords, spraySessionWords } from '../../shared/words';
 
 const london = { timeZone: 'Europe/London', locale: 'en-GB' };
 
@@ -9,6 +9,13 @@ describe('the shared vocabulary', () => {
     expect(denibWords('P320')).toBe('denib with P320');
     expect(denibNeededWords('P400')).toBe('Denib with P400 needed');
     expect([partsWords(1), partsWords(3)]).toEqual(['1 part', '3 parts']);
+  });
+
+  it('counts a finish system’s coat steps only, so the coat after a denib is coat 2, not step 3', () => {
+    const steps = [{ position: 0, kind: 'coat' }, { position: 1, kind: 'abrade' }, { position: 2, kind: 'coat' }, { position: 3, kind: 'coat' }];
+    expect(coatAtStepWords(steps, 0)).toBe('coat 1 of 3');
+    expect(coatAtStepWords(steps, 2)).toBe('coat 2 of 3');
+    expect(coatAtStepWords(steps, 1)).toBeNull();
   });
 
   it('writes shop times in the shop’s zone and locale with no zone name, DST included', () => {

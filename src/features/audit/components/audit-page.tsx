@@ -7,6 +7,7 @@ import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/sta
 import { formatShopDateTime } from '../../../lib/shop-time';
 import type { AuditEntry } from '../../../../shared/schemas/audit';
 import { useAudit } from '../../../api/audit/get-audit';
+import { upperFirst } from '../../../../shared/words';
 
 const pageSize = 50;
 const column = createColumnHelper<AuditEntry>();
@@ -19,7 +20,8 @@ export function AuditPage({ timeZone }: { timeZone: string }) {
       column.accessor('at', { header: 'When', cell: (info) => <span className="whitespace-nowrap">{formatShopDateTime(info.getValue(), timeZone)}</span> }),
       column.accessor('userName', { header: 'Who', cell: (info) => info.getValue() ?? 'System' }),
       column.accessor('summary', { header: 'What happened' }),
-      column.accessor((entry) => `${entry.entity}${entry.entityId !== null ? ` #${entry.entityId}` : ''}`, { id: 'record', header: 'Record' }),
+      // The summary names the thing as people do; the record's kind says where to find it, never its database id.
+      column.accessor((entry) => upperFirst(entry.entity.replace(/-/g, ' ')), { id: 'record', header: 'Kind of record' }),
     ],
     [timeZone],
   );

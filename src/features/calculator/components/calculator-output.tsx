@@ -50,6 +50,16 @@ export function VerdictBadge({ verdict, label }: { verdict: Verdict; label?: str
   );
 }
 
+/** Information beside a go: a reading within its limit but close to it. Not a warning, so not in a verdict colour. */
+export function InfoBadge() {
+  return (
+    <span className="inline-flex min-h-touch items-center gap-2 rounded-panel border-2 border-maple-500 bg-white px-3 font-bold text-maple-900">
+      <span aria-hidden="true">i</span>
+      Note
+    </span>
+  );
+}
+
 export function FieldGrid({ children }: { children: ReactNode }) {
   return <div className="grid gap-4 sm:grid-cols-2">{children}</div>;
 }

@@ -1,7 +1,7 @@
 import { assessConditions, surfaceMarginWords, type ConditionsAssessment } from '../../../../shared/finishing/conditions';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity, unitSymbol } from '../../../../shared/units';
-import { CalculatorSection, FieldGrid, ResultItem, Results, VerdictBadge } from './calculator-output';
+import { CalculatorSection, FieldGrid, InfoBadge, ResultItem, Results, VerdictBadge } from './calculator-output';
 import { attempt, fieldErrors, readNumber, readOptionalSi, readSi, startText } from './calculator-values';
 import { NumberField } from './number-field';
 import { useTextFields } from './use-text-fields';
@@ -63,7 +63,7 @@ function ConditionsResult({ result, units }: { result: ConditionsAssessment; uni
       <ul className="space-y-2">
         {result.checks.map((check) => (
           <li key={check.code} className="flex items-start gap-3">
-            <VerdictBadge verdict={check.verdict} />
+            {check.info ? <InfoBadge /> : <VerdictBadge verdict={check.verdict} />}
             <span className="pt-2">{check.message}</span>
           </li>
         ))}

@@ -6,7 +6,7 @@ import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
 import { CoatPhotos } from './coat-photos';
-import { denibWords, logEntries } from './coat-log-entries';
+import { denibEntryWords, logEntries } from './coat-log-entries';
 import { conditionWords, filmWords, partsWords, sharedReason, stepWords, versionWords } from './coat-log-format';
 
 interface CoatLogCardsProps {
@@ -16,7 +16,7 @@ interface CoatLogCardsProps {
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
   photosOf: (coat: Coat) => CoatPhoto[];
-  onOpenPhoto: (photo: CoatPhoto) => void;
+  onOpenPhoto: (photo: CoatPhoto, coat: Coat) => void;
   onAddPhoto?: (coat: Coat) => void;
 }
 
@@ -33,7 +33,7 @@ export function CoatLogCards({ coats, denibs, units, timeZone, onCorrect, photos
                 <span className="mr-2 rounded-panel bg-maple-700 px-2 py-0.5 text-sm text-white">Denib</span>
                 {formatShopDateTime(denib.abradedAt, timeZone)}
               </p>
-              <p className="font-semibold">{denibWords(denib)}</p>
+              <p className="font-semibold">{denibEntryWords(denib)}</p>
               {denib.notes && <p>{denib.notes}</p>}
               <p className="mt-1 text-maple-800">{denib.recordedByName}</p>
             </li>

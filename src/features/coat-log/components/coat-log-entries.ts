@@ -1,5 +1,6 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { Denib } from '../../../../shared/schemas/denib';
+import { denibWords, partsWords, upperFirst } from '../../../../shared/words';
 
 type LogEntry = { kind: 'coat'; at: string; coat: Coat } | { kind: 'denib'; at: string; denib: Denib };
 
@@ -10,4 +11,4 @@ export function logEntries(coats: Coat[], denibs: Denib[]): LogEntry[] {
   return entries.sort((a, b) => Date.parse(b.at) - Date.parse(a.at));
 }
 
-export const denibWords = (denib: Denib) => `Denib ${denib.grit} · ${denib.partIds.length === 1 ? '1 part' : `${denib.partIds.length} parts`}`;
+export const denibEntryWords = (denib: Denib) => `${upperFirst(denibWords(denib.grit))} · ${partsWords(denib.partIds.length)}`;

@@ -2,6 +2,7 @@ import { TZDate } from '@date-fns/tz';
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../../shared/units';
+import { shopMomentWords, type ShopFormat } from '../../../../shared/words';
 
 /** The instant a shop day (YYYY-MM-DD) starts, on the shop's clock; `plusDays` 1 gives the end of that day. */
 export function shopDayStart(date: string, timeZone: string, plusDays = 0): string | undefined {
@@ -36,5 +37,8 @@ export function sharedReason(coat: Coat): string | null {
 }
 
 export function versionWords(coat: Coat): string {
-  return coat.replacesId === null ? `v${coat.version}` : `v${coat.version}, corrects #${coat.replacesId}`;
+  return coat.replacesId === null ? `v${coat.version}` : `v${coat.version}, corrects v${coat.version - 1}`;
 }
+
+/** A coat as people name it: "the Kestrel Primer coat sprayed Tue 3 Mar, 09:15". */
+export const coatNameWords = (coat: Pick<Coat, 'productName' | 'sprayedAt'>, shop: ShopFormat) => `the ${coat.productName} coat sprayed ${shopMomentWords(new Date(coat.sprayedAt), shop)}`;

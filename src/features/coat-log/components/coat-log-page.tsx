@@ -18,10 +18,11 @@ import { AddPhotoForm } from './add-photo-form';
 import { PhotoView } from './coat-photos';
 import { coatsToCsv, downloadCsv } from './coat-csv';
 import { CoatLogFilters, type CoatLogFilterValues } from './coat-log-filters';
-import { shopDayStart } from './coat-log-format';
+import { coatNameWords, shopDayStart } from './coat-log-format';
 import { CoatLogCards } from './coat-log-cards';
 import { CoatLogTable } from './coat-log-table';
 import { CorrectionForm } from './correction-form';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 
 const pageSize = 25;
 
@@ -45,10 +46,11 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
   const denibs = usePageDenibs(query, page, pageSize, coats.data);
   const [correcting, setCorrecting] = useState<Coat | null>(null);
   const [photoFor, setPhotoFor] = useState<Coat | null>(null);
-  const [viewing, setViewing] = useState<CoatPhoto | null>(null);
+  const [viewing, setViewing] = useState<{ photo: CoatPhoto; coat: Coat } | null>(null);
+  const shop = { ...useShopFormat(), timeZone };
   const photos = useCoatPhotos(coats.data?.items.map((c) => c.id) ?? []);
   const photosOf = (coat: Coat) => (photos.data ?? []).filter((p) => p.shownWithCoatId === coat.id);
-  const photoProps = { photosOf, onOpenPhoto: setViewing, onAddPhoto: canCorrect ? setPhotoFor : undefined };
+  const photoProps = { photosOf, onOpenPhoto: (photo: CoatPhoto, coat: Coat) => setViewing({ photo, coat }), onAddPhoto: canCorrect ? setPhotoFor : undefined };
   const [exporting, setExporting] = useState(false);
 
   const exportCsv = async () => {
@@ -97,11 +99,11 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
       <Dialog open={correcting !== null} onClose={() => setCorrecting(null)} wide title={`Correct coat ${correcting?.id ?? ''}`} description="Change what was recorded wrongly. Figures are entered in metric units, as they are stored.">
         {correcting && <CorrectionForm coat={correcting} onDone={() => setCorrecting(null)} />}
       </Dialog>
-      <Dialog open={photoFor !== null} onClose={() => setPhotoFor(null)} title={`Add a photo to coat ${photoFor?.id ?? ''}`} description="A defect, a sample board or the finish as sprayed. The photo is kept as its own record; the coat is not changed.">
+      <Dialog open={photoFor !== null} onClose={() => setPhotoFor(null)} title={photoFor ? `Add a photo to ${coatNameWords(photoFor, shop)}` : 'Add a photo'} description="A defect, a sample board or the finish as sprayed. The photo is kept as its own record; the coat is not changed.">
         {photoFor && <AddPhotoForm coat={photoFor} onDone={() => setPhotoFor(null)} />}
       </Dialog>
-      <Dialog open={viewing !== null} onClose={() => setViewing(null)} wide title={`Photo of coat ${viewing?.shownWithCoatId ?? ''}`}>
-        {viewing && <PhotoView photo={viewing} when={formatShopDateTime(viewing.takenAt, timeZone)} />}
+      <Dialog open={viewing !== null} onClose={() => setViewing(null)} wide title={viewing ? `Photo of ${coatNameWords(viewing.coat, shop)}` : 'Photo'}>
+        {viewing && <PhotoView photo={viewing.photo} when={formatShopDateTime(viewing.photo.takenAt, timeZone)} />}
       </Dialog>
     </>
   );

@@ -6,7 +6,7 @@ import type { CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
 import { formatShopDateTime } from '../../../lib/shop-time';
 import { CoatPhotos } from './coat-photos';
-import { denibWords, logEntries } from './coat-log-entries';
+import { denibEntryWords, logEntries } from './coat-log-entries';
 import { conditionWords, filmWords, partsWords, sharedReason, stepWords, versionWords } from './coat-log-format';
 
 interface CoatLogTableProps {
@@ -17,7 +17,7 @@ interface CoatLogTableProps {
   timeZone: string;
   onCorrect?: (coat: Coat) => void;
   photosOf: (coat: Coat) => CoatPhoto[];
-  onOpenPhoto: (photo: CoatPhoto) => void;
+  onOpenPhoto: (photo: CoatPhoto, coat: Coat) => void;
   onAddPhoto?: (coat: Coat) => void;
 }
 
@@ -60,7 +60,7 @@ function DenibRow({ denib, timeZone }: { denib: Denib; timeZone: string }) {
         <span className="block whitespace-nowrap font-normal">{formatShopDateTime(denib.abradedAt, timeZone)}</span>
       </th>
       <td colSpan={4} className="px-3 py-2">
-        {denibWords(denib)}
+        {denibEntryWords(denib)}
         {denib.notes && <span className="block text-sm">{denib.notes}</span>}
       </td>
       <td className="px-3 py-2">{denib.recordedByName}</td>

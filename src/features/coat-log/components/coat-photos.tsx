@@ -1,27 +1,30 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import { photoSubjectLabels, type CoatPhoto } from '../../../../shared/schemas/coat-photo';
 import { Button } from '../../../components/ui/button';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
+import { coatNameWords } from './coat-log-format';
 
 interface CoatPhotosProps {
   coat: Coat;
   photos: CoatPhoto[];
-  onOpen: (photo: CoatPhoto) => void;
+  onOpen: (photo: CoatPhoto, coat: Coat) => void;
   /** Left out for someone who may not add photos. */
   onAdd?: (coat: Coat) => void;
 }
 
 /** Thumbnails of a coat's photos (and those of the versions it corrects); each opens full size. */
 export function CoatPhotos({ coat, photos, onOpen, onAdd }: CoatPhotosProps) {
+  const name = coatNameWords(coat, useShopFormat());
   if (photos.length === 0 && !onAdd) return null;
   return (
     <div className="mt-2">
       {photos.length > 0 && (
-        <ul aria-label={`Photos of coat ${coat.id}`} className="flex flex-wrap gap-2">
+        <ul aria-label={`Photos of ${name}`} className="flex flex-wrap gap-2">
           {photos.map((photo) => (
             <li key={photo.id}>
               <button
                 type="button"
-                onClick={() => onOpen(photo)}
+                onClick={() => onOpen(photo, coat)}
                 className="block size-16 overflow-hidden rounded-panel border border-maple-400 bg-maple-100 focus-visible:outline-3 focus-visible:outline-lacquer-600"
                 aria-label={`Open photo: ${photoSubjectLabels[photo.subject]}${photo.caption ? `, ${photo.caption}` : ''}`}
               >
@@ -32,7 +35,7 @@ export function CoatPhotos({ coat, photos, onOpen, onAdd }: CoatPhotosProps) {
         </ul>
       )}
       {onAdd && (
-        <Button variant="quiet" className="mt-1" onClick={() => onAdd(coat)} aria-label={`Add a photo to coat ${coat.id}`}>
+        <Button variant="quiet" className="mt-1" onClick={() => onAdd(coat)} aria-label={`Add a photo to ${name}`}>
           Add photo
         </Button>
       )}
@@ -44,13 +47,13 @@ export function CoatPhotos({ coat, photos, onOpen, onAdd }: CoatPhotosProps) {
 export function PhotoView({ photo, when }: { photo: CoatPhoto; when: string }) {
   return (
     <figure>
-      <img src={photo.url} alt={`${photoSubjectLabels[photo.subject]} on coat ${photo.coatId}${photo.caption ? `: ${photo.caption}` : ''}`} className="max-h-[65dvh] w-full rounded-panel bg-maple-100 object-contain" />
+      <img src={photo.url} alt={`${photoSubjectLabels[photo.subject]} on this coat${photo.caption ? `: ${photo.caption}` : ''}`} className="max-h-[65dvh] w-full rounded-panel bg-maple-100 object-contain" />
       <figcaption className="mt-2">
         <span className="font-semibold">{photoSubjectLabels[photo.subject]}</span>
         {photo.caption && <span>: {photo.caption}</span>}
         <span className="block text-maple-700">
           {photo.takenByName}, {when}
-          {photo.coatId !== photo.shownWithCoatId && ` · taken with coat #${photo.coatId}, before its correction`}
+          {photo.coatId !== photo.shownWithCoatId && ' · taken before this coat was corrected'}
         </span>
         <a href={photo.url} target="_blank" rel="noreferrer" className="mt-1 inline-flex min-h-touch items-center font-semibold text-lacquer-800 underline underline-offset-4">
           Open full size

@@ -1,4 +1,5 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
+import { moneyWords } from '../../../../shared/words';
 import { formatQuantity } from '../../../lib/units-display';
 
 export const litres = (valueL: number, units: UnitSystem) => formatQuantity('liquidVolume', valueL, units);
@@ -10,8 +11,10 @@ export function vocMass(grams: number, units: UnitSystem): { main: string; kilog
   return { main: formatQuantity('mass', grams, units), kilograms: `${kg} kg` };
 }
 
-/** Prices carry no currency in the data sheets, so costs are plain amounts in whatever currency they were entered in. */
-export const money = (amount: number) => new Intl.NumberFormat('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 }).format(amount);
+/** How the estimate writes money: in its currency (the shop's), the way the shop's locale writes it. */
+export type MoneyFormat = { currency: string; locale: string };
+
+export const money = (amount: number, format: MoneyFormat) => moneyWords(amount, format.currency, format.locale);
 
 export function missingDataWords(stepsWithoutVoc: number, stepsWithoutPrice: number): string[] {
   const words: string[] = [];

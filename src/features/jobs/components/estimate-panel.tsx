@@ -6,6 +6,8 @@ import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/sta
 import { isApiError } from '../../../lib/api-client';
 import { formatQuantity } from '../../../lib/units-display';
 import { useJobEstimate } from '../../../api/jobs/get-job-estimate';
+import { estimateBasisWords } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 import { missingDataWords } from './estimate-format';
 import { EstimateTable } from './estimate-table';
 
@@ -63,7 +65,7 @@ export function EstimatePanel({ jobId, units }: { jobId: number; units: UnitSyst
         Material estimate
       </h2>
       <p className="mb-3 max-w-3xl text-maple-700">
-        One coat of each coat step over the coated area of every part, allowing for overspray. Thinned at the least the data sheet allows. Order a little over: real losses vary with part shape and the sprayer.
+        {estimateBasisWords}
       </p>
       <MethodControls method={method} te={te} onMethod={chooseMethod} onTe={setTe} />
       <EstimateBody query={estimate} units={units} />
@@ -72,6 +74,7 @@ export function EstimatePanel({ jobId, units }: { jobId: number; units: UnitSyst
 }
 
 function EstimateBody({ query, units }: { query: ReturnType<typeof useJobEstimate>; units: UnitSystem }) {
+  const { locale } = useShopFormat();
   if (query.isPending) return <LoadingState what="the estimate" />;
   if (query.isError) {
     if (isApiError(query.error) && query.error.status === 409) return <EmptyState title="No estimate yet">{query.error.message}</EmptyState>;
@@ -84,7 +87,7 @@ function EstimateBody({ query, units }: { query: ReturnType<typeof useJobEstimat
       <p className="mb-2 font-medium">
         Over {formatQuantity('area', estimate.areaM2, units)} at {estimate.transferEfficiencyPct} % transfer efficiency ({sprayMethods[estimate.method as SprayMethod]?.label ?? estimate.method}).
       </p>
-      <EstimateTable estimate={estimate} units={units} />
+      <EstimateTable estimate={estimate} units={units} locale={locale} />
       {missingDataWords(estimate.totals.stepsWithoutVoc, estimate.totals.stepsWithoutPrice).map((words) => (
         <p key={words} className="mt-2 font-medium text-verdict-caution">
           <span aria-hidden="true">⚠ </span>

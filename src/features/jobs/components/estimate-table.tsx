@@ -1,7 +1,8 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../lib/units-display';
 import type { Estimate as JobEstimate } from '../../../../shared/schemas/job';
-import { litres, money, vocMass } from './estimate-format';
+import { coatOfWords, upperFirst } from '../../../../shared/words';
+import { litres, money, vocMass, type MoneyFormat } from './estimate-format';
 
 type Step = JobEstimate['steps'][number];
 
@@ -31,12 +32,12 @@ function Mix({ mix, units }: { mix: Step['mix']; units: UnitSystem }) {
   );
 }
 
-function StepRow({ step, index, units }: { step: Step; index: number; units: UnitSystem }) {
+function StepRow({ step, index, coats, units, format }: { step: Step; index: number; coats: number; units: UnitSystem; format: MoneyFormat }) {
   return (
     <tr className="border-b border-maple-200 even:bg-maple-50">
-      {/* Positions count from 0 and include abrade steps; people count coats from 1. */}
+      {/* Positions count from 0 and include denib steps; people count coats from 1. */}
       <th scope="row" className={`${td} font-semibold`}>
-        Coat {index + 1} <span className="block text-sm font-normal text-maple-700">step {step.position + 1}</span>
+        {upperFirst(coatOfWords(index + 1, coats))}
       </th>
       <td className="min-w-40 px-3 py-2">{step.productName}</td>
       <td className={td}>{formatQuantity('filmThickness', step.dryFilmUm, units)}</td>
@@ -46,14 +47,15 @@ function StepRow({ step, index, units }: { step: Step; index: number; units: Uni
         <Mix mix={step.mix} units={units} />
       </td>
       <td className={td}>{step.vocG === null ? none : <Voc grams={step.vocG} units={units} />}</td>
-      <td className={td}>{step.cost === null ? none : money(step.cost)}</td>
+      <td className={td}>{step.cost === null ? none : money(step.cost, format)}</td>
     </tr>
   );
 }
 
 /** One row per coat step and a totals row; a plain table because the shared DataTable has no footer. */
-export function EstimateTable({ estimate, units }: { estimate: JobEstimate; units: UnitSystem }) {
+export function EstimateTable({ estimate, units, locale }: { estimate: JobEstimate; units: UnitSystem; locale: string }) {
   const { totals } = estimate;
+  const format = { currency: estimate.currency, locale };
   return (
     <div role="region" aria-label="Material per coat step" tabIndex={0} className="overflow-x-auto rounded-panel border border-maple-300 bg-white">
       <table className="w-full border-collapse text-left">
@@ -69,7 +71,7 @@ export function EstimateTable({ estimate, units }: { estimate: JobEstimate; unit
         </thead>
         <tbody>
           {estimate.steps.map((step, index) => (
-            <StepRow key={step.position} step={step} index={index} units={units} />
+            <StepRow key={step.position} step={step} index={index} coats={estimate.steps.length} units={units} format={format} />
           ))}
         </tbody>
         <tfoot className="bg-lacquer-50 font-semibold">
@@ -83,7 +85,7 @@ export function EstimateTable({ estimate, units }: { estimate: JobEstimate; unit
             <td className={td}>
               <Voc grams={totals.vocG} units={units} />
             </td>
-            <td className={td}>{money(totals.cost)}</td>
+            <td className={td}>{money(totals.cost, format)}</td>
           </tr>
         </tfoot>
       </table>

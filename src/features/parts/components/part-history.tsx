@@ -5,6 +5,7 @@ import { ErrorState, LoadingState } from '../../../components/ui/states';
 import { formatShopDateTime } from '../../../lib/shop-time';
 import { useNow } from '../../../lib/use-now';
 import { usePartHistory } from '../../../api/parts/get-part-history';
+import { coatAtStepWords, coatOfWords, denibWords, upperFirst } from '../../../../shared/words';
 import { partNowLines, stepStatuses, type StepStatus } from './part-now-words';
 
 interface Props {
@@ -12,10 +13,12 @@ interface Props {
   timeZone: string;
 }
 
-function stepName(status: StepStatus, units: UnitSystem): string {
+/** "Coat 2 of 3: Topcoat, 40 µm dry" or "Denib with P320": the finish system's steps in the booth's words. */
+function stepName(status: StepStatus, statuses: StepStatus[], units: UnitSystem): string {
   const { step } = status;
-  const what = step.kind === 'coat' ? `${step.productName}, ${formatQuantity(step.dryFilmUm, 'filmThickness', units)} dry` : `Denib ${step.grit}`;
-  return `Step ${step.position + 1}: ${what}`;
+  if (step.kind !== 'coat') return upperFirst(denibWords(step.grit));
+  const coats = statuses.filter((s) => s.step.kind === 'coat');
+  return `${upperFirst(coatOfWords(coats.indexOf(status) + 1, coats.length))}: ${step.productName}, ${formatQuantity(step.dryFilmUm, 'filmThickness', units)} dry`;
 }
 
 function stepDone(status: StepStatus, timeZone: string): string {
@@ -26,15 +29,16 @@ function stepDone(status: StepStatus, timeZone: string): string {
 
 function Steps({ history, units, timeZone }: { history: PartHistory } & Props) {
   if (history.steps.length === 0) return null;
+  const statuses = stepStatuses(history);
   return (
     <section aria-labelledby="part-steps-heading">
       <h2 id="part-steps-heading" className="mb-2 text-xl font-bold text-lacquer-900">
         Finish system
       </h2>
       <ol className="space-y-2">
-        {stepStatuses(history).map((status) => (
+        {statuses.map((status) => (
           <li key={status.step.position} className={`rounded-panel border bg-white p-3 ${status.next ? 'border-2 border-lacquer-700' : 'border-maple-300'}`}>
-            <p className="font-semibold">{stepName(status, units)}</p>
+            <p className="font-semibold">{stepName(status, statuses, units)}</p>
             <p className={status.done ? 'text-verdict-go' : status.next ? 'font-semibold text-lacquer-800' : 'text-maple-700'}>
               {status.done && <span aria-hidden="true">✓ </span>}
               {stepDone(status, timeZone)}
@@ -46,9 +50,9 @@ function Steps({ history, units, timeZone }: { history: PartHistory } & Props) {
   );
 }
 
-function entryWords(entry: PartHistoryEntry, units: UnitSystem, timeZone: string): { what: string; more: string } {
-  if (entry.kind === 'denib') return { what: `Denib ${entry.grit}`, more: entry.notes };
-  const step = entry.stepPosition === null ? 'outside the finish system' : `step ${entry.stepPosition + 1}`;
+function entryWords(entry: PartHistoryEntry, steps: PartHistory['steps'], units: UnitSystem, timeZone: string): { what: string; more: string } {
+  if (entry.kind === 'denib') return { what: upperFirst(denibWords(entry.grit)), more: entry.notes };
+  const step = (entry.stepPosition === null ? null : coatAtStepWords(steps, entry.stepPosition)) ?? 'outside the finish system';
   const film = entry.dryFilmUm === null ? '' : `, ${formatQuantity(entry.dryFilmUm, 'filmThickness', units)} dry`;
   const rework = entry.rework ? ' (sprayed again)' : '';
   // Between coats a coat's own handle time is not "ready": the Now panel says when the part is. Its recoat time is what follows it.
@@ -67,7 +71,7 @@ function Entries({ history, units, timeZone }: { history: PartHistory } & Props)
       ) : (
         <ol aria-label="Coats and denibs, oldest first" className="space-y-2">
           {history.entries.map((entry) => {
-            const { what, more } = entryWords(entry, units, timeZone);
+            const { what, more } = entryWords(entry, history.steps, units, timeZone);
             return (
               <li key={`${entry.kind}-${entry.id}`} className={`rounded-panel border bg-white p-3 ${entry.kind === 'denib' ? 'border-dashed border-maple-500' : 'border-maple-300'}`}>
                 <p className="font-semibold">{what}</p>

@@ -3,6 +3,7 @@ import type { PartHistory, PartHistoryEntry } from '../../../../shared/schemas/p
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../../shared/units';
 import { shopMoment, timeUntil } from '../../../lib/ready-time-words';
+import { coatOfWords, denibWords } from '../../../../shared/words';
 
 type Ready = PartHistory['readiness'];
 const ahead = (iso: string | null, now: Date): iso is string => iso !== null && Date.parse(iso) > now.getTime();
@@ -30,9 +31,9 @@ export function partNowLines(history: PartHistory, now: Date, timeZone: string, 
     return { headline: headline ?? 'Every coat is on', details };
   }
   const nextStep = history.steps.filter((step) => step.kind === 'coat')[r.coatsDone];
-  const next = `coat ${r.coatsDone + 1} of ${r.coatsTotal}${nextStep?.kind === 'coat' ? ` (${nextStep.productName})` : ''}`;
+  const next = `${coatOfWords(r.coatsDone + 1, r.coatsTotal)}${nextStep?.kind === 'coat' ? ` (${nextStep.productName})` : ''}`;
   const grit = /^Abrade (.+)$/.exec(r.nextStep ?? '')?.[1];
-  const headline = r.abradeRequired ? `Next: denib${grit ? ` ${grit}` : ''}, then ${next}` : `Next: ${next}`;
+  const headline = r.abradeRequired ? `Next: ${grit ? denibWords(grit) : 'denib'}, then ${next}` : `Next: ${next}`;
   const temp = formatQuantity(history.dryingTempC, 'temperature', units);
   const estimate = r.expectedHandleAt && r.expectedPackAt
     ? `${moment('Ready to handle', r.expectedHandleAt, now, timeZone, true)}; ready to pack from about ${shopMoment(r.expectedPackAt, now, timeZone)}. An estimate: ${r.coatsRemaining} ${r.coatsRemaining === 1 ? 'coat' : 'coats'} to go, each as soon as its window opens, drying at ${temp}.`

@@ -3,6 +3,8 @@ import { Dialog } from '../../../components/ui/dialog';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { BookingForm, type BookingTarget, type PlanningSettings } from './booking-form';
 import { SessionSummary } from './session-summary';
+import { spraySessionWords } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 
 export interface Viewer {
   id: number;
@@ -26,14 +28,16 @@ interface PlannerDialogsProps {
 
 export function PlannerDialogs({ viewer, settings, booths, booking, opened, ...handlers }: PlannerDialogsProps) {
   const editing = booking?.kind === 'edit' ? booking.session : undefined;
+  const shop = { ...useShopFormat(), timeZone: settings.timezone };
+  const named = (session: SpraySession) => spraySessionWords({ boothName: session.boothName, startAt: new Date(session.start) }, shop);
   return (
     <>
       {viewer.canWrite && (
-        <Dialog open={booking !== null} onClose={() => handlers.onBooked(null)} wide title={editing ? `Change spray session ${editing.id}` : 'Book a spray session'}>
+        <Dialog open={booking !== null} onClose={() => handlers.onBooked(null)} wide title={editing ? `Change the spray session: ${named(editing)}` : 'Book a spray session'}>
           {booking && <BookingForm target={booking} booths={booths} settings={settings} viewer={viewer} onDone={handlers.onBooked} />}
         </Dialog>
       )}
-      <Dialog open={opened !== undefined} onClose={handlers.onCloseSummary} wide title={opened ? `Spray session ${opened.id}` : 'Spray session'}>
+      <Dialog open={opened !== undefined} onClose={handlers.onCloseSummary} wide title={opened ? `Spray session: ${named(opened)}` : 'Spray session'}>
         {opened && (
           <SessionSummary
             shown={opened}

@@ -24,8 +24,8 @@ const newProduct: DefaultValues<ProductFormInput> = {
   makerRef: '',
   mixBaseParts: 1,
   mixHardenerParts: 0,
-  thinnerMinPct: 0,
-  thinnerMaxPct: 0,
+  thinnerMinPct: null,
+  thinnerMaxPct: null,
   inductionMin: 0,
   potLifeMin: null,
   dryFilmPerCoatUm: null,
@@ -45,5 +45,12 @@ export function startingValues(product?: Product): DefaultValues<ProductFormInpu
   if (!product) return newProduct;
   const values: Record<string, unknown> = {};
   for (const name of productFieldNames) values[name] = product[name as keyof Product];
-  return { ...(values as DefaultValues<ProductFormInput>), dryingTimes: product.dryingTimes.map((row) => ({ ...row })), hazards: [...product.hazards] };
+  // A sheet with no thinning range shows blank boxes, so saving it again never turns it into 0–0 % ("do not thin").
+  const thinning = product.thinningRangeGiven ? { thinnerMinPct: product.thinnerMinPct, thinnerMaxPct: product.thinnerMaxPct } : { thinnerMinPct: null, thinnerMaxPct: null };
+  return { ...(values as DefaultValues<ProductFormInput>), ...thinning, dryingTimes: product.dryingTimes.map((row) => ({ ...row })), hazards: [...product.hazards] };
+}
+
+/** The request body: a blank thinning box is sent as null (no range given), never left out or sent as 0. */
+export function toRequest(values: ProductFormOutput): ProductFormOutput {
+  return { ...values, thinnerMinPct: values.thinnerMinPct ?? null, thinnerMaxPct: values.thinnerMaxPct ?? null };
 }

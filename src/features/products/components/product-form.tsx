@@ -12,7 +12,7 @@ import { DryingTimesEditor } from './drying-times-editor';
 import { ProductIdentityFields } from './product-identity-fields';
 import { ProductLimitsFields } from './product-limits-fields';
 import { ProductMixFields } from './product-mix-fields';
-import { productFieldNames, startingValues, type ProductFormInput, type ProductFormOutput } from './product-form-values';
+import { productFieldNames, startingValues, toRequest, type ProductFormInput, type ProductFormOutput } from './product-form-values';
 
 interface ProductFormProps {
   /** The saved data sheet to edit; without it the form adds a new one. */
@@ -31,7 +31,8 @@ export function ProductForm({ product, onSaved, onCancel }: ProductFormProps) {
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
     try {
-      const saved = product ? await updateProduct.mutateAsync({ id: product.id, changes: values }) : await createProduct.mutateAsync(values);
+      const body = toRequest(values);
+      const saved = product ? await updateProduct.mutateAsync({ id: product.id, changes: body }) : await createProduct.mutateAsync(body);
       toast.success(product ? `Data sheet “${saved.name}” is saved.` : `Data sheet “${saved.name}” is added.`);
       form.reset(startingValues(saved));
       onSaved?.(saved);

@@ -15,12 +15,6 @@ export function mixRatioWords(baseParts: number, hardenerParts: number): string 
   return `${baseParts} : ${hardenerParts} by volume (base : hardener)`;
 }
 
-export function thinningWords(minPct: number, maxPct: number): string {
-  if (maxPct === 0) return 'Not thinned';
-  if (minPct === maxPct) return `${minPct} %`;
-  return `${minPct}–${maxPct} %`;
-}
-
 export function fileSizeWords(bytes: number): string {
   if (bytes < 1024) return `${bytes} bytes`;
   if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024)} KB`;

@@ -6,8 +6,8 @@ export function ProductMixFields() {
     <ProductSection title="Mix" description="Parts by volume. A one-component product has 0 hardener parts.">
       <ProductNumberField name="mixBaseParts" label="Base parts" />
       <ProductNumberField name="mixHardenerParts" label="Hardener parts" />
-      <ProductNumberField name="thinnerMinPct" label="Thinner, least" unit="%" />
-      <ProductNumberField name="thinnerMaxPct" label="Thinner, most" unit="%" />
+      <ProductNumberField name="thinnerMinPct" label="Thinner, least" unit="%" hint="Leave both thinner boxes empty if the data sheet gives no range; thinning is then not checked." optional />
+      <ProductNumberField name="thinnerMaxPct" label="Thinner, most" unit="%" hint="0 to 0 means the data sheet says do not thin." optional />
       <ProductNumberField name="inductionMin" label="Induction time" unit="min" hint="Stand time after mixing, before spraying." />
       <ProductNumberField name="potLifeMin" label="Pot life" unit="min" hint="Empty if the product has none (one-component)." optional />
     </ProductSection>

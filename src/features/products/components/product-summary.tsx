@@ -5,7 +5,8 @@ import { formatMinutes } from '../../../lib/durations';
 import { formatNumber, formatQuantity } from '../../../lib/units-display';
 import { DryingTimesTable } from './drying-times-table';
 import { HazardWords } from './product-cells';
-import { mixRatioWords, productKindLabels, thinningWords } from './product-format';
+import { thinningRangeWords, upperFirst } from '../../../../shared/words';
+import { mixRatioWords, productKindLabels } from './product-format';
 
 const notGiven = <span className="text-maple-700">Not given</span>;
 
@@ -36,7 +37,7 @@ export function ProductSummary({ product, units }: { product: Product; units: Un
         <Item term="Density">{maybe(product.densityKgPerL, (v) => `${formatNumber(v, 2)} kg/L`)}</Item>
         <Item term="Dry film per coat">{maybe(product.dryFilmPerCoatUm, (v) => formatQuantity('filmThickness', v, units))}</Item>
         <Item term="Mix">{mixRatioWords(product.mixBaseParts, product.mixHardenerParts)}</Item>
-        <Item term="Thinner">{thinningWords(product.thinnerMinPct, product.thinnerMaxPct)}</Item>
+        <Item term="Thinner">{upperFirst(thinningRangeWords(product))}</Item>
         <Item term="Induction time">{product.inductionMin === 0 ? 'None' : formatMinutes(product.inductionMin)}</Item>
         <Item term="Pot life">{maybe(product.potLifeMin, formatMinutes)}</Item>
         <Item term="Lowest application temperature">{maybe(product.minApplicationTempC, temp)}</Item>

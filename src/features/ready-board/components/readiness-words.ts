@@ -1,6 +1,7 @@
 import { missedWindowScuffGrit } from '../../../../shared/finishing/readiness';
 import { shopMoment, timeUntil } from '../../../lib/ready-time-words';
 import type { BoardPart } from './readiness';
+import { coatOfWords, denibNeededWords, upperFirst } from '../../../../shared/words';
 
 export { shopMoment, timeUntil };
 
@@ -11,9 +12,8 @@ export function coatWords(part: BoardPart): string {
 }
 
 /** The server names an abrade step "Abrade P320"; in the shop between coats that is a denib. */
-function denibWords(nextStep: string | null): string {
-  const grit = /^Abrade (.+)$/.exec(nextStep ?? '')?.[1] ?? missedWindowScuffGrit;
-  return `Denib ${grit} needed`;
+function denibNeeded(nextStep: string | null): string {
+  return denibNeededWords(/^Abrade (.+)$/.exec(nextStep ?? '')?.[1] ?? missedWindowScuffGrit);
 }
 
 const ahead = (iso: string | null, now: Date): iso is string => iso !== null && Date.parse(iso) > now.getTime();
@@ -28,13 +28,12 @@ const handle = { before: 'Handle', since: 'Ready to handle' };
 const pack = { before: 'Pack', since: 'Ready to pack' };
 const cure = { before: 'Full cure', since: 'Fully cured' };
 
-const nextCoat = (part: BoardPart) => `coat ${Math.min(part.coatsDone + 1, part.coatsTotal)} of ${part.coatsTotal}`;
+const nextCoat = (part: BoardPart) => coatOfWords(Math.min(part.coatsDone + 1, part.coatsTotal), part.coatsTotal);
 
 /** What a part between coats needs next, as its headline: never a handle time while coats remain. */
 function nextWords(part: BoardPart): string {
-  if (part.windowMissed || part.abradeRequired) return `${part.windowMissed ? `Denib ${missedWindowScuffGrit} needed` : denibWords(part.nextStep)}, then ${nextCoat(part)}`;
-  const coat = nextCoat(part);
-  return `${coat.charAt(0).toUpperCase()}${coat.slice(1)} next`;
+  if (part.windowMissed || part.abradeRequired) return `${part.windowMissed ? denibNeededWords(missedWindowScuffGrit) : denibNeeded(part.nextStep)}, then ${nextCoat(part)}`;
+  return `${upperFirst(nextCoat(part))} next`;
 }
 
 /** When the window for the next coat opens and closes, and whether a denib is on record since the last coat. */
@@ -73,7 +72,7 @@ export function partLines(part: BoardPart, now: Date, timeZone: string): { headl
   switch (part.shownState) {
     case 'waiting':
       if (part.coatsTotal === 0) return { headline: 'Not sprayed yet', details: [] };
-      return { headline: 'Not sprayed yet', details: present([part.abradeRequired ? `First: ${denibWords(part.nextStep).toLowerCase()}` : `First: ${nextCoat(part)}`, expectedLine(part, now, timeZone)]) };
+      return { headline: 'Not sprayed yet', details: present([part.abradeRequired ? `First: ${denibNeeded(part.nextStep).toLowerCase()}` : `First: ${nextCoat(part)}`, expectedLine(part, now, timeZone)]) };
     case 'in-finish':
       return { headline: nextWords(part), details: present([...windowLines(part, now, timeZone), movableLine(part, now, timeZone), expectedLine(part, now, timeZone)]) };
     case 'drying':

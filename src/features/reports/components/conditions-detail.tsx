@@ -17,7 +17,6 @@ export function ConditionsDetail({ report, units, timeZone }: ConditionsDetailPr
   const limitOf = new Map(report.limits.map((limit) => [limit.productId, limit]));
   const strictest = strictestLimits(report.limits);
   const columns: ReportColumn<Coat>[] = [
-    { header: 'Coat', cell: (coat) => `#${coat.coatId}` },
     { header: 'Sprayed (shop time)', cell: (coat) => formatShopDateTime(coat.sprayedAt, timeZone) },
     { header: 'Product', cell: (coat) => coat.productName },
     { header: 'Air', cell: (coat) => quantityWords(coat.airTempC, 'temperature', units), numeric: true },

@@ -8,6 +8,7 @@ import { asNumber, FormAlert, InputField, SelectField } from '../../../component
 import { applyServerErrors } from '../../../lib/form-errors';
 import { listTimeZones } from '../../../lib/shop-time';
 import { useUpdateShopSettings } from '../../../api/settings/update-settings';
+import { currencyChoices, localeChoices, withSaved } from './shop-format-options';
 
 const fieldNames = Object.keys(shopSettingsSchema.shape);
 const unitOptions = [
@@ -50,6 +51,14 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettings }) {
       <div className="grid max-w-3xl gap-4 sm:grid-cols-2">
         <InputField label="Shop name" error={errors.shopName?.message} registration={register('shopName')} />
         <SelectField label="Timezone" hint="Every time in Boothwright is shown in this zone." options={zones} error={errors.timezone?.message} registration={register('timezone')} />
+        <SelectField
+          label="Language and region"
+          hint="How dates, times, numbers and money are written."
+          options={withSaved(localeChoices, settings.locale)}
+          error={errors.locale?.message}
+          registration={register('locale')}
+        />
+        <SelectField label="Currency" hint="Prices on the data sheets and costs on estimates are in this currency." options={withSaved(currencyChoices, settings.currency)} error={errors.currency?.message} registration={register('currency')} />
         <SelectField label="Units for new users" options={unitOptions} error={errors.defaultUnits?.message} registration={register('defaultUnits')} />
         <InputField
           {...number}

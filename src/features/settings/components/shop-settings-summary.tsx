@@ -1,12 +1,15 @@
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { ShopSettings } from '../../../../shared/schemas/settings';
 import { formatNumber, formatQuantity } from '../../../lib/units-display';
+import { choiceLabel, currencyChoices, localeChoices } from './shop-format-options';
 
 /** What roles without `settings:write` see: the same facts, read-only. */
 export function ShopSettingsSummary({ settings, units }: { settings: ShopSettings; units: UnitSystem }) {
   const rows: [string, string][] = [
     ['Shop name', settings.shopName],
     ['Timezone', settings.timezone],
+    ['Language and region', choiceLabel(localeChoices, settings.locale)],
+    ['Currency', choiceLabel(currencyChoices, settings.currency)],
     ['Units for new users', settings.defaultUnits === 'us' ? 'US customary' : 'Metric'],
     ['Expected drying temperature', formatQuantity('temperature', settings.planningDryingTempC, units)],
     ['Set-up per spray session', `${settings.setupMin} min`],

@@ -29,7 +29,7 @@ const fieldNames = Object.keys(checklistSchema.shape);
 /** The last checks if there were any (a sprayer re-checks after a fix), else the booth's latest reading. */
 function startingValues(session: SpraySession, reading: Reading | null): DefaultValues<ChecklistInput> {
   if (session.checklist) {
-    const { verdict: _v, problems: _p, completedAt: _c, completedByName: _b, ...checks } = session.checklist;
+    const { verdict: _v, problems: _p, notes: _n, completedAt: _c, completedByName: _b, ...checks } = session.checklist;
     return { ...checks, overrideReason: null };
   }
   return {

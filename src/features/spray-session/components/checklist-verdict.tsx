@@ -14,6 +14,21 @@ interface ChecklistVerdictProps {
   units: UnitSystem;
 }
 
+/** Readings within their limits but close to them: information for the sprayer, not a problem. */
+export function ChecklistNotes({ notes }: { notes: string[] | undefined }) {
+  if (!notes?.length) return null;
+  return (
+    <div className="mt-3 rounded-panel border-2 border-maple-400 bg-maple-50 p-3">
+      <p className="font-semibold">For information</p>
+      <ul className="list-disc pl-6">
+        {notes.map((note) => (
+          <li key={note}>{note}</li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
 /** The live verdict as the checks are filled in, each problem in words. */
 export function ChecklistVerdict({ evaluation, missing, dew, units }: ChecklistVerdictProps) {
   return (
@@ -65,6 +80,7 @@ export function ChecklistVerdict({ evaluation, missing, dew, units }: ChecklistV
         </ul>
       )}
       {evaluation && evaluation.problems.length === 0 && <p className="mt-3 text-lg">Every check passes.</p>}
+      {evaluation && <ChecklistNotes notes={evaluation.notes} />}
     </section>
   );
 }

@@ -2,10 +2,11 @@ import { Controller, type Control, type FieldErrors, type UseFormRegister } from
 import type { Mix } from '../../../../shared/schemas/checklist';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
+import { mixWords, thinningRangeWords } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 import { asNumberOrNull, SelectField } from '../../../components/ui/field';
 import type { CoatEntryInput } from '../hooks/use-coat-form';
-import { shopWhen } from '../utils/session-format';
-import { stepWords, type CoatStep } from '../utils/session-plan';
+import { coatStepWords, type CoatStep } from '../utils/session-plan';
 import { StepperField } from './stepper-field';
 
 interface CoatMaterialFieldsProps {
@@ -24,12 +25,13 @@ interface CoatMaterialFieldsProps {
 const numberOrNull = { setValueAs: asNumberOrNull };
 
 export function CoatMaterialFields({ control, register, errors, steps, partsChosen, product, mixes, units, timeZone }: CoatMaterialFieldsProps) {
-  const stepOptions = [{ value: '', label: steps.length ? 'Choose the step…' : partsChosen ? 'No finish system for these parts' : 'Choose the parts first' }, ...steps.map((s) => ({ value: s.position, label: stepWords(s, units) }))];
-  const mixOptions = [{ value: '', label: mixes.length ? 'No recorded mix' : 'No mix of this product recorded' }, ...mixes.map((m) => ({ value: m.id, label: `Mix ${m.id}: ${m.totalL.toFixed(2)} L, mixed ${shopWhen(m.mixedAt, timeZone)}` }))];
+  const shop = { ...useShopFormat(), timeZone };
+  const stepOptions = [{ value: '', label: steps.length ? 'Choose the coat…' : partsChosen ? 'No finish system for these parts' : 'Choose the parts first' }, ...steps.map((s) => ({ value: s.position, label: coatStepWords(s, steps, units) }))];
+  const mixOptions = [{ value: '', label: mixes.length ? 'No recorded mix' : 'No mix of this product recorded' }, ...mixes.map((m) => ({ value: m.id, label: `${mixWords({ productName: m.productName, mixedAt: new Date(m.mixedAt) }, shop)}, ${m.totalL.toFixed(2)} L` }))];
   const lotOptions = [{ value: '', label: 'Lot not recorded' }, ...(product?.lots ?? []).map((lot) => ({ value: lot.id, label: `${lot.lotNumber}${lot.expired ? ` (EXPIRED ${lot.expiresOn})` : ''}` }))];
   return (
     <div className="grid gap-4 md:grid-cols-2">
-      <SelectField label="Step" className="md:col-span-2" options={stepOptions} error={errors.stepPosition?.message} registration={register('stepPosition', numberOrNull)} />
+      <SelectField label="Coat" className="md:col-span-2" options={stepOptions} error={errors.stepPosition?.message} registration={register('stepPosition', numberOrNull)} />
       <SelectField label="Mix (pot)" options={mixOptions} error={errors.mixId?.message} registration={register('mixId', numberOrNull)} disabled={!product} />
       <SelectField label="Product lot" options={lotOptions} error={errors.lotId?.message} registration={register('lotId', numberOrNull)} disabled={!product} />
       <Controller
@@ -46,7 +48,7 @@ export function CoatMaterialFields({ control, register, errors, steps, partsChos
             digits={1}
             value={field.value}
             onChange={(v) => field.onChange(v ?? 0)}
-            hint={product ? `Data sheet: ${product.thinnerMinPct}–${product.thinnerMaxPct} %` : undefined}
+            hint={product ? `Data sheet: ${thinningRangeWords(product)}` : undefined}
             error={errors.thinningPct?.message}
           />
         )}

@@ -11,6 +11,7 @@ import { useOnline } from '../../../lib/use-online';
 import { useCreateDenib } from '../../../api/denibs/create-denib';
 import type { PickedPart } from '../utils/picked-part';
 import { PartChecklist } from './part-checklist';
+import { denibWords, partsWords, upperFirst } from '../../../../shared/words';
 
 // Denib between coats P240–P320, P400 on topcoats; a scuff after a missed window P320–P400 (trade reference §8).
 const grits = ['P240', 'P280', 'P320', 'P360', 'P400', 'P600'];
@@ -51,8 +52,7 @@ export function DenibForm({ sessionId, parts, needing, grit, onDone }: DenibForm
     setFormError(null);
     try {
       const denib = await createDenib.mutateAsync({ ...entry, spraySessionId: sessionId, abradedAt: minutesBefore(new Date(), minutesAgo) });
-      const count = denib.partIds.length === 1 ? '1 part' : `${denib.partIds.length} parts`;
-      toast.success(`Denib ${denib.grit} recorded on ${count}. The next coat can go on once its window opens.`);
+      toast.success(`${upperFirst(denibWords(denib.grit))} recorded on ${partsWords(denib.partIds.length)}. The next coat can go on once its window opens.`);
       onDone();
     } catch (error) {
       setFormError(applyServerErrors(error, setError, ['partIds', 'grit', 'notes', 'abradedAt']));

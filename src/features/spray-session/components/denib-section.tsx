@@ -5,12 +5,13 @@ import { Button } from '../../../components/ui/button';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { fromPart, type PickedPart } from '../utils/picked-part';
 import { DenibForm } from './denib-form';
+import { denibNeededWords } from '../../../../shared/words';
 
 const gritOf = (part: ReadyPart | undefined) => /^Abrade (P\d+)$/.exec(part?.nextStep ?? '')?.[1] ?? missedWindowScuffGrit;
 
 function progress(part: ReadyPart | undefined): string | undefined {
   if (!part) return undefined;
-  return part.abradeRequired ? `Denib ${gritOf(part)} needed` : `${part.coatsDone} of ${part.coatsTotal} coats done`;
+  return part.abradeRequired ? denibNeededWords(gritOf(part)) : `${part.coatsDone} of ${part.coatsTotal} coats done`;
 }
 
 /** Denib or scuff between coats, recorded like a coat: it clears "denib needed" and lets a missed window's coat go on. */

@@ -6,6 +6,8 @@ import { formatQuantity } from '../../../../shared/units';
 import { shopWhen } from '../utils/session-format';
 import { Countdown } from './countdown';
 import { verdictBorder, VerdictBadge } from './verdict-badge';
+import { mixWords } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 
 interface PotState {
   verdict: Verdict;
@@ -43,9 +45,10 @@ interface MixCardProps {
 export function MixCard({ mix, product, now, timeZone, units }: MixCardProps) {
   const state = potState(mix, now, timeZone);
   const litres = (l: number) => formatQuantity(l, 'liquidVolume', units);
-  const lots = mix.lotIds.map((id) => product?.lots.find((lot) => lot.id === id)?.lotNumber ?? `lot ${id}`);
+  const lots = mix.lotIds.map((id) => product?.lots.find((lot) => lot.id === id)?.lotNumber ?? 'a lot no longer on the data sheet');
+  const shop = { ...useShopFormat(), timeZone };
   return (
-    <article aria-label={`Mix ${mix.id}: ${mix.productName}`} className={`rounded-panel border-2 bg-white p-4 ${verdictBorder[state.verdict]}`}>
+    <article aria-label={`Mix: ${mixWords({ productName: mix.productName, mixedAt: new Date(mix.mixedAt) }, shop)}`} className={`rounded-panel border-2 bg-white p-4 ${verdictBorder[state.verdict]}`}>
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h4 className="text-lg font-bold">{mix.productName}</h4>
         <VerdictBadge verdict={state.verdict} label={state.short} />

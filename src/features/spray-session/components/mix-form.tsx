@@ -6,6 +6,7 @@ import type { z } from 'zod';
 import { createMixSchema } from '../../../../shared/schemas/checklist';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
+import { thinningRangeWords } from '../../../../shared/words';
 import { Button } from '../../../components/ui/button';
 import { FormAlert, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
@@ -69,7 +70,7 @@ export function MixForm({ sessionId, products, airTempC, units, onDone }: MixFor
           control={control}
           name="thinningPct"
           render={({ field }) => (
-            <StepperField label="Thinner" unit="% of base + hardener" units={units} step={1} min={0} max={100} digits={0} value={field.value} onChange={(v) => field.onChange(v ?? 0)} hint={product ? `Data sheet: ${product.thinnerMinPct}–${product.thinnerMaxPct} %` : undefined} error={errors.thinningPct?.message} />
+            <StepperField label="Thinner" unit="% of base + hardener" units={units} step={1} min={0} max={100} digits={0} value={field.value} onChange={(v) => field.onChange(v ?? 0)} hint={product ? `Data sheet: ${thinningRangeWords(product)}` : undefined} error={errors.thinningPct?.message} />
           )}
         />
         <Controller control={control} name="tempC" render={({ field }) => <StepperField label="Material temperature" quantity="temperature" units={units} step={units === 'us' ? 1 : 0.5} value={field.value} onChange={field.onChange} error={errors.tempC?.message} />} />

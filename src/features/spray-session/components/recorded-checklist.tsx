@@ -1,6 +1,6 @@
 import type { ChecklistResult } from '../../../../shared/schemas/checklist';
 import { shopWhen } from '../utils/session-format';
-import { checklistVerdictWords } from './checklist-verdict';
+import { ChecklistNotes, checklistVerdictWords } from './checklist-verdict';
 import { VerdictBadge } from './verdict-badge';
 
 /** What was recorded on the server: its verdict is the one that counts. */
@@ -20,6 +20,7 @@ export function RecordedChecklist({ checklist, timeZone }: { checklist: Checklis
           ))}
         </ul>
       )}
+      <ChecklistNotes notes={checklist.notes} />
       {checklist.overrideReason && (
         <p className="mt-2">
           <span className="font-semibold">Lead’s override:</span> {checklist.overrideReason}

@@ -2,6 +2,7 @@ import { missedWindowScuffGrit } from '../../../../shared/finishing/readiness';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { calendarDateIn } from '../../../../shared/time';
 import { formatShopClock, shopZoneName } from '../../../lib/shop-time';
+import { coatOfWords, denibWords } from '../../../../shared/words';
 
 const dayFormats = new Map<string, Intl.DateTimeFormat>();
 
@@ -46,14 +47,14 @@ export function remainingMinutesWords(ms: number): string {
 }
 
 /**
- * In the booth's words, as the denib section and the ready board say it: "denib P320, then coat 2
- * of 3", or "coat 2 of 3 (40 µm dry)". The server names the step ("Abrade P320", "Coat at 40 µm dry").
+ * In the booth's words, as the denib section and the ready board say it: "denib with P320, then
+ * coat 2 of 3", or "coat 2 of 3 (40 µm dry)". The server names the step ("Abrade P320", "Coat at 40 µm dry").
  */
 export function nextStepWords(part: Pick<ReadyPart, 'nextStep' | 'abradeRequired' | 'coatsDone' | 'coatsTotal'>): string {
-  const coat = `coat ${Math.min(part.coatsDone + 1, part.coatsTotal)} of ${part.coatsTotal}`;
+  const coat = coatOfWords(Math.min(part.coatsDone + 1, part.coatsTotal), part.coatsTotal);
   const grit = /^Abrade (.+)$/.exec(part.nextStep ?? '')?.[1];
-  if (grit) return `denib ${grit}, then ${coat}`;
+  if (grit) return `${denibWords(grit)}, then ${coat}`;
   const film = /^Coat at (.+)$/.exec(part.nextStep ?? '')?.[1];
   const words = film ? `${coat} (${film})` : coat;
-  return part.abradeRequired ? `denib ${missedWindowScuffGrit} first (the window was missed), then ${words}` : words;
+  return part.abradeRequired ? `${denibWords(missedWindowScuffGrit)} first (the window was missed), then ${words}` : words;
 }

@@ -6,6 +6,7 @@ import type { Product } from '../../../../shared/schemas/product';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { formatQuantity } from '../../../../shared/units';
+import { coatOfWords, upperFirst } from '../../../../shared/words';
 
 export type CoatStep = Extract<FinishStep, { kind: 'coat' }>;
 
@@ -32,9 +33,9 @@ export function suggestedStep(planned: number | null | undefined, system: Finish
   return hadIt && next !== null ? next : planned;
 }
 
-export function stepWords(step: FinishStep, units: UnitSystem): string {
-  const number = `Step ${step.position + 1}`;
-  if (step.kind === 'abrade') return `${number}: abrade ${step.grit}`;
+/** "Coat 2 of 3: Kestrel Topcoat, 40 µm dry": a coat step counted among the system's coats, as on the booking form. */
+export function coatStepWords(step: CoatStep, coatSteps: CoatStep[], units: UnitSystem): string {
+  const number = upperFirst(coatOfWords(coatSteps.findIndex((s) => s.position === step.position) + 1, coatSteps.length));
   return `${number}: ${step.productName}, ${formatQuantity(step.dryFilmUm, 'filmThickness', units)} dry`;
 }
 

@@ -5,6 +5,8 @@ import type { TodaySession } from '../../../../shared/schemas/today';
 import { inputClasses } from '../../../components/ui/field';
 import { errorMessage } from '../../../lib/error-messages';
 import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
+import { spraySessionWords } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 
 interface AssignSprayerSelectProps {
   session: TodaySession;
@@ -17,13 +19,14 @@ interface AssignSprayerSelectProps {
 export function AssignSprayerSelect({ session, sprayers, label }: AssignSprayerSelectProps) {
   const id = useId();
   const assign = useUpdateSpraySession();
+  const named = spraySessionWords({ boothName: session.boothName, startAt: new Date(session.start) }, useShopFormat());
   const change = (value: string) => {
     const sprayerId = value === '' ? null : Number(value);
     const name = sprayers.find((s) => s.id === sprayerId)?.name;
     assign.mutate(
       { id: session.id, changes: { sprayerId } },
       {
-        onSuccess: () => toast.success(name ? `${name} sprays ${session.boothName} session ${session.id}.` : `Session ${session.id} has no sprayer now.`),
+        onSuccess: () => toast.success(name ? `${name} sprays ${named}.` : `No sprayer now for ${named}.`),
         onError: (error) => toast.error(`Not changed: ${errorMessage(error)}`),
       },
     );

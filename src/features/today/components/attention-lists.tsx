@@ -1,9 +1,10 @@
 import { Link } from 'react-router-dom';
 import type { LeadBoard } from '../../../../shared/schemas/today';
 import { formatShopClock, formatShopDateTime } from '../../../lib/shop-time';
+import { partsWords } from '../../../../shared/words';
 import { BoardSection } from './board-section';
 
-const parts = (n: number) => `${n} part${n === 1 ? '' : 's'}`;
+const parts = partsWords;
 const linkClass = 'font-semibold text-lacquer-800 underline underline-offset-4';
 const rowClass = 'border-t border-maple-200 py-2 first:border-t-0';
 
@@ -20,7 +21,7 @@ export function RecoatClosing({ items, timeZone, today }: { items: LeadBoard['re
             <p className="text-sm">
               {item.bookedSessionId && item.bookedStart ? (
                 <Link to={`/spray-sessions/${item.bookedSessionId}`} className="text-lacquer-800 underline underline-offset-4">
-                  Booked {formatShopClock(new Date(item.bookedStart), timeZone)} (session {item.bookedSessionId})
+                  Booked for {formatShopClock(new Date(item.bookedStart), timeZone)}: open the spray session
                 </Link>
               ) : (
                 <span className="font-semibold text-verdict-stop">

@@ -84,12 +84,12 @@ describe('partLines', () => {
     const now = at('2026-12-02T10:30:00Z');
     const lines = partLines(toBoardPart(between, now), now, zone);
     expect(lines).toEqual({
-      headline: 'Denib P320 needed, then coat 2 of 3',
+      headline: 'Denib with P320 needed, then coat 2 of 3',
       details: ['Window opens 11:00 (in 30 min)', 'Can be moved between racks from 12:00', 'Ready to handle from about tomorrow 09:15 (estimate, 2 coats to go)'],
     });
     expect([lines.headline, ...lines.details].join(' ')).not.toMatch(/Handle in/);
     const late = at('2026-12-02T20:00:00Z');
-    expect(partLines(toBoardPart(between, late), late, zone)).toMatchObject({ headline: 'Denib P320 needed, then coat 2 of 3', details: expect.arrayContaining(['Recoat window closed at 20:00']) });
+    expect(partLines(toBoardPart(between, late), late, zone)).toMatchObject({ headline: 'Denib with P320 needed, then coat 2 of 3', details: expect.arrayContaining(['Recoat window closed at 20:00']) });
   });
   it('names the next coat once the denib is on record, with a window that no longer closes', () => {
     const denibbed = part({ state: 'in-finish', coatsDone: 1, coatsRemaining: 2, nextStep: 'Coat at 40 µm dry', nextWindowOpensAt: '2026-12-02T11:00:00Z', denibbedAt: '2026-12-02T11:05:00Z', handleAt: null, expectedHandleAt: null });

@@ -5,12 +5,12 @@ const part = (nextStep: string, coatsDone: number, abradeRequired = false) => ({
 
 describe('nextStepWords on the latest coat card', () => {
   it('says a planned abrade step as the denib it is, then the coat that follows', () => {
-    expect(nextStepWords(part('Abrade P320', 1, true))).toBe('denib P320, then coat 2 of 3');
+    expect(nextStepWords(part('Abrade P320', 1, true))).toBe('denib with P320, then coat 2 of 3');
   });
   it('names the next coat by its number and its film', () => {
     expect(nextStepWords(part('Coat at 40 µm dry', 1))).toBe('coat 2 of 3 (40 µm dry)');
   });
   it('puts a missed window’s denib first when the step itself is a coat', () => {
-    expect(nextStepWords(part('Coat at 40 µm dry', 2, true))).toBe('denib P320 first (the window was missed), then coat 3 of 3 (40 µm dry)');
+    expect(nextStepWords(part('Coat at 40 µm dry', 2, true))).toBe('denib with P320 first (the window was missed), then coat 3 of 3 (40 µm dry)');
   });
 });

@@ -56,7 +56,8 @@ export function ConditionsChart({ points, outside, limits, temperatureUnit, time
         {limits.maxRh !== null && (
           <ReferenceLine yAxisId="rh" y={limits.maxRh} stroke={stopColour} strokeDasharray="8 4" ifOverflow="extendDomain" label={lineLabel(`Max. RH ${limits.maxRh} %`, stopColour, 'insideTopRight')} />
         )}
-        <Scatter yAxisId="temp" data={outside} dataKey="air" name="Coat outside limits" fill={stopColour} shape="diamond" isAnimationActive={false} />
+        {/* Given an empty list, recharts falls back to the chart's data and would mark every reading. */}
+        {outside.length > 0 && <Scatter yAxisId="temp" data={outside} dataKey="air" name="Coat outside limits" fill={stopColour} shape="diamond" isAnimationActive={false} />}
       </ComposedChart>
       <ChartLegend
         entries={[
@@ -64,7 +65,7 @@ export function ConditionsChart({ points, outside, limits, temperatureUnit, time
           { label: 'Dew-point margin', colour: colourAt(1), mark: 'dashed-line' },
           { label: 'Relative humidity', colour: colourAt(2), mark: 'line' },
           { label: 'Limits', colour: stopColour, mark: 'dashed-line' },
-          { label: 'Coat outside limits', colour: stopColour, mark: 'point' },
+          ...(outside.length > 0 ? [{ label: 'Coat outside limits', colour: stopColour, mark: 'point' as const }] : []),
         ]}
       />
     </>
