@@ -4,7 +4,8 @@ import path from 'node:path';
 import type { BrowserContext, Locator, Page } from '@playwright/test';
 import { expect, shotsDir, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
-import { bookTwoDoors, coatsOnServer, guardContext, launchTablet, leadApi } from './offline-helpers';
+import { leadApi } from './lead-api';
+import { bookTwoDoors, coatsOnServer, guardContext, launchTablet } from './offline-helpers';
 
 /** A number box by its label; the − and + buttons beside it name the field too. */
 const box = (scope: Page | Locator, label: string) => scope.getByRole('textbox', { name: new RegExp(`^${label}`) });

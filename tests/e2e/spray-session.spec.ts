@@ -1,43 +1,18 @@
-import { request, type APIRequestContext, type Locator, type Page } from '@playwright/test';
+import type { Locator, Page } from '@playwright/test';
 import type { Coat } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import type { SpraySession } from '../../shared/schemas/spray-session';
 import { expect, shotsDir, test } from './fixtures';
-import { demo, demoPassword, signIn } from './helpers';
+import { signIn } from './helpers';
+import { leadApi, type LeadApi } from './lead-api';
 
 const shopZone = 'Europe/London';
 const clock = (iso: string) => new Intl.DateTimeFormat('en-GB', { timeZone: shopZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
 
-interface Api {
-  context: APIRequestContext;
-  get: <T>(path: string) => Promise<T>;
-  send: <T>(method: 'POST' | 'PATCH', path: string, body: object) => Promise<T>;
-}
-
-/** The finishing lead's own API session, to set up what the sprayer then works on. */
-async function leadApi(baseURL: string): Promise<Api> {
-  const context = await request.newContext({ baseURL });
-  const token = async () => (await (await context.get('/api/auth/csrf')).json()).token as string;
-  const login = await context.post('/api/auth/login', { headers: { 'x-csrf-token': await token() }, data: { email: demo.lead.email, password: demoPassword } });
-  expect(login.ok()).toBe(true);
-  const csrf = await token();
-  const get = async <T>(path: string): Promise<T> => {
-    const res = await context.get(path);
-    expect(res.ok(), `GET ${path}`).toBe(true);
-    return res.json();
-  };
-  const send = async <T>(method: 'POST' | 'PATCH', path: string, body: object): Promise<T> => {
-    const res = await context.fetch(path, { method, headers: { 'x-csrf-token': csrf }, data: body });
-    expect(res.ok(), `${method} ${path}: ${await res.text()}`).toBe(true);
-    return res.json();
-  };
-  return { context, get, send };
-}
-
 /** A fresh door on the demo vanity job (2K PU primer first) in a session booked now for Mina, the demo sprayer. */
-async function bookSession(api: Api): Promise<{ sessionId: number; partLabel: string; partTag: string }> {
+async function bookSession(api: LeadApi): Promise<{ sessionId: number; partLabel: string; partTag: string }> {
   const now = Date.now();
   const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
   const partLabel = `E2E door ${now}`;
@@ -230,7 +205,7 @@ interface DenibPlan {
  * first topcoat in a session booked now: one whose primer window closed hours ago, one between
  * coats with its window open, and one that has had the first topcoat already.
  */
-async function bookTopcoatSession(api: Api): Promise<DenibPlan> {
+async function bookTopcoatSession(api: LeadApi): Promise<DenibPlan> {
   const now = Date.now();
   const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
   const labels = { missed: `Door missed ${now}`, due: `Door due ${now}`, ahead: `Door ahead ${now}` };
