@@ -125,7 +125,8 @@ describe.skipIf(!pgUrl)('two app instances on one PostgreSQL database (skipped w
       expect(res.status).toBe(201);
       booked.push(res.body.spraySession.id);
     }
-    const mailsAbout = (id: number) => mail.messages.filter((m) => m.text.includes(`Spray session ${id} is booked or moved`)).length;
+    // The e-mail names the booth and shop time; its link is what tells one session's e-mail from another's.
+    const mailsAbout = (id: number) => mail.messages.filter((m) => aboutSession(m.text, id) && m.text.includes('is booked or moved')).length;
     await waitUntil('the booking e-mails to arrive', () => booked.every((id) => mailsAbout(id) > 0), 20_000);
     // A tick that was already running may still be sending; two more finished ticks on each
     // instance mean every tick that could have seen these notifications owed is over.
@@ -140,9 +141,14 @@ describe.skipIf(!pgUrl)('two app instances on one PostgreSQL database (skipped w
     const boothId = (await json(await call(b.base, leadOnA, '/api/booths', { method: 'POST', body: { name: 'After A', kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 } }))).body.booth.id;
     const res = await json(await bookFor(b, boothId, '2027-04-20T07:00:00Z', '2027-04-20T09:00:00Z', sprayerId));
     expect(res.status).toBe(201);
-    await waitUntil('B to send the booking e-mail alone', () => mail.messages.some((m) => m.text.includes(`Spray session ${res.body.spraySession.id} is booked`)), 20_000);
+    await waitUntil('B to send the booking e-mail alone', () => mail.messages.some((m) => aboutSession(m.text, res.body.spraySession.id)), 20_000);
   });
 });
+
+/** Whether an e-mail links to this spray session's page (not one whose number starts the same). */
+function aboutSession(text: string, id: number): boolean {
+  return new RegExp(`/spray-sessions/${id}(?!\\d)`).test(text);
+}
 
 async function bucketHolds(bytes: Buffer): Promise<boolean> {
   const client = new S3Client({
