@@ -8,6 +8,7 @@ import type { CoatEntity } from '../db/entities/coat.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import type { UserEntity } from '../db/entities/user.entity';
 import { coatSentence, momentWords, namesFor, partList, partsOfJob, timeWords, type CoatStory } from './notification-words';
+import { stepsByJob } from './part-coats';
 import { readinessOf } from './ready';
 import { crewDue, upkeepDue } from './upkeep-notifications';
 
@@ -84,7 +85,8 @@ async function withParts(ctx: RuleContext, coats: CoatEntity[]): Promise<{ found
   const siteOfSession = new Map(spraySessions.map((s) => [s.id, boothSite.get(s.boothId)]));
   const jobById = new Map(jobs.map((j) => [j.id, j]));
   const boothOfSession = new Map(spraySessions.map((s) => [s.id, s.boothId]));
-  const names = await namesFor(ctx.data, coats, boothOfSession);
+  // Read once per chunk: every coat's sentence says which coat of its job's system it was.
+  const [names, steps] = await Promise.all([namesFor(ctx.data, coats, boothOfSession), stepsByJob(ctx.data, parts)]);
   const partIdsOfCoat = new Map<number, Set<number>>();
   for (const link of links) partIdsOfCoat.set(link.coatId, (partIdsOfCoat.get(link.coatId) ?? new Set()).add(link.partId));
   const found = coats.map((coat) => {
@@ -92,7 +94,7 @@ async function withParts(ctx: RuleContext, coats: CoatEntity[]): Promise<{ found
     const own = ids ? parts.filter((p) => ids.has(p.id)) : [];
     const boothName = names.booths.get(boothOfSession.get(coat.spraySessionId) ?? -1) ?? 'the booth';
     const productName = names.products.get(coat.productId) ?? 'the product';
-    return { coat, parts: own, job: own.length ? jobById.get(own[0].jobId) : undefined, siteId: siteOfSession.get(coat.spraySessionId), boothName, productName };
+    return { coat, parts: own, job: own.length ? jobById.get(own[0].jobId) : undefined, siteId: siteOfSession.get(coat.spraySessionId), boothName, productName, steps: own.length ? (steps.get(own[0].jobId) ?? []) : [] };
   });
   return { found, readiness: await readinessOf(ctx.data, parts, ctx.now) };
 }
@@ -100,12 +102,12 @@ async function withParts(ctx: RuleContext, coats: CoatEntity[]): Promise<{ found
 type Found = Awaited<ReturnType<typeof withParts>>;
 
 /** Decides each coat found, a chunk at a time. */
-async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (story: CoatStory, readiness: Found['readiness']) => Promise<DueNotification[]>): Promise<DueNotification[]> {
+async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (story: CoatStory, readiness: Found['readiness']) => DueNotification[]): Promise<DueNotification[]> {
   const due: DueNotification[] = [];
   for (let i = 0; i < coats.length; i += coatsPerChunk) {
     if (i > 0) await pause();
     const { found, readiness } = await withParts(ctx, coats.slice(i, i + coatsPerChunk));
-    for (const story of found) due.push(...(await decide(story, readiness)));
+    for (const story of found) due.push(...decide(story, readiness));
   }
   return due;
 }
@@ -113,13 +115,13 @@ async function decideInChunks(ctx: RuleContext, coats: CoatEntity[], decide: (st
 /** The last coat of the system is on and the parts have reached handling time. */
 export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
   const coats = await coatsBetween(ctx, 'handleAt', new Date(ctx.now.getTime() - dayMs), ctx.now, 'parts-ready');
-  return decideInChunks(ctx, coats, async (story, readiness) => {
+  return decideInChunks(ctx, coats, (story, readiness) => {
     const { coat, parts, job, siteId } = story;
     const finished = parts.filter((p) => ['ready-to-handle', 'ready-to-pack', 'cured'].includes(readiness.get(p.id)!.state));
     if (!job || finished.length === 0) return [];
     const subject = `Ready to handle: ${job.reference} (${job.customer})`;
     const body = [
-      `${partsOfJob(finished.length, job)} can be handled since ${momentWords(coat.handleAt, ctx.shop)}, after ${await coatSentence(ctx.data, story, ctx.shop)}:`,
+      `${partsOfJob(finished.length, job)} can be handled since ${momentWords(coat.handleAt, ctx.shop)}, after ${coatSentence(story, ctx.shop)}:`,
       partList(finished),
       '',
       `Check the film before stacking; pack from ${momentWords(coat.packAt, ctx.shop)}.`,
@@ -134,13 +136,13 @@ export async function partsReady(ctx: RuleContext): Promise<DueNotification[]> {
 /** A recoat window closes soon and the parts are still waiting for their next coat. */
 export async function recoatClosing(ctx: RuleContext): Promise<DueNotification[]> {
   const coats = await coatsBetween(ctx, 'recoatClosesAt', ctx.now, new Date(ctx.now.getTime() + ctx.recoatWarningHours * 3_600_000), 'recoat-closing');
-  return decideInChunks(ctx, coats, async (story, readiness) => {
+  return decideInChunks(ctx, coats, (story, readiness) => {
     const { coat, parts, job, siteId } = story;
     const waiting = parts.filter((p) => readiness.get(p.id)!.nextWindow?.closesAt?.toISOString() === coat.recoatClosesAt);
     if (!job || waiting.length === 0) return [];
     const subject = `Recoat window closing ${timeWords(coat.recoatClosesAt!, ctx.shop)}: ${job.reference} (${job.customer})`;
     const body = [
-      `${partsOfJob(waiting.length, job)} are waiting for their next coat after ${await coatSentence(ctx.data, story, ctx.shop)}.`,
+      `${partsOfJob(waiting.length, job)} are waiting for their next coat after ${coatSentence(story, ctx.shop)}.`,
       `The recoat window closes ${momentWords(coat.recoatClosesAt!, ctx.shop)}; after that they need a ${denibWords('P320')} first:`,
       partList(waiting),
       '',

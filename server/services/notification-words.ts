@@ -4,7 +4,7 @@ import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { JobEntity } from '../db/entities/job.entity';
 import type { PartEntity } from '../db/entities/part.entity';
-import { stepsByJob } from './part-coats';
+import type { FinishStep } from '../../shared/finishing/readiness';
 
 /** What an e-mail about a coat says about it: which coat, of what, sprayed where and when. */
 export interface CoatStory {
@@ -14,12 +14,13 @@ export interface CoatStory {
   siteId: number | undefined;
   boothName: string;
   productName: string;
+  /** The job's finish system, to say which coat of how many this was. */
+  steps: FinishStep[];
 }
 
 /** "coat 2 of 3 (Kestrel 2K PU Topcoat Satin), sprayed in Booth 1 on Tue 3 Mar, 09:15". */
-export async function coatSentence(data: SiteData, story: CoatStory, shop: ShopFormat): Promise<string> {
-  const steps = story.parts.length ? ((await stepsByJob(data, story.parts.slice(0, 1))).get(story.parts[0].jobId) ?? []) : [];
-  const coatSteps = steps.flatMap((step, index) => (step.kind === 'coat' ? [index] : []));
+export function coatSentence(story: CoatStory, shop: ShopFormat): string {
+  const coatSteps = story.steps.flatMap((step, index) => (step.kind === 'coat' ? [index] : []));
   const position = story.coat.stepPosition;
   const number = position === null ? -1 : coatSteps.indexOf(position);
   const which = number >= 0 ? coatOfWords(number + 1, coatSteps.length) : 'a coat';
