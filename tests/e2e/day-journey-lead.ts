@@ -141,6 +141,8 @@ export async function bookByDraggingNow(page: Page, timeZone: string, booths: st
   const { date, slots } = shopQuarterHours(timeZone, 4);
   for (const booth of booths) {
     const calendar = boothCalendar(page, booth);
+    // Both ends of the hour in view of the lane's own scroller, whatever the time of day.
+    await calendar.locator(`.fc-timegrid-slot-lane[data-time="${slots.at(-1)}:00"]`).scrollIntoViewIfNeeded();
     await calendar.locator(`.fc-timegrid-slot-lane[data-time="${slots[0]}:00"]`).scrollIntoViewIfNeeded();
     if (!(await isFree(calendar, date, slots))) continue;
     await dragAcross(page, calendar, date, slots);
