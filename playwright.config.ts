@@ -12,7 +12,9 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: 0,
-  timeout: 30_000,
+  // A whole journey (sign in, book, walk several pages) on a shared 2-core CI machine: room enough
+  // that a busy machine does not fail it, while a step that hangs still fails on its own expect.
+  timeout: 60_000,
   expect: { timeout: 7_500 },
   reporter: process.env.CI ? [['list'], ['html', { open: 'never' }]] : 'list',
   use: {

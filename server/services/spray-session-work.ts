@@ -11,6 +11,7 @@ import type { SpraySessionItemEntity } from '../db/entities/spray-session-item.e
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { bookedStepsOf, type BookedPartStep } from './booked-steps';
 import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
+import type { SprayedPart } from './sprayed-unplanned';
 
 export interface WorkContext {
   planningTempC: number;
@@ -57,7 +58,7 @@ async function readKnown(data: SiteData, partIds: number[], context: WorkContext
 type ResolvedItem = SessionItemDto & { step: number | null; jobId: number | null };
 
 /** The step each item is for (a blank step: the one sprayed here, else the part's next), and whether it is on record. */
-function resolveItem(known: Known, sessionId: number, item: SpraySessionItemEntity): ResolvedItem {
+function resolveItem(known: Known, sessionId: number, item: Pick<SpraySessionItemEntity, 'partId' | 'stepPosition'>): ResolvedItem {
   const part = known.parts.get(item.partId);
   const coats = known.coats.get(item.partId) ?? [];
   const here = coats.filter((c) => c.spraySessionId === sessionId).sort((a, b) => b.sprayedAt.localeCompare(a.sprayedAt))[0];
@@ -139,21 +140,32 @@ function workOf(known: Known, session: SpraySessionEntity, items: ResolvedItem[]
   };
 }
 
-/** Each session's items with what is sprayed, and what the session sprays in words. */
-export async function sessionsWork(data: SiteData, sessions: SpraySessionEntity[], items: SpraySessionItemEntity[], context: WorkContext): Promise<Map<number, { items: SessionItemDto[]; work: SessionWork }>> {
-  const partIds = [...new Set(items.map((i) => i.partId))];
-  const known = partIds.length ? await readKnown(data, partIds, context) : null;
-  const bySession = new Map<number, SpraySessionItemEntity[]>();
-  for (const item of items) {
-    if (!bySession.has(item.spraySessionId)) bySession.set(item.spraySessionId, []);
-    bySession.get(item.spraySessionId)!.push(item);
+function groupBySession<T extends { spraySessionId: number }>(rows: T[]): Map<number, T[]> {
+  const bySession = new Map<number, T[]>();
+  for (const row of rows) {
+    if (!bySession.has(row.spraySessionId)) bySession.set(row.spraySessionId, []);
+    bySession.get(row.spraySessionId)!.push(row);
   }
+  return bySession;
+}
+
+/**
+ * Each session's items with what is sprayed, and what the session sprays in words. Parts sprayed
+ * there without being planned count in its work (a sprayer may add a part in the booth), though
+ * they are not added to its plan.
+ */
+export async function sessionsWork(data: SiteData, sessions: SpraySessionEntity[], items: SpraySessionItemEntity[], context: WorkContext, unplanned: SprayedPart[] = []): Promise<Map<number, { items: SessionItemDto[]; work: SessionWork }>> {
+  const partIds = [...new Set([...items, ...unplanned].map((i) => i.partId))];
+  const known = partIds.length ? await readKnown(data, partIds, context) : null;
+  const planned = groupBySession(items);
+  const extra = groupBySession(unplanned);
   return new Map(
     sessions.map((session) => {
-      const own = bySession.get(session.id) ?? [];
-      const resolved = known ? own.map((item) => resolveItem(known, session.id, item)) : [];
+      const resolve = (item: Pick<SpraySessionItemEntity, 'partId' | 'stepPosition'>) => resolveItem(known!, session.id, item);
+      const resolved = known ? (planned.get(session.id) ?? []).map(resolve) : [];
+      const sprayedHere = known ? (extra.get(session.id) ?? []).map(resolve) : [];
       const dtoItems = resolved.map(({ partId, stepPosition, sprayedAt }) => ({ partId, stepPosition, sprayedAt }));
-      return [session.id, { items: dtoItems, work: known ? workOf(known, session, resolved) : emptySessionWork }];
+      return [session.id, { items: dtoItems, work: known ? workOf(known, session, [...resolved, ...sprayedHere]) : emptySessionWork }];
     }),
   );
 }

@@ -4,14 +4,14 @@ import { dueStatus } from '../../shared/finishing/upkeep-due';
 import { can } from '../../shared/permissions';
 import type { SignedInUser } from '../../shared/schemas/auth';
 import type { ShopSettings } from '../../shared/schemas/settings';
-import type { UpkeepDue, UpkeepDueItem } from '../../shared/schemas/upkeep';
+import type { FilterBank, UpkeepDue, UpkeepDueItem } from '../../shared/schemas/upkeep';
 import type { SiteData } from '../data/site-data';
 import type { BoothEntity } from '../db/entities/booth.entity';
 import type { CrewRecordEntity } from '../db/entities/crew-record.entity';
 import type { UserEntity } from '../db/entities/user.entity';
 import { systemClock, type Clock } from '../lib/clock';
 import type { SettingsService } from './settings';
-import { banksOf, crewRecordsOf, latestTests, shopDay } from './upkeep-facts';
+import { banksOfBooths, crewRecordsOf, latestTestsOfBooths, shopDay, type LatestTests } from './upkeep-facts';
 
 /** A due item with the key that names the record and its state, for the e-mail dedupe keys. */
 export type KeyedItem = UpkeepDueItem & { key: string; dueOn: string | null };
@@ -34,18 +34,24 @@ function dated(kind: KeyedItem['kind'], what: string, record: { id: number; next
 }
 
 /** A booth's filters near or past their limit, and its extraction test and fire inspection due, lapsed or missing. */
-export async function boothDueItems(data: SiteData, booth: BoothEntity, w: Window): Promise<KeyedItem[]> {
+function boothDueItems(banks: FilterBank[], { extraction, fire }: LatestTests, w: Window): KeyedItem[] {
   const items: KeyedItem[] = [];
-  for (const bank of await banksOf(data, booth.id)) {
+  for (const bank of banks) {
     if (bank.status !== 'over-limit' && bank.status !== 'near-limit') continue;
     const message = `Filter bank “${bank.name}” reads ${Math.round(bank.currentPa ?? 0)} Pa of its ${bank.changeAtPa} Pa limit${bank.status === 'over-limit' ? ': change it' : ''}.`;
     items.push({ kind: 'filter', status: bank.status, message, key: `filter:${bank.id}:${bank.lastChange?.id ?? 0}:${bank.status}`, dueOn: null });
   }
-  const { extraction, fire } = await latestTests(data, booth.id);
   items.push(...dated('extraction-test', 'extraction test', extraction, w));
   if (fire && !fire.passed) items.push({ kind: 'fire-inspection', status: 'failed', message: 'The last fire-protection inspection found faults.', key: `fire-inspection:${fire.id}:failed`, dueOn: null });
   else items.push(...dated('fire-inspection', 'fire-protection inspection', fire, w));
   return items;
+}
+
+/** What is due on each booth, read in a fixed handful of queries however many booths there are. */
+export async function boothsDueItems(data: SiteData, booths: BoothEntity[], w: Window): Promise<Map<number, KeyedItem[]>> {
+  const ids = booths.map((b) => b.id);
+  const [banks, tests] = await Promise.all([banksOfBooths(data, ids), latestTestsOfBooths(data, ids)]);
+  return new Map(ids.map((id) => [id, boothDueItems(banks.get(id) ?? [], tests.get(id)!, w)]));
 }
 
 /** A person's fit test, health surveillance and training that are due, lapsed (or failed) or missing. Never a date in the message. */
@@ -74,11 +80,11 @@ export function createUpkeepDueService(data: SiteData, settings: SettingsService
       const shop: ShopSettings = await settings.get();
       const w: Window = { today: shopDay(clock.now(), shop), withinDays: withinDays ?? shop.upkeepDueSoonDays };
       const booths = await data.booths.find({ order: { name: 'ASC', id: 'ASC' } });
-      const boothRows = [];
-      for (const booth of booths) {
-        const items = await boothDueItems(data, booth, w);
-        if (items.length) boothRows.push({ boothId: booth.id, boothName: booth.name, siteId: booth.siteId, fit: fitNow(items), items: items.map(plain) });
-      }
+      const due = await boothsDueItems(data, booths, w);
+      const boothRows = booths
+        .map((booth) => ({ booth, items: due.get(booth.id)! }))
+        .filter((row) => row.items.length)
+        .map(({ booth, items }) => ({ boothId: booth.id, boothName: booth.name, siteId: booth.siteId, fit: fitNow(items), items: items.map(plain) }));
       const wholeCrew = can(viewer.role, 'crew:status');
       const people: UserEntity[] = wholeCrew ? await crewOfScope(data) : await data.users.findBy({ id: viewer.id });
       const latest = await crewRecordsOf(data, people.map((p) => p.id));

@@ -14,23 +14,53 @@ import { toFilterBankDto } from './upkeep-dto';
 /** The shop's calendar date of an instant: upkeep and crew records fall due on shop days. */
 export const shopDay = (instant: Date, settings: Pick<ShopSettings, 'timezone'>) => calendarDateIn(instant, settings.timezone);
 
-/** Each active filter bank of a booth with its latest gauge reading and its last change. */
-export async function banksOf(data: SiteData, boothId: number, withInactive = false): Promise<FilterBank[]> {
-  const banks = await data.filterBanks.find({ where: withInactive ? { boothId } : { boothId, active: true }, order: { name: 'ASC', id: 'ASC' } });
-  return Promise.all(
-    banks.map(async (bank) => {
-      const latest = await data.gaugeReadings.findOne({ where: { filterBankId: bank.id }, order: { at: 'DESC', id: 'DESC' } });
-      const lastChange = await data.filterChanges.findOne({ where: { filterBankId: bank.id }, order: { changedAt: 'DESC', id: 'DESC' } });
-      return toFilterBankDto(bank, latest, lastChange);
-    }),
-  );
+/** The row each group's newest is: one subquery per group, served by the (group, date) indexes. */
+const newestOfGroup = (table: string, group: string, date: string) =>
+  `scoped.id = (SELECT newest.id FROM ${table} newest WHERE newest.${group} = scoped.${group} ORDER BY newest.${date} DESC, newest.id DESC LIMIT 1)`;
+
+const byKey = <T, K>(rows: T[], key: (row: T) => K) => new Map(rows.map((row) => [key(row), row]));
+
+/** Each booth's filter banks (active ones unless asked) with their latest gauge reading and last change, in three queries for any number of booths. */
+export async function banksOfBooths(data: SiteData, boothIds: number[], withInactive = false): Promise<Map<number, FilterBank[]>> {
+  const result = new Map<number, FilterBank[]>(boothIds.map((id) => [id, []]));
+  if (boothIds.length === 0) return result;
+  const banks = await data.filterBanks.find({ where: withInactive ? { boothId: In(boothIds) } : { boothId: In(boothIds), active: true }, order: { name: 'ASC', id: 'ASC' } });
+  const bankIds = banks.map((b) => b.id);
+  const [readings, changes] = bankIds.length
+    ? await Promise.all([
+        data.gaugeReadings.select('scoped').where('scoped.filter_bank_id IN (:...bankIds)', { bankIds }).andWhere(newestOfGroup('filter_gauge_readings', 'filter_bank_id', 'at')).getMany(),
+        data.filterChanges.select('scoped').where('scoped.filter_bank_id IN (:...bankIds)', { bankIds }).andWhere(newestOfGroup('filter_changes', 'filter_bank_id', 'changed_at')).getMany(),
+      ])
+    : [[], []];
+  const latest = byKey(readings, (r) => r.filterBankId);
+  const lastChange = byKey(changes, (c) => c.filterBankId);
+  for (const bank of banks) result.get(bank.boothId)?.push(toFilterBankDto(bank, latest.get(bank.id) ?? null, lastChange.get(bank.id) ?? null));
+  return result;
 }
 
-/** The booth's latest extraction test and fire inspection: the most recent date, then the latest recorded. */
-export async function latestTests(data: SiteData, boothId: number): Promise<{ extraction: ExtractionTestEntity | null; fire: FireInspectionEntity | null }> {
-  const extraction = await data.extractionTests.findOne({ where: { boothId }, order: { testedOn: 'DESC', id: 'DESC' } });
-  const fire = await data.fireInspections.findOne({ where: { boothId }, order: { inspectedOn: 'DESC', id: 'DESC' } });
-  return { extraction, fire };
+export async function banksOf(data: SiteData, boothId: number, withInactive = false): Promise<FilterBank[]> {
+  return (await banksOfBooths(data, [boothId], withInactive)).get(boothId)!;
+}
+
+export interface LatestTests {
+  extraction: ExtractionTestEntity | null;
+  fire: FireInspectionEntity | null;
+}
+
+/** Each booth's latest extraction test and fire inspection (the most recent date, then the latest recorded), in two queries. */
+export async function latestTestsOfBooths(data: SiteData, boothIds: number[]): Promise<Map<number, LatestTests>> {
+  if (boothIds.length === 0) return new Map();
+  const [tests, inspections] = await Promise.all([
+    data.extractionTests.select('scoped').where('scoped.booth_id IN (:...boothIds)', { boothIds }).andWhere(newestOfGroup('extraction_tests', 'booth_id', 'tested_on')).getMany(),
+    data.fireInspections.select('scoped').where('scoped.booth_id IN (:...boothIds)', { boothIds }).andWhere(newestOfGroup('fire_inspections', 'booth_id', 'inspected_on')).getMany(),
+  ]);
+  const extraction = byKey(tests, (t) => t.boothId);
+  const fire = byKey(inspections, (f) => f.boothId);
+  return new Map(boothIds.map((id) => [id, { extraction: extraction.get(id) ?? null, fire: fire.get(id) ?? null }]));
+}
+
+export async function latestTests(data: SiteData, boothId: number): Promise<LatestTests> {
+  return (await latestTestsOfBooths(data, [boothId])).get(boothId)!;
 }
 
 /** What fit to spray needs to know of a booth. */

@@ -4,7 +4,7 @@ import type { ShopSettings } from '../../shared/schemas/settings';
 import type { UserEntity } from '../db/entities/user.entity';
 import type { DueNotification, RuleContext } from './notification-rules';
 import { calendarDateWords } from '../../shared/words';
-import { boothDueItems, crewDueItems, crewOfScope, type KeyedItem, type Window } from './upkeep-due';
+import { boothsDueItems, crewDueItems, crewOfScope, type KeyedItem, type Window } from './upkeep-due';
 import { crewRecordsOf, shopDay } from './upkeep-facts';
 
 /** Only what has changed for the worse is worth an e-mail: due soon, lapsed, failed, near or past a filter limit; never "none recorded". */
@@ -23,8 +23,10 @@ async function windowOf(ctx: RuleContext): Promise<Window> {
 export async function upkeepDue(ctx: RuleContext): Promise<DueNotification[]> {
   const w = await windowOf(ctx);
   const due: DueNotification[] = [];
-  for (const booth of await ctx.data.booths.find({ order: { id: 'ASC' } })) {
-    const items = (await boothDueItems(ctx.data, booth, w)).filter(mailable);
+  const booths = await ctx.data.booths.find({ order: { id: 'ASC' } });
+  const dueByBooth = await boothsDueItems(ctx.data, booths, w);
+  for (const booth of booths) {
+    const items = dueByBooth.get(booth.id)!.filter(mailable);
     for (const item of items) {
       const subject = `Booth upkeep: ${booth.name}, ${item.kind.replaceAll('-', ' ')} ${item.status.replaceAll('-', ' ')}`;
       const body = `${booth.name}:\n${lines([item])}${item.dueOn ? `\nDue on ${calendarDateWords(item.dueOn, ctx.shop.locale)}.` : ''}\n\n${closing}\n\nBooth upkeep: ${ctx.publicUrl}/upkeep`;

@@ -29,6 +29,19 @@ export function shopZoneName(at: Date, timeZone: string): string {
   return part?.value ?? timeZone;
 }
 
+const weekMs = 7 * 24 * 3_600_000;
+
+/**
+ * " BST" when a clock change is within a week either side of `at`, else "": the zone's name
+ * matters only where a time could be read on the wrong side of a change; every other time is
+ * plain shop time, as the page says once.
+ */
+export function zoneNearClockChange(at: Date, timeZone: string): string {
+  const name = shopZoneName(at, timeZone);
+  const near = [-weekMs, weekMs].some((step) => shopZoneName(new Date(at.getTime() + step), timeZone) !== name);
+  return near ? ` ${name}` : '';
+}
+
 export function listTimeZones(): string[] {
   try {
     return Intl.supportedValuesOf('timeZone');

@@ -19,7 +19,7 @@ test.describe('booking by dragging across free time', () => {
     const choices = dialog.getByLabel('Sprayer').locator('option');
     await expect(choices).toHaveText(['Not assigned yet', 'Dev Okafor (me)', 'Mina Castell']);
     await bookThroughForm(page, { booth, start: `${wednesday}T09:00`, end: `${wednesday}T10:30` }, { label: 'LJ-26-101 · Hartfield Kitchen Co.', parts: 42 }, 'Mina Castell');
-    const block = calendarEvent(page, 'LJ-26-101').filter({ hasText: /^09:00 - 10:30/ });
+    const block = calendarEvent(page, 'LJ-26-101').filter({ hasText: /^09:00–10:30/ });
     await expect(block).toContainText('LJ-26-101 · coat 1 of 3');
     await expect(block).toContainText('Kestrel 2K PU Primer White · Sage grey (customer sample 14)');
     await expect(block).toContainText('42 parts');
@@ -44,7 +44,7 @@ test.describe('booking by dragging across free time', () => {
     await page.getByLabel('Go to day').fill(thursday);
     await dragAcrossFreeTime(page, boothCalendar(page, sprayRoom), thursday, '11:00', '12:00');
     await bookThroughForm(page, { booth: sprayRoom, start: `${thursday}T11:00`, end: `${thursday}T12:00` }, { label: 'LJ-26-103 · Penhallow Interiors', parts: 18 });
-    await expect(calendarEvent(page, 'LJ-26-103', sprayRoom)).toContainText('11:00 - 12:00');
+    await expect(calendarEvent(page, 'LJ-26-103', sprayRoom)).toContainText('11:00–12:00');
     await page.screenshot({ path: '/tmp/shots/planner-day-1024.png', fullPage: true });
   });
 
@@ -55,7 +55,7 @@ test.describe('booking by dragging across free time', () => {
     await page.getByLabel('Go to day').fill(thursday);
     await dragAcrossFreeTime(page, boothCalendar(page), thursday, '08:00', '09:00');
     await bookThroughForm(page, { booth, start: `${thursday}T08:00`, end: `${thursday}T09:00` }, { label: 'LJ-26-102 · Morrow & Daughters Cabinetmakers', parts: 80 });
-    await expect(calendarEvent(page, 'LJ-26-102')).toContainText('08:00 - 09:00');
+    await expect(calendarEvent(page, 'LJ-26-102')).toContainText('08:00–09:00');
     await page.screenshot({ path: '/tmp/shots/planner-phone-390.png', fullPage: true });
   });
 });

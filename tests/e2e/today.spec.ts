@@ -74,6 +74,8 @@ test('a lead sees the day per booth, gives an unassigned session to a sprayer, a
   await page.screenshot({ path: '/tmp/shots/today-lead-1366.png', fullPage: true });
   await upkeep.getByRole('link', { name: 'Booth 1 (cross-draft)' }).click();
   await expect(page.getByRole('heading', { name: 'Booth upkeep', level: 1 })).toBeVisible();
+  // The link opens that booth's record, not the first booth by name.
+  await expect(page.getByLabel('Booth', { exact: true }).locator('option:checked')).toHaveText('Booth 1 (cross-draft)');
   await page.goBack();
 
   await room.getByRole('link', { name: `Plan ${sprayRoom} in the booth planner` }).click();

@@ -139,6 +139,17 @@ describe('GET /api/upkeep/due', () => {
     expect(JSON.stringify(due.crew)).not.toMatch(/\d{4}-\d{2}-\d{2}/);
   });
 
+  it('reads each booth’s own newest gauge reading, whatever the other booths read', async () => {
+    const bank = (await post(lead, '/api/filter-banks', { boothId: 2, name: 'Exhaust roll', kind: 'exhaust', changeAtPa: 300 }).expect(201)).body.filterBank;
+    const dueOf = async (boothId: number) => ((await lead.agent.get('/api/upkeep/due').expect(200)).body.due.booths.find((b: { boothId: number }) => b.boothId === boothId)?.items ?? []).map((i: { kind: string; status: string }) => `${i.kind}:${i.status}`);
+    await post(sprayer, '/api/readings/filter-gauge', { filterBankId: bank.id, pressureDropPa: 320 }).expect(201);
+    expect(await dueOf(2)).toContain('filter:over-limit');
+    expect(await dueOf(1)).toContain('filter:near-limit');
+    await post(sprayer, '/api/readings/filter-gauge', { filterBankId: bank.id, pressureDropPa: 90 }).expect(201);
+    expect((await dueOf(2)).filter((i: string) => i.startsWith('filter:'))).toEqual([]);
+    expect(await dueOf(1)).toContain('filter:near-limit');
+  });
+
   it('shows a sprayer only their own crew records, and a wider window on request', async () => {
     const due = (await sprayer.agent.get('/api/upkeep/due').expect(200)).body.due;
     expect(due.wholeCrew).toBe(false);

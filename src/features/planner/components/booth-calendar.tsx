@@ -3,7 +3,8 @@ import enGbLocale from '@fullcalendar/core/locales/en-gb';
 import interactionPlugin, { type EventResizeDoneArg } from '@fullcalendar/interaction';
 import FullCalendar from '@fullcalendar/react';
 import timeGridPlugin from '@fullcalendar/timegrid';
-import { useEffect, useRef, type CSSProperties } from 'react';
+import { useEffect, useRef } from 'react';
+import '../planner-look.css';
 import type { PlannerView } from '../utils/calendar-range';
 import { useRecoatShading } from '../hooks/use-recoat-shading';
 import { shopTimeZonePlugin } from '../utils/shop-zone-plugin';
@@ -34,15 +35,16 @@ interface BoothCalendarProps extends CalendarHandlers {
 const plugins = [timeGridPlugin, interactionPlugin, shopTimeZonePlugin];
 const clock = { hour: '2-digit', minute: '2-digit', hour12: false } as const;
 
-// FullCalendar styles itself from these variables; ours are the maple and lacquer tokens.
-const calendarTheme = {
-  '--fc-border-color': '#e6dccb',
-  '--fc-page-bg-color': '#ffffff',
-  '--fc-non-business-color': 'rgba(149, 128, 92, 0.28)',
-  '--fc-today-bg-color': 'rgba(42, 127, 105, 0.07)',
-  '--fc-now-indicator-color': '#b4232a',
-  '--fc-highlight-color': 'rgba(42, 127, 105, 0.28)',
-} as CSSProperties;
+/** A day's header as a tab: "Mon" small above "30 Nov" (the text comes in the shop's zone from the grid). */
+function DayTab({ text }: { text: string }) {
+  const [weekday, ...date] = text.split(' ');
+  return (
+    <span className="flex flex-col items-center leading-tight">
+      <span className="text-[0.68rem] font-semibold tracking-wider text-maple-600 uppercase">{weekday}</span>
+      <span className="text-sm font-semibold text-maple-900">{date.join(' ')}</span>
+    </span>
+  );
+}
 
 /** One time grid; the planner shows one per booth on the day view, or one for the week. */
 export function BoothCalendar({ view, day, timeZone, events, businessHours, canWrite, label, height = 640, ...handlers }: BoothCalendarProps) {
@@ -65,7 +67,7 @@ export function BoothCalendar({ view, day, timeZone, events, businessHours, canW
   const shading = useRecoatShading(timeZone, canWrite);
 
   return (
-    <div role="region" aria-label={label} style={calendarTheme} className="min-w-0 rounded-panel border border-maple-300 bg-white p-1 text-sm [&_.fc-timegrid-slot]:h-6!">
+    <div role="region" aria-label={label} className="bw-planner min-w-0 overflow-hidden rounded-panel border border-maple-300 bg-white text-sm [&_.fc-timegrid-slot]:h-6!">
       <FullCalendar
         ref={calendarRef}
         plugins={plugins}
@@ -83,7 +85,9 @@ export function BoothCalendar({ view, day, timeZone, events, businessHours, canW
         scrollTimeReset={false}
         slotLabelFormat={clock}
         eventTimeFormat={clock}
+        defaultRangeSeparator="–"
         dayHeaderFormat={{ weekday: 'short', day: 'numeric', month: 'short' }}
+        dayHeaderContent={(arg) => <DayTab text={arg.text} />}
         height={height}
         expandRows={false}
         nowIndicator

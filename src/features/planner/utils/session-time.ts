@@ -1,4 +1,4 @@
-import { formatShopClock, shopZoneName } from '../../../lib/shop-time';
+import { formatShopClock, zoneNearClockChange } from '../../../lib/shop-time';
 
 const dayFormats = new Map<string, Intl.DateTimeFormat>();
 
@@ -11,9 +11,9 @@ function shopDay(at: Date, timeZone: string): string {
   return format.format(at);
 }
 
-/** "Tue 7 Jul 2026, 09:00–10:00 BST": the zone's short name shows which side of a clock change it is. */
+/** "Tue 7 Jul 2026, 09:00–10:00"; in the week either side of a clock change "… GMT", to say which side it is. */
 export function sessionWhen({ start, end }: { start: string; end: string }, timeZone: string): string {
   const from = new Date(start);
   const to = new Date(end);
-  return `${shopDay(from, timeZone)}, ${formatShopClock(from, timeZone)}–${formatShopClock(to, timeZone)} ${shopZoneName(from, timeZone)}`;
+  return `${shopDay(from, timeZone)}, ${formatShopClock(from, timeZone)}–${formatShopClock(to, timeZone)}${zoneNearClockChange(from, timeZone)}`;
 }

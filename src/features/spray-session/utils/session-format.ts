@@ -1,7 +1,7 @@
 import { missedWindowScuffGrit } from '../../../../shared/finishing/readiness';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { calendarDateIn } from '../../../../shared/time';
-import { formatShopClock, shopZoneName } from '../../../lib/shop-time';
+import { formatShopClock, zoneNearClockChange } from '../../../lib/shop-time';
 import { coatOfWords, denibWords } from '../../../../shared/words';
 
 const dayFormats = new Map<string, Intl.DateTimeFormat>();
@@ -23,10 +23,10 @@ export function shopWhen(iso: string, timeZone: string, now: Date = new Date()):
   return calendarDateIn(at, timeZone) === calendarDateIn(now, timeZone) ? clock : `${shopDay(at, timeZone)}, ${clock}`;
 }
 
-/** "Wed 2 Dec, 09:00–11:00 GMT": the zone's short name shows which side of a clock change it is. */
+/** "Wed 2 Dec, 09:00–11:00"; in the week either side of a clock change "… GMT", to say which side it is. */
 export function sessionSpan({ start, end }: { start: string; end: string }, timeZone: string): string {
   const from = new Date(start);
-  return `${shopDay(from, timeZone)}, ${formatShopClock(from, timeZone)}–${formatShopClock(new Date(end), timeZone)} ${shopZoneName(from, timeZone)}`;
+  return `${shopDay(from, timeZone)}, ${formatShopClock(from, timeZone)}–${formatShopClock(new Date(end), timeZone)}${zoneNearClockChange(from, timeZone)}`;
 }
 
 /** A countdown as it reads on a board: "1 h 05 min" above an hour, "4:09" below. */

@@ -8,7 +8,7 @@ const rowClass = 'border-t border-maple-200 py-2 first:border-t-0';
 
 function rowsOf(due: LeadBoard['upkeepDue']): Row[] {
   return [
-    ...due.booths.map((b) => ({ key: `booth-${b.boothId}`, who: b.boothName, fit: b.fit, items: b.items, to: '/upkeep' })),
+    ...due.booths.map((b) => ({ key: `booth-${b.boothId}`, who: b.boothName, fit: b.fit, items: b.items, to: `/upkeep?booth=${b.boothId}` })),
     ...due.crew.map((c) => ({ key: `person-${c.userId}`, who: c.name, fit: c.fit, items: c.items, to: '/crew' })),
   ];
 }
