@@ -38,33 +38,19 @@ export async function toDenibDtos(data: SiteData, denibs: DenibEntity[]): Promis
  * The spray session must be one of the scope's and still stand; the parts must exist and not stand
  * on a rack of another site than the session's booth. Answers the session's site.
  */
-async function checkReferences(
-  tx: SiteData,
-  input: ReturnType<typeof createDenibSchema.parse>,
-  now: Date,
-): Promise<number | null> {
+async function checkReferences(tx: SiteData, input: ReturnType<typeof createDenibSchema.parse>, now: Date): Promise<number | null> {
   const spraySession = await tx.spraySessions.findOneBy({ id: input.spraySessionId });
-  if (!spraySession)
-    throw new AppError('validation_failed', 'That spray session does not exist', {
-      spraySessionId: 'Choose a spray session',
-    });
-  if (spraySession.state === 'cancelled')
-    throw new AppError('conflict', 'This spray session was cancelled; record the denib on the session that ran');
+  if (!spraySession) throw new AppError('validation_failed', 'That spray session does not exist', { spraySessionId: 'Choose a spray session' });
+  if (spraySession.state === 'cancelled') throw new AppError('conflict', 'This spray session was cancelled; record the denib on the session that ran');
   const partIds = [...new Set(input.partIds)];
   const parts = await tx.parts.findBy({ id: In(partIds) });
-  if (parts.length !== partIds.length)
-    throw new AppError('validation_failed', 'One or more parts do not exist', { partIds: 'Choose parts that exist' });
+  if (parts.length !== partIds.length) throw new AppError('validation_failed', 'One or more parts do not exist', { partIds: 'Choose parts that exist' });
   const booth = await tx.booths.findOneBy({ id: spraySession.boothId });
   const placed = parts.filter((p) => p.rackId !== null);
   if (booth && (await partsSeenBy(tx.forSite(booth.siteId), placed)).size !== placed.length) {
-    throw new AppError('validation_failed', 'One or more parts stand on a rack of another site', {
-      partIds: 'Choose parts at this site',
-    });
+    throw new AppError('validation_failed', 'One or more parts stand on a rack of another site', { partIds: 'Choose parts at this site' });
   }
-  if (Date.parse(input.abradedAt) > now.getTime() + futureSlackMs)
-    throw new AppError('validation_failed', 'A denib cannot be recorded ahead of time', {
-      abradedAt: 'Give when the parts were sanded, not later than now',
-    });
+  if (Date.parse(input.abradedAt) > now.getTime() + futureSlackMs) throw new AppError('validation_failed', 'A denib cannot be recorded ahead of time', { abradedAt: 'Give when the parts were sanded, not later than now' });
   return booth?.siteId ?? null;
 }
 
@@ -80,22 +66,12 @@ export function createDenibService(data: SiteData, events: EventBus, clock: Cloc
     async list(query: DenibQuery): Promise<List<Denib>> {
       const qb = data.denibs.select('d');
       if (query.spraySessionId) qb.andWhere('d.spray_session_id = :s', { s: query.spraySessionId });
-      if (query.partId)
-        qb.andWhere('d.id IN (SELECT dp.denib_id FROM denib_parts dp WHERE dp.part_id = :part)', {
-          part: query.partId,
-        });
-      if (query.jobId)
-        qb.andWhere(
-          'd.id IN (SELECT dp.denib_id FROM denib_parts dp JOIN parts pt ON pt.id = dp.part_id WHERE pt.job_id = :job)',
-          { job: query.jobId },
-        );
+      if (query.partId) qb.andWhere('d.id IN (SELECT dp.denib_id FROM denib_parts dp WHERE dp.part_id = :part)', { part: query.partId });
+      if (query.jobId) qb.andWhere('d.id IN (SELECT dp.denib_id FROM denib_parts dp JOIN parts pt ON pt.id = dp.part_id WHERE pt.job_id = :job)', { job: query.jobId });
       if (query.from) qb.andWhere('d.abraded_at >= :from', { from: new Date(query.from).toISOString() });
       if (query.to) qb.andWhere('d.abraded_at < :to', { to: new Date(query.to).toISOString() });
       qb.orderBy('d.abraded_at', 'DESC').addOrderBy('d.id', 'DESC');
-      const [rows, total] = await qb
-        .skip((query.page - 1) * query.pageSize)
-        .take(query.pageSize)
-        .getManyAndCount();
+      const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
       return { items: await toDenibDtos(data, rows), total, page: query.page, pageSize: query.pageSize };
     },
   };

@@ -13,38 +13,8 @@ import { keyOfAnotherRecord, writeOnce, type Once } from './write-once';
 type MixFields = ReturnType<typeof createMixSchema.parse>;
 
 function toMixDto(mix: MixEntity, productName: string): Mix {
-  const {
-    id,
-    spraySessionId,
-    productId,
-    lotIds,
-    baseL,
-    hardenerL,
-    thinnerL,
-    mixedAt,
-    tempC,
-    inductionEndsAt,
-    potLifeEndsAt,
-    potLifeWarningAt,
-    recordedByName,
-  } = mix;
-  return {
-    id,
-    spraySessionId,
-    productId,
-    productName,
-    lotIds,
-    baseL,
-    hardenerL,
-    thinnerL,
-    totalL: baseL + hardenerL + thinnerL,
-    mixedAt,
-    tempC,
-    inductionEndsAt,
-    potLifeEndsAt,
-    potLifeWarningAt,
-    recordedByName,
-  };
+  const { id, spraySessionId, productId, lotIds, baseL, hardenerL, thinnerL, mixedAt, tempC, inductionEndsAt, potLifeEndsAt, potLifeWarningAt, recordedByName } = mix;
+  return { id, spraySessionId, productId, productName, lotIds, baseL, hardenerL, thinnerL, totalL: baseL + hardenerL + thinnerL, mixedAt, tempC, inductionEndsAt, potLifeEndsAt, potLifeWarningAt, recordedByName };
 }
 
 /** Pots mixed for a spray session: its site's record, like the session's coats. */
@@ -58,16 +28,12 @@ export function createMixService(data: SiteData, clock: Clock = systemClock) {
 
     async list(spraySessionId: number): Promise<Mix[]> {
       if (!(await data.spraySessions.existsBy({ id: spraySessionId }))) throw notFound('Spray session');
-      const mixes = await data.mixes.find({ where: { spraySessionId }, order: { mixedAt: 'DESC' } });
-      return named(mixes);
+      return named(await data.mixes.find({ where: { spraySessionId }, order: { mixedAt: 'DESC' } }));
     },
   };
 
   async function named(mixes: MixEntity[]): Promise<Mix[]> {
-    const products = await data.products.find({
-      where: { id: In(mixes.map((m) => m.productId)) },
-      select: { id: true, name: true },
-    });
+    const products = await data.products.find({ where: { id: In(mixes.map((m) => m.productId)) }, select: { id: true, name: true } });
     return mixes.map((m) => toMixDto(m, products.find((p) => p.id === m.productId)?.name ?? ''));
   }
 
@@ -84,28 +50,13 @@ export function createMixService(data: SiteData, clock: Clock = systemClock) {
       if (!(await tx.spraySessions.existsBy({ id: spraySessionId }))) throw notFound('Spray session');
       await assertRunsSpraySession(tx, spraySessionId, actor);
       const product = await tx.products.findOneBy({ id: fields.productId });
-      if (!product)
-        throw new AppError('validation_failed', 'That product does not exist', { productId: 'Choose a product' });
+      if (!product) throw new AppError('validation_failed', 'That product does not exist', { productId: 'Choose a product' });
       const lots = fields.lotIds.length ? await tx.lots.findBy({ id: In(fields.lotIds) }) : [];
-      if (lots.length !== fields.lotIds.length || lots.some((l) => l.productId !== product.id))
-        throw new AppError('validation_failed', 'Choose lots of this product', {
-          lotIds: 'Choose lots of this product',
-        });
-      const quantities = mixQuantities({
-        wantedL: fields.wantedL,
-        ratio: { base: product.mixBaseParts, hardener: product.mixHardenerParts },
-        thinningPct: fields.thinningPct,
-        thinnerBasis: 'on-mix',
-      });
+      if (lots.length !== fields.lotIds.length || lots.some((l) => l.productId !== product.id)) throw new AppError('validation_failed', 'Choose lots of this product', { lotIds: 'Choose lots of this product' });
+      const quantities = mixQuantities({ wantedL: fields.wantedL, ratio: { base: product.mixBaseParts, hardener: product.mixHardenerParts }, thinningPct: fields.thinningPct, thinnerBasis: 'on-mix' });
       const mixedAt = new Date(fields.mixedAt ?? clock.now());
       const times = product.potLifeMin
-        ? mixTimes({
-            mixedAt,
-            inductionMin: product.inductionMin,
-            potLifeMin: product.potLifeMin,
-            refTempC: potLifeReferenceTempC(product.dryingTimes),
-            tempC: fields.tempC,
-          })
+        ? mixTimes({ mixedAt, inductionMin: product.inductionMin, potLifeMin: product.potLifeMin, refTempC: potLifeReferenceTempC(product.dryingTimes), tempC: fields.tempC })
         : null;
       const mix = await tx.mixes.save(
         tx.mixes.create({

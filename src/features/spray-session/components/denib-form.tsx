@@ -57,7 +57,10 @@ export function DenibForm({ sessionId, parts, needing, grit, onDone }: DenibForm
     const label = `${upperFirst(denibWords(body.grit))} on ${partsWords(body.partIds.length)}`;
     try {
       const outcome = await sendOrKeep({ kind: 'denib', spraySessionId: sessionId, body, label }, () => createDenib.mutateAsync(body));
-      if (outcome.kind === 'saved') toast.success(`${label} recorded. The next coat can go on once its window opens.`);
+      if (outcome.kind === 'saved') {
+        const { grit, partIds } = outcome.value;
+        toast.success(`${upperFirst(denibWords(grit))} recorded on ${partsWords(partIds.length)}. The next coat can go on once its window opens.`);
+      }
       else toast.warning('No connection: the denib is kept on this tablet and will be sent when the connection is back.');
       onDone();
     } catch (error) {
