@@ -8,6 +8,7 @@ import { FinishStepEntity } from '../db/entities/finish-step.entity';
 import { FinishSystemEntity } from '../db/entities/finish-system.entity';
 import { JobEntity } from '../db/entities/job.entity';
 import { MixEntity } from '../db/entities/mix.entity';
+import { SpraySessionReplyEntity } from '../db/entities/spray-session-reply.entity';
 import { NotificationEntity } from '../db/entities/notification.entity';
 import { PartEntity } from '../db/entities/part.entity';
 import { ProductLotEntity } from '../db/entities/product-lot.entity';
@@ -53,6 +54,7 @@ export interface SiteData {
   readonly spraySessions: ScopedRepository<SpraySessionEntity>;
   readonly spraySessionItems: ScopedRepository<SpraySessionItemEntity>;
   readonly mixes: ScopedRepository<MixEntity>;
+  readonly spraySessionReplies: ScopedRepository<SpraySessionReplyEntity>;
   readonly coats: ScopedRepository<CoatEntity>;
   readonly coatParts: ScopedRepository<CoatPartEntity>;
   readonly denibs: ScopedRepository<DenibEntity>;
@@ -101,6 +103,7 @@ function build(dataSource: DataSource, manager: EntityManager, scope: SiteScope)
     spraySessions: repo(SpraySessionEntity, byBooth),
     spraySessionItems: repo(SpraySessionItemEntity, bySpraySession),
     mixes: repo(MixEntity, bySpraySession),
+    spraySessionReplies: repo(SpraySessionReplyEntity, bySpraySession),
     coats: repo(CoatEntity, bySpraySession),
     coatParts: repo(CoatPartEntity, byCoat),
     denibs: repo(DenibEntity, bySpraySession),

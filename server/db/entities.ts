@@ -16,6 +16,7 @@ import { CoatPartEntity } from './entities/coat-part.entity';
 import { CoatEntity } from './entities/coat.entity';
 import { DenibEntity, DenibPartEntity } from './entities/denib.entity';
 import { MixEntity } from './entities/mix.entity';
+import { SpraySessionReplyEntity } from './entities/spray-session-reply.entity';
 import { NotificationEntity } from './entities/notification.entity';
 import { ReadingEntity } from './entities/reading.entity';
 import { SpraySessionItemEntity } from './entities/spray-session-item.entity';
@@ -51,6 +52,7 @@ export const entities = [
   DenibPartEntity,
   ReadingEntity,
   MixEntity,
+  SpraySessionReplyEntity,
   NotificationEntity,
   FilterBankEntity,
   FilterGaugeReadingEntity,

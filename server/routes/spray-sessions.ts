@@ -10,7 +10,7 @@ import {
   updateSpraySessionSchema,
 } from '../../shared/schemas/spray-session';
 import { sessionFitnessResponseSchema } from '../../shared/schemas/upkeep';
-import { defineRoute, type ApiRoute } from '../registry/route';
+import { defineRoute, Reply, type ApiRoute } from '../registry/route';
 
 /** Spray sessions belong to their booth's site, and so do their pots and cautions. */
 export const spraySessionRoutes: ApiRoute[] = [
@@ -47,7 +47,7 @@ export const spraySessionRoutes: ApiRoute[] = [
   defineRoute({
     method: 'patch',
     path: '/api/spray-sessions/:id',
-    summary: 'Move, resize or progress a session (a sprayer: only the state, notes and checklist of their own)',
+    summary: 'Move, resize or progress a session (a sprayer: only the state, notes and checklist of their own; a replayed idempotency key answers as the first time)',
     access: 'spray-sessions:run',
     sites: 'site',
     params: idParamsSchema,
@@ -91,12 +91,15 @@ export const spraySessionRoutes: ApiRoute[] = [
   defineRoute({
     method: 'post',
     path: '/api/spray-sessions/:id/mixes',
-    summary: 'Record a pot: quantities, induction and pot life at the mixing temperature',
+    summary: 'Record a pot: quantities, induction and pot life at the mixing temperature (a replayed idempotency key answers 200 with the pot already recorded)',
     access: 'coats:write',
     sites: 'site',
     params: idParamsSchema,
     body: createMixSchema,
-    response: { status: 201, schema: mixResponseSchema },
-    handler: async ({ params, body }, { services, runner }) => ({ mix: await services.mixes.create(params.id, body, runner) }),
+    response: { status: 201, otherStatuses: [200], schema: mixResponseSchema },
+    handler: async ({ params, body }, { services, runner }) => {
+      const { result, replayed } = await services.mixes.create(params.id, body, runner);
+      return new Reply(replayed ? 200 : 201, { mix: result });
+    },
   }),
 ];

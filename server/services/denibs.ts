@@ -10,9 +10,12 @@ import type { EventBus } from './events';
 import { partsSeenBy } from './part-sites';
 import { refreshPartStates } from './part-states';
 import { assertRunsSpraySession, type SpraySessionRunner } from './spray-session-runner';
+import { keyOfAnotherRecord, writeOnce, type Once } from './write-once';
 
 // A tablet's clock may run a little ahead of the server's; more than this is a typing slip.
 const futureSlackMs = 5 * 60_000;
+
+type DenibFields = ReturnType<typeof createDenibSchema.parse>;
 
 /** Denib records with their parts, built field by field. */
 export async function toDenibDtos(data: SiteData, denibs: DenibEntity[]): Promise<Denib[]> {
@@ -55,30 +58,9 @@ async function checkReferences(tx: SiteData, input: ReturnType<typeof createDeni
 export function createDenibService(data: SiteData, events: EventBus, clock: Clock = systemClock) {
   return {
     /** Clears "denib needed" on the parts and, after a missed window, lets the next coat go on. */
-    async create(input: CreateDenibInput, actor: SpraySessionRunner): Promise<Denib> {
+    async create(input: CreateDenibInput, actor: SpraySessionRunner): Promise<Once<Denib>> {
       const fields = createDenibSchema.parse(input);
-      const now = clock.now();
-      assertHappenedNearNow(fields.abradedAt, 'abradedAt', now);
-      const { denib, siteId } = await data.transaction(async (tx) => {
-        await assertRunsSpraySession(tx, fields.spraySessionId, actor);
-        const site = await checkReferences(tx, fields, now);
-        const row = await tx.denibs.save(
-          tx.denibs.create({
-            spraySessionId: fields.spraySessionId,
-            grit: fields.grit,
-            abradedAt: new Date(fields.abradedAt).toISOString(),
-            notes: fields.notes,
-            recordedById: actor.id,
-            recordedByName: actor.name,
-            recordedAt: now.toISOString(),
-          }),
-        );
-        await tx.denibParts.insert([...new Set(fields.partIds)].map((partId) => ({ denibId: row.id, partId })));
-        await refreshPartStates(tx, fields.partIds, actor, now);
-        return { denib: (await toDenibDtos(tx, [row]))[0], siteId: site };
-      });
-      events.publish({ type: 'denib.created', id: denib.id, partIds: denib.partIds, siteId });
-      return denib;
+      return writeOnce(fields.idempotencyKey, earlier, () => write(fields, actor));
     },
 
     async list(query: DenibQuery): Promise<List<Denib>> {
@@ -93,6 +75,39 @@ export function createDenibService(data: SiteData, events: EventBus, clock: Cloc
       return { items: await toDenibDtos(data, rows), total, page: query.page, pageSize: query.pageSize };
     },
   };
+
+  async function earlier(idempotencyKey: string): Promise<Denib | null> {
+    const existing = await data.acrossSites.denibs.findOneBy({ idempotencyKey });
+    if (!existing) return null;
+    if (!(await data.denibs.existsBy({ id: existing.id }))) throw keyOfAnotherRecord();
+    return (await toDenibDtos(data, [existing]))[0];
+  }
+
+  async function write(fields: DenibFields, actor: SpraySessionRunner): Promise<Denib> {
+    const now = clock.now();
+    assertHappenedNearNow(fields.abradedAt, 'abradedAt', now);
+    const { denib, siteId } = await data.transaction(async (tx) => {
+      await assertRunsSpraySession(tx, fields.spraySessionId, actor);
+      const site = await checkReferences(tx, fields, now);
+      const row = await tx.denibs.save(
+        tx.denibs.create({
+          spraySessionId: fields.spraySessionId,
+          grit: fields.grit,
+          abradedAt: new Date(fields.abradedAt).toISOString(),
+          notes: fields.notes,
+          recordedById: actor.id,
+          recordedByName: actor.name,
+          recordedAt: now.toISOString(),
+          idempotencyKey: fields.idempotencyKey,
+        }),
+      );
+      await tx.denibParts.insert([...new Set(fields.partIds)].map((partId) => ({ denibId: row.id, partId })));
+      await refreshPartStates(tx, fields.partIds, actor, now);
+      return { denib: (await toDenibDtos(tx, [row]))[0], siteId: site };
+    });
+    events.publish({ type: 'denib.created', id: denib.id, partIds: denib.partIds, siteId });
+    return denib;
+  }
 }
 
 export type DenibService = ReturnType<typeof createDenibService>;

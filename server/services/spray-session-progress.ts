@@ -23,7 +23,7 @@ export async function recordChecklist(tx: SiteData, spraySession: SpraySessionEn
   const products = await spraySessionProducts(tx, spraySession.id);
   const fitness = (await fitnessOf(tx, spraySession, booth, products, shop, now, true))(checklist.respiratorKind);
   const { verdict, problems, notes } = evaluateChecklist(checklist, booth, products, fitness.findings);
-  return { ...checklist, verdict, problems, notes, completedAt: new Date().toISOString(), completedByName: actor.name };
+  return { ...checklist, verdict, problems, notes, completedAt: now.toISOString(), completedByName: actor.name };
 }
 
 /** Spraying starts only from a completed checklist; a stop needs a lead's recorded reason. */

@@ -22,6 +22,9 @@ import { toSpraySessionDtos } from './spray-session-dto';
 import { assertNoClash, assertOpen } from './spray-session-rules';
 import { shopFormatOf, shopSpanWords, spraySessionWords, type ShopFormat } from '../../shared/words';
 import { assertSprayerFor } from './sprayers';
+import { earlierReply, keepReply } from './spray-session-replies';
+import { writeOnce } from './write-once';
+import { assertHappenedNearNow } from '../lib/instant-window';
 
 /** Planned parts must exist, and a part placed at another site is not the booth's site's to plan. */
 async function writeItems(tx: SiteData, booth: BoothEntity, spraySessionId: number, items: { partId: number; stepPosition: number | null }[]): Promise<void> {
@@ -37,7 +40,7 @@ async function writeItems(tx: SiteData, booth: BoothEntity, spraySessionId: numb
 type SpraySessionFields = ReturnType<typeof createSpraySessionSchema.parse>;
 
 // What a sprayer may change on a session assigned to them: its progress, not its booking.
-const runnerFields = new Set(['state', 'notes', 'checklist']);
+const runnerFields = new Set(['state', 'notes', 'checklist', 'changedAt', 'idempotencyKey']);
 
 /** Anyone who may not book (a sprayer) moves only their own sessions through their steps. */
 function assertRunnerMayChange(spraySession: SpraySessionEntity, patch: UpdateSpraySessionInput, actor: SpraySessionActor): void {
@@ -128,13 +131,18 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
       return inserted.dtos;
     },
 
-    update: (id: number, patch: UpdateSpraySessionInput, actor: SpraySessionActor) => update(id, patch, actor),
+    /** A change resent with its idempotency key (a tablet back online) answers as it did the first time. */
+    update: async (id: number, patch: UpdateSpraySessionInput, actor: SpraySessionActor) =>
+      (await writeOnce(patch.idempotencyKey, (key) => earlierReply(data, id, key), () => update(id, patch, actor))).result,
   };
 
   async function update(id: number, patch: UpdateSpraySessionInput, actor: SpraySessionActor): Promise<SpraySession> {
     const shop = await settings.get();
     const { timezone } = shop;
     const now = clock.now().toISOString();
+    // Checks and state changes sent later by a tablet that was offline happened when it says.
+    assertHappenedNearNow(patch.changedAt, 'changedAt', clock.now());
+    const at = patch.changedAt ? new Date(patch.changedAt) : clock.now();
     const updated = await data.transaction(async (tx) => {
       const spraySession = await spraySessionOrFail(tx, id);
       assertRunnerMayChange(spraySession, patch, actor);
@@ -155,13 +163,15 @@ export function createSpraySessionService(data: SiteData, settings: SettingsServ
       if ((moved || patch.state === 'planned') && (patch.state ?? spraySession.state) !== 'cancelled') await assertNoClash(tx, slot, booth, shopFormatOf(shop));
       Object.assign(spraySession, { ...slot, notes: patch.notes ?? spraySession.notes, updatedAt: now });
       if (patch.override) spraySession.overrideReason = patch.override.reason;
-      if (patch.checklist) spraySession.checklist = await recordChecklist(tx, spraySession, booth, patch.checklist, actor, shop, clock.now());
-      if (patch.state && patch.state !== spraySession.state) changeState(spraySession, patch.state, now);
+      if (patch.checklist) spraySession.checklist = await recordChecklist(tx, spraySession, booth, patch.checklist, actor, shop, at);
+      if (patch.state && patch.state !== spraySession.state) changeState(spraySession, patch.state, at.toISOString());
       await tx.spraySessions.save(spraySession);
       if (patch.items) await writeItems(tx, booth, id, patch.items);
       const summary = `Changed the spray session ${spraySessionWords({ boothName: booth.name, startAt: new Date(spraySession.startAt) }, shopFormatOf(shop))}${patch.state ? ` (now ${patch.state})` : ''}`;
       await recordAudit(tx, actor, { action: 'update', entity: 'spray-session', entityId: id, summary, changes: { ...patch }, siteId: booth.siteId }, new Date(now));
-      return { dto: await getWith(tx, id), siteId: booth.siteId };
+      const dto = await getWith(tx, id);
+      if (patch.idempotencyKey) await keepReply(tx, patch.idempotencyKey, dto, now);
+      return { dto, siteId: booth.siteId };
     });
     events.publish({ type: 'spray-session.changed', id, siteId: updated.siteId });
     return updated.dto;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoInstantSchema, requiredTextSchema } from './common';
+import { idempotencyKeySchema, isoInstantSchema, requiredTextSchema } from './common';
 
 export const respiratorKinds = ['air-fed', 'vapour-and-particulate', 'particulate'] as const;
 
@@ -35,6 +35,7 @@ export const createMixSchema = z.object({
   thinningPct: z.number().min(0).max(100).default(0),
   mixedAt: isoInstantSchema.optional(),
   tempC: z.number({ error: 'Enter the mixing temperature' }).min(0).max(50),
+  idempotencyKey: idempotencyKeySchema.nullable().default(null),
 });
 export type CreateMixInput = z.input<typeof createMixSchema>;
 

@@ -40,6 +40,12 @@ export const queryFlagSchema = z.enum(['true', 'false'], { error: 'Use true or f
  * year like 0000 or 9999 is a typing slip, and five-digit years would sort wrongly as text.
  * (Instants people type for what happened are held closer to now by the services.)
  */
+/**
+ * A key the client makes for one write it may have to send again (a tablet offline, an answer lost on
+ * the way back): the server answers a repeat with the first answer and records nothing new.
+ */
+export const idempotencyKeySchema = z.string().min(8, 'An idempotency key has at least 8 characters').max(80);
+
 export const isoInstantSchema = z.iso.datetime({ offset: true }).refine((value) => {
   const year = new Date(value).getUTCFullYear();
   return year >= 2000 && year <= 2199;

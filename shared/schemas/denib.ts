@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields } from './common';
+import { idempotencyKeySchema, idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields } from './common';
 import { siteFilterFields } from './site';
 
 /**
@@ -12,6 +12,7 @@ export const createDenibSchema = z.object({
   grit: z.string().trim().regex(/^P\d{2,4}$/, 'Give the grit as a P-grade, e.g. P320'),
   abradedAt: isoInstantSchema,
   notes: optionalTextSchema(2000).default(''),
+  idempotencyKey: idempotencyKeySchema.nullable().default(null),
 });
 export type CreateDenibInput = z.input<typeof createDenibSchema>;
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { checklistResultSchema, checklistSchema } from './checklist';
-import { idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields, requiredTextSchema } from './common';
+import { idempotencyKeySchema, idSchema, isoInstantSchema, listSchema, optionalTextSchema, pageFields, requiredTextSchema } from './common';
 import { siteFilterFields } from './site';
 import { chemistrySchema, hazardSchema } from './product';
 
@@ -51,7 +51,14 @@ export const createSpraySessionSchema = z
 export type CreateSpraySessionInput = z.input<typeof createSpraySessionSchema>;
 
 export const updateSpraySessionSchema = z
-  .object({ ...spraySessionFields, state: spraySessionStateSchema, checklist: checklistSchema })
+  .object({
+    ...spraySessionFields,
+    state: spraySessionStateSchema,
+    checklist: checklistSchema,
+    /** When the checks or the state change happened, for a tablet that sends them after being offline. */
+    changedAt: isoInstantSchema,
+    idempotencyKey: idempotencyKeySchema,
+  })
   .partial()
   .refine(endAfterStart, endAfterStartIssue);
 export type UpdateSpraySessionInput = z.infer<typeof updateSpraySessionSchema>;

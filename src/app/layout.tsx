@@ -4,7 +4,7 @@ import { toast } from 'sonner';
 import { roleLabels } from '../../shared/permissions';
 import { useLogout } from '../api/auth/logout';
 import { errorMessage } from '../lib/error-messages';
-import { CoatQueueSender } from '../features/spray-session/components/coat-queue-sender';
+import { WriteQueueSender } from '../features/spray-session/components/write-queue-sender';
 import { MainNav } from './main-nav';
 import { useSignedInUser } from './signed-in-user';
 import { Wordmark } from './wordmark';
@@ -58,7 +58,7 @@ export function AppLayout() {
 
   return (
     <div className="min-h-dvh">
-      <CoatQueueSender />
+      <WriteQueueSender />
       <a href="#main" className="sr-only z-50 print:hidden rounded-panel bg-white px-4 py-3 font-semibold text-lacquer-900 focus:not-sr-only focus:fixed focus:top-2 focus:left-2">
         Skip to main content
       </a>

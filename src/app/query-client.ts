@@ -24,6 +24,8 @@ export function createQueryClient(): QueryClient {
     defaultOptions: {
       queries: {
         staleTime: 30_000,
+        // Always ask: with no network the service worker answers from the copy it keeps (see pwa.config.ts).
+        networkMode: 'offlineFirst',
         retry: (failureCount, error) => (isApiError(error) && error.status >= 400 && error.status < 500 ? false : failureCount < 2),
         refetchOnWindowFocus: true,
       },

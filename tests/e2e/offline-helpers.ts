@@ -1,5 +1,7 @@
 import { chromium, type BrowserContext, type Page } from '@playwright/test';
+import type { Mix } from '../../shared/schemas/checklist';
 import type { Coat } from '../../shared/schemas/coat';
+import type { Denib } from '../../shared/schemas/denib';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
@@ -95,4 +97,15 @@ export async function bookTwoDoors(api: LeadApi): Promise<{ sessionId: number; d
 
 export async function coatsOnServer(api: LeadApi, sessionId: number): Promise<List<Coat>> {
   return api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`);
+}
+
+/** Everything the session holds on the server: what the tablet sent, each once. */
+export async function recordsOnServer(api: LeadApi, sessionId: number) {
+  const [{ spraySession }, mixes, coats, denibs] = await Promise.all([
+    api.get<{ spraySession: SpraySession }>(`/api/spray-sessions/${sessionId}`),
+    api.get<{ items: Mix[] }>(`/api/spray-sessions/${sessionId}/mixes`),
+    coatsOnServer(api, sessionId),
+    api.get<List<Denib>>(`/api/denibs?spraySessionId=${sessionId}`),
+  ]);
+  return { spraySession, mixes: mixes.items, coats: coats.items, denibs: denibs.items };
 }

@@ -1,38 +1,23 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import type { BrowserContext, Locator, Page } from '@playwright/test';
+import type { BrowserContext, Page } from '@playwright/test';
 import { expect, shotsDir, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
 import { leadApi } from './lead-api';
-import { bookTwoDoors, coatsOnServer, guardContext, launchTablet } from './offline-helpers';
+import { bookTwoDoors, coatsOnServer, guardContext, launchTablet, recordsOnServer } from './offline-helpers';
+import {
+  banner,
+  checkAndStart,
+  notKeptForSession,
+  recordCoat,
+  recordDenib,
+  recordMix,
+  recordTwoCoats,
+  stopSpraying,
+} from './offline-steps';
 
-/** A number box by its label; the − and + buttons beside it name the field too. */
-const box = (scope: Page | Locator, label: string) => scope.getByRole('textbox', { name: new RegExp(`^${label}`) });
-const banner = (page: Page) => page.getByRole('status').filter({ hasText: 'This tablet is offline.' });
-
-async function checkAndStartSpraying(page: Page) {
-  for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/])
-    await page.getByRole('switch', { name: check }).click();
-  await box(page, 'Face velocity measured').fill('0.55');
-  await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-  await box(page, 'Air temperature').fill('20');
-  await box(page, 'Relative humidity').fill('50');
-  await box(page, 'Surface temperature').fill('19');
-  await page.getByRole('button', { name: 'Start spraying' }).click();
-  await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
-  await page.getByRole('button', { name: 'Record a mix' }).click();
-  await box(page, 'Amount to mix').fill('3');
-  await page.getByRole('button', { name: 'Record mix' }).click();
-  await expect(page.getByRole('article', { name: /^Mix: Kestrel 2K PU Primer White mixed at \d{2}:\d{2}$/ })).toBeVisible();
-}
-
-async function recordOfflineCoat(page: Page, door: string) {
-  const coatForm = page.getByRole('region', { name: 'Record a coat' });
-  await expect(coatForm.getByRole('button', { name: `Remove ${door}` })).toBeVisible();
-  await box(coatForm, 'Wet film reading').fill('140');
-  await coatForm.getByRole('button', { name: 'Record coat on this tablet' }).click();
-}
+const offlineSave = 'Record coat on this tablet';
 
 async function openPage(context: BrowserContext): Promise<Page> {
   return context.pages()[0] ?? context.newPage();
@@ -67,7 +52,11 @@ test.describe('booth tablet offline', () => {
       await mainNav(page).getByRole('link', { name: 'Spray sessions' }).click();
       await page.locator(`a[href="/spray-sessions/${sessionId}"]`).click();
       await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
-      await checkAndStartSpraying(page);
+      await checkAndStart(page);
+      await recordMix(page);
+      await expect(
+        page.getByRole('article', { name: /^Mix: Kestrel 2K PU Primer White mixed at \d{2}:\d{2}$/ }),
+      ).toBeVisible();
 
       // No network, and the page reloaded: it opens from the tablet, says it is offline and how old its copy is.
       await tablet.setOffline(true);
@@ -79,9 +68,9 @@ test.describe('booth tablet offline', () => {
         .getByRole('region', { name: 'Record a coat' })
         .getByRole('button', { name: `Remove ${doors[1]}` })
         .click();
-      await recordOfflineCoat(page, doors[0]);
+      await recordCoat(page, doors[0], offlineSave);
       await expect(banner(page)).toContainText('Offline — 1 coat waiting to send');
-      await recordOfflineCoat(page, doors[1]);
+      await recordCoat(page, doors[1], offlineSave);
       await expect(banner(page)).toContainText('Offline — 2 coats waiting to send');
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(2);
       await page.screenshot({ path: path.join(shotsDir, 'offline-tablet-two-waiting.png'), fullPage: true });
@@ -108,6 +97,93 @@ test.describe('booth tablet offline', () => {
       const coated = onServer.items.map((coat) => coat.partIds.length);
       expect(coated).toEqual([1, 1]);
       expect(new Set(onServer.items.flatMap((coat) => coat.partIds)).size).toBe(2);
+      await tablet.close();
+      problems.push(...secondRun);
+    } finally {
+      await api.context.dispose();
+      await rm(profile, { recursive: true, force: true });
+    }
+    expect(problems, 'the tablet browser reported problems').toEqual([]);
+  });
+
+  test('a session never opened on the tablet runs whole with no network, and every record reaches the server once, in order', async ({
+    baseURL,
+    expectedConsoleError,
+  }) => {
+    test.setTimeout(150_000);
+    const api = await leadApi(baseURL!);
+    const { sessionId, doors } = await bookTwoDoors(api);
+    const profile = await mkdtemp(path.join(os.tmpdir(), 'boothwright-tablet-'));
+    const expected = [/^Failed to load resource: the server responded with a status of 4\d\d/, expectedConsoleError!];
+    const problems: string[] = [];
+
+    try {
+      // Online at the start of the shift: sign in and open My sessions, which reads today's sessions ahead.
+      let tablet = await launchTablet(profile, baseURL!);
+      const firstRun = guardContext(tablet, expected);
+      let page = await openPage(tablet);
+      await signIn(page, 'sprayer');
+      await expect
+        .poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null), { timeout: 30_000 })
+        .toBe(true);
+      await mainNav(page).getByRole('link', { name: 'Spray sessions' }).click();
+      const row = page.locator(`a[href="/spray-sessions/${sessionId}"]`);
+      await expect(row).toBeVisible();
+      await expect.poll(() => notKeptForSession(page, sessionId), { timeout: 20_000 }).toEqual([]);
+
+      // The network goes; the sprayer opens the session for the first time on this tablet and runs it.
+      await tablet.setOffline(true);
+      await row.click();
+      await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
+      await expect(banner(page)).toContainText('Offline — nothing waiting to send');
+      await checkAndStart(page);
+      await expect(page.getByText(/^Waiting to send: these checks are kept on this tablet/)).toBeVisible();
+      await recordMix(page);
+      await expect(
+        page.getByText(/^Waiting to send: kept on this tablet, worked out from the data sheet/),
+      ).toBeVisible();
+      await recordTwoCoats(page, doors, offlineSave);
+      await recordDenib(page, doors[0]);
+      await stopSpraying(page);
+      const waiting = 'Offline — 2 session steps, 1 mix, 2 coats and 1 denib waiting to send';
+      await expect(banner(page)).toContainText(waiting);
+      await expect(page.getByText('Pending — not yet on the server')).toHaveCount(6);
+      await page.screenshot({ path: path.join(shotsDir, 'offline-tablet-whole-session.png'), fullPage: true });
+      expect((await recordsOnServer(api, sessionId)).spraySession.state).toBe('planned');
+      await tablet.close();
+      problems.push(...firstRun);
+
+      // The browser restarts with no network: all of it is still there, the session still shown as clearing.
+      tablet = await launchTablet(profile, baseURL!);
+      const secondRun = guardContext(tablet, expected);
+      await tablet.setOffline(true);
+      page = await openPage(tablet);
+      await page.goto(`/spray-sessions/${sessionId}`);
+      await expect(banner(page)).toContainText(waiting);
+      await expect(page.getByRole('heading', { name: 'Clearing the air' })).toBeVisible();
+
+      // Back online: sent by themselves, in order, each once.
+      await tablet.setOffline(false);
+      await expect(page.getByText('Pending — not yet on the server')).toHaveCount(0, { timeout: 30_000 });
+      await expect(page.getByRole('heading', { name: 'Clearing the air' })).toBeVisible();
+      const onServer = await recordsOnServer(api, sessionId);
+      expect(onServer.spraySession).toMatchObject({
+        state: 'clearing',
+        checklist: { completedByName: 'Mina Castell' },
+      });
+      expect(onServer.mixes).toHaveLength(1);
+      expect(onServer.coats.map((coat) => coat.mixId)).toEqual([onServer.mixes[0].id, onServer.mixes[0].id]);
+      expect(new Set(onServer.coats.flatMap((coat) => coat.partIds)).size).toBe(2);
+      expect(onServer.denibs).toHaveLength(1);
+      // In the order made: checks before the pot, the pot before the coats, the stop last.
+      const checkedAt = Date.parse(onServer.spraySession.checklist!.completedAt);
+      expect(Date.parse(onServer.mixes[0].mixedAt)).toBeGreaterThanOrEqual(checkedAt);
+      expect(Math.min(...onServer.coats.map((coat) => Date.parse(coat.sprayedAt)))).toBeGreaterThanOrEqual(
+        Date.parse(onServer.mixes[0].mixedAt),
+      );
+      expect(Date.parse(onServer.spraySession.clearingStartedAt!)).toBeGreaterThanOrEqual(
+        Date.parse(onServer.denibs[0].abradedAt),
+      );
       await tablet.close();
       problems.push(...secondRun);
     } finally {

@@ -28,6 +28,11 @@ export class DenibEntity {
 
   @Column({ type: 'varchar', length: 30 })
   recordedAt: string;
+
+  /** Sent by the tablet so a resend returns this record instead of making a second. */
+  @Index('IDX_denibs_idempotency_key', { unique: true })
+  @Column({ type: 'varchar', length: 80, nullable: true })
+  idempotencyKey: string | null;
 }
 
 /** Which parts one denib covered. Append-only like the denib itself. */

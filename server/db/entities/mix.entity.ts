@@ -45,4 +45,9 @@ export class MixEntity {
 
   @Column({ type: 'varchar', length: 120 })
   recordedByName: string;
+
+  /** Sent by the tablet so a resend returns this record instead of making a second. */
+  @Index('IDX_mixes_idempotency_key', { unique: true })
+  @Column({ type: 'varchar', length: 80, nullable: true })
+  idempotencyKey: string | null;
 }

@@ -8,7 +8,7 @@ import { checklistSchema, type Checklist } from '../../../../shared/schemas/chec
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Product } from '../../../../shared/schemas/product';
 import type { Reading } from '../../../../shared/schemas/reading';
-import type { SpraySession } from '../../../../shared/schemas/spray-session';
+import type { SpraySession, SpraySessionState } from '../../../../shared/schemas/spray-session';
 import type { SessionFitness } from '../../../../shared/schemas/upkeep';
 import { FitnessFindings } from '../../../components/safety/fitness-findings';
 import { Button } from '../../../components/ui/button';
@@ -17,6 +17,8 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useNow } from '../../../lib/use-now';
 import { useCreateReading } from '../../../api/readings/create-reading';
 import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
+import { useSendOrKeep } from '../hooks/use-send-or-keep';
+import { newIdempotencyKey } from '../utils/idempotency';
 import { currentReading, liveChecklist, startBlockedReason } from '../utils/live-checklist';
 import { withoutFieldPrefix } from '../utils/server-errors';
 import { shopWhen } from '../utils/session-format';
@@ -65,6 +67,7 @@ interface ChecklistFormProps {
 
 export function ChecklistForm({ session, booth, products, reading, fitness, units, timeZone, canOverride }: ChecklistFormProps) {
   const update = useUpdateSpraySession();
+  const sendOrKeep = useSendOrKeep(session.id);
   const createReading = useCreateReading();
   const blockedId = useId();
   const [formError, setFormError] = useState<string | null>(null);
@@ -87,9 +90,12 @@ export function ChecklistForm({ session, booth, products, reading, fitness, unit
   const save = (start: boolean) =>
     handleSubmit(async (checklist) => {
       setFormError(null);
-      const state = start ? 'spraying' : session.state === 'planned' ? 'checking' : undefined;
+      const state: SpraySessionState | undefined = start ? 'spraying' : session.state === 'planned' ? 'checking' : undefined;
+      const changes = { checklist, ...(state ? { state } : {}), changedAt: new Date().toISOString(), idempotencyKey: newIdempotencyKey() };
+      const write = { kind: 'session' as const, spraySessionId: session.id, body: changes, verdict: live.evaluation, label: start ? 'Checks, and spraying started' : 'Checks' };
       try {
-        await update.mutateAsync({ id: session.id, changes: { checklist, ...(state ? { state } : {}) } });
+        const outcome = await sendOrKeep(write, () => update.mutateAsync({ id: session.id, changes }));
+        if (outcome.kind === 'queued') return void toast.warning('No connection: the checks are kept on this tablet and sent when the connection is back.');
         toast.success(start ? 'Spraying started. The checks are recorded with it.' : 'Checks recorded.');
         keepReading(checklist);
       } catch (error) {

@@ -5,6 +5,8 @@ import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/error-messages';
 import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
+import { useSendOrKeep } from '../hooks/use-send-or-keep';
+import { newIdempotencyKey } from '../utils/idempotency';
 import { useNow } from '../../../lib/use-now';
 import { shopWhen } from '../utils/session-format';
 import { Countdown } from './countdown';
@@ -20,15 +22,17 @@ interface ClearancePanelProps {
 export function ClearancePanel({ session, booth, canRun, timeZone }: ClearancePanelProps) {
   const now = useNow();
   const update = useUpdateSpraySession();
+  const sendOrKeep = useSendOrKeep(session.id);
   const reasonId = useId();
   const started = session.clearingStartedAt ?? session.updatedAt;
   const clearAt = new Date(Date.parse(started) + booth.clearanceMin * 60_000).toISOString();
   const clear = now.getTime() >= Date.parse(clearAt);
 
   const finish = async () => {
+    const changes = { state: 'done' as const, changedAt: new Date().toISOString(), idempotencyKey: newIdempotencyKey() };
     try {
-      await update.mutateAsync({ id: session.id, changes: { state: 'done' } });
-      toast.success('Session done. The coats stay in the coat log.');
+      const outcome = await sendOrKeep({ kind: 'session', spraySessionId: session.id, body: changes, label: 'Session done' }, () => update.mutateAsync({ id: session.id, changes }));
+      toast.success(outcome.kind === 'saved' ? 'Session done. The coats stay in the coat log.' : 'Session done; kept on this tablet until the connection is back.');
     } catch (error) {
       toast.error(errorMessage(error));
     }

@@ -5,7 +5,8 @@ import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { LoadingState } from '../../../components/ui/states';
 import { useLatestReading } from '../../../api/readings/get-readings';
 import { useMixes } from '../../../api/mixes/get-mixes';
-import type { QueueCoat } from '../hooks/use-pending-coats';
+import type { PendingWrite } from '../hooks/use-pending-writes';
+import { pendingMixes } from '../utils/pending-session';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { fromPart } from '../utils/picked-part';
 import { partsDueNow } from '../utils/session-plan';
@@ -17,7 +18,8 @@ interface CoatEntrySectionProps {
   sessionCoats: Coat[];
   /** The session's coats are still loading: the parts due cannot be told yet. */
   coatsPending: boolean;
-  queue: QueueCoat;
+  /** The session's writes kept on the tablet: a pot mixed offline can be this coat's mix. */
+  pending: PendingWrite[];
   units: UnitSystem;
   timeZone: string;
 }
@@ -28,7 +30,7 @@ function progressWords(ready: ReadyPart): string {
 }
 
 /** The coat form waits for the plan, the parts' readiness and the session's coats, so it starts from the parts due now. */
-export function CoatEntrySection({ session, plan, sessionCoats, coatsPending, queue, units, timeZone }: CoatEntrySectionProps) {
+export function CoatEntrySection({ session, plan, sessionCoats, coatsPending, pending, units, timeZone }: CoatEntrySectionProps) {
   const reading = useLatestReading(session.boothId);
   const mixes = useMixes(session.id);
   const planned = plan.parts.map((part) => {
@@ -49,10 +51,9 @@ export function CoatEntrySection({ session, plan, sessionCoats, coatsPending, qu
           plan={plan}
           planned={planned}
           due={partsDueNow(session, plan.parts, plan, sessionCoats)}
-          mixes={mixes.data ?? []}
+          mixes={[...pendingMixes(pending, plan.products), ...(mixes.data ?? [])]}
           sessionCoats={sessionCoats}
           reading={reading.data ?? null}
-          queue={queue}
           units={units}
           timeZone={timeZone}
         />

@@ -11,7 +11,6 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useOnline } from '../../../lib/use-online';
 import { coatEntryFields, useCoatForm } from '../hooks/use-coat-form';
 import { useCoatPreview } from '../hooks/use-coat-preview';
-import type { QueueCoat } from '../hooks/use-pending-coats';
 import { useRecordCoat } from '../hooks/use-record-coat';
 import { useStopReasons } from '../hooks/use-stop-reasons';
 import type { SessionPlan } from '../hooks/use-session-plan';
@@ -33,7 +32,6 @@ interface CoatFormProps {
   mixes: Mix[];
   sessionCoats: Coat[];
   reading: Reading | null;
-  queue: QueueCoat;
   units: UnitSystem;
   timeZone: string;
 }
@@ -60,13 +58,13 @@ function keepEnterFromSubmitting(event: React.KeyboardEvent<HTMLFormElement>) {
   if (event.key === 'Enter' && event.target instanceof HTMLInputElement) event.preventDefault();
 }
 
-export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, reading, queue, units, timeZone }: CoatFormProps) {
+export function CoatForm({ session, plan, planned, due, mixes, sessionCoats, reading, units, timeZone }: CoatFormProps) {
   const coat = useCoatForm(session, plan, planned, due, mixes, reading);
   const online = useOnline();
   const { form, values, step, product } = coat;
   const { register, control, handleSubmit, setError, setValue, formState } = form;
   const preview = useCoatPreview({ coat, sessionCoats, units, timeZone });
-  const { record, pending } = useRecordCoat(queue);
+  const { record, pending } = useRecordCoat(session.id);
   const stops = useStopReasons(preview.warnings);
   const [formError, setFormError] = useState<string | null>(null);
 

@@ -9,6 +9,8 @@ import { FieldShell, FormAlert, inputClasses, SelectField } from '../../../compo
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useOnline } from '../../../lib/use-online';
 import { useCreateDenib } from '../../../api/denibs/create-denib';
+import { useSendOrKeep } from '../hooks/use-send-or-keep';
+import { newIdempotencyKey } from '../utils/idempotency';
 import type { PickedPart } from '../utils/picked-part';
 import { PartChecklist } from './part-checklist';
 import { denibWords, partsWords, upperFirst } from '../../../../shared/words';
@@ -41,6 +43,7 @@ interface DenibFormProps {
 /** Which parts were sanded, with what and when; the signed-in person is recorded as who. */
 export function DenibForm({ sessionId, parts, needing, grit, onDone }: DenibFormProps) {
   const createDenib = useCreateDenib();
+  const sendOrKeep = useSendOrKeep(sessionId);
   const online = useOnline();
   const [formError, setFormError] = useState<string | null>(null);
   const { control, register, handleSubmit, setError, formState } = useForm<DenibEntryInput, unknown, DenibEntry>({
@@ -50,9 +53,15 @@ export function DenibForm({ sessionId, parts, needing, grit, onDone }: DenibForm
 
   const onSubmit = handleSubmit(async ({ minutesAgo, ...entry }) => {
     setFormError(null);
+    const body = { ...entry, spraySessionId: sessionId, abradedAt: minutesBefore(new Date(), minutesAgo), idempotencyKey: newIdempotencyKey() };
+    const label = `${upperFirst(denibWords(body.grit))} on ${partsWords(body.partIds.length)}`;
     try {
-      const denib = await createDenib.mutateAsync({ ...entry, spraySessionId: sessionId, abradedAt: minutesBefore(new Date(), minutesAgo) });
-      toast.success(`${upperFirst(denibWords(denib.grit))} recorded on ${partsWords(denib.partIds.length)}. The next coat can go on once its window opens.`);
+      const outcome = await sendOrKeep({ kind: 'denib', spraySessionId: sessionId, body, label }, () => createDenib.mutateAsync(body));
+      if (outcome.kind === 'saved') {
+        const { grit, partIds } = outcome.value;
+        toast.success(`${upperFirst(denibWords(grit))} recorded on ${partsWords(partIds.length)}. The next coat can go on once its window opens.`);
+      }
+      else toast.warning('No connection: the denib is kept on this tablet and will be sent when the connection is back.');
       onDone();
     } catch (error) {
       setFormError(applyServerErrors(error, setError, ['partIds', 'grit', 'notes', 'abradedAt']));
@@ -75,12 +84,12 @@ export function DenibForm({ sessionId, parts, needing, grit, onDone }: DenibForm
       <FieldShell label="Notes" hint="e.g. faces only, or a run sanded out." error={formState.errors.notes?.message}>
         {(c) => <textarea {...c} rows={2} className={inputClasses} {...register('notes')} />}
       </FieldShell>
-      {!online && <p className="font-medium text-verdict-caution">No connection: a denib can be recorded once the tablet is back online.</p>}
+      {!online && <p className="font-medium text-verdict-caution">No connection: the denib is kept on this tablet and sent by itself when the connection is back.</p>}
       <div className="flex flex-wrap justify-end gap-3">
         <Button variant="secondary" className="min-h-14" onClick={onDone}>
           Cancel
         </Button>
-        <Button type="submit" className="min-h-14" pending={createDenib.isPending} pendingText="Recording…" disabled={!online}>
+        <Button type="submit" className="min-h-14" pending={createDenib.isPending} pendingText="Recording…">
           Record denib
         </Button>
       </div>

@@ -44,6 +44,8 @@ interface MixCardProps {
 
 export function MixCard({ mix, product, now, timeZone, units }: MixCardProps) {
   const state = potState(mix, now, timeZone);
+  // A pot kept on the tablet has a stand-in id below zero until the server gives it one.
+  const waiting = mix.id < 0;
   const litres = (l: number) => formatQuantity(l, 'liquidVolume', units);
   const lots = mix.lotIds.map((id) => product?.lots.find((lot) => lot.id === id)?.lotNumber ?? 'a lot no longer on the data sheet');
   const shop = { ...useShopFormat(), timeZone };
@@ -53,6 +55,7 @@ export function MixCard({ mix, product, now, timeZone, units }: MixCardProps) {
         <h4 className="text-lg font-bold">{mix.productName}</h4>
         <VerdictBadge verdict={state.verdict} label={state.short} />
       </div>
+      {waiting && <p className="font-bold text-verdict-caution">Waiting to send: kept on this tablet, worked out from the data sheet here.</p>}
       <p className="text-maple-700">
         Mixed {shopWhen(mix.mixedAt, timeZone, now)} by {mix.recordedByName} at {formatQuantity(mix.tempC, 'temperature', units)}
         {lots.length > 0 && `, lot ${lots.join(', ')}`}

@@ -11,6 +11,8 @@ import { Button } from '../../../components/ui/button';
 import { FormAlert, SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateMix } from '../../../api/mixes/create-mix';
+import { useSendOrKeep } from '../hooks/use-send-or-keep';
+import { localMixId, newIdempotencyKey } from '../utils/idempotency';
 import { LotChoice } from './lot-choice';
 import { MixPreview } from './mix-preview';
 import { StepperField } from './stepper-field';
@@ -29,6 +31,7 @@ interface MixFormProps {
 
 export function MixForm({ sessionId, products, airTempC, units, onDone }: MixFormProps) {
   const createMix = useCreateMix();
+  const sendOrKeep = useSendOrKeep(sessionId);
   const [formError, setFormError] = useState<string | null>(null);
   const first = products[0];
   const { control, register, handleSubmit, setError, setValue, formState } = useForm<MixInput, unknown, MixOutput>({
@@ -39,11 +42,16 @@ export function MixForm({ sessionId, products, airTempC, units, onDone }: MixFor
   const product = products.find((p) => p.id === values.productId);
   const { errors } = formState;
 
-  const onSubmit = handleSubmit(async (input) => {
+  const onSubmit = handleSubmit(async (entry) => {
     setFormError(null);
+    const input = { ...entry, mixedAt: new Date().toISOString(), idempotencyKey: newIdempotencyKey() };
+    const label = `Mix: ${input.wantedL} L of ${product?.name ?? 'the product'}`;
     try {
-      const mix = await createMix.mutateAsync({ spraySessionId: sessionId, input });
-      toast.success(`Mix recorded: ${mix.totalL.toFixed(2)} L of ${mix.productName}.`);
+      // The stand-in id lets a coat recorded offline name this pot before the server has given it one.
+      const write = { kind: 'mix' as const, spraySessionId: sessionId, body: input, localId: localMixId(), label };
+      const outcome = await sendOrKeep(write, () => createMix.mutateAsync({ spraySessionId: sessionId, input }));
+      if (outcome.kind === 'saved') toast.success(`Mix recorded: ${outcome.value.totalL.toFixed(2)} L of ${outcome.value.productName}.`);
+      else toast.warning('No connection: the mix is kept on this tablet and will be sent when the connection is back.');
       onDone();
     } catch (error) {
       setFormError(applyServerErrors(error, setError, fieldNames));

@@ -9,6 +9,7 @@ import { formatShopDate } from '../../../lib/shop-time';
 import { useSpraySessions } from '../../../api/spray-sessions/get-spray-sessions';
 import { sessionSpan } from '../utils/session-format';
 import { SessionStateBadge } from './session-header';
+import { SessionsWarmup } from './session-warmup';
 
 const hourMs = 3_600_000;
 
@@ -56,9 +57,12 @@ export function MySessionsPage({ viewerId, seesAll, timeZone }: MySessionsPagePr
   // A session still running from yesterday counts as today's.
   const dayOf = (s: SpraySession) => [calendarDateIn(new Date(s.start), timeZone), today].sort()[1];
   const days = [...new Set(mine.map(dayOf))].sort();
+  // Only the viewer's own sessions of today: a lead's whole week would be a lot of reading for nothing.
+  const todays = mine.filter((s) => s.sprayerId === viewerId && dayOf(s) === today);
 
   return (
     <>
+      <SessionsWarmup sessions={todays} />
       <PageHeader
         title={seesAll ? 'Spray sessions' : 'My spray sessions'}
         description={seesAll ? 'Every booth’s sessions today and in the week ahead.' : 'The sessions you are booked to spray, today and in the week ahead. Open one to do its checks and record its coats.'}

@@ -3,10 +3,15 @@ import { shopWhen } from '../utils/session-format';
 import { ChecklistNotes, checklistVerdictWords } from './checklist-verdict';
 import { VerdictBadge } from './verdict-badge';
 
-/** What was recorded on the server: its verdict is the one that counts. */
-export function RecordedChecklist({ checklist, timeZone }: { checklist: ChecklistResult; timeZone: string }) {
+/** What was recorded on the server: its verdict is the one that counts. Checks still on the tablet say so. */
+export function RecordedChecklist({ checklist, waiting = false, timeZone }: { checklist: ChecklistResult; waiting?: boolean; timeZone: string }) {
   return (
     <div className="rounded-panel border border-maple-300 bg-white p-3">
+      {waiting && (
+        <p className="mb-2 font-bold text-verdict-caution">
+          Waiting to send: these checks are kept on this tablet. The verdict below is the tablet’s own; the server’s comes when they are sent.
+        </p>
+      )}
       <p className="flex flex-wrap items-center gap-3">
         <span className="font-semibold">
           Checks recorded {shopWhen(checklist.completedAt, timeZone)} by {checklist.completedByName}

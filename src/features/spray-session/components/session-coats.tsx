@@ -3,18 +3,15 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { Denib } from '../../../../shared/schemas/denib';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import type { PendingCoat } from '../hooks/use-pending-coats';
 import { CoatCard } from './coat-card';
 import { DenibCard } from './denib-card';
-import { PendingCoats } from './pending-coats';
 
 interface SessionCoatsProps {
   coats: { isPending: boolean; isError: boolean; error: unknown; data?: { items: Coat[] }; refetch: () => unknown };
   /** The session's denibs, shown in time order among the coats. */
   denibs: Denib[];
-  pending: PendingCoat[];
-  onResend: () => void;
-  onDiscard: (key: string) => void;
+  /** Writes of this session kept on the tablet (listed at the top of the page): the list is not empty then. */
+  waiting: number;
   partLabel: (id: number) => string;
   ready: Map<number, ReadyPart>;
   units: UnitSystem;
@@ -30,19 +27,18 @@ function timeline(coats: Coat[], denibs: Denib[]): Entry[] {
   return entries.sort((a, b) => Date.parse(b.at) - Date.parse(a.at));
 }
 
-export function SessionCoats({ coats, denibs, pending, onResend, onDiscard, partLabel, ready, units, timeZone }: SessionCoatsProps) {
+export function SessionCoats({ coats, denibs, waiting, partLabel, ready, units, timeZone }: SessionCoatsProps) {
   return (
     <section aria-labelledby="coats-heading" className="space-y-3">
       <h2 id="coats-heading" className="text-xl font-bold">
         Coats and denibs in this session
       </h2>
-      <PendingCoats pending={pending} timeZone={timeZone} onResend={onResend} onDiscard={onDiscard} />
       {coats.isPending ? (
         <LoadingState what="the coats" />
       ) : coats.isError || !coats.data ? (
         <ErrorState error={coats.error} what="the coats" onRetry={() => coats.refetch()} />
       ) : coats.data.items.length === 0 && denibs.length === 0 ? (
-        pending.length === 0 && <EmptyState title="No coats recorded yet">Each coat appears here with its drying times as soon as it is recorded, and each denib between them.</EmptyState>
+        waiting === 0 && <EmptyState title="No coats recorded yet">Each coat appears here with its drying times as soon as it is recorded, and each denib between them.</EmptyState>
       ) : (
         <div className="space-y-3">
           {timeline(coats.data.items, denibs).map((entry) => {

@@ -2,7 +2,7 @@ import type { Booth } from '../../../../shared/schemas/booth';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
 import { useSessionDenibs, type useSessionCoats } from '../hooks/use-session-records';
-import type { usePendingCoats } from '../hooks/use-pending-coats';
+import type { PendingWrite } from '../hooks/use-pending-writes';
 import type { SessionPlan } from '../hooks/use-session-plan';
 import { ChecklistSection } from './checklist-section';
 import { ClearancePanel } from './clearance-panel';
@@ -18,14 +18,17 @@ interface SessionStageProps {
   booth: Booth;
   plan: SessionPlan;
   coats: ReturnType<typeof useSessionCoats>;
-  pendingCoats: ReturnType<typeof usePendingCoats>;
+  /** Writes of this session kept on the tablet, in the order made. */
+  pending: PendingWrite[];
+  /** The checks shown wait on the tablet: the server's verdict comes when they are sent. */
+  checksWaiting: boolean;
   roles: { canRun: boolean; canRecord: boolean; canOverride: boolean };
   units: UnitSystem;
   timeZone: string;
 }
 
 /** What the session page shows at each step of the session: checks, spraying, clearing, done. */
-export function SessionStage({ session, booth, plan, coats, pendingCoats, roles, units, timeZone }: SessionStageProps) {
+export function SessionStage({ session, checksWaiting, booth, plan, coats, pending, roles, units, timeZone }: SessionStageProps) {
   const { state } = session;
   const denibs = useSessionDenibs(session.id);
   const labels = new Map(plan.parts.map((part) => [part.id, part.label]));
@@ -35,9 +38,7 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
     <SessionCoats
       coats={coats}
       denibs={denibs.data?.items ?? []}
-      pending={pendingCoats.pending}
-      onResend={() => void pendingCoats.resend()}
-      onDiscard={pendingCoats.discard}
+      waiting={pending.length}
       partLabel={(id) => labels.get(id) ?? `Part ${id}`}
       ready={plan.ready}
       units={units}
@@ -47,6 +48,7 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
   const mixes = (
     <MixesSection
       sessionId={session.id}
+      pending={pending}
       products={mixProducts}
       allProducts={plan.products}
       canRecord={roles.canRecord && (state === 'planned' || state === 'checking' || state === 'spraying')}
@@ -71,10 +73,10 @@ export function SessionStage({ session, booth, plan, coats, pendingCoats, roles,
   if (state === 'spraying') {
     return (
       <>
-        {session.checklist && <RecordedChecklist checklist={session.checklist} timeZone={timeZone} />}
+        {session.checklist && <RecordedChecklist checklist={session.checklist} waiting={checksWaiting} timeZone={timeZone} />}
         {denib}
         {roles.canRecord && (
-          <CoatEntrySection session={session} plan={plan} sessionCoats={coats.data?.items ?? []} coatsPending={coats.isPending} queue={pendingCoats.add} units={units} timeZone={timeZone} />
+          <CoatEntrySection session={session} plan={plan} sessionCoats={coats.data?.items ?? []} coatsPending={coats.isPending} pending={pending} units={units} timeZone={timeZone} />
         )}
         {coatsList}
         {mixes}

@@ -5,16 +5,20 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { errorMessage } from '../../../lib/error-messages';
 import { useUpdateSpraySession } from '../../../api/spray-sessions/update-spray-session';
+import { useSendOrKeep } from '../hooks/use-send-or-keep';
+import { newIdempotencyKey } from '../utils/idempotency';
 
 /** One big button for the end of spraying; the clearance countdown starts from the moment it is confirmed. */
 export function StopSpraying({ sessionId, booth }: { sessionId: number; booth: Booth }) {
   const update = useUpdateSpraySession();
+  const sendOrKeep = useSendOrKeep(sessionId);
   const [asking, setAsking] = useState(false);
   const stop = async () => {
+    const changes = { state: 'clearing' as const, changedAt: new Date().toISOString(), idempotencyKey: newIdempotencyKey() };
     try {
-      await update.mutateAsync({ id: sessionId, changes: { state: 'clearing' } });
+      const outcome = await sendOrKeep({ kind: 'session', spraySessionId: sessionId, body: changes, label: 'Spraying stopped' }, () => update.mutateAsync({ id: sessionId, changes }));
       setAsking(false);
-      toast.success('Spraying stopped. The clearance countdown has started.');
+      toast.success(outcome.kind === 'saved' ? 'Spraying stopped. The clearance countdown has started.' : 'Spraying stopped. The clearance countdown has started; the stop is kept on this tablet until the connection is back.');
     } catch (error) {
       toast.error(errorMessage(error));
     }

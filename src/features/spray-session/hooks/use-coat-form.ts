@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import type { z } from 'zod';
+import { z } from 'zod';
 import type { Mix } from '../../../../shared/schemas/checklist';
 import { createCoatSchema } from '../../../../shared/schemas/coat';
 import type { SpraySession } from '../../../../shared/schemas/spray-session';
@@ -13,6 +13,8 @@ import type { SessionPlan } from './use-session-plan';
 
 const coatEntrySchema = createCoatSchema
   .pick({ partIds: true, airTempC: true, relativeHumidityPct: true, surfaceTempC: true, thinningPct: true, wetFilmUm: true, stepPosition: true, lotId: true, mixId: true, notes: true, reworkReason: true })
+  // A pot kept on the tablet has a stand-in id below zero until the server gives it one (the queue swaps it before sending).
+  .extend({ mixId: z.number().int().nullable() })
   .refine((coat) => coat.stepPosition !== null, { path: ['stepPosition'], message: 'Choose the step this coat is' });
 export type CoatEntryInput = z.input<typeof coatEntrySchema>;
 /** The form's fields, where the server's field errors are shown. */

@@ -1,33 +1,23 @@
 import type { Coat, CreateCoatInput } from '../../../../shared/schemas/coat';
-import { isApiError } from '../../../lib/api-client';
 import { useCreateCoat } from '../../../api/coats/create-coat';
-import type { QueueCoat } from './use-pending-coats';
+import { useSendOrKeep } from './use-send-or-keep';
 
 type RecordOutcome = { kind: 'saved'; coat: Coat } | { kind: 'queued' } | { kind: 'failed'; error: unknown };
+type CoatBody = Required<Omit<CreateCoatInput, 'idempotencyKey'>> & { idempotencyKey: string };
 
 /**
  * Sends a coat; when the booth has no connection the coat is queued on the tablet with the same
  * idempotency key, so the resend and any answer that was lost on the way make one record.
  */
-export function useRecordCoat(queue: QueueCoat) {
+export function useRecordCoat(sessionId: number) {
   const createCoat = useCreateCoat();
-  // A coat the tablet could not keep either (storage refused) is a failure the sprayer must see, never a silent loss.
-  const keep = async (body: Parameters<QueueCoat>[0], label: string): Promise<RecordOutcome> => {
+  const sendOrKeep = useSendOrKeep(sessionId);
+  const record = async (body: CoatBody, label: string): Promise<RecordOutcome> => {
     try {
-      await queue(body, label);
-      return { kind: 'queued' };
+      const outcome = await sendOrKeep({ kind: 'coat', spraySessionId: sessionId, body, label }, () => createCoat.mutateAsync(body));
+      return outcome.kind === 'saved' ? { kind: 'saved', coat: outcome.value.coat } : outcome;
     } catch (error) {
-      return { kind: 'failed', error };
-    }
-  };
-  const record = async (body: Required<Omit<CreateCoatInput, 'idempotencyKey'>> & { idempotencyKey: string }, label: string): Promise<RecordOutcome> => {
-    // The browser already knows there is no connection: keep the coat here rather than wait for a send to fail.
-    if (!navigator.onLine) return keep(body, label);
-    try {
-      const { coat } = await createCoat.mutateAsync(body);
-      return { kind: 'saved', coat };
-    } catch (error) {
-      if (isApiError(error) && error.code === 'network') return keep(body, label);
+      // A refusal, or a coat the tablet could not keep either (storage refused): the sprayer must see it, never a silent loss.
       return { kind: 'failed', error };
     }
   };

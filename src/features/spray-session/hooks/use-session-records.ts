@@ -13,3 +13,8 @@ export function useSessionCoats(spraySessionId: number) {
 export function useSessionDenibs(spraySessionId: number) {
   return useDenibs({ spraySessionId, ...sessionPage });
 }
+
+/** Both, as the session page reads them. */
+export function useSessionRecords(spraySessionId: number) {
+  return { coats: useSessionCoats(spraySessionId), denibs: useSessionDenibs(spraySessionId) };
+}

@@ -11,3 +11,8 @@ export function newIdempotencyKey(): string {
   const hex = [...bytes].map((b) => b.toString(16).padStart(2, '0')).join('');
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
 }
+
+/** A stand-in id (below zero, so it can never be the server's) for a pot kept on the tablet. */
+export function localMixId(): number {
+  return -(crypto.getRandomValues(new Uint32Array(1))[0] + 1);
+}

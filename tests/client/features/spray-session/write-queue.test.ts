@@ -2,16 +2,23 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
 import { createCoatSchema } from '../../../../shared/schemas/coat';
+import { openDB } from 'idb';
 import {
   markRefused,
   onQueueChange,
-  queueCoat,
-  queuedCoats,
+  queuedWrites,
+  queueWrite,
   removeQueued,
-  type PendingCoat,
-} from '../../../../src/features/spray-session/utils/coat-queue';
+  type PendingWrite,
+} from '../../../../src/features/spray-session/utils/write-queue';
 
-const coat = (key: string, sessionId: number, queuedAt: string): PendingCoat => ({
+type Coat = Extract<PendingWrite, { kind: 'coat' }>;
+const queuedCoats = queuedWrites;
+const queueCoat = queueWrite;
+
+const coat = (key: string, sessionId: number, queuedAt: string): Coat => ({
+  kind: 'coat',
+  spraySessionId: sessionId,
   body: createCoatSchema.parse({
     spraySessionId: sessionId,
     partIds: [1],
@@ -21,7 +28,7 @@ const coat = (key: string, sessionId: number, queuedAt: string): PendingCoat => 
     relativeHumidityPct: 50,
     surfaceTempC: 19,
     idempotencyKey: key,
-  }) as PendingCoat['body'],
+  }) as Coat['body'],
   label: `coat ${key}`,
   queuedAt,
   problem: null,
@@ -38,7 +45,7 @@ localStorage.setItem(
 );
 localStorage.setItem('boothwright:pending-coats:session-8', 'not json');
 
-describe('the coat queue on the tablet', () => {
+describe('the write queue on the tablet', () => {
   it('takes coats left in localStorage once, in the order they were recorded, and clears them there', async () => {
     expect((await queuedCoats()).map((c) => c.body.idempotencyKey)).toEqual(['legacy-key-1', 'legacy-key-2']);
     // What could not be read stays where it was rather than being thrown away.
@@ -66,5 +73,14 @@ describe('the coat queue on the tablet', () => {
   it('refuses a second coat with the same idempotency key rather than keeping it twice', async () => {
     await expect(queueCoat(coat('new-key-0003', 7, '2027-03-01T10:12:00Z'))).rejects.toThrow();
     expect(await queuedCoats()).toHaveLength(2);
+  });
+
+  it('reads a coat an earlier version kept in the store (no kind, no session of its own) as a coat of its session', async () => {
+    const { kind: _kind, spraySessionId: _session, ...old } = coat('stored-key-4', 9, '2027-03-01T10:15:00Z');
+    const db = await openDB('boothwright', 1);
+    await db.add('pending-coats', old);
+    db.close();
+    const read = (await queuedWrites()).find((write) => write.body.idempotencyKey === 'stored-key-4');
+    expect(read).toMatchObject({ kind: 'coat', spraySessionId: 9, problem: null });
   });
 });
