@@ -11,7 +11,7 @@ const processEnv = {
 };
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'data/**', 'node_modules/**', 'playwright-report/**', 'test-results/**'] },
+  { ignores: ['dist/**', 'dist-server/**', 'data/**', 'node_modules/**', 'playwright-report/**', 'test-results/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -25,7 +25,7 @@ export function printSeed(label: string, counts: RowCounts, seconds: number, boo
 
 /** One line per endpoint: throughput, latency, memory, the ratio to the bare endpoint, and the goals met. */
 export function printLoadTable(results: (LoadResult | { name: string; missing: string })[], bare: LoadResult | null, isRead: (name: string) => boolean): void {
-  console.log(`${pad('endpoint', 30)} ${lpad('alone ms', 9)} ${lpad('req/s', 8)} ${lpad('p50 ms', 8)} ${lpad('p99 ms', 8)} ${lpad('peak RSS', 9)} ${lpad('÷ bare', 7)} ${lpad('srv ms', 7)} ${lpad('cpu ms', 7)} ${lpad('srv p99', 8)} ${lpad('stall', 6)}  goals: p99 < ${goals.p99Ms} ms · ≥ ${goals.ratioToBare} of bare · RSS < ${goals.residentMb} MB · stall ≤ ${goals.stallMs} ms`);
+  console.log(`${pad('endpoint', 30)} ${lpad('alone ms', 9)} ${lpad('req/s', 8)} ${lpad('p50 ms', 8)} ${lpad('p99 ms', 8)} ${lpad('peak RSS', 9)} ${lpad('÷ bare', 7)} ${lpad('srv ms', 7)} ${lpad('no-cache', 9)} ${lpad('cpu ms', 7)} ${lpad('srv p99', 8)} ${lpad('stall', 6)}  goals: p99 < ${goals.p99Ms} ms · ≥ ${goals.ratioToBare} of bare · RSS < ${goals.residentMb} MB · stall ≤ ${goals.stallMs} ms`);
   for (const r of results) {
     if ('missing' in r) {
       console.log(`${pad(r.name, 30)} ${r.missing}`);
@@ -37,7 +37,7 @@ export function printLoadTable(results: (LoadResult | { name: string; missing: s
     checks.push(`RSS ${mark(r.peakRssMb < goals.residentMb)}`, `stall ${mark(r.longestStallMs <= goals.stallMs)}`);
     const failed = r.failures > 0 ? `  FAILED: ${r.firstFailure}` : '';
     console.log(
-      `${pad(r.name, 30)} ${lpad(String(r.aloneMs), 9)} ${lpad(n0(r.requestsPerS), 8)} ${lpad(String(r.p50Ms), 8)} ${lpad(String(r.p99Ms), 8)} ${lpad(`${n0(r.peakRssMb)} MB`, 9)} ${lpad(ratio === null ? '' : ratio.toFixed(3), 7)} ${lpad(n2(r.serverAloneMs), 7)} ${lpad(n2(r.cpuMsPerRequest), 7)} ${lpad(n1(r.serverP99Ms), 8)} ${lpad(n0(r.longestStallMs), 6)}  ${checks.join('  ')}${failed}`,
+      `${pad(r.name, 30)} ${lpad(String(r.aloneMs), 9)} ${lpad(n0(r.requestsPerS), 8)} ${lpad(n1(r.p50Ms), 8)} ${lpad(n1(r.p99Ms), 8)} ${lpad(`${n0(r.peakRssMb)} MB`, 9)} ${lpad(ratio === null ? '' : ratio.toFixed(3), 7)} ${lpad(n2(r.serverAloneMs), 7)} ${lpad(r.serverUncachedMs === undefined ? '' : n2(r.serverUncachedMs), 9)} ${lpad(n2(r.cpuMsPerRequest), 7)} ${lpad(n1(r.serverP99Ms), 8)} ${lpad(n0(r.longestStallMs), 6)}  ${checks.join('  ')}${failed}`,
     );
   }
 }

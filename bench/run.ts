@@ -1,9 +1,10 @@
+import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { measureBundle } from './bundle-size';
 import { coatCreationTarget, readTargets, reportPath, routeExists } from './load/endpoints';
-import { measure, type LoadResult, type LoadSettings, type Target } from './load/measure';
+import { measure, serverTimeAlone, type LoadResult, type LoadSettings, type Target } from './load/measure';
 import { timeNotificationTicks, type TickTiming } from './notification-timing';
 import { timePlanner } from './planner-timing';
 import { heading, printBundle, printGrowth, printLoadTable, printPlanner, printSeed, printStalls, printTicks } from './report';
@@ -30,10 +31,10 @@ async function measureBare(dir: string): Promise<LoadResult> {
 /** Starts the production server on the shop's database, signs in as the lead and measures each target. */
 async function measureApp(shop: SyntheticShop, dir: string, withCoatCreation: boolean): Promise<Line[]> {
   const server = await startAppServer({ databasePath: shop.databasePath, uploadDir: shop.uploadDir, port: ports.app, clientDir: path.join(dir, 'no-client') });
+  const lines: Line[] = [];
   try {
     const auth = await signIn(server.base, lead.email, lead.password);
     const targets: Target[] = [...readTargets(shop, auth), ...(withCoatCreation ? [coatCreationTarget(shop, auth)] : [])];
-    const lines: Line[] = [];
     for (const target of targets) {
       if (target.path.startsWith(reportPath) && !(await routeExists(server.base, target))) {
         lines.push({ name: target.name, missing: `not available (no ${reportPath} in this build)` });
@@ -41,7 +42,22 @@ async function measureApp(shop: SyntheticShop, dir: string, withCoatCreation: bo
       }
       lines.push(await measure(server, target, load));
     }
-    return lines;
+  } finally {
+    await server.stop();
+  }
+  await addUncachedTimes(shop, dir, measured(lines).filter((l) => isRead(l.name)));
+  return lines;
+}
+
+/** The same reads one at a time on a server with the response cache off: what a first request costs. */
+async function addUncachedTimes(shop: SyntheticShop, dir: string, reads: LoadResult[]): Promise<void> {
+  const server = await startAppServer({ databasePath: shop.databasePath, uploadDir: shop.uploadDir, port: ports.app, clientDir: path.join(dir, 'no-client'), env: { RESPONSE_CACHE_MB: '0' } });
+  try {
+    const targets = readTargets(shop, await signIn(server.base, lead.email, lead.password));
+    for (const line of reads) {
+      const target = targets.find((t) => t.name === line.name);
+      if (target) line.serverUncachedMs = await serverTimeAlone(server, target, load.aloneS);
+    }
   } finally {
     await server.stop();
   }
@@ -63,9 +79,11 @@ async function main(): Promise<void> {
   const started = performance.now();
   console.log(`Boothwright benchmark · ${os.cpus().length} cores · Node ${process.version} · ${new Date().toISOString().slice(0, 16)} UTC · ${loadAverage()}`);
   console.log(`Production server (NODE_ENV=production, SQLite, logging at info) · autocannon ${load.connections} connections × ${load.durationS} s per line, after ${load.warmUpS} s warm-up`);
-  console.log(`"alone" is the median latency of the same request sent one at a time for ${load.aloneS} s: the server's own cost, without queueing.`);
-  console.log(`Inside the server (bench/server/probe.ts): "srv ms" the median time from headers read to answer sent and "cpu ms" the process's CPU per request, both one at a time; "srv p99" the same time under the full load; "stall" the longest the event loop was held at once.`);
+  console.log(`"alone" is the median latency of the same request sent one at a time for ${load.aloneS} s: the server's own cost, without queueing. Load figures are timed from the moment all ${load.connections} connections are open and answered once.`);
+  console.log(`Inside the server (bench/server/probe.mjs): "srv ms" the median time from headers read to answer sent and "cpu ms" the process's CPU per request, both one at a time; "no-cache" the same "srv ms" on a server with the response cache off (RESPONSE_CACHE_MB=0), what a first request costs; "srv p99" the same time under the full load; "stall" the longest the event loop was held at once.`);
   const dir = fs.mkdtempSync('/tmp/bench-');
+  // The server is measured as production runs it: built (dist-server/), under plain Node.
+  execFileSync(process.execPath, ['scripts/build-server.mjs'], { stdio: 'inherit' });
   try {
     heading('Client bundle (vite build)');
     printBundle(measureBundle(path.join(dir, 'client')));

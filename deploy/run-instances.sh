@@ -19,8 +19,8 @@ haproxy -c -q -f "$config"
 ports="$(awk '$1 == "server" { n = split($3, hostPort, ":"); print hostPort[n] }' "$config")"
 [ -n "$ports" ] || { echo "no server lines in $config" >&2; exit 1; }
 
-[ -f dist/client/index.html ] || npm run build
-npm run --silent db:migrate
+[ -f dist/client/index.html ] && [ -f dist-server/index.js ] || npm run build
+node dist-server/cli.js migrate
 
 pids=()
 stop_all() {
@@ -31,8 +31,8 @@ stop_all() {
 trap stop_all EXIT INT TERM
 
 for port in $ports; do
-  # Node with tsx loaded, not a wrapper, so the stop signal reaches the server itself.
-  PORT="$port" NODE_ENV=production TRUST_PROXY=true TSX_TSCONFIG_PATH=tsconfig.server.json node --import tsx server/index.ts &
+  # The built server under Node itself, not a wrapper, so the stop signal reaches the server.
+  PORT="$port" NODE_ENV=production TRUST_PROXY=true node --max-old-space-size=256 dist-server/index.js &
   pids+=("$!")
 done
 haproxy -db -f "$config" &

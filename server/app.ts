@@ -8,6 +8,7 @@ import { configurePassport } from './auth/passport';
 import type { AppConfig } from './config/env';
 import { systemClock, type Clock } from './lib/clock';
 import { LiveStreamLimits } from './lib/live-stream-limits';
+import { ResponseCache } from './lib/response-cache';
 import { signInCacheFor } from './auth/sign-in-cache';
 import { errorHandler } from './middleware/error-handler';
 import { requestLog } from './middleware/request-log';
@@ -49,7 +50,7 @@ export function createApp(deps: AppDeps): Express {
   const signInCache = signInCacheFor(events);
   const auth = configurePassport(dataSource, signInCache);
   const services = { clock, events, liveStreams: new LiveStreamLimits(config.liveStreams), storage: createFileStorage(config), notifications: deps.notifications };
-  const registry: RegistryDeps = { dataSource, config, services, auth };
+  const registry: RegistryDeps = { dataSource, config, services, auth, answers: answerCache(events, config, clock) };
   app.use('/api', buildBareApiRouter(registry));
   app.use('/api', express.json({ limit: '1mb' }), signInSessionMiddleware(dataSource, deps.signInSecret, config.trustProxy, signInCache), auth.initialize(), auth.session());
   app.use('/api', buildApiRouter(registry));
@@ -57,6 +58,15 @@ export function createApp(deps: AppDeps): Express {
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
   app.use(errorHandler);
   return app;
+}
+
+/** The response cache, cleared by every change on the feed (a sign-in's own comings and goings change no answer). */
+function answerCache(events: EventBus, config: AppConfig, clock: Clock): ResponseCache {
+  const answers = new ResponseCache(config.responseCacheBytes, () => clock.now().getTime());
+  events.subscribe((event) => {
+    if (event.type !== 'sign-in.changed') answers.clear(event.siteId);
+  });
+  return answers;
 }
 
 /** The service worker and the manifest are asked for afresh each time, so a new deploy reaches the tablets. */

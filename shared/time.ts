@@ -1,7 +1,15 @@
+// Building a formatter costs far more than formatting with one: keep one per zone.
+const calendarDateFormats = new Map<string, Intl.DateTimeFormat>();
+
 /** The calendar date (YYYY-MM-DD) of an instant as seen on a wall clock in `timeZone`. */
 export function calendarDateIn(instant: Date, timeZone: string): string {
-  // en-CA formats dates as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(instant);
+  let format = calendarDateFormats.get(timeZone);
+  if (!format) {
+    // en-CA formats dates as YYYY-MM-DD.
+    format = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+    calendarDateFormats.set(timeZone, format);
+  }
+  return format.format(instant);
 }
 
 const weekdayNumbers: Record<string, number> = { Mon: 1, Tue: 2, Wed: 3, Thu: 4, Fri: 5, Sat: 6, Sun: 7 };

@@ -1,3 +1,4 @@
+import { createHistogram } from 'node:perf_hooks';
 import autocannon from 'autocannon';
 import type { RunningChild } from '../server/child-process';
 import { waitUntilIdle, watchMemory } from '../server/memory';
@@ -33,6 +34,8 @@ export interface LoadResult {
   firstFailure: string | null;
   /** Inside the server, one request at a time: median time from headers read to answer sent. */
   serverAloneMs: number;
+  /** The same with the response cache off (RESPONSE_CACHE_MB=0): every answer worked out afresh. */
+  serverUncachedMs?: number;
   /** The server process's CPU time per request, one request at a time. */
   cpuMsPerRequest: number;
   /** Inside the server, under the full load: 99th percentile. */
@@ -44,6 +47,29 @@ export interface LoadResult {
 interface Run {
   result: autocannon.Result;
   firstError: string | null;
+  /** From the moment every connection had its first answer: the load proper, without connecting. */
+  timed: { requestsPerS: number; p50Ms: number; p99Ms: number };
+}
+
+/**
+ * Records each answer's latency only once every connection is open and has had its first answer,
+ * so opening the connections (and a first request queued behind 49 others) is not timed.
+ */
+function timeOpenConnections(instance: autocannon.Instance, connections: number) {
+  const opened = new Set<unknown>();
+  const latencies = createHistogram();
+  let startedAt = 0;
+  instance.on('response', (client: unknown, _status: number, _bytes: number, responseTimeMs: number) => {
+    if (startedAt) return void latencies.record(Math.max(1, Math.round(responseTimeMs * 1000)));
+    opened.add(client);
+    if (opened.size >= connections) startedAt = performance.now();
+  });
+  return () => {
+    const seconds = startedAt ? (performance.now() - startedAt) / 1000 : 0;
+    const count = startedAt ? latencies.count : 0;
+    const ms = (p: number) => (count ? latencies.percentile(p) / 1000 : 0);
+    return { requestsPerS: seconds > 0 ? count / seconds : 0, p50Ms: ms(50), p99Ms: ms(99) };
+  };
 }
 
 function run(base: string, target: Target, connections: number, durationS: number): Promise<Run> {
@@ -64,11 +90,21 @@ function run(base: string, target: Target, connections: number, durationS: numbe
   };
   return new Promise((resolve, reject) => {
     let firstError: string | null = null;
-    const instance = autocannon(options, (error, result) => (error ? reject(error) : resolve({ result, firstError })));
+    let timed: () => Run['timed'] = () => ({ requestsPerS: 0, p50Ms: 0, p99Ms: 0 });
+    const instance = autocannon(options, (error, result) => (error ? reject(error) : resolve({ result, firstError, timed: timed() })));
+    timed = timeOpenConnections(instance, connections);
     instance.on('reqError', (error: Error) => {
       firstError ??= error.message;
     });
   });
+}
+
+/** The server's median time for the request sent one at a time, after a short warm-up (bench/server/probe.mjs). */
+export async function serverTimeAlone(server: RunningChild, target: Target, seconds: number): Promise<number> {
+  await run(server.base, target, 1, 1);
+  await server.probe();
+  await run(server.base, target, 1, seconds);
+  return (await server.probe()).serverP50Ms;
 }
 
 /** Says why a measurement failed: no answer, socket errors, or what a non-2xx answer says. */
@@ -94,7 +130,7 @@ export async function measure(server: RunningChild, target: Target, settings: Lo
   const inside = await server.probe();
   await waitUntilIdle(pid);
   const memory = watchMemory(pid);
-  const { result, firstError } = await run(base, target, settings.connections, settings.durationS);
+  const { result, firstError, timed } = await run(base, target, settings.connections, settings.durationS);
   const peakRssMb = memory.peakMb();
   await waitUntilIdle(pid);
   const loaded = await server.probe();
@@ -102,9 +138,9 @@ export async function measure(server: RunningChild, target: Target, settings: Lo
   const failures = result.non2xx + result.errors + (result.requests.total === 0 ? 1 : 0);
   return {
     name: target.name,
-    requestsPerS: result.requests.average,
-    p50Ms: result.latency.p50,
-    p99Ms: result.latency.p99,
+    requestsPerS: timed.requestsPerS,
+    p50Ms: timed.p50Ms,
+    p99Ms: timed.p99Ms,
     aloneMs: alone.latency.p50,
     peakRssMb,
     requests: result.requests.total,

@@ -1,6 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import path from 'node:path';
-import { readProbe, spawnTsNode, stopChild, waitUntilUp, type RunningChild } from './child-process';
+import { readProbe, spawnBuiltServer, stopChild, waitUntilUp, type RunningChild } from './child-process';
 
 export interface AppServerOptions {
   databasePath: string;
@@ -8,9 +7,11 @@ export interface AppServerOptions {
   port: number;
   /** A folder without a built client: the API alone is measured. */
   clientDir: string;
+  /** More settings, e.g. RESPONSE_CACHE_MB=0 to time every read worked out afresh. */
+  env?: NodeJS.ProcessEnv;
 }
 
-/** The real production server (server/index.ts) on the bench database, as `npm run serve` starts it. */
+/** The real production server, built (dist-server/index.js), on the bench database, as `npm run serve` starts it. */
 export async function startAppServer(options: AppServerOptions): Promise<RunningChild> {
   const env: NodeJS.ProcessEnv = {
     ...process.env,
@@ -25,8 +26,9 @@ export async function startAppServer(options: AppServerOptions): Promise<Running
     // The local fake SMTP server on any free port, so the bench never meets another on 2525.
     FAKE_SMTP_PORT: '0',
     SMTP_URL: '',
+    ...options.env,
   };
-  const { child, stderr } = spawnTsNode(path.join('server', 'index.ts'), env);
+  const { child, stderr } = spawnBuiltServer(env);
   const base = `http://127.0.0.1:${options.port}`;
   try {
     await waitUntilUp(`${base}/api/health`, child, stderr, 120_000);

@@ -1,6 +1,20 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import path from 'node:path';
-import type { ProbeFigures } from './probe';
+import fs from 'node:fs';
+
+/** What bench/server/probe.mjs, inside the measured server, answers. */
+export interface ProbeFigures {
+  type: 'probe';
+  /** The longest the event loop was held at once since the last read. */
+  loopMaxMs: number;
+  serverP50Ms: number;
+  serverP99Ms: number;
+  /** CPU time (user + system) of the whole process per answered request. */
+  cpuMsPerRequest: number;
+  requests: number;
+}
+
+const probe = path.resolve('bench', 'server', 'probe.mjs');
 
 export interface RunningChild {
   base: string;
@@ -27,8 +41,18 @@ export function readProbe(child: ChildProcess): Promise<ProbeFigures> {
 
 /** Node itself with tsx and the probe loaded (not the tsx wrapper), so the pid we sample and signal is the server. */
 export function spawnTsNode(entry: string, env: NodeJS.ProcessEnv, args: string[] = []): { child: ChildProcess; stderr: () => string } {
-  const probe = path.resolve('bench', 'server', 'probe.ts');
-  const child = spawn(process.execPath, ['--import', 'tsx', '--import', probe, entry, ...args], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] });
+  return withStderr(spawn(process.execPath, ['--import', 'tsx', '--import', probe, entry, ...args], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+}
+
+export const builtServer = path.join('dist-server', 'index.js');
+
+/** The built server (`npm run build`) under plain Node with the probe, as `npm run serve` runs it. */
+export function spawnBuiltServer(env: NodeJS.ProcessEnv): { child: ChildProcess; stderr: () => string } {
+  if (!fs.existsSync(builtServer)) throw new Error(`${builtServer} is missing: run npm run build first`);
+  return withStderr(spawn(process.execPath, ['--max-old-space-size=256', '--import', probe, builtServer], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+}
+
+function withStderr(child: ChildProcess): { child: ChildProcess; stderr: () => string } {
   let stderr = '';
   child.stderr?.on('data', (chunk: Buffer) => {
     stderr = (stderr + chunk.toString()).slice(-4000);

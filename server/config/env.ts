@@ -29,6 +29,7 @@ const envSchema = z.object({
     .default('false')
     .transform((v) => v === 'true'),
   SLOW_REQUEST_MS: z.coerce.number().int().min(1).default(1000),
+  RESPONSE_CACHE_MB: z.coerce.number().min(0).max(1024).default(24),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   UPLOAD_DIR: z.string().default(path.join('data', 'uploads')),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
@@ -77,6 +78,8 @@ export interface AppConfig {
   logLevel: string;
   /** Requests are logged only when they fail (5xx) or take at least this long. */
   slowRequestMs: number;
+  /** Bytes of answers the response cache may hold (0 turns it off). */
+  responseCacheBytes: number;
   uploadDir: string;
   loginRateLimit: number;
   /** Failed sign-ins to one account (whatever the address) before it waits a few minutes. */
@@ -113,6 +116,7 @@ export function parseConfig(source: NodeJS.ProcessEnv): AppConfig {
     trustProxy: env.TRUST_PROXY,
     logLevel: env.LOG_LEVEL,
     slowRequestMs: env.SLOW_REQUEST_MS,
+    responseCacheBytes: Math.round(env.RESPONSE_CACHE_MB * 1024 * 1024),
     uploadDir: env.UPLOAD_DIR,
     loginRateLimit: env.LOGIN_RATE_LIMIT,
     loginAccountRateLimit: env.LOGIN_ACCOUNT_RATE_LIMIT,

@@ -1,5 +1,3 @@
-import { simpleParser } from 'mailparser';
-import { SMTPServer } from 'smtp-server';
 import type { MailboxMessage } from '../../shared/schemas/notification';
 
 export interface FakeSmtp {
@@ -13,8 +11,10 @@ const keep = 500;
 /**
  * A real SMTP server on 127.0.0.1 that keeps what it receives in memory, for development and
  * tests when no SMTP_URL is set. Admins read it on the Mailbox page; nothing leaves the machine.
+ * Its SMTP server and mail parser are loaded only here, so a shop with a real SMTP_URL never loads them.
  */
-export function startFakeSmtp(port: number): Promise<FakeSmtp> {
+export async function startFakeSmtp(port: number): Promise<FakeSmtp> {
+  const [{ simpleParser }, { SMTPServer }] = await Promise.all([import('mailparser'), import('smtp-server')]);
   const messages: MailboxMessage[] = [];
   let nextId = 1;
   const server = new SMTPServer({

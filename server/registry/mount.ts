@@ -11,6 +11,8 @@ import { requirePermission, requireSignIn } from '../middleware/permissions';
 import { signInLimits } from '../middleware/sign-in-limits';
 import { singleUpload } from '../middleware/upload';
 import { createServiceSet, type ServiceDeps } from '../services/service-set';
+import type { ResponseCache } from '../lib/response-cache';
+import { answerKey, clearedByOf, keepUntil, sendAnswer, staleSiteOf, toCachedAnswer } from './cached-answers';
 import { answered, Reply, type Access, type ApiRoute, type RouteContext } from './route';
 
 export interface RegistryDeps {
@@ -18,6 +20,8 @@ export interface RegistryDeps {
   config: AppConfig;
   services: ServiceDeps;
   auth: passport.PassportStatic;
+  /** GET answers of the routes that declare `cache`; cleared through the change feed. */
+  answers: ResponseCache;
 }
 
 const pass: RequestHandler = (_req, _res, next) => next();
@@ -74,9 +78,23 @@ function contextOf(req: Request, query: Record<string, unknown> | undefined, dep
   };
 }
 
-/** The last step of every route: parse, hand the scope's services to the handler, send its answer. */
+/** The answer's status and body, or `answered` when the handler wrote the response itself. */
+async function run(route: ApiRoute, req: Request, ctx: RouteContext, input: Omit<Parameters<ApiRoute['handler']>[0], 'file'>, deps: RegistryDeps) {
+  try {
+    const result = await route.handler({ ...input, file: req.file }, ctx);
+    if (result === answered) return answered;
+    return result instanceof Reply ? { status: result.status, answer: result.body } : { status: route.response.status, answer: result };
+  } finally {
+    // Any signed-in write (or attempt: a failed one may have written part-way) makes cached answers out of date, here and on every other instance.
+    if (route.method !== 'get' && route.access !== 'public') deps.services.events.publish({ type: 'answers.stale', siteId: staleSiteOf(route.sites, ctx.scope) });
+  }
+}
+
+/** The last step of every route: parse, answer from the cache when it may, else hand the scope's services to the handler and send its answer. */
 function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
   const checkAnswers = deps.config.env === 'test';
+  const policy = route.method === 'get' ? route.cache : undefined;
+  const nowMs = () => deps.services.clock.now().getTime();
   return async (req, res) => {
     const params = route.params?.parse(req.params);
     const query = parseQuery(route.query, req.query);
@@ -85,15 +103,22 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
     if (route.body) req.body = body;
     const form = route.multipart?.fields.parse(req.body ?? {});
     const ctx: RouteContext = { ...contextOf(req, query, deps), res };
-    const result = await route.handler({ params, query, body, form, file: req.file }, ctx);
+    const key = policy ? answerKey(policy, req, ctx) : '';
+    const held = policy ? deps.answers.get(key) : undefined;
+    if (held) return sendAnswer(res, 200, held);
+    const stamp = deps.answers.stamp();
+    const result = await run(route, req, ctx, { params, query, body, form }, deps);
     if (result === answered) return;
-    const [status, answer] = result instanceof Reply ? [result.status, result.body] : [route.response.status, result];
+    const { status, answer } = result;
     if (status === 204) return void res.status(204).end();
     if (checkAnswers && route.response.schema) {
       const checked = route.response.schema.safeParse(answer);
       if (!checked.success) throw new Error(`${route.method.toUpperCase()} ${route.path} answered a body its response schema refuses: ${z.prettifyError(checked.error)}`);
     }
-    res.status(status).json(answer);
+    if (!policy) return void res.status(status).json(answer);
+    const cached = toCachedAnswer(answer);
+    if (status === 200) deps.answers.set(key, cached, clearedByOf(policy, ctx.scope), keepUntil(policy, answer, nowMs()), stamp);
+    sendAnswer(res, status, cached);
   };
 }
 

@@ -45,6 +45,26 @@ export interface ResponseSpec {
   description?: string;
 }
 
+/**
+ * A GET route whose JSON answers the response cache keeps, per site scope, role and address (and
+ * user with `perUser`), each with a strong ETag. Any write through the API clears them (see mount.ts).
+ */
+export interface CachePolicy {
+  /**
+   * `site`: the answer reads only the scope's own sites, so only a change there (or a group-wide
+   * one) clears it; `any`: it reads across sites (parts move between sites, jobs are the group's),
+   * so a change on any site clears it.
+   */
+  clearedBy: 'site' | 'any';
+  /** The answer differs from user to user, not only by role and site. */
+  perUser?: boolean;
+  /**
+   * The answer depends on the clock (states that change as time passes): kept only until the
+   * earliest instant in it still to come, and never longer than `clockBoundMs` (mount.ts).
+   */
+  clock?: boolean;
+}
+
 type Parsed<S> = S extends z.ZodType ? z.output<S> : undefined;
 
 /** What a handler is given: the parsed request, and who is asking with their services. */
@@ -102,6 +122,8 @@ export interface RouteSpec<P, Q, B, M> {
   response: ResponseSpec;
   /** Failed sign-ins are limited per address and per account (the e-mail typed). */
   limit?: 'sign-in';
+  /** Kept in the response cache; only on GET routes answering JSON. */
+  cache?: CachePolicy;
   /** Answered before the sign-in session is read (health, the API document). */
   bare?: boolean;
   handler(input: RouteInput<P, Q, B, M>, ctx: RouteContext): HandlerResult | Promise<HandlerResult>;

@@ -25,6 +25,8 @@ export const coatRoutes: ApiRoute[] = [
     sites: 'site',
     query: coatQuerySchema,
     response: { status: 200, schema: coatListSchema },
+    // Coats name parts and jobs, which are the whole group's.
+    cache: { clearedBy: 'any' },
     handler: ({ query }, { services }) => services.coats.list(query),
   }),
   defineRoute({

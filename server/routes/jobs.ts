@@ -12,6 +12,8 @@ export const jobRoutes: ApiRoute[] = [
     sites: 'group',
     query: jobListQuerySchema,
     response: { status: 200, schema: jobListSchema },
+    // An in-finish job shows as ready once its ready time has passed.
+    cache: { clearedBy: 'any', clock: true },
     handler: ({ query }, { services }) => services.jobs.list(query),
   }),
   defineRoute({

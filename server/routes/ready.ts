@@ -11,6 +11,8 @@ export const readyRoutes: ApiRoute[] = [
     sites: 'site',
     query: readyQuerySchema,
     response: { status: 200, schema: readyListSchema },
+    // Parts are seen from several sites, and their states change as drying time passes.
+    cache: { clearedBy: 'any', clock: true },
     handler: ({ query }, { services }) => services.ready.list(query),
   }),
 ];

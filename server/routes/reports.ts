@@ -26,6 +26,8 @@ interface ReportRoute {
   query: z.ZodObject;
   /** The `{ report }` envelope. */
   schema: z.ZodType;
+  /** `site` when the report reads only its site's booths, sessions and records; `any` when it reads parts or jobs (the group's). */
+  clearedBy: 'site' | 'any';
 }
 
 /**
@@ -40,7 +42,13 @@ function reportRoute(r: ReportRoute): ApiRoute {
     access: 'reports:read',
     sites: 'site',
     query: r.query,
-    response: { status: 200, schema: r.schema, description: '`{ report }`, or the report’s table as text/csv with format=csv' },
+    response: {
+      status: 200,
+      schema: r.schema,
+      description: '`{ report }`, or the report’s table as text/csv with format=csv',
+    },
+    // A CSV download is written by the handler itself and never kept; the JSON report is.
+    cache: { clearedBy: r.clearedBy },
     handler: async ({ query }, { services, res }) => {
       const q = query as ReportQuery;
       const report = await (services.reports[r.name] as (query: unknown) => Promise<unknown>)(query);
@@ -53,11 +61,60 @@ function reportRoute(r: ReportRoute): ApiRoute {
 }
 
 export const reportRoutes: ApiRoute[] = [
-  reportRoute({ name: 'boothUse', path: 'booth-use', summary: 'Hours booked and sprayed per booth per week (?boothId)', query: boothUseQuerySchema, schema: boothUseReportSchema }),
-  reportRoute({ name: 'areaSprayed', path: 'area-sprayed', summary: 'Area sprayed per week (?groupBy=product-kind|job)', query: areaSprayedQuerySchema, schema: areaSprayedReportSchema }),
-  reportRoute({ name: 'conditions', path: 'conditions', summary: 'Booth conditions against product limits (?boothId)', query: conditionsQuerySchema, schema: conditionsReportSchema }),
-  reportRoute({ name: 'solvent', path: 'solvent', summary: 'Litres mixed and VOC per month with the yearly total', query: reportRangeQuerySchema, schema: solventReportSchema }),
-  reportRoute({ name: 'material', path: 'material', summary: 'Litres used against the estimate per job and product (?jobId)', query: materialQuerySchema, schema: materialReportSchema }),
-  reportRoute({ name: 'rework', path: 'rework', summary: 'Coats corrected or re-sprayed by reason per month', query: reportRangeQuerySchema, schema: reworkReportSchema }),
-  reportRoute({ name: 'upkeep', path: 'upkeep', summary: 'Booth upkeep and crew records done against due: per booth, and the site’s crew as counts', query: reportRangeQuerySchema, schema: upkeepReportSchema }),
+  reportRoute({
+    name: 'boothUse',
+    clearedBy: 'site',
+    path: 'booth-use',
+    summary: 'Hours booked and sprayed per booth per week (?boothId)',
+    query: boothUseQuerySchema,
+    schema: boothUseReportSchema,
+  }),
+  reportRoute({
+    name: 'areaSprayed',
+    clearedBy: 'any',
+    path: 'area-sprayed',
+    summary: 'Area sprayed per week (?groupBy=product-kind|job)',
+    query: areaSprayedQuerySchema,
+    schema: areaSprayedReportSchema,
+  }),
+  reportRoute({
+    name: 'conditions',
+    clearedBy: 'site',
+    path: 'conditions',
+    summary: 'Booth conditions against product limits (?boothId)',
+    query: conditionsQuerySchema,
+    schema: conditionsReportSchema,
+  }),
+  reportRoute({
+    name: 'solvent',
+    clearedBy: 'site',
+    path: 'solvent',
+    summary: 'Litres mixed and VOC per month with the yearly total',
+    query: reportRangeQuerySchema,
+    schema: solventReportSchema,
+  }),
+  reportRoute({
+    name: 'material',
+    clearedBy: 'any',
+    path: 'material',
+    summary: 'Litres used against the estimate per job and product (?jobId)',
+    query: materialQuerySchema,
+    schema: materialReportSchema,
+  }),
+  reportRoute({
+    name: 'rework',
+    clearedBy: 'any',
+    path: 'rework',
+    summary: 'Coats corrected or re-sprayed by reason per month',
+    query: reportRangeQuerySchema,
+    schema: reworkReportSchema,
+  }),
+  reportRoute({
+    name: 'upkeep',
+    clearedBy: 'site',
+    path: 'upkeep',
+    summary: 'Booth upkeep and crew records done against due: per booth, and the site’s crew as counts',
+    query: reportRangeQuerySchema,
+    schema: upkeepReportSchema,
+  }),
 ];

@@ -22,6 +22,8 @@ export const spraySessionRoutes: ApiRoute[] = [
     sites: 'site',
     query: spraySessionQuerySchema,
     response: { status: 200, schema: spraySessionListSchema },
+    // What each session sprays reads parts seen from every site, and which bookings are still live depends on the time.
+    cache: { clearedBy: 'any', clock: true },
     handler: ({ query }, { services }) => services.spraySessions.list(query),
   }),
   defineRoute({

@@ -11,6 +11,8 @@ export const todayRoutes: ApiRoute[] = [
     sites: 'site',
     query: todayQuerySchema,
     response: { status: 200, schema: todayResponseSchema },
+    // The board is the caller's own (a sprayer's sessions) and its day moves with the clock.
+    cache: { clearedBy: 'any', perUser: true, clock: true },
     handler: async (_input, { services, user }) => ({ today: await services.today.board({ id: user!.id, role: user!.role }) }),
   }),
 ];

@@ -17,11 +17,16 @@ export type ChangeEvent =
 
 /**
  * Changes the server tells its own instances about (caches to clear), never sent to a browser:
- * a user changed (role, password, disabled, …) or a sign-in session ended or changed.
+ * a user changed (role, password, disabled, …), a sign-in session ended or changed, or a write
+ * through the API made cached answers out of date.
  */
-export type InternalChange = { type: 'user.changed'; id: number; siteId: null } | { type: 'sign-in.changed'; sid: string; siteId: null };
+export type InternalChange =
+  | { type: 'user.changed'; id: number; siteId: null }
+  | { type: 'sign-in.changed'; sid: string; siteId: null }
+  /** Something was written through the API: cached answers of that site (null: every site) are out of date. */
+  | { type: 'answers.stale'; siteId: number | null };
 
-const internalTypes = new Set<ChangeEvent['type']>(['user.changed', 'sign-in.changed']);
+const internalTypes = new Set<ChangeEvent['type']>(['user.changed', 'sign-in.changed', 'answers.stale']);
 export const isInternalChange = (event: ChangeEvent): event is InternalChange => internalTypes.has(event.type);
 
 /** In-process change feed for the live views; one per app. */

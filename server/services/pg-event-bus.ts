@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import pg from 'pg';
+import type pg from 'pg';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config/env';
@@ -72,7 +72,9 @@ export class PgEventBus extends EventBus {
 
   private async listen(): Promise<void> {
     // The name marks the connection in pg_stat_activity.
-    const client = new pg.Client({ connectionString: this.url, keepAlive: true, application_name: 'boothwright-change-feed' });
+    // Loaded here, not at start: a shop on SQLite never loads the PostgreSQL driver.
+    const { default: driver } = await import('pg');
+    const client = new driver.Client({ connectionString: this.url, keepAlive: true, application_name: 'boothwright-change-feed' });
     client.on('error', (error) => this.lost(client, error));
     client.on('end', () => this.lost(client));
     client.on('notification', (message) => this.receive(message.payload));

@@ -1,8 +1,14 @@
-// Starts the built app for the browser tests on a fresh SQLite file with the demo shop seeded.
+// Starts the built app (`npm run build`: dist-server/ and the client) for the browser tests, as
+// `npm run serve` does, on a fresh SQLite file with the demo shop seeded by the built CLI.
 import { spawn, spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+
+if (!fs.existsSync('dist-server/index.js')) {
+  console.error('No built server in dist-server/: run `npm run build` first.');
+  process.exit(1);
+}
 
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'boothwright-e2e-'));
 const env = {
@@ -14,12 +20,11 @@ const env = {
   UPLOAD_DIR: path.join(dir, 'uploads'),
   LOG_LEVEL: 'warn',
 };
-const tsx = ['node_modules/.bin/tsx', '--tsconfig', 'tsconfig.server.json'];
 
-const seeded = spawnSync(tsx[0], [...tsx.slice(1), 'server/db/cli.ts', 'seed'], { env, stdio: 'inherit' });
+const seeded = spawnSync(process.execPath, ['dist-server/cli.js', 'seed'], { env, stdio: 'inherit' });
 if (seeded.status !== 0) process.exit(seeded.status ?? 1);
 
-const server = spawn(tsx[0], [...tsx.slice(1), 'server/index.ts'], { env, stdio: 'inherit' });
+const server = spawn(process.execPath, ['--max-old-space-size=256', 'dist-server/index.js'], { env, stdio: 'inherit' });
 const stop = () => {
   server.kill('SIGTERM');
   fs.rmSync(dir, { recursive: true, force: true });

@@ -74,11 +74,11 @@ function cookieOf(res: Response, previous: string): string {
 }
 
 /** One API call with the session; a plain object body goes as JSON, FormData as multipart. */
-export function call(base: string, session: Session, route: string, init: { method?: string; body?: object | FormData; signal?: AbortSignal } = {}): Promise<Response> {
+export function call(base: string, session: Session, route: string, init: { method?: string; body?: object | FormData; signal?: AbortSignal; headers?: Record<string, string> } = {}): Promise<Response> {
   const json = init.body !== undefined && !(init.body instanceof FormData);
   return fetch(`${base}${route}`, {
     method: init.method ?? 'GET',
-    headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, ...(json ? { 'content-type': 'application/json' } : {}) },
+    headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, ...(json ? { 'content-type': 'application/json' } : {}), ...init.headers },
     body: json ? JSON.stringify(init.body) : (init.body as FormData | undefined),
     signal: init.signal,
   });

@@ -83,6 +83,28 @@ describe.skipIf(!pgUrl)('two app instances on one PostgreSQL database (skipped w
     }
   });
 
+  it('never serves a cached answer on one instance from before a write on the other', async () => {
+    const boothId = await newBooth('Cached booth');
+    const week = '/api/spray-sessions?from=2027-05-03T00:00:00.000Z&to=2027-05-10T00:00:00.000Z';
+    const first = await json(await bookFor(a, boothId, '2027-05-04T08:00:00Z', '2027-05-04T10:00:00Z'));
+    const listedOn = async (instance: Instance) => (await json(await call(instance.base, leadOnA, week))).body.items as { id: number; boothName: string }[];
+    // Asked twice on B, so the second answer comes from B's cache.
+    await listedOn(b);
+    expect((await listedOn(b)).find((s) => s.id === first.body.spraySession.id)?.boothName).toBe('Cached booth');
+    // A strong ETag is the body's hash: both instances name the same answer alike, and B answers 304 to A's.
+    const onA = await call(a.base, leadOnA, week);
+    await onA.text();
+    // As a browser revalidates from its own cache (fetch() would add `no-cache` to a hand-set If-None-Match).
+    const revalidate = { 'If-None-Match': onA.headers.get('etag')!, 'Cache-Control': 'max-age=0' };
+    expect((await call(b.base, leadOnA, week, { headers: revalidate })).status).toBe(304);
+
+    const second = await json(await bookFor(a, boothId, '2027-05-05T08:00:00Z', '2027-05-05T10:00:00Z'));
+    await waitUntil('B to list the session booked on A', async () => (await listedOn(b)).some((s) => s.id === second.body.spraySession.id), 2000);
+    // Renaming a booth publishes no live change for the boards; it still clears B's cached answers.
+    expect((await call(a.base, leadOnA, `/api/booths/${boothId}`, { method: 'PATCH', body: { name: 'Renamed cached booth' } })).status).toBe(200);
+    await waitUntil('B to show the booth renamed on A', async () => (await listedOn(b)).every((s) => s.id !== first.body.spraySession.id || s.boothName === 'Renamed cached booth'), 2000);
+  });
+
   it('brings a coat logged on one instance to a live board open on the other', async () => {
     const boothId = await newBooth('Live booth');
     const session = await json(await bookFor(a, boothId, '2027-03-01T09:00:00Z', '2027-03-01T12:00:00Z', 3));
