@@ -1,6 +1,6 @@
 import type { Page } from '@playwright/test';
 import { routes } from '../../src/app/router';
-import { demoIds, routePatterns, seriousFindings, settle, type DemoIds } from './axe-walk';
+import { cancelSession, demoIds, routePatterns, seriousFindings, settle, type DemoIds } from './axe-walk';
 import { expect, test } from './fixtures';
 import { signIn, type DemoRole } from './helpers';
 import { leadApi } from './lead-api';
@@ -81,7 +81,8 @@ test('the walk covers every page in the router', () => {
 for (const role of ['signed-out', 'admin', 'lead', 'sprayer', 'assembler'] as const) {
   test(`no axe finding above minor on the pages ${role === 'signed-out' ? 'a signed-out visitor' : `the ${role}`} uses`, async ({ page, baseURL }) => {
     test.setTimeout(300_000);
-    const ids = await demoIds(await leadApi(baseURL!));
+    const api = await leadApi(baseURL!);
+    const ids = await demoIds(api, role === 'sprayer');
     // A quiet console as well: no warning (React Router's missing HydrateFallback was one) and, before
     // sign-in, no request the server refuses.
     const findings: string[] = [];
@@ -103,6 +104,7 @@ for (const role of ['signed-out', 'admin', 'lead', 'sprayer', 'assembler'] as co
       findings.push(...(await seriousFindings(page, `${path} ${visit.then.label}`)));
       await visit.then.undo?.(page);
     }
+    await cancelSession(api, ids.session);
     expect(findings).toEqual([]);
   });
 }

@@ -23,16 +23,22 @@ export interface DemoIds {
   part: number;
   product: number;
   crewUser: number;
-  /** A session booked now for the demo sprayer, so the booth screen shows its checklist and forms. */
+  /** A session booked now for the demo sprayer, so the booth screen shows its checklist and forms (0 when not asked for). */
   session: number;
 }
 
-export async function demoIds(api: LeadApi): Promise<DemoIds> {
+/** The ids; `bookSession` books the sprayer's session now, which the test cancels again with `cancelSession`. */
+export async function demoIds(api: LeadApi, bookSession = false): Promise<DemoIds> {
   const job = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
   const parts = await api.get<{ items: Part[] }>(`/api/jobs/${job.id}/parts`);
   const product = (await api.get<List<{ id: number }>>('/api/products')).items[0];
   const crew = await api.get<{ items: { userId: number; role: string }[] }>('/api/crew');
-  return { job: job.id, part: parts.items[0].id, product: product.id, crewUser: crew.items.find((c) => c.role === 'sprayer')!.userId, session: await bookSprayerNow(api, parts.items[0].id) };
+  return { job: job.id, part: parts.items[0].id, product: product.id, crewUser: crew.items.find((c) => c.role === 'sprayer')!.userId, session: bookSession ? await bookSprayerNow(api, parts.items[0].id) : 0 };
+}
+
+/** Leaves Booth 1 and the demo sprayer free again for the tests that book them now. */
+export async function cancelSession(api: LeadApi, id: number) {
+  if (id) await api.send('PATCH', `/api/spray-sessions/${id}`, { state: 'cancelled' });
 }
 
 /** A session on booth 1 for Mina (the demo sprayer) running now; clears anything booked for either around now. */

@@ -1,4 +1,4 @@
-import { demoIds } from './axe-walk';
+import { cancelSession, demoIds } from './axe-walk';
 import { expect, test } from './fixtures';
 import { signIn } from './helpers';
 import { leadApi } from './lead-api';
@@ -18,7 +18,8 @@ for (const viewport of tablets) {
 
     test('every control of a spray session is big enough for a gloved finger, from the checklist to the coat form', async ({ page, baseURL }) => {
       test.setTimeout(120_000);
-      const { session } = await demoIds(await leadApi(baseURL!));
+      const api = await leadApi(baseURL!);
+      const { session } = await demoIds(api, true);
       await signIn(page, 'sprayer', `/spray-sessions/${session}`);
       await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
       expect(await smallTargets(page), 'the pre-spray checklist').toEqual([]);
@@ -42,6 +43,7 @@ for (const viewport of tablets) {
       await coatForm.getByRole('button', { name: 'Planned parts' }).click();
       await expect(coatForm.getByRole('checkbox').first()).toBeVisible();
       expect(await smallTargets(page), 'the coat form with its planned parts').toEqual([]);
+      await cancelSession(api, session);
     });
 
     test('every control of the auto-plan dialog is big enough to tap', async ({ page }) => {
