@@ -42,7 +42,7 @@ export const pwaOptions: Partial<VitePWAOptions> = {
         // copied into the worker as text, so the pattern is written out in it.)
         urlPattern: ({ url, sameOrigin }) =>
           sameOrigin &&
-          /^\/api\/(auth\/me|settings|spray-sessions|booths|coats|denibs|products|finish-systems|jobs|parts|ready|readings|racks|sites|sprayers|today)(\/|$)/.test(
+          /^\/api\/(auth\/me|auth\/session|settings|spray-sessions|booths|coats|denibs|products|finish-systems|jobs|parts|ready|readings|racks|sites|sprayers|today)(\/|$)/.test(
             url.pathname,
           ),
         method: 'GET',

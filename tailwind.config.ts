@@ -6,6 +6,11 @@ export default {
   content: ['./index.html', './src/**/*.{ts,tsx}'],
   theme: {
     extend: {
+      // Above a small laptop's 1024 px the navigation is a sidebar; at 1024 px and below it folds
+      // into a menu button, so wide tables keep the whole width.
+      screens: {
+        sidebar: '1025px',
+      },
       fontFamily: {
         sans: ['"Work Sans"', 'system-ui', 'sans-serif'],
       },

@@ -1,4 +1,4 @@
-import { csrfResponseSchema, loginSchema, signedInUserResponseSchema } from '../../shared/schemas/auth';
+import { csrfResponseSchema, loginSchema, signedInUserResponseSchema, signInStateResponseSchema } from '../../shared/schemas/auth';
 import { updateMeSchema } from '../../shared/schemas/user';
 import { authenticate, logIn, logOut } from '../auth/sign-in';
 import { AppError } from '../lib/app-error';
@@ -43,6 +43,15 @@ export const authRoutes: ApiRoute[] = [
       res.status(204).end();
       return answered;
     },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/auth/session',
+    summary: 'Who is signed in on this browser (user is null when nobody is), so a signed-out visitor gets an answer, not a 401',
+    access: 'public',
+    sites: 'own',
+    response: { status: 200, schema: signInStateResponseSchema },
+    handler: (_input, { user }) => ({ user }),
   }),
   defineRoute({
     method: 'get',

@@ -23,4 +23,6 @@ export const signedInUserSchema = z.object({
 export type SignedInUser = z.infer<typeof signedInUserSchema>;
 
 export const signedInUserResponseSchema = z.object({ user: signedInUserSchema });
+/** Who is signed in on this browser, if anyone: `user` is null for a visitor who has not signed in. */
+export const signInStateResponseSchema = z.object({ user: signedInUserSchema.nullable() });
 export const csrfResponseSchema = z.object({ token: z.string() });

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef } from 'react';
 import { Link, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import { toast } from 'sonner';
 import { roleLabels } from '../../shared/permissions';
@@ -7,6 +7,7 @@ import { errorMessage } from '../lib/error-messages';
 import { WriteQueueSender } from '../features/spray-session/components/write-queue-sender';
 import { MainNav } from './main-nav';
 import { useSignedInUser } from './signed-in-user';
+import { useNavMenu } from './use-nav-menu';
 import { Wordmark } from './wordmark';
 
 function UserBlock({ onSignOut, pending, tone }: { onSignOut: () => void; pending: boolean; tone: 'dark' | 'light' }) {
@@ -31,7 +32,7 @@ function UserBlock({ onSignOut, pending, tone }: { onSignOut: () => void; pendin
 }
 
 export function AppLayout() {
-  const [menuOpen, setMenuOpen] = useState(false);
+  const { open: menuOpen, toggle: toggleMenu, close: closeMenu, buttonRef: menuButtonRef, navRef } = useNavMenu();
   const user = useSignedInUser();
   const logout = useLogout();
   const navigate = useNavigate();
@@ -67,15 +68,16 @@ export function AppLayout() {
           <Link to="/" className="rounded-panel py-1 focus-visible:outline-maple-100">
             <Wordmark />
           </Link>
-          <div className="hidden lg:block">
+          <div className="hidden sidebar:block">
             <UserBlock onSignOut={signOut} pending={logout.isPending} tone="dark" />
           </div>
           <button
+            ref={menuButtonRef}
             type="button"
-            className="min-h-touch min-w-touch rounded-panel border border-lacquer-300 px-4 font-semibold hover:bg-lacquer-700 focus-visible:outline-maple-100 lg:hidden"
+            className="min-h-touch min-w-touch rounded-panel border border-lacquer-300 px-4 font-semibold hover:bg-lacquer-700 focus-visible:outline-maple-100 sidebar:hidden"
             aria-expanded={menuOpen}
             aria-controls="main-nav"
-            onClick={() => setMenuOpen((open) => !open)}
+            onClick={toggleMenu}
           >
             {menuOpen ? 'Close menu' : 'Menu'}
           </button>
@@ -86,21 +88,21 @@ export function AppLayout() {
           </div>
         )}
       </header>
-      <div className="lg:flex lg:min-h-[calc(100dvh-4rem)] print:block">
-        <div className="lg:w-60 lg:shrink-0 lg:border-r lg:border-maple-300 lg:bg-maple-100 print:hidden">
+      <div className="sidebar:flex sidebar:min-h-[calc(100dvh-4rem)] print:block">
+        <div className="sidebar:w-60 sidebar:shrink-0 sidebar:border-r sidebar:border-maple-300 sidebar:bg-maple-100 print:hidden">
           <nav
+            ref={navRef}
             id="main-nav"
             aria-label="Main"
-            className={`${menuOpen ? 'block' : 'hidden'} border-b border-maple-300 bg-maple-100 px-3 py-4 lg:sticky lg:top-16 lg:block lg:max-h-[calc(100dvh-4rem)] lg:overflow-y-auto lg:border-b-0`}
-            onKeyDown={(event) => event.key === 'Escape' && setMenuOpen(false)}
+            className={`${menuOpen ? 'block' : 'hidden'} border-b border-maple-300 bg-maple-100 px-3 py-4 sidebar:sticky sidebar:top-16 sidebar:block sidebar:max-h-[calc(100dvh-4rem)] sidebar:overflow-y-auto sidebar:border-b-0`}
           >
-            <MainNav role={user.role} onNavigate={() => setMenuOpen(false)} />
-            <div className="mt-6 border-t border-maple-300 pt-4 lg:hidden">
+            <MainNav role={user.role} onNavigate={closeMenu} />
+            <div className="mt-6 border-t border-maple-300 pt-4 sidebar:hidden">
               <UserBlock onSignOut={signOut} pending={logout.isPending} tone="light" />
             </div>
           </nav>
         </div>
-        <main id="main" ref={mainRef} tabIndex={-1} className="min-w-0 flex-1 px-4 py-6 focus:outline-none sm:px-6 lg:px-8 print:p-0">
+        <main id="main" ref={mainRef} tabIndex={-1} className="min-w-0 flex-1 px-4 py-6 focus:outline-none sm:px-6 sidebar:px-8 print:p-0">
           <Outlet />
         </main>
       </div>

@@ -1,16 +1,7 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '../api/auth/get-me';
+import { FullPageStatus } from './full-page-status';
 import { SignedInUserProvider } from './signed-in-user';
-
-function FullPageStatus({ children }: { children: string }) {
-  return (
-    <div className="grid min-h-dvh place-items-center p-6">
-      <p role="status" className="text-lg text-maple-700">
-        {children}
-      </p>
-    </div>
-  );
-}
 
 /** Routes inside need a signed-in user; otherwise off to sign in, remembering where they were going. */
 export function RequireAuth() {

@@ -1,4 +1,5 @@
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { FullPageStatus } from './full-page-status';
 import { AppLayout } from './layout';
 import { RequireAuth } from './require-auth';
 import { RouteError } from './route-error';
@@ -7,6 +8,8 @@ import { ReadyWallError } from './routes/ready-wall-error';
 import { TodayRoute } from './routes/today-route';
 
 const errorElement = <RouteError />;
+// Shown while the first page's code loads; without it React Router warns on every first visit.
+const hydrateFallbackElement = <FullPageStatus>Opening Boothwright…</FullPageStatus>;
 
 /** Pages behind the app shell. All but Today are lazy so the first screen stays small (forms and tables load when needed). */
 const appRoutes: RouteObject[] = [
@@ -49,11 +52,12 @@ const appRoutes: RouteObject[] = [
 ];
 
 export const routes: RouteObject[] = [
-  { path: '/sign-in', errorElement, lazy: () => import('./routes/sign-in-route').then((m) => ({ Component: m.SignInRoute })) },
+  { path: '/sign-in', errorElement, hydrateFallbackElement, lazy: () => import('./routes/sign-in-route').then((m) => ({ Component: m.SignInRoute })) },
   {
     path: '/',
     element: <RequireAuth />,
     errorElement,
+    hydrateFallbackElement,
     children: [
       {
         element: <AppLayout />,

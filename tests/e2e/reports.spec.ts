@@ -70,8 +70,10 @@ test.describe('reports', () => {
     await signIn(page, 'lead');
     await mainNav(page).getByRole('link', { name: 'Reports', exact: true }).click();
     await expect(page.getByRole('heading', { name: 'Reports', level: 1 })).toBeVisible();
-    // Opened without a range, a report covers this month.
-    await expect(page.getByRole('button', { name: 'This month' })).toHaveAttribute('aria-pressed', 'true');
+    // Opened without a range, a report covers the last four weeks, and the address names those days.
+    await expect(page.getByRole('button', { name: 'Last 4 weeks' })).toHaveAttribute('aria-pressed', 'true');
+    await expect(page).toHaveURL(/report=booth-use&from=\d{4}-\d{2}-\d{2}&to=\d{4}-\d{2}-\d{2}/);
+    await expect(panel(page).getByRole('img', { name: /chart/i })).toBeVisible();
 
     await page.getByRole('button', { name: 'Last 12 months' }).click();
     await expect(page.getByRole('button', { name: 'Last 12 months' })).toHaveAttribute('aria-pressed', 'true');

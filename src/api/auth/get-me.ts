@@ -1,17 +1,15 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { signedInUserResponseSchema, type SignedInUser } from '../../../shared/schemas/auth';
-import { apiClient, isApiError } from '../../lib/api-client';
+import { signInStateResponseSchema, type SignedInUser } from '../../../shared/schemas/auth';
+import { apiClient } from '../../lib/api-client';
 import { authKeys } from './auth-keys';
 
-/** The signed-in user, or null when nobody is signed in (401 is an answer here, not a failure). */
+/**
+ * The signed-in user, or null when nobody is signed in. Asked of the public sign-in state, so a
+ * signed-out browser makes no request that is refused (no 401 in its console before sign-in).
+ */
 export async function getMe(): Promise<SignedInUser | null> {
-  try {
-    const { user } = await apiClient.get('/api/auth/me', signedInUserResponseSchema);
-    return user;
-  } catch (error) {
-    if (isApiError(error) && error.status === 401) return null;
-    throw error;
-  }
+  const { user } = await apiClient.get('/api/auth/session', signInStateResponseSchema);
+  return user;
 }
 
 export const meQueryOptions = () => queryOptions({ queryKey: authKeys.me(), queryFn: getMe, staleTime: 5 * 60_000 });

@@ -93,3 +93,19 @@ describe('GET /api/auth/me and sign-out', () => {
     await admin.agent.patch(`/api/users/${id}`).set('x-csrf-token', admin.csrf).send({ disabled: false }).expect(200);
   });
 });
+
+describe('GET /api/auth/session', () => {
+  it('answers 200 with no user for a visitor who has not signed in, so the sign-in page makes no refused request', async () => {
+    const res = await request(ctx.app).get('/api/auth/session').expect(200);
+    expect(res.body).toEqual({ user: null });
+  });
+
+  it('says who is signed in, and no one once they sign out', async () => {
+    const { agent, csrf } = await signIn(ctx.app, demo.assembler);
+    const signedIn = await agent.get('/api/auth/session').expect(200);
+    expect(signedIn.body.user).toMatchObject({ email: demo.assembler, role: 'assembler' });
+    expect(signedIn.body.user.passwordHash).toBeUndefined();
+    await agent.post('/api/auth/logout').set('x-csrf-token', csrf).expect(204);
+    expect((await agent.get('/api/auth/session').expect(200)).body).toEqual({ user: null });
+  });
+});

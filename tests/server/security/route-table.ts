@@ -63,6 +63,7 @@ export const routeTable: RouteRow[] = [
   row('GET', '/api/auth/csrf', all(200), get('/api/auth/csrf')),
   row('POST', '/api/auth/login', all(200), (_fx, who) => ({ url: '/api/auth/login', body: { email: demoEmails[who === 'signedOut' ? 'assembler' : who], password: 'finish-demo-2026' }, ownAgent: true })),
   row('POST', '/api/auth/logout', all(204), () => ({ url: '/api/auth/logout', ownAgent: true }), 'Signing out twice is harmless, so it needs no sign-in.'),
+  row('GET', '/api/auth/session', all(200), get('/api/auth/session'), 'Says who is signed in, or null: a visitor gets an answer, not a refusal.'),
   row('GET', '/api/auth/me', s(401, 200, 200, 200, 200), get('/api/auth/me')),
   row('PATCH', '/api/auth/me', s(401, 200, 200, 200, 200), () => ({ url: '/api/auth/me', body: { units: 'metric' } })),
   row('GET', '/api/users', s(401, 200, 403, 403, 403), get('/api/users')),

@@ -109,6 +109,7 @@ export const siteTable: SiteRow[] = [
   row('GET', '/api/auth/csrf', get('/api/auth/csrf'), own),
   row('POST', '/api/auth/login', (_fx, who) => ({ url: '/api/auth/login', body: { email: `${who}.second@larchmere.test`, password: 'second-site-2026' }, ownAgent: true }), own),
   row('POST', '/api/auth/logout', () => ({ url: '/api/auth/logout', ownAgent: true }), own),
+  row('GET', '/api/auth/session', get('/api/auth/session'), own),
   row('GET', '/api/auth/me', get('/api/auth/me'), own),
   row('PATCH', '/api/auth/me', () => ({ url: '/api/auth/me', body: { units: 'metric' } }), own),
   row('GET', '/api/notifications', get('/api/notifications'), own),

@@ -7,6 +7,7 @@ import { useEffect, useRef } from 'react';
 import '../planner-look.css';
 import type { PlannerView } from '../utils/calendar-range';
 import { useRecoatShading } from '../hooks/use-recoat-shading';
+import { makeGridScrollable } from '../utils/keyboard-scroll';
 import { shopTimeZonePlugin } from '../utils/shop-zone-plugin';
 import { SessionEventContent } from './session-event-content';
 
@@ -110,6 +111,7 @@ export function BoothCalendar({ view, day, timeZone, events, businessHours, canW
         eventDrop={handlers.onMove}
         eventResize={handlers.onMove}
         eventDidMount={shading.mounted}
+        viewDidMount={makeGridScrollable}
         eventDragStart={() => {
           shading.dragStarted();
           handlers.onInteracting(true);

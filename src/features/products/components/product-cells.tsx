@@ -7,7 +7,7 @@ export function HazardWords({ hazards }: { hazards: Hazard[] }) {
   return (
     <ul className="space-y-0.5 text-sm">
       {hazards.map((hazard) => (
-        <li key={hazard} className="whitespace-nowrap font-medium text-verdict-caution">
+        <li key={hazard} className="min-w-24 font-medium text-verdict-caution">
           <span aria-hidden="true">⚠ </span>
           {hazardLabels[hazard]}
         </li>
@@ -18,7 +18,7 @@ export function HazardWords({ hazards }: { hazards: Hazard[] }) {
 
 export function ExpiredBadge() {
   return (
-    <span className="inline-block rounded-full border border-verdict-stop px-2 text-sm font-semibold text-verdict-stop">
+    <span className="inline-block whitespace-nowrap rounded-full border border-verdict-stop px-2 text-sm font-semibold text-verdict-stop">
       Expired
     </span>
   );
@@ -33,8 +33,10 @@ export function LotWords({ lots }: { lots: Lot[] }) {
   return (
     <ul className="space-y-0.5 text-sm">
       {lots.slice(0, shownLots).map((lot) => (
-        <li key={lot.id} className="whitespace-nowrap">
-          {lot.lotNumber} {lot.expired && <ExpiredBadge />}
+        // The badge drops under the lot number when the column is narrow, rather than being cut off.
+        <li key={lot.id} className="flex flex-wrap items-center gap-x-2 gap-y-0.5">
+          <span className="whitespace-nowrap">{lot.lotNumber}</span>
+          {lot.expired && <ExpiredBadge />}
         </li>
       ))}
       {more > 0 && <li className="text-maple-700">and {more} more</li>}
@@ -51,8 +53,9 @@ export function DocumentLinks({ product }: { product: Product }) {
         return (
           <li key={kind} className="whitespace-nowrap">
             {file ? (
-              <a href={fileHref(file)} download className="font-semibold text-lacquer-800 underline underline-offset-2" aria-label={`Download the ${title.long} of ${product.name} (PDF)`}>
-                {title.short} (PDF)
+              // The name starts with the words on screen, so voice control ("click TDS") finds the link.
+              <a href={fileHref(file)} download className="font-semibold text-lacquer-800 underline underline-offset-2">
+                {title.short} (PDF)<span className="sr-only">: download the {title.long} of {product.name}</span>
               </a>
             ) : (
               <span className="text-maple-700">No {title.short}</span>

@@ -27,13 +27,16 @@ const formatDay = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en
 
 const isSortField = (id: string): id is ProductSort['sort'] => (productSortFields as readonly string[]).includes(id);
 
+/** A two-word header over a narrow column may wrap, so all ten columns fit a 1366 px laptop without scrolling. */
+const TwoLineHeader = ({ children }: { children: string }) => <span className="inline-block whitespace-normal">{children}</span>;
+
 function useProductColumns(units: UnitSystem, timeZone: string) {
   return useMemo(
     () => [
       column.accessor('name', {
         header: 'Name',
         cell: ({ row }) => (
-          <span className="block min-w-44">
+          <span className="block min-w-32">
             <Link to={`/data-sheets/${row.original.id}`} className="text-lacquer-800 underline underline-offset-2">
               {row.original.name}
             </Link>
@@ -43,20 +46,20 @@ function useProductColumns(units: UnitSystem, timeZone: string) {
       }),
       column.accessor('kind', { header: 'Kind', cell: (info) => productKindLabels[info.getValue()] }),
       column.accessor('chemistry', { header: 'Chemistry', cell: (info) => chemistryLabels[info.getValue()] }),
-      column.accessor('volumeSolidsPct', { header: 'Volume solids', enableSorting: false, cell: (info) => <Nowrap>{formatNumber(info.getValue())} %</Nowrap> }),
+      column.accessor('volumeSolidsPct', { header: () => <TwoLineHeader>Volume solids</TwoLineHeader>, enableSorting: false, cell: (info) => <Nowrap>{formatNumber(info.getValue())} %</Nowrap> }),
       column.accessor('vocGPerL', {
         header: 'VOC',
         enableSorting: false,
-        cell: (info) => (info.getValue() === null ? <span className="whitespace-nowrap text-maple-700">Not given</span> : <Nowrap>{formatQuantity('vocContent', info.getValue()!, units)}</Nowrap>),
+        cell: (info) => (info.getValue() === null ? <span className="text-maple-700">Not given</span> : <Nowrap>{formatQuantity('vocContent', info.getValue()!, units)}</Nowrap>),
       }),
       column.accessor('potLifeMin', {
         header: 'Pot life',
         enableSorting: false,
-        cell: (info) => (info.getValue() === null ? <span className="whitespace-nowrap text-maple-700">None given</span> : <Nowrap>{formatMinutes(info.getValue()!)}</Nowrap>),
+        cell: (info) => (info.getValue() === null ? <span className="text-maple-700">None given</span> : <Nowrap>{formatMinutes(info.getValue()!)}</Nowrap>),
       }),
       column.accessor('hazards', { header: 'Hazards', enableSorting: false, cell: (info) => <HazardWords hazards={info.getValue()} /> }),
       column.accessor('lots', { header: 'Lots', enableSorting: false, cell: (info) => <LotWords lots={info.getValue()} /> }),
-      column.display({ id: 'documents', header: 'Data sheets', cell: ({ row }) => <DocumentLinks product={row.original} /> }),
+      column.display({ id: 'documents', header: () => <TwoLineHeader>Data sheets</TwoLineHeader>, cell: ({ row }) => <DocumentLinks product={row.original} /> }),
       column.accessor('updatedAt', { header: 'Updated', sortDescFirst: true, cell: (info) => <Nowrap>{formatDay(info.getValue(), timeZone)}</Nowrap> }),
     ],
     [units, timeZone],

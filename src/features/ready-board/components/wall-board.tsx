@@ -58,16 +58,18 @@ export function WallBoard({ timeZone }: { timeZone: string }) {
           </Link>
         </div>
       </header>
-      {ready.data ? (
-        <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
-          <WallJobs summary={summary} />
-          <WallNextReady parts={summary.nextReady} now={now} timeZone={timeZone} />
-        </div>
-      ) : (
-        <p role={ready.isError ? 'alert' : 'status'} className="text-3xl font-semibold">
-          {ready.isError ? `Cannot reach Boothwright yet. Trying again every ${livePollMs / 1000} s.` : 'Loading the ready board…'}
-        </p>
-      )}
+      <main>
+        {ready.data ? (
+          <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+            <WallJobs summary={summary} />
+            <WallNextReady parts={summary.nextReady} now={now} timeZone={timeZone} />
+          </div>
+        ) : (
+          <p role={ready.isError ? 'alert' : 'status'} className="text-3xl font-semibold">
+            {ready.isError ? `Cannot reach Boothwright yet. Trying again every ${livePollMs / 1000} s.` : 'Loading the ready board…'}
+          </p>
+        )}
+      </main>
     </div>
   );
 }

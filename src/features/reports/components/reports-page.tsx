@@ -8,7 +8,7 @@ import { useJobs } from '../../../api/jobs/get-jobs';
 import { reportCsvHref } from '../../../api/reports/report-url';
 import { useReportAddress, type ReportAddress } from '../hooks/use-report-address';
 import { reportCatalogue } from '../utils/report-catalogue';
-import { quickRange, rangeWords } from '../utils/report-range';
+import { openingRange, quickRange, rangeWords } from '../utils/report-range';
 import { rangeErrors, reportRequest } from '../utils/report-request';
 import { RangeControls } from './range-controls';
 import { EmptyActionProvider } from './report-empty';
@@ -60,12 +60,12 @@ export function ReportsPage({ shopName, timeZone, today, units, siteId, siteSwit
   const request = reportRequest(address, conditionsBoothId, siteId);
   const entry = reportCatalogue[address.kind];
   const options = optionWords(address, booths, jobs, conditionsBoothId);
-  const thisMonth = quickRange('this-month', today);
-  // Early in a month there is little to show yet; last month is the usual next question.
+  const opening = openingRange(today);
+  // A quiet month (or a new shop) leaves the opening range empty; a whole year is the usual next question.
   const emptyAction =
-    address.range.from === thisMonth.from && address.range.to === thisMonth.to ? (
-      <Button variant="secondary" onClick={() => change({ range: quickRange('last-month', today) })}>
-        Show last month
+    address.range.from === opening.from && address.range.to === opening.to ? (
+      <Button variant="secondary" onClick={() => change({ range: quickRange('last-12-months', today) })}>
+        Show the last 12 months
       </Button>
     ) : null;
 

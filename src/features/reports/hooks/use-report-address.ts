@@ -1,7 +1,8 @@
+import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { areaGroupings } from '../../../../shared/schemas/report';
 import { reportKinds, type ReportKind } from '../../../api/reports/report-keys';
-import { quickRange, type DateRange } from '../utils/report-range';
+import { openingRange, type DateRange } from '../utils/report-range';
 
 export type AreaGrouping = (typeof areaGroupings)[number];
 
@@ -21,12 +22,13 @@ const oneOf = <T extends string>(values: readonly T[], value: string | null, fal
 
 /**
  * The report, range and options live in the address (?report=solvent&from=…&to=…&booth=2), so a
- * link or bookmark opens the same report. Without a range it is this month: a lead opening
- * Reports mostly wants to see how the month is going, and last month is one tap away.
+ * link, bookmark or printout names the same report. Opened without a range it shows the last four
+ * weeks and writes that range into the address at once, so the link copied then still shows the
+ * same days later on.
  */
 export function useReportAddress(today: string): [ReportAddress, (patch: Partial<ReportAddress>) => void] {
   const [params, setParams] = useSearchParams();
-  const fallback = quickRange('this-month', today);
+  const fallback = openingRange(today);
   const address: ReportAddress = {
     kind: oneOf(reportKinds, params.get('report'), 'booth-use'),
     range: { from: params.get('from') || fallback.from, to: params.get('to') || fallback.to },
@@ -45,5 +47,11 @@ export function useReportAddress(today: string): [ReportAddress, (patch: Partial
     if (site) search.set('site', site);
     setParams(search, { replace: true });
   };
+  const rangeMissing = !params.get('from') || !params.get('to');
+  useEffect(() => {
+    if (rangeMissing) change({});
+    // Only a missing range is written; change itself is new on every render.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [rangeMissing]);
   return [address, change];
 }

@@ -4,7 +4,7 @@ export interface DateRange {
   to: string;
 }
 
-export type QuickRangeId = 'this-month' | 'last-month' | 'this-year' | 'last-12-months';
+export type QuickRangeId = 'last-4-weeks' | 'this-month' | 'last-month' | 'this-year' | 'last-12-months';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 const monthParts = (month: string) => month.split('-').map(Number) as [number, number];
@@ -14,6 +14,13 @@ export function shiftMonth(month: string, by: number): string {
   const [year, m] = monthParts(month);
   const index = year * 12 + (m - 1) + by;
   return `${Math.floor(index / 12)}-${pad((index % 12) + 1)}`;
+}
+
+/** A calendar day ("2026-03-02") moved by `by` days. */
+export function shiftDay(day: string, by: number): string {
+  const date = new Date(`${day}T00:00:00Z`);
+  date.setUTCDate(date.getUTCDate() + by);
+  return date.toISOString().slice(0, 10);
 }
 
 function lastDayOf(month: string): string {
@@ -26,13 +33,17 @@ export function monthRange(month: string): DateRange {
 }
 
 /**
- * The quick picks, as whole calendar periods so each monthly bar is a full month. "Last 12 months"
- * is the twelve calendar months ending with this one, which keeps the current month's data in view.
+ * The quick picks. "Last 4 weeks" is the 28 shop days up to today, so it always holds four full
+ * weeks of work whatever the day of the month. The others are whole calendar periods so each monthly
+ * bar is a full month; "Last 12 months" is the twelve calendar months ending with this one, which
+ * keeps the current month's data in view.
  */
 export function quickRange(id: QuickRangeId, today: string): DateRange {
   const month = today.slice(0, 7);
   const year = today.slice(0, 4);
   switch (id) {
+    case 'last-4-weeks':
+      return { from: shiftDay(today, -27), to: today };
     case 'this-month':
       return monthRange(month);
     case 'last-month':
@@ -44,7 +55,11 @@ export function quickRange(id: QuickRangeId, today: string): DateRange {
   }
 }
 
+/** The range Reports opens on: the last four weeks, which hold four weeks of work whatever the day of the month. */
+export const openingRange = (today: string) => quickRange('last-4-weeks', today);
+
 export const quickRangeLabels: Record<QuickRangeId, string> = {
+  'last-4-weeks': 'Last 4 weeks',
   'this-month': 'This month',
   'last-month': 'Last month',
   'this-year': 'This year',

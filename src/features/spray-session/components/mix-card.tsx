@@ -52,7 +52,7 @@ export function MixCard({ mix, product, now, timeZone, units }: MixCardProps) {
   return (
     <article aria-label={`Mix: ${mixWords({ productName: mix.productName, mixedAt: new Date(mix.mixedAt) }, shop)}`} className={`rounded-panel border-2 bg-white p-4 ${verdictBorder[state.verdict]}`}>
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h4 className="text-lg font-bold">{mix.productName}</h4>
+        <h3 className="text-lg font-bold">{mix.productName}</h3>
         <VerdictBadge verdict={state.verdict} label={state.short} />
       </div>
       {waiting && <p className="font-bold text-verdict-caution">Waiting to send: kept on this tablet, worked out from the data sheet here.</p>}

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { ConditionsReport, SolventReport } from '../../../../shared/schemas/report';
 import { outsideReasonWords, strictestLimits } from '../../../../src/features/reports/utils/conditions-words';
 import { reworkReasonWords, vocWords } from '../../../../src/features/reports/utils/report-format';
-import { monthRange, quickRange, rangeWords, shiftMonth, wholeMonthOf } from '../../../../src/features/reports/utils/report-range';
+import { monthRange, openingRange, quickRange, rangeWords, shiftMonth, wholeMonthOf } from '../../../../src/features/reports/utils/report-range';
 import { monthsIn, stackRows, weeksIn } from '../../../../src/features/reports/utils/report-series';
 import { everyMonth } from '../../../../src/features/reports/utils/solvent-months';
 import { reportRequest } from '../../../../src/features/reports/utils/report-request';
@@ -13,6 +13,11 @@ describe('report ranges', () => {
     expect(quickRange('last-month', '2026-01-15')).toEqual({ from: '2025-12-01', to: '2025-12-31' });
     expect(quickRange('this-year', '2026-01-15')).toEqual({ from: '2026-01-01', to: '2026-12-31' });
     expect(quickRange('last-12-months', '2026-01-15')).toEqual({ from: '2025-02-01', to: '2026-01-31' });
+  });
+  it('opens on the last four weeks: 28 days up to today, across a month, a year end and a leap day', () => {
+    expect(openingRange('2026-12-05')).toEqual({ from: '2026-11-08', to: '2026-12-05' });
+    expect(quickRange('last-4-weeks', '2026-01-03')).toEqual({ from: '2025-12-07', to: '2026-01-03' });
+    expect(quickRange('last-4-weeks', '2028-03-10')).toEqual({ from: '2028-02-12', to: '2028-03-10' });
   });
   it('knows the length of February in leap and common years', () => {
     expect(monthRange('2028-02')).toEqual({ from: '2028-02-01', to: '2028-02-29' });
