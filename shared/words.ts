@@ -46,6 +46,12 @@ export const denibWords = (grit: string) => `denib with ${grit}`;
 /** "Denib with P320 needed". */
 export const denibNeededWords = (grit: string) => `${upperFirst(denibWords(grit))} needed`;
 
+/** A step as one line: "Denib P320", "Coat 2 of 3 at 40 µm dry" (the coat's number among the coat steps; 0 when it is not one of them). */
+export function stepLineWords(step: { kind: 'coat'; dryFilmUm: number; coatNumber: number; coatsTotal: number } | { kind: 'denib'; grit: string }): string {
+  if (step.kind === 'denib') return `${upperFirst(terms.denib)} ${step.grit}`;
+  return `${upperFirst(coatOfWords(step.coatNumber, step.coatsTotal))} at ${step.dryFilmUm} µm dry`;
+}
+
 /** "1 part", "3 parts". */
 export const partsWords = (count: number) => `${count} ${count === 1 ? 'part' : 'parts'}`;
 
