@@ -114,23 +114,24 @@ test.describe('data sheets', () => {
     await dialog.getByRole('button', { name: 'Add coat' }).click();
     await dialog.getByLabel('Product, step 2').selectOption({ label: 'Kestrel AquaTop WB Topcoat Satin (KF-WT-330)' });
     await expect(dialog.getByLabel('Dry film target, step 2')).toHaveValue('35');
-    await dialog.getByRole('button', { name: 'Add abrade step' }).click();
+    await dialog.getByRole('button', { name: 'Add denib step' }).click();
     await expect(dialog.getByLabel('Grit, step 3')).toHaveValue('P320');
 
     // The denib belongs between the coats: move it up by keyboard-reachable buttons.
     await dialog.getByRole('button', { name: 'Move step 3 up' }).click();
-    await expect(dialog.getByText('Step 2: abrade (denib)')).toBeVisible();
+    await expect(dialog.getByText('Step 2: denib')).toBeVisible();
+    await expect(dialog.getByText('Step 3: coat 2 of 2')).toBeVisible();
     await expect(dialog.getByRole('button', { name: 'Move step 2 up' })).toBeFocused();
     // Dragging by the grip works too: drop the denib on step 1, then put it back with the keyboard.
     // Scrolling in the middle of a drag would cancel it, so both ends are brought into view first.
-    await dialog.getByText('Step 1: coat').scrollIntoViewIfNeeded();
-    await dialog.getByTitle('Drag to move this step').nth(1).dragTo(dialog.getByText('Step 1: coat'));
-    await expect(dialog.getByText('Step 1: abrade (denib)')).toBeVisible();
+    await dialog.getByText('Step 1: coat 1 of 2').scrollIntoViewIfNeeded();
+    await dialog.getByTitle('Drag to move this step').nth(1).dragTo(dialog.getByText('Step 1: coat 1 of 2'));
+    await expect(dialog.getByText('Step 1: denib')).toBeVisible();
     await dialog.getByRole('button', { name: 'Move step 1 down' }).click();
-    await expect(dialog.getByText('Step 2: abrade (denib)')).toBeVisible();
+    await expect(dialog.getByText('Step 2: denib')).toBeVisible();
     await expect(dialog.getByLabel('Product, step 3').locator('option:checked')).toHaveText('Kestrel AquaTop WB Topcoat Satin (KF-WT-330)');
 
-    // At 20 °C both products have an exact row: primer recoat 60 + abrade 15 + topcoat pack 480 = 555 min.
+    // At 20 °C both products have an exact row: primer recoat 60 + denib 15 + topcoat pack 480 = 555 min.
     // Litres: 40 / (38 × 10) + 35 / (34 × 10) = 0.1053 + 0.1029 = 0.208 L/m².
     const totals = dialog.getByRole('region', { name: 'Totals for these steps' });
     await totals.getByLabel('Drying temperature').fill('20');
@@ -138,12 +139,14 @@ test.describe('data sheets', () => {
     await expect(totals).toContainText('0.208 L per m²');
     await expect(totals).toContainText('before transfer losses');
     await expect(totals).toContainText('9 h 15 min');
+    await expect(totals).toContainText('Denib with P320: 15 min allowed');
+    await expect(totals).not.toContainText(/abrade/i);
 
     await dialog.getByRole('button', { name: 'Save finish system' }).click();
     await expect(dialog).toBeHidden();
     await page.getByLabel('Drying temperature for the times below').fill('20');
     const card = page.getByRole('article', { name });
-    await expect(card.getByRole('listitem')).toHaveText([/Coat:.*AquaPrime/, /Abrade:.*P320/, /Coat:.*AquaTop/]);
+    await expect(card.getByRole('listitem')).toHaveText([/Coat 1 of 2:.*AquaPrime/, /Denib with P320/, /Coat 2 of 2:.*AquaTop/]);
     await expect(card).toContainText('9 h 15 min');
   });
 

@@ -54,7 +54,7 @@ export async function addFinishSystem(page: Page, name: string, primer: string, 
   await dialog.getByLabel('Name', { exact: true }).fill(name);
   await dialog.getByRole('button', { name: 'Add coat' }).click();
   await dialog.getByLabel('Product, step 1').selectOption({ label: primer });
-  await dialog.getByRole('button', { name: 'Add abrade step' }).click();
+  await dialog.getByRole('button', { name: 'Add denib step' }).click();
   await expect(dialog.getByLabel('Grit, step 2')).toHaveValue('P320');
   await dialog.getByRole('button', { name: 'Add coat' }).click();
   await dialog.getByLabel('Product, step 3').selectOption({ label: topcoat });
