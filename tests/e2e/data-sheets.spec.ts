@@ -6,11 +6,12 @@ import { mainNav, signIn } from './helpers';
 const tinyPdf = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
 
 type DryingRow = [flashOff: string, recoatFrom: string, recoatUntil: string, touchDry: string, handle: string, pack: string, fullCure: string];
-const dryingColumns = ['Flash-off (min)', 'Recoat from (min)', 'Recoat until (min)', 'Touch dry (min)', 'Handle (min)', 'Pack (min)', 'Full cure (h)'];
+// Times in minutes are typed in the unit shown beside each box (minutes unless chosen otherwise).
+const dryingColumns = ['Flash-off', 'Recoat from', 'Recoat until', 'Touch dry', 'Handle', 'Pack', 'Full cure (h)'];
 
 async function fillDryingRow(page: Page, row: number, tempC: string, values: DryingRow) {
   await page.getByLabel(`Temperature (°C), row ${row}`).fill(tempC);
-  for (const [index, column] of dryingColumns.entries()) await page.getByLabel(`${column}, row ${row}`).fill(values[index]);
+  for (const [index, column] of dryingColumns.entries()) await page.getByLabel(`${column}, row ${row}`, { exact: true }).fill(values[index]);
 }
 
 test.describe('data sheets', () => {
@@ -33,11 +34,11 @@ test.describe('data sheets', () => {
     await fillDryingRow(page, 2, '10', ['20', '120', '100', '40', '240', '960', '336']);
     await page.getByRole('button', { name: 'Save data sheet' }).click();
 
-    const recoatUntil = page.getByLabel('Recoat until (min), row 2');
+    const recoatUntil = page.getByLabel('Recoat until, row 2', { exact: true });
     await expect(recoatUntil).toHaveAttribute('aria-invalid', 'true');
     const cell = page.getByRole('cell').filter({ has: recoatUntil });
     await expect(cell).toContainText('The latest recoat time cannot be before the earliest');
-    await expect(page.getByLabel('Recoat until (min), row 1')).toHaveAttribute('aria-invalid', 'false');
+    await expect(page.getByLabel('Recoat until, row 1', { exact: true })).toHaveAttribute('aria-invalid', 'false');
     await expect(page).toHaveURL(/\/data-sheets\/new$/);
 
     await recoatUntil.fill('480');
@@ -100,7 +101,7 @@ test.describe('data sheets', () => {
     await expect(table.getByRole('row').nth(1).getByRole('cell').first()).toHaveText('Undercoat');
   });
 
-  test('a lead builds a finish system of a coat, an abrade and a coat, and sees its totals', async ({ page }) => {
+  test('a lead builds a finish system of a coat, a denib and a coat, and sees its totals', async ({ page }) => {
     test.slow(); // a long dialog flow: three steps, a reorder both ways, totals, save
     const name = `Test two-coat WB ${Date.now()}`;
     await signIn(page, 'lead', '/finish-systems');
@@ -148,6 +149,43 @@ test.describe('data sheets', () => {
     const card = page.getByRole('article', { name });
     await expect(card.getByRole('listitem')).toHaveText([/Coat 1 of 2:.*AquaPrime/, /Denib with P320/, /Coat 2 of 2:.*AquaTop/]);
     await expect(card).toContainText('9 h 15 min');
+  });
+
+  test('a lead types a 16 h recoat as 16 hours; it is stored in minutes and reads back as 16 h', async ({ page }) => {
+    const name = `Test Hours Lacquer ${Date.now()}`;
+    await signIn(page, 'lead', '/data-sheets/new');
+    await page.getByLabel('Product name').fill(name);
+    await page.getByLabel('Kind').selectOption('topcoat');
+    await page.getByLabel('Chemistry').selectOption('solvent-borne');
+    await page.getByLabel('Volume solids').fill('30');
+    await fillDryingRow(page, 1, '20', ['10', '2', '16', '20', '3', '8', '168']);
+    const unit = (column: string) => page.getByLabel(`${column} unit, row 1`, { exact: true });
+    for (const column of ['Recoat from', 'Recoat until', 'Handle', 'Pack']) await unit(column).selectOption({ label: 'hours' });
+    await page.getByLabel('Pot life', { exact: true }).fill('4');
+    await page.getByLabel('Pot life unit', { exact: true }).selectOption({ label: 'hours' });
+    // What is added here is big enough for a gloved finger.
+    for (const box of [unit('Recoat until'), page.getByLabel('Recoat until, row 1', { exact: true })]) expect((await box.boundingBox())!.height).toBeGreaterThanOrEqual(44);
+    await page.getByRole('button', { name: 'Save data sheet' }).click();
+    await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+
+    // Stored in minutes, as the API has always answered: 16 h = 960 min, 2 h = 120, 3 h = 180, 8 h = 480, pot life 4 h = 240.
+    const id = /\/data-sheets\/(\d+)$/.exec(page.url())![1];
+    const { product } = await (await page.request.get(`/api/products/${id}`)).json();
+    expect(product.potLifeMin).toBe(240);
+    expect(product.dryingTimes[0]).toMatchObject({ flashOffMin: 10, recoatMinMin: 120, recoatMaxMin: 960, touchDryMin: 20, handleMin: 180, packMin: 480, fullCureH: 168 });
+
+    // Opened again, each time reads in the unit that suits it.
+    await page.reload();
+    await expect(page.getByLabel('Recoat until, row 1', { exact: true })).toHaveValue('16');
+    await expect(unit('Recoat until')).toHaveValue('h');
+    await expect(page.getByLabel('Recoat from, row 1', { exact: true })).toHaveValue('2');
+    await expect(page.getByLabel('Flash-off, row 1', { exact: true })).toHaveValue('10');
+    await expect(unit('Flash-off')).toHaveValue('min');
+    await expect(page.getByLabel('Pot life', { exact: true })).toHaveValue('4');
+    await expect(page.getByLabel('Pot life unit', { exact: true })).toHaveValue('h');
+    const preview = page.getByRole('region', { name: 'Drying at another temperature' });
+    await preview.getByLabel('Drying temperature').fill('20');
+    await expect(preview.getByText('Recoat window closes').locator('..')).toContainText('16 h');
   });
 
   test('a sprayer reads data sheets but cannot change them', async ({ page }) => {

@@ -47,14 +47,21 @@ function Version({ coat }: { coat: Coat }) {
         {coat.recordedByName} · <span className="font-semibold">{versionWords(coat)}</span>
       </span>
       {coat.correctionReason && <span className="block min-w-40 text-sm">Why: {coat.correctionReason}</span>}
-      {coat.supersededById !== null && <span className="block whitespace-nowrap text-sm font-bold text-verdict-stop no-underline">{correctedByWords(coat)}</span>}
+      {coat.supersededById !== null && (
+        <span className="block whitespace-nowrap text-sm font-bold text-verdict-stop no-underline">
+          {correctedByWords(coat)}
+        </span>
+      )}
     </>
   );
 }
 
 function DenibRow({ denib, timeZone, shop }: { denib: Denib; timeZone: string; shop: ShopFormat }) {
   return (
-    <tr aria-label={denibRowWords(denib, shop)} className="border-b border-dashed border-maple-400 bg-maple-100 align-top last:border-b-0">
+    <tr
+      aria-label={denibRowWords(denib, shop)}
+      className="border-b border-dashed border-maple-400 bg-maple-100 align-top last:border-b-0"
+    >
       <th scope="row" className="px-2 py-2 text-sm font-normal">
         <span className="rounded-panel bg-maple-700 px-2 py-0.5 font-semibold text-white">Denib</span>
         <When iso={denib.abradedAt} timeZone={timeZone} />
@@ -68,18 +75,32 @@ function DenibRow({ denib, timeZone, shop }: { denib: Denib; timeZone: string; s
   );
 }
 
-function CoatRow({ coat, units, timeZone, shop, onCorrect, photosOf, onOpenPhoto, onAddPhoto }: Omit<CoatLogTableProps, 'coats' | 'denibs'> & { coat: Coat; shop: ShopFormat }) {
+function CoatRow({
+  coat,
+  units,
+  timeZone,
+  shop,
+  onCorrect,
+  photosOf,
+  onOpenPhoto,
+  onAddPhoto,
+}: Omit<CoatLogTableProps, 'coats' | 'denibs'> & { coat: Coat; shop: ShopFormat }) {
   const replaced = coat.supersededById !== null;
   const struck = replaced ? 'line-through' : '';
   const name = coatRowWords(coat, shop);
   const temp = (c: number) => formatQuantity(c, 'temperature', units);
   return (
-    <tr aria-label={`${name}${replaced ? ', replaced' : ''}`} className={`border-b border-maple-200 align-top last:border-b-0 ${replaced ? 'bg-maple-100 text-maple-700' : 'even:bg-maple-50'}`}>
+    <tr
+      aria-label={`${name}${replaced ? ', replaced' : ''}`}
+      className={`border-b border-maple-200 align-top last:border-b-0 ${replaced ? 'bg-maple-100 text-maple-700' : 'even:bg-maple-50'}`}
+    >
       <th scope="row" className={`px-2 py-2 text-sm font-normal ${struck}`}>
         <When iso={coat.sprayedAt} timeZone={timeZone} />
       </th>
-      <td className={`whitespace-nowrap px-2 py-2 font-semibold ${struck}`}>{coat.jobReference ?? '—'}</td>
-      <td className={`min-w-60 px-2 py-2 ${struck}`}>
+      <td className={`max-w-36 px-2 py-2 font-semibold [overflow-wrap:anywhere] ${struck}`}>
+        {coat.jobReference ?? '—'}
+      </td>
+      <td className={`min-w-52 px-2 py-2 ${struck}`}>
         <span className="block leading-snug">{coat.productName}</span>
         <span className="block text-sm leading-snug">
           <span className="font-semibold">{coatPlaceWords(coat)}</span> · {partLabelsWords(coat.partLabels)}
@@ -107,7 +128,13 @@ function CoatRow({ coat, units, timeZone, shop, onCorrect, photosOf, onOpenPhoto
       <td className="px-2 py-2 text-sm">
         <Version coat={coat} />
         <div className="flex items-start whitespace-nowrap">
-          <CoatPhotos coat={coat} photos={photosOf(coat)} onOpen={onOpenPhoto} onAdd={replaced ? undefined : onAddPhoto} compact />
+          <CoatPhotos
+            coat={coat}
+            photos={photosOf(coat)}
+            onOpen={onOpenPhoto}
+            onAdd={replaced ? undefined : onAddPhoto}
+            compact
+          />
           {onCorrect && !replaced && (
             <Button variant="quiet" className="px-2!" onClick={() => onCorrect(coat)} aria-label={`Correct ${name}`}>
               Correct
@@ -123,13 +150,22 @@ function CoatRow({ coat, units, timeZone, shop, onCorrect, photosOf, onOpenPhoto
 export function CoatLogTable({ coats, denibs, ...rest }: CoatLogTableProps) {
   const shop = { ...useShopFormat(), timeZone: rest.timeZone };
   return (
-    <div role="region" aria-label="Coat records" tabIndex={0} className="overflow-x-auto rounded-panel border border-maple-300 bg-white">
+    <div
+      role="region"
+      aria-label="Coat records"
+      tabIndex={0}
+      className="overflow-x-auto rounded-panel border border-maple-300 bg-white"
+    >
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">Coat records and denibs, newest first</caption>
         <thead className="bg-maple-100">
           <tr>
             {headings.map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap border-b border-maple-300 px-2 py-2 text-sm font-semibold text-maple-800">
+              <th
+                key={h}
+                scope="col"
+                className="whitespace-nowrap border-b border-maple-300 px-2 py-2 text-sm font-semibold text-maple-800"
+              >
                 {h}
               </th>
             ))}

@@ -22,7 +22,7 @@ export function WarningChips({ coat, size }: WarningChipsProps) {
   const shared = sharedReason(coat);
   const shown = coat.warnings.find((w) => w.code === open);
   return (
-    <div className="min-w-48">
+    <div className="min-w-60">
       <ul aria-label="Warnings" className="flex flex-wrap gap-1">
         {coat.warnings.map((w) => (
           <li key={w.code}>

@@ -8,13 +8,18 @@ interface DurationInputProps {
   /** Called with the minutes typed; a blank box gives `blank` (undefined, or null where the time may be left out). */
   onChange: (minutes: number | null | undefined) => void;
   onBlur: () => void;
-  label: string;
+  /** The number box's name, when no <label> names it (in a table cell). */
+  label?: string;
+  /** The id a <label> points at, when one names the number box. */
+  id?: string;
   /** The unit box's own name; it must not contain the number box's label, so each is found by its own. */
   unitLabel: string;
   blank: null | undefined;
   invalid: boolean;
   describedBy?: string;
   placeholder?: string;
+  /** Side by side in a form; stacked in a narrow table cell. */
+  layout?: 'row' | 'stack';
 }
 
 type Shown = { unit: DurationUnit; text: string; minutes: number | null | undefined };
@@ -29,7 +34,7 @@ const shownFor = (minutes: number | null | undefined): Shown => {
  * the unit keeps the number typed ("16", then hours, is 16 h). A time set from outside (a reset, a
  * saved sheet) is shown in the unit that reads best.
  */
-export function DurationInput({ value, onChange, onBlur, label, unitLabel, blank, invalid, describedBy, placeholder }: DurationInputProps) {
+export function DurationInput({ value, onChange, onBlur, label, id, unitLabel, blank, invalid, describedBy, placeholder, layout = 'stack' }: DurationInputProps) {
   const [shown, setShown] = useState<Shown>(() => shownFor(value));
   if (!Object.is(value, shown.minutes)) setShown(shownFor(value));
 
@@ -40,8 +45,9 @@ export function DurationInput({ value, onChange, onBlur, label, unitLabel, blank
   };
 
   return (
-    <div className="flex flex-col gap-1">
+    <div className={layout === 'row' ? 'flex gap-2' : 'flex flex-col gap-1'}>
       <input
+        id={id}
         type="text"
         inputMode="decimal"
         className={inputClasses}
@@ -53,7 +59,7 @@ export function DurationInput({ value, onChange, onBlur, label, unitLabel, blank
         onChange={(event) => show(event.target.value, shown.unit)}
         onBlur={onBlur}
       />
-      <select aria-label={unitLabel} className={`${inputClasses} px-2`} value={shown.unit} onChange={(event) => show(shown.text, event.target.value as DurationUnit)} onBlur={onBlur}>
+      <select aria-label={unitLabel} className={`${inputClasses} px-2 ${layout === 'row' ? 'w-28 shrink-0' : ''}`} value={shown.unit} onChange={(event) => show(shown.text, event.target.value as DurationUnit)} onBlur={onBlur}>
         {(['min', 'h'] as const).map((unit) => (
           <option key={unit} value={unit}>
             {durationUnitWords[unit]}
