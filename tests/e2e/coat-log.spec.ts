@@ -17,7 +17,7 @@ const warnedCoats = 25;
  */
 async function coldMorning(api: LeadApi): Promise<{ jobId: number; reference: string }> {
   const now = Date.now();
-  const reference = `E2E-LOG-${now}`;
+  const reference = `LOG-${String(now).slice(-7)}`;
   const painted = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
   const { job } = await api.send<{ job: Job }>('POST', '/api/jobs', { customer: 'Coat Log Test Ltd', reference, dueDate: '2030-01-31', finishSystemId: painted.finishSystemId });
   const { booth } = await api.send<{ booth: { id: number } }>('POST', '/api/booths', { name: `Log booth ${now}`, kind: 'cross-draft', volumeM3: 60, extractionM3PerH: 18000 });

@@ -97,7 +97,7 @@ function CoatRow({
       <th scope="row" className={`px-2 py-2 text-sm font-normal ${struck}`}>
         <When iso={coat.sprayedAt} timeZone={timeZone} />
       </th>
-      <td className={`max-w-36 px-2 py-2 font-semibold [overflow-wrap:anywhere] ${struck}`}>
+      <td className={`min-w-28 max-w-40 px-2 py-2 font-semibold [overflow-wrap:anywhere] ${struck}`}>
         {coat.jobReference ?? '—'}
       </td>
       <td className={`min-w-52 px-2 py-2 ${struck}`}>
