@@ -33,15 +33,16 @@ export async function addDataSheet(page: Page, sheet: DataSheet) {
   await form.getByLabel('Dry film per coat').fill(String(sheet.dryFilmUm));
   const cells: [string, number | null][] = [
     ['Temperature (°C)', 20],
-    ['Flash-off (min)', sheet.drying.flashOff],
-    ['Recoat from (min)', sheet.drying.recoatFrom],
-    ['Recoat until (min)', sheet.drying.recoatUntil],
-    ['Touch dry (min)', sheet.drying.touchDry],
-    ['Handle (min)', sheet.drying.handle],
-    ['Pack (min)', sheet.drying.pack],
+    // Times in minutes: a new row's boxes start in minutes (each has its own minutes/hours choice).
+    ['Flash-off', sheet.drying.flashOff],
+    ['Recoat from', sheet.drying.recoatFrom],
+    ['Recoat until', sheet.drying.recoatUntil],
+    ['Touch dry', sheet.drying.touchDry],
+    ['Handle', sheet.drying.handle],
+    ['Pack', sheet.drying.pack],
     ['Full cure (h)', sheet.drying.fullCureH],
   ];
-  for (const [label, value] of cells) await form.getByLabel(`${label}, row 1`).fill(value === null ? '' : String(value));
+  for (const [label, value] of cells) await form.getByLabel(`${label}, row 1`, { exact: true }).fill(value === null ? '' : String(value));
   await form.getByRole('button', { name: 'Save data sheet' }).click();
   await expect(page.getByRole('heading', { name: sheet.name, level: 1 })).toBeVisible();
 }
