@@ -46,6 +46,12 @@ export const denibWords = (grit: string) => `denib with ${grit}`;
 /** "Denib with P320 needed". */
 export const denibNeededWords = (grit: string) => `${upperFirst(denibWords(grit))} needed`;
 
+/** A step as one line: "Denib P320", "Coat 2 of 3 at 40 µm dry" (the coat's number among the coat steps; 0 when it is not one of them). */
+export function stepLineWords(step: { kind: 'coat'; dryFilmUm: number; coatNumber: number; coatsTotal: number } | { kind: 'denib'; grit: string }): string {
+  if (step.kind === 'denib') return `${upperFirst(terms.denib)} ${step.grit}`;
+  return `${upperFirst(coatOfWords(step.coatNumber, step.coatsTotal))} at ${step.dryFilmUm} µm dry`;
+}
+
 /** "1 part", "3 parts". */
 export const partsWords = (count: number) => `${count} ${count === 1 ? 'part' : 'parts'}`;
 
@@ -112,6 +118,41 @@ export const outsideReasonWords: Record<'air-too-cold' | 'surface-too-cold' | 'r
   'rh-too-high': 'humidity too high',
   'dew-point-margin': 'surface too close to the dew point',
 };
+
+/** A coat warning in a word or two, for a chip beside the coat; the full sentence stays with the coat. */
+const warningShortWords: Record<string, string> = {
+  'dew-point-margin': 'Dew point',
+  'relative-humidity': 'Humidity',
+  'air-temperature': 'Air cold',
+  'surface-temperature': 'Surface cold',
+  'below-min-application-temp': 'Cure temp',
+  'film-thin': 'Thin dry film',
+  'film-heavy': 'Heavy dry film',
+  'outside-data-sheet-temps': 'Off sheet',
+  'recoat-too-soon': 'Recoat too soon',
+  'recoat-window-missed': 'Window missed',
+  'thinning-outside-range': 'Thinning',
+  'lot-expired': 'Lot expired',
+  'pot-life-expired': 'Pot life over',
+  'induction-not-over': 'Induction',
+  'product-not-in-step': 'Other product',
+};
+
+export const warningShortWord = (code: string) => warningShortWords[code] ?? 'Warning';
+
+/** "Coat 2 of 3"; a coat that matches no coat step, or whose job has no finish system, says so. */
+export function coatPlaceWords(coat: { coatNumber: number | null; coatsTotal: number | null }): string {
+  if (coat.coatsTotal === null) return 'Coat (no finish system)';
+  if (coat.coatNumber === null) return 'Coat outside the finish system';
+  return upperFirst(coatOfWords(coat.coatNumber, coat.coatsTotal));
+}
+
+/** Parts as people name them: "Door 1", "Door 1 and Door 2", "Door 1, Door 2 and 4 more". */
+export function partLabelsWords(labels: readonly string[]): string {
+  if (labels.length === 0) return partsWords(0);
+  if (labels.length <= 2) return labels.join(' and ');
+  return `${labels.slice(0, 2).join(', ')} and ${labels.length - 2} more`;
+}
 
 /** Column headers of the reports' CSV downloads, SI units named in each. */
 export const csvHeaders = {

@@ -2,8 +2,9 @@ import { In } from 'typeorm';
 import type { Coat } from '../../shared/schemas/coat';
 import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
+import { coatPlacesOf } from './coat-places';
 
-/** Coat DTOs for a page of coat rows: parts, product names and successors in three queries. */
+/** Coat DTOs for a page of coat rows: parts, product names, successors, and jobs with their finish systems, a few queries per page. */
 export async function toCoatDtos(data: SiteData, coats: CoatEntity[]): Promise<Coat[]> {
   const ids = coats.map((c) => c.id);
   if (ids.length === 0) return [];
@@ -12,6 +13,7 @@ export async function toCoatDtos(data: SiteData, coats: CoatEntity[]): Promise<C
     data.products.find({ where: { id: In([...new Set(coats.map((c) => c.productId))]) }, select: { id: true, name: true } }),
     data.coats.find({ where: { replacesId: In(ids) }, select: { id: true, replacesId: true } }),
   ]);
+  const places = await coatPlacesOf(data, coats, links);
   const productName = new Map(products.map((p) => [p.id, p.name]));
   const successor = new Map(successors.map((s) => [s.replacesId!, s.id]));
   return coats.map((c) => ({
@@ -23,6 +25,7 @@ export async function toCoatDtos(data: SiteData, coats: CoatEntity[]): Promise<C
     lotId: c.lotId,
     mixId: c.mixId,
     stepPosition: c.stepPosition,
+    ...places.get(c.id)!,
     sprayedAt: c.sprayedAt,
     airTempC: c.airTempC,
     relativeHumidityPct: c.relativeHumidityPct,

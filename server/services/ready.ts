@@ -11,15 +11,25 @@ import { partsSeenBy } from './part-sites';
 import type { PartFacts } from './readiness-inputs';
 import { readyJobsOf, readyTimesOf } from './ready-times';
 import type { SettingsService } from './settings';
+import { stepLineWords } from '../../shared/words';
 
 export { readinessOf } from './readiness-inputs';
 
 const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 const dayMs = 86_400_000;
 
-export function describeStep(step: FinishStep | null): string | null {
-  if (!step) return null;
-  return step.kind === 'abrade' ? `Abrade ${step.grit}` : `Coat at ${step.dryFilmUm} µm dry`;
+type NextStepFields = Pick<ReadyPart, 'nextStep' | 'nextStepKind' | 'nextStepGrit' | 'nextStepDryFilmUm'>;
+
+/**
+ * The next step as the board reads it: what it is (a coat or a denib), its grit or dry film, and a
+ * line of words. The stored step kind 'abrade' is a denib in the shop's words.
+ */
+export function nextStepFields(steps: FinishStep[], step: FinishStep | null, index: number | null): NextStepFields {
+  if (!step) return { nextStep: null, nextStepKind: null, nextStepGrit: null, nextStepDryFilmUm: null };
+  if (step.kind === 'abrade') return { nextStep: stepLineWords({ kind: 'denib', grit: step.grit }), nextStepKind: 'denib', nextStepGrit: step.grit, nextStepDryFilmUm: null };
+  const coatSteps = steps.filter((s) => s.kind === 'coat').length;
+  const coatNumber = index === null ? 0 : steps.slice(0, index + 1).filter((s) => s.kind === 'coat').length;
+  return { nextStep: stepLineWords({ kind: 'coat', dryFilmUm: step.dryFilmUm, coatNumber, coatsTotal: coatSteps }), nextStepKind: 'coat', nextStepGrit: null, nextStepDryFilmUm: step.dryFilmUm };
 }
 
 // Collected parts stay on the board for a week unless asked for longer (to show them, and to undo
@@ -71,7 +81,7 @@ function toReadyPart(part: PartEntity, fact: PartFacts, time: PartReadyTime, { j
     state: r.state,
     coatsDone: r.coatsDone,
     coatsTotal: r.coatsTotal,
-    nextStep: describeStep(r.nextStep),
+    ...nextStepFields(fact.steps, r.nextStep, r.nextStepIndex),
     nextWindowOpensAt: iso(r.nextWindow?.opensAt),
     nextWindowClosesAt: iso(r.nextWindow?.closesAt),
     abradeRequired: r.abradeRequired,

@@ -2,7 +2,7 @@ import { calendarDateIn } from '../time';
 import { findSlot, type Interval, type RackLoad, type SlotContext, type Taken } from './auto-plan-slots';
 import type { DryingRow } from './drying-row-schema';
 import { adjustDryingTimes } from './drying-times';
-import type { RecoatWindow } from './readiness';
+import { missedWindowScuffGrit, type RecoatWindow } from './readiness';
 import { projectedRecoatWindow, sharedRecoatWindow } from './recoat-window';
 import { calendarDateWords, coatOfWords, denibWords, shopMomentWords, upperFirst } from '../words';
 
@@ -42,22 +42,41 @@ export type PlanInput = SlotContext & {
   jobs: PlanJob[];
 };
 
-export type PlannedSession = { jobId: number; stepPosition: number; boothId: number; start: Date; end: Date; productName: string; areaM2: number; partIds: number[] };
+export type PlannedSession = {
+  jobId: number;
+  stepPosition: number;
+  /** "Coat n of m": the step's place among the job's coat steps, and how many there are. */
+  coatNumber: number;
+  coatsTotal: number;
+  /** The grit of the denib the parts need before this coat (the system's own, or a scuff after a closed window); null when none. */
+  denibBeforeGrit: string | null;
+  boothId: number;
+  start: Date;
+  end: Date;
+  productName: string;
+  areaM2: number;
+  partIds: number[];
+};
 export type JobPlan = { jobId: number; reference: string; dueDate: string; finishesAt: Date | null; dueDateMet: boolean; notes: string[] };
 export type Plan = { sessions: PlannedSession[]; jobs: JobPlan[] };
 
 type CoatStep = Extract<PlanStep, { kind: 'coat' }>;
 /** Where each part stands as the plan walks the finish system: its open window, when it is free, when it can be packed. */
 type PartState = { window: RecoatWindow | null; freeAt: Date; packAt: Date | null };
-type JobWalk = { job: PlanJob; parts: Map<number, PartState>; abradeDue: boolean; sessions: PlannedSession[]; notes: string[] };
+type JobWalk = { job: PlanJob; parts: Map<number, PartState>; abradeDue: boolean; denibGrit: string; sessions: PlannedSession[]; notes: string[] };
 
 const later = (a: Date, b: Date | null | undefined) => (b && b > a ? b : a);
 const shopTime = (at: Date, input: PlanInput) => shopMomentWords(at, { timeZone: input.timeZone, locale: input.locale ?? 'en-GB' });
 
+function coatPlace(job: PlanJob, step: { position: number }): { coatNumber: number; coatsTotal: number } {
+  const coats = job.steps.filter((s) => s.kind === 'coat').map((s) => s.position);
+  return { coatNumber: coats.indexOf(step.position) + 1, coatsTotal: coats.length };
+}
+
 /** "Coat 2 of 3": the step's place among the job's coat steps, as the other screens say it. */
 function coatLabel(job: PlanJob, step: { position: number }): string {
-  const coats = job.steps.filter((s) => s.kind === 'coat').map((s) => s.position);
-  return upperFirst(coatOfWords(coats.indexOf(step.position) + 1, coats.length));
+  const { coatNumber, coatsTotal } = coatPlace(job, step);
+  return upperFirst(coatOfWords(coatNumber, coatsTotal));
 }
 
 /** The parts whose step `position` is on record, booked, or still to be planned. */
@@ -92,8 +111,10 @@ function proposeStep(input: PlanInput, taken: Taken, walk: JobWalk, step: CoatSt
   const areaM2 = needing.reduce((sum, p) => sum + p.areaM2, 0);
   const footprintM2 = needing.reduce((sum, p) => sum + p.footprintM2, 0);
   let slot = findSlot(input, taken, earliest, areaM2, footprintM2, times.handleMin);
+  let denibBeforeGrit = walk.abradeDue ? walk.denibGrit : null;
   if (slot && !walk.abradeDue && window?.closesAt && slot.start > window.closesAt) {
-    walk.notes.push(`${coatLabel(walk.job, step)} (${step.productName}): no booth time before the recoat window closes (${shopTime(window.closesAt, input)}); the plan adds a ${denibWords('P320')} first.`);
+    denibBeforeGrit = missedWindowScuffGrit;
+    walk.notes.push(`${coatLabel(walk.job, step)} (${step.productName}): no booth time before the recoat window closes (${shopTime(window.closesAt, input)}); the plan adds a ${denibWords(missedWindowScuffGrit)} first.`);
     slot = findSlot(input, taken, new Date(earliest.getTime() + input.abradeMin * 60_000), areaM2, footprintM2, times.handleMin);
   }
   if (!slot) {
@@ -101,7 +122,7 @@ function proposeStep(input: PlanInput, taken: Taken, walk: JobWalk, step: CoatSt
     return false;
   }
   const partIds = needing.map((p) => p.id);
-  walk.sessions.push({ jobId: walk.job.id, stepPosition: step.position, boothId: slot.boothId, start: slot.start, end: slot.end, productName: step.productName, areaM2, partIds });
+  walk.sessions.push({ jobId: walk.job.id, stepPosition: step.position, ...coatPlace(walk.job, step), denibBeforeGrit, boothId: slot.boothId, start: slot.start, end: slot.end, productName: step.productName, areaM2, partIds });
   taken.busy.push(slot);
   taken.rackLoad.push({ from: slot.end, until: new Date(slot.end.getTime() + times.handleMin * 60_000), areaM2: footprintM2 });
   const after = projectedRecoatWindow(slot.end, step.dryingTimes, input.planningTempC);
@@ -122,11 +143,12 @@ function walkCoat(input: PlanInput, taken: Taken, walk: JobWalk, step: CoatStep)
 }
 
 function planJob(input: PlanInput, taken: Taken, job: PlanJob): { sessions: PlannedSession[]; plan: JobPlan } {
-  const walk: JobWalk = { job, parts: new Map(job.parts.map((p) => [p.id, { window: null, freeAt: input.now, packAt: null }])), abradeDue: false, sessions: [], notes: [] };
+  const walk: JobWalk = { job, parts: new Map(job.parts.map((p) => [p.id, { window: null, freeAt: input.now, packAt: null }])), abradeDue: false, denibGrit: missedWindowScuffGrit, sessions: [], notes: [] };
   const unplanned = (): JobPlan => ({ jobId: job.id, reference: job.reference, dueDate: job.dueDate, finishesAt: null, dueDateMet: false, notes: walk.notes });
   for (const step of job.steps) {
     if (step.kind === 'abrade') {
       walk.abradeDue = true;
+      walk.denibGrit = step.grit;
       continue;
     }
     if (!walkCoat(input, taken, walk, step)) return { sessions: walk.sessions, plan: unplanned() };

@@ -60,7 +60,7 @@ function windowWarnings(sprayedAt: Date, window: CoatRecordInput['previousWindow
     return [{ code: 'recoat-too-soon', verdict: 'stop', message: `The previous coat is not ready to recoat until ${wallClockIn(window.opensAt, timeZone).time}; coating now risks lifting or solvent entrapment.` }];
   }
   if (window.closesAt && sprayedAt > window.closesAt) {
-    return [{ code: 'recoat-window-missed', verdict: 'stop', message: 'The previous coat’s recoat window had closed: the surface needed abrading (P320) for a mechanical key first.' }];
+    return [{ code: 'recoat-window-missed', verdict: 'stop', message: 'The previous coat’s recoat window had closed: the surface needed a denib (P320) for a mechanical key first.' }];
   }
   return [];
 }

@@ -6,9 +6,9 @@ const maxMinutes = 60 * 24 * 60;
 
 const minutes = (what: string) =>
   z
-    .number({ error: `Enter the ${what} time in minutes` })
+    .number({ error: `Enter the ${what} time` })
     .min(0, `The ${what} time cannot be negative`)
-    .max(maxMinutes, `The ${what} time looks too long; enter minutes`);
+    .max(maxMinutes, `The ${what} time looks too long (over 60 days)`);
 
 /** One line of a data sheet's drying table: every time measured at `tempC`. */
 export const dryingRowSchema = z

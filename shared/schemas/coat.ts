@@ -75,11 +75,20 @@ export const coatSchema = z.object({
   id: z.number().int(),
   spraySessionId: z.number().int(),
   partIds: z.array(z.number().int()),
+  /** The parts' labels, in the order of `partIds`: how people name the parts a coat covered. */
+  partLabels: z.array(z.string()).default([]),
   productId: z.number().int(),
   productName: z.string(),
   lotId: z.number().int().nullable(),
   mixId: z.number().int().nullable(),
   stepPosition: z.number().int().nullable(),
+  /** The job of the coat's parts (of its first part, should one coat cover parts of several jobs); null if none is on record. */
+  jobId: z.number().int().nullable().default(null),
+  jobReference: z.string().nullable().default(null),
+  /** "Coat n of m": n is the coat's place among the coat steps of the job's finish system, null when it matches no coat step. */
+  coatNumber: z.number().int().nullable().default(null),
+  /** m: how many coat steps the job's finish system has; null when the job has no finish system. */
+  coatsTotal: z.number().int().nullable().default(null),
   sprayedAt: z.string(),
   airTempC: z.number(),
   relativeHumidityPct: z.number(),

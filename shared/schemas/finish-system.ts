@@ -13,7 +13,7 @@ export const finishStepInputSchema = z.discriminatedUnion(
     }),
     z.object({ kind: z.literal('abrade'), grit: gritSchema }),
   ],
-  { error: 'Each step is a coat or an abrade step' },
+  { error: 'Each step is a coat or a denib' },
 );
 export type FinishStepInput = z.infer<typeof finishStepInputSchema>;
 

@@ -11,6 +11,11 @@ export type PlanRequest = z.input<typeof planRequestSchema>;
 export const plannedSessionSchema = z.object({
   jobId: z.number().int(),
   stepPosition: z.number().int(),
+  /** "Coat n of m": the step's place among the job's coat steps, and how many there are. */
+  coatNumber: z.number().int().default(0),
+  coatsTotal: z.number().int().default(0),
+  /** The grit of the denib due before this coat (the system's own step, or a scuff after a closed window); null when none. */
+  denibBeforeGrit: z.string().nullable().default(null),
   boothId: z.number().int(),
   start: z.string(),
   end: z.string(),

@@ -24,7 +24,14 @@ export const readyPartSchema = z.object({
   state: z.enum(readinessStates),
   coatsDone: z.number().int(),
   coatsTotal: z.number().int(),
+  /** The next step in words ("Denib P320", "Coat 2 of 3 at 40 µm dry"); read the structured fields below rather than this text. */
   nextStep: z.string().nullable(),
+  /** What the next step is: a coat, or a denib (the finish system's abrade step, or a scuff after a missed window); null when none remains. */
+  nextStepKind: z.enum(['coat', 'denib']).nullable().default(null),
+  /** The denib's grit ("P320") when the next step is a denib. */
+  nextStepGrit: z.string().nullable().default(null),
+  /** The dry film the finish system asks of the next coat, in µm, when the next step is a coat. */
+  nextStepDryFilmUm: z.number().nullable().default(null),
   nextWindowOpensAt: z.string().nullable(),
   nextWindowClosesAt: z.string().nullable(),
   abradeRequired: z.boolean(),

@@ -11,8 +11,12 @@ test('a lead auto-plans a job’s coats and books them all at once', async ({ pa
   // The demo vanity doors' system: 2K PU primer, denib, two topcoats — three coats to book.
   const sessions = dialog.getByRole('table', { name: 'Proposed spray sessions' });
   await expect(sessions.getByRole('row')).toHaveCount(4);
-  await expect(sessions).toContainText('Step 1: Kestrel 2K PU Primer White');
-  await expect(sessions).toContainText('Step 3: Kestrel 2K PU Topcoat Satin');
+  await expect(sessions).toContainText('Coat 1 of 3: Kestrel 2K PU Primer White');
+  await expect(sessions.getByRole('row').filter({ hasText: 'Coat 2 of 3: Kestrel 2K PU Topcoat Satin' })).toContainText('After a denib with P320');
+  await expect(sessions).toContainText('Coat 3 of 3: Kestrel 2K PU Topcoat Satin');
+  // Dates and times as the shop reads them, never as ISO strings.
+  await expect(dialog).not.toContainText(/\d{4}-\d{2}-\d{2}/);
+  await expect(dialog.getByRole('list', { name: 'Jobs in the proposal' })).toContainText(/\(due \w{3},? \d{1,2} \w{3} \d{4}/);
   await expect(dialog.getByRole('list', { name: 'Jobs in the proposal' })).toContainText('LJ-26-105');
   await page.screenshot({ path: '/tmp/shots/planner-auto-plan.png', fullPage: true });
   await dialog.getByRole('button', { name: 'Book all 3 sessions' }).click();

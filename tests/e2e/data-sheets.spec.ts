@@ -6,11 +6,12 @@ import { mainNav, signIn } from './helpers';
 const tinyPdf = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
 
 type DryingRow = [flashOff: string, recoatFrom: string, recoatUntil: string, touchDry: string, handle: string, pack: string, fullCure: string];
-const dryingColumns = ['Flash-off (min)', 'Recoat from (min)', 'Recoat until (min)', 'Touch dry (min)', 'Handle (min)', 'Pack (min)', 'Full cure (h)'];
+// Times in minutes are typed in the unit shown beside each box (minutes unless chosen otherwise).
+const dryingColumns = ['Flash-off', 'Recoat from', 'Recoat until', 'Touch dry', 'Handle', 'Pack', 'Full cure (h)'];
 
 async function fillDryingRow(page: Page, row: number, tempC: string, values: DryingRow) {
   await page.getByLabel(`Temperature (°C), row ${row}`).fill(tempC);
-  for (const [index, column] of dryingColumns.entries()) await page.getByLabel(`${column}, row ${row}`).fill(values[index]);
+  for (const [index, column] of dryingColumns.entries()) await page.getByLabel(`${column}, row ${row}`, { exact: true }).fill(values[index]);
 }
 
 test.describe('data sheets', () => {
@@ -33,11 +34,11 @@ test.describe('data sheets', () => {
     await fillDryingRow(page, 2, '10', ['20', '120', '100', '40', '240', '960', '336']);
     await page.getByRole('button', { name: 'Save data sheet' }).click();
 
-    const recoatUntil = page.getByLabel('Recoat until (min), row 2');
+    const recoatUntil = page.getByLabel('Recoat until, row 2', { exact: true });
     await expect(recoatUntil).toHaveAttribute('aria-invalid', 'true');
     const cell = page.getByRole('cell').filter({ has: recoatUntil });
     await expect(cell).toContainText('The latest recoat time cannot be before the earliest');
-    await expect(page.getByLabel('Recoat until (min), row 1')).toHaveAttribute('aria-invalid', 'false');
+    await expect(page.getByLabel('Recoat until, row 1', { exact: true })).toHaveAttribute('aria-invalid', 'false');
     await expect(page).toHaveURL(/\/data-sheets\/new$/);
 
     await recoatUntil.fill('480');
@@ -100,7 +101,7 @@ test.describe('data sheets', () => {
     await expect(table.getByRole('row').nth(1).getByRole('cell').first()).toHaveText('Undercoat');
   });
 
-  test('a lead builds a finish system of a coat, an abrade and a coat, and sees its totals', async ({ page }) => {
+  test('a lead builds a finish system of a coat, a denib and a coat, and sees its totals', async ({ page }) => {
     test.slow(); // a long dialog flow: three steps, a reorder both ways, totals, save
     const name = `Test two-coat WB ${Date.now()}`;
     await signIn(page, 'lead', '/finish-systems');
@@ -114,23 +115,24 @@ test.describe('data sheets', () => {
     await dialog.getByRole('button', { name: 'Add coat' }).click();
     await dialog.getByLabel('Product, step 2').selectOption({ label: 'Kestrel AquaTop WB Topcoat Satin (KF-WT-330)' });
     await expect(dialog.getByLabel('Dry film target, step 2')).toHaveValue('35');
-    await dialog.getByRole('button', { name: 'Add abrade step' }).click();
+    await dialog.getByRole('button', { name: 'Add denib step' }).click();
     await expect(dialog.getByLabel('Grit, step 3')).toHaveValue('P320');
 
     // The denib belongs between the coats: move it up by keyboard-reachable buttons.
     await dialog.getByRole('button', { name: 'Move step 3 up' }).click();
-    await expect(dialog.getByText('Step 2: abrade (denib)')).toBeVisible();
+    await expect(dialog.getByText('Step 2: denib')).toBeVisible();
+    await expect(dialog.getByText('Step 3: coat 2 of 2')).toBeVisible();
     await expect(dialog.getByRole('button', { name: 'Move step 2 up' })).toBeFocused();
     // Dragging by the grip works too: drop the denib on step 1, then put it back with the keyboard.
     // Scrolling in the middle of a drag would cancel it, so both ends are brought into view first.
-    await dialog.getByText('Step 1: coat').scrollIntoViewIfNeeded();
-    await dialog.getByTitle('Drag to move this step').nth(1).dragTo(dialog.getByText('Step 1: coat'));
-    await expect(dialog.getByText('Step 1: abrade (denib)')).toBeVisible();
+    await dialog.getByText('Step 1: coat 1 of 2').scrollIntoViewIfNeeded();
+    await dialog.getByTitle('Drag to move this step').nth(1).dragTo(dialog.getByText('Step 1: coat 1 of 2'));
+    await expect(dialog.getByText('Step 1: denib')).toBeVisible();
     await dialog.getByRole('button', { name: 'Move step 1 down' }).click();
-    await expect(dialog.getByText('Step 2: abrade (denib)')).toBeVisible();
+    await expect(dialog.getByText('Step 2: denib')).toBeVisible();
     await expect(dialog.getByLabel('Product, step 3').locator('option:checked')).toHaveText('Kestrel AquaTop WB Topcoat Satin (KF-WT-330)');
 
-    // At 20 °C both products have an exact row: primer recoat 60 + abrade 15 + topcoat pack 480 = 555 min.
+    // At 20 °C both products have an exact row: primer recoat 60 + denib 15 + topcoat pack 480 = 555 min.
     // Litres: 40 / (38 × 10) + 35 / (34 × 10) = 0.1053 + 0.1029 = 0.208 L/m².
     const totals = dialog.getByRole('region', { name: 'Totals for these steps' });
     await totals.getByLabel('Drying temperature').fill('20');
@@ -138,13 +140,52 @@ test.describe('data sheets', () => {
     await expect(totals).toContainText('0.208 L per m²');
     await expect(totals).toContainText('before transfer losses');
     await expect(totals).toContainText('9 h 15 min');
+    await expect(totals).toContainText('Denib with P320: 15 min allowed');
+    await expect(totals).not.toContainText(/abrade/i);
 
     await dialog.getByRole('button', { name: 'Save finish system' }).click();
     await expect(dialog).toBeHidden();
     await page.getByLabel('Drying temperature for the times below').fill('20');
     const card = page.getByRole('article', { name });
-    await expect(card.getByRole('listitem')).toHaveText([/Coat:.*AquaPrime/, /Abrade:.*P320/, /Coat:.*AquaTop/]);
+    await expect(card.getByRole('listitem')).toHaveText([/Coat 1 of 2:.*AquaPrime/, /Denib with P320/, /Coat 2 of 2:.*AquaTop/]);
     await expect(card).toContainText('9 h 15 min');
+  });
+
+  test('a lead types a 16 h recoat as 16 hours; it is stored in minutes and reads back as 16 h', async ({ page }) => {
+    const name = `Test Hours Lacquer ${Date.now()}`;
+    await signIn(page, 'lead', '/data-sheets/new');
+    await page.getByLabel('Product name').fill(name);
+    await page.getByLabel('Kind').selectOption('topcoat');
+    await page.getByLabel('Chemistry').selectOption('solvent-borne');
+    await page.getByLabel('Volume solids').fill('30');
+    await fillDryingRow(page, 1, '20', ['10', '2', '16', '20', '3', '8', '168']);
+    const unit = (column: string) => page.getByLabel(`${column} unit, row 1`, { exact: true });
+    for (const column of ['Recoat from', 'Recoat until', 'Handle', 'Pack']) await unit(column).selectOption({ label: 'hours' });
+    await page.getByLabel('Pot life', { exact: true }).fill('4');
+    await page.getByLabel('Pot life unit', { exact: true }).selectOption({ label: 'hours' });
+    // What is added here is big enough for a gloved finger.
+    for (const box of [unit('Recoat until'), page.getByLabel('Recoat until, row 1', { exact: true })]) expect((await box.boundingBox())!.height).toBeGreaterThanOrEqual(44);
+    await page.getByRole('button', { name: 'Save data sheet' }).click();
+    await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+
+    // Stored in minutes, as the API has always answered: 16 h = 960 min, 2 h = 120, 3 h = 180, 8 h = 480, pot life 4 h = 240.
+    const id = /\/data-sheets\/(\d+)$/.exec(page.url())![1];
+    const { product } = await (await page.request.get(`/api/products/${id}`)).json();
+    expect(product.potLifeMin).toBe(240);
+    expect(product.dryingTimes[0]).toMatchObject({ flashOffMin: 10, recoatMinMin: 120, recoatMaxMin: 960, touchDryMin: 20, handleMin: 180, packMin: 480, fullCureH: 168 });
+
+    // Opened again, each time reads in the unit that suits it.
+    await page.reload();
+    await expect(page.getByLabel('Recoat until, row 1', { exact: true })).toHaveValue('16');
+    await expect(unit('Recoat until')).toHaveValue('h');
+    await expect(page.getByLabel('Recoat from, row 1', { exact: true })).toHaveValue('2');
+    await expect(page.getByLabel('Flash-off, row 1', { exact: true })).toHaveValue('10');
+    await expect(unit('Flash-off')).toHaveValue('min');
+    await expect(page.getByLabel('Pot life', { exact: true })).toHaveValue('4');
+    await expect(page.getByLabel('Pot life unit', { exact: true })).toHaveValue('h');
+    const preview = page.getByRole('region', { name: 'Drying at another temperature' });
+    await preview.getByLabel('Drying temperature').fill('20');
+    await expect(preview.getByText('Recoat window closes').locator('..')).toContainText('16 h');
   });
 
   test('a sprayer reads data sheets but cannot change them', async ({ page }) => {

@@ -33,15 +33,16 @@ export async function addDataSheet(page: Page, sheet: DataSheet) {
   await form.getByLabel('Dry film per coat').fill(String(sheet.dryFilmUm));
   const cells: [string, number | null][] = [
     ['Temperature (°C)', 20],
-    ['Flash-off (min)', sheet.drying.flashOff],
-    ['Recoat from (min)', sheet.drying.recoatFrom],
-    ['Recoat until (min)', sheet.drying.recoatUntil],
-    ['Touch dry (min)', sheet.drying.touchDry],
-    ['Handle (min)', sheet.drying.handle],
-    ['Pack (min)', sheet.drying.pack],
+    // Times in minutes: a new row's boxes start in minutes (each has its own minutes/hours choice).
+    ['Flash-off', sheet.drying.flashOff],
+    ['Recoat from', sheet.drying.recoatFrom],
+    ['Recoat until', sheet.drying.recoatUntil],
+    ['Touch dry', sheet.drying.touchDry],
+    ['Handle', sheet.drying.handle],
+    ['Pack', sheet.drying.pack],
     ['Full cure (h)', sheet.drying.fullCureH],
   ];
-  for (const [label, value] of cells) await form.getByLabel(`${label}, row 1`).fill(value === null ? '' : String(value));
+  for (const [label, value] of cells) await form.getByLabel(`${label}, row 1`, { exact: true }).fill(value === null ? '' : String(value));
   await form.getByRole('button', { name: 'Save data sheet' }).click();
   await expect(page.getByRole('heading', { name: sheet.name, level: 1 })).toBeVisible();
 }
@@ -54,7 +55,7 @@ export async function addFinishSystem(page: Page, name: string, primer: string, 
   await dialog.getByLabel('Name', { exact: true }).fill(name);
   await dialog.getByRole('button', { name: 'Add coat' }).click();
   await dialog.getByLabel('Product, step 1').selectOption({ label: primer });
-  await dialog.getByRole('button', { name: 'Add abrade step' }).click();
+  await dialog.getByRole('button', { name: 'Add denib step' }).click();
   await expect(dialog.getByLabel('Grit, step 2')).toHaveValue('P320');
   await dialog.getByRole('button', { name: 'Add coat' }).click();
   await dialog.getByLabel('Product, step 3').selectOption({ label: topcoat });

@@ -118,7 +118,7 @@ test('a coat logged on the sprayer’s tablet shows on the lead’s open coat lo
   const [coat] = (await stage.coatsOf()).items;
 
   // The lead's coat log and the assembler's board follow the change stream; neither reloads.
-  const row = lead.getByRole('row', { name: `Coat ${coat.id}` });
+  const row = lead.getByRole('row', { name: `${coat.partLabels.join(' and ')}, ${coat.jobReference}, coat 1 of 3`, exact: false });
   await expect(row).toBeVisible({ timeout: 5_000 });
   await expect(row).toContainText('Kestrel 2K PU Primer White');
   await expect(row).toContainText('Mina Castell');

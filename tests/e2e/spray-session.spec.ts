@@ -32,6 +32,10 @@ async function bookSession(api: LeadApi): Promise<{ sessionId: number; partLabel
   return { sessionId: spraySession.id, partLabel, partTag: part.tag };
 }
 
+/** A coat log row is named by its parts, job, coat and time: "Door 1 and Door 2, LJ-26-105, coat 1 of 3, Sat 5 Dec, 10:40". */
+const escaped = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+const coatRows = (page: Page, parts: string, coat: string) => page.getByRole('row', { name: new RegExp(`^${escaped(parts)}, LJ-26-105, ${coat}, `) });
+
 /** A number box by its label; the − and + buttons beside it name the field too. */
 const box = (scope: Page | Locator, label: string) => scope.getByRole('textbox', { name: new RegExp(`^${label}`) });
 
@@ -150,28 +154,34 @@ test.describe('spray session', () => {
 
     // The coat log: both coats; a correction with its reason keeps the first version in the history.
     await page.goto('/coat-log');
-    await expect(page.getByRole('row', { name: `Coat ${first.id}` })).toContainText(/140 µm wet\s*57 µm dry/);
-    await expect(page.getByRole('row', { name: `Coat ${sent.items[0].id}` })).toContainText('Reason: Second pass on the edges while the first is wet');
-    await page.getByRole('button', { name: `Correct coat ${first.id}` }).click();
-    const dialog = page.getByRole('dialog', { name: `Correct coat ${first.id}` });
+    const doorCoats = coatRows(page, partLabel, 'coat 1 of 3');
+    const firstRow = doorCoats.filter({ hasText: '140 µm wet' });
+    await expect(firstRow).toContainText(/140 µm wet\s*57 µm dry/);
+    await expect(firstRow).toContainText('LJ-26-105');
+    await expect(firstRow).not.toContainText(/#\d/);
+    const secondRow = doorCoats.filter({ hasText: '150 µm wet' });
+    await secondRow.getByRole('button', { name: 'Recoat too soon' }).click();
+    await expect(secondRow).toContainText('Reason: Second pass on the edges while the first is wet');
+    await firstRow.getByRole('button', { name: /^Correct / }).click();
+    const dialog = page.getByRole('dialog', { name: /^Correct the Kestrel 2K PU Primer White coat sprayed / });
     await dialog.getByRole('button', { name: 'Save correction' }).click();
     await expect(dialog.getByText('Say what was wrong')).toBeVisible();
     await dialog.getByLabel('Wet film').fill('130');
     await dialog.getByLabel('Reason for the correction').fill('Comb was read on the edge, not the face');
     await dialog.getByRole('button', { name: 'Save correction' }).click();
     await expect(dialog).toBeHidden();
-    await expect(page.getByRole('row', { name: `Coat ${first.id}`, exact: true })).toBeHidden();
+    await expect(firstRow).toBeHidden();
 
     // The filters live in the address; the box shows ticked once the router has moved.
     await page.getByRole('checkbox', { name: 'Show history' }).click();
     await expect(page.getByRole('checkbox', { name: 'Show history' })).toBeChecked();
     await expect(page).toHaveURL(/history=true/);
-    const replaced = page.getByRole('row', { name: `Coat ${first.id}, replaced` });
-    const { items: history } = await api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}&history=true`);
-    const correction = history.find((c) => c.replacesId === first.id)!;
-    await expect(replaced).toContainText(`Corrected by #${correction.id}`);
-    await expect(page.getByRole('row', { name: `Coat ${correction.id}` })).toContainText('Why: Comb was read on the edge, not the face');
-    await expect(page.getByRole('row', { name: `Coat ${correction.id}` })).toContainText(/130 µm wet\s*53 µm dry/);
+    const replaced = doorCoats.filter({ hasText: '140 µm wet' });
+    await expect(replaced).toHaveAccessibleName(/, replaced$/);
+    await expect(replaced).toContainText('Corrected by v2');
+    const correction = doorCoats.filter({ hasText: 'Why: Comb was read on the edge, not the face' });
+    await expect(correction).toContainText(/130 µm wet\s*53 µm dry/);
+    await expect(correction).toContainText('v2, corrects v1');
     await api.context.dispose();
   });
 
@@ -306,14 +316,16 @@ test.describe('between coats', () => {
 
     // The coat log shows the denib in line with the coats, as a row of its own kind.
     await page.goto(`/coat-log?job=${jobId}`);
-    const [denib] = (await api.get<List<{ id: number }>>(`/api/denibs?spraySessionId=${sessionId}`)).items;
-    const denibRow = page.getByRole('row', { name: `Denib ${denib.id}`, exact: true });
+    const denibRow = page.getByRole('row', { name: /^Denib with P320, 2 parts, / });
     await expect(denibRow).toContainText('Denib with P320 · 2 parts');
     await expect(denibRow).toContainText('Mina Castell');
-    await expect(page.getByRole('row', { name: `Coat ${coat.id}` })).toContainText('Reason for the stops: Customer collecting tonight; parts warmed after');
+    const coatRow = coatRows(page, coat.partLabels.join(' and '), 'coat 2 of 3');
+    await expect(coatRow.getByRole('button', { name: 'Humidity' })).toHaveAttribute('aria-expanded', 'false');
+    await coatRow.getByRole('button', { name: 'Humidity' }).click();
+    await expect(coatRow).toContainText('Reason: Customer collecting tonight; parts warmed after');
     const rows = await page.getByRole('row').evaluateAll((all) => all.map((row) => row.getAttribute('aria-label') ?? ''));
-    const at = rows.indexOf(`Denib ${denib.id}`);
-    expect(rows[at - 1]).toBe(`Coat ${coat.id}`);
+    const at = rows.findIndex((name) => name.startsWith('Denib with P320, 2 parts, '));
+    expect(rows[at - 1]).toMatch(new RegExp(`^${escaped(coat.partLabels.join(' and '))}, LJ-26-105, coat 2 of 3, `));
     await page.screenshot({ path: `${shotsDir}/coat-log-denib-1366.png`, fullPage: true });
     await api.context.dispose();
   });

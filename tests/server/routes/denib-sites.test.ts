@@ -93,7 +93,7 @@ describe('denibs and a part’s history across two sites', () => {
   it('counts the main site’s denib once the door is at the other site, without listing it there', async () => {
     await admin.agent.patch(`/api/parts/${doorId}`).set('x-csrf-token', admin.csrf).send({ rackId: riversideRackId, shelf: 2 }).expect(200);
     const there = await history(riversideLead);
-    expect(there.readiness).toMatchObject({ rack: { id: riversideRackId, shelf: 2 }, abradeRequired: false, denibbedAt: '2027-04-05T11:00:00.000Z', nextStep: 'Coat at 40 µm dry' });
+    expect(there.readiness).toMatchObject({ rack: { id: riversideRackId, shelf: 2 }, abradeRequired: false, denibbedAt: '2027-04-05T11:00:00.000Z', nextStep: 'Coat 2 of 3 at 40 µm dry', nextStepKind: 'coat', nextStepDryFilmUm: 40 });
     expect(there.entries).toEqual([]);
     expect((await riversideLead.agent.get('/api/ready').expect(200)).body.items.map((p: { id: number }) => p.id)).toContain(doorId);
 

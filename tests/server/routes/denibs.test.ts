@@ -44,14 +44,14 @@ describe('POST /api/denibs', () => {
   it('clears "denib needed" on the parts it names, and only on those', async () => {
     await coat([doorA, doorB], primerId, '2027-03-01T09:15:00Z').expect(201);
     at('2027-03-01T09:30:00Z');
-    expect(await ready(doorA)).toMatchObject({ abradeRequired: true, nextStep: 'Abrade P320', denibbedAt: null });
+    expect(await ready(doorA)).toMatchObject({ abradeRequired: true, nextStep: 'Denib P320', nextStepKind: 'denib', nextStepGrit: 'P320', denibbedAt: null });
 
     at('2027-03-01T11:05:00Z');
     const res = await post(sprayer, '/api/denibs', { spraySessionId: sessionId, partIds: [doorA], grit: 'P320', abradedAt: '2027-03-01T11:00:00Z', notes: 'Faces and edges' }).expect(201);
     expect(res.body.denib).toMatchObject({ spraySessionId: sessionId, partIds: [doorA], grit: 'P320', abradedAt: '2027-03-01T11:00:00.000Z', notes: 'Faces and edges', recordedByName: 'Mina Castell', recordedAt: '2027-03-01T11:05:00.000Z' });
     // The primer's 20 °C row: recoat opens 120 min after 09:15. After the denib no closing time applies.
-    expect(await ready(doorA)).toMatchObject({ abradeRequired: false, nextStep: 'Coat at 40 µm dry', nextWindowOpensAt: '2027-03-01T11:15:00.000Z', nextWindowClosesAt: null, denibbedAt: '2027-03-01T11:00:00.000Z' });
-    expect(await ready(doorB)).toMatchObject({ abradeRequired: true, nextStep: 'Abrade P320' });
+    expect(await ready(doorA)).toMatchObject({ abradeRequired: false, nextStep: 'Coat 2 of 3 at 40 µm dry', nextStepKind: 'coat', nextStepDryFilmUm: 40, nextWindowOpensAt: '2027-03-01T11:15:00.000Z', nextWindowClosesAt: null, denibbedAt: '2027-03-01T11:00:00.000Z' });
+    expect(await ready(doorB)).toMatchObject({ abradeRequired: true, nextStep: 'Denib P320', nextStepKind: 'denib', nextStepGrit: 'P320' });
   });
 
   it('re-opens a missed recoat window: the next coat carries no "window missed" stop', async () => {
@@ -59,9 +59,9 @@ describe('POST /api/denibs', () => {
     await coat([doorA, doorB], topcoatId, '2027-03-01T11:20:00Z', 2).expect(201);
     // Four days on, the topcoat's window (about 56 h at 20 °C, between its 15 °C and 23 °C rows) has closed.
     at('2027-03-05T11:00:00Z');
-    expect(await ready(doorA)).toMatchObject({ abradeRequired: true, nextStep: 'Abrade P320', nextWindowOpensAt: null });
+    expect(await ready(doorA)).toMatchObject({ abradeRequired: true, nextStep: 'Denib P320', nextStepKind: 'denib', nextStepGrit: 'P320', nextWindowOpensAt: null });
     await post(lead, '/api/denibs', { spraySessionId: sessionId, partIds: [doorA], grit: 'P400', abradedAt: '2027-03-05T10:50:00Z' }).expect(201);
-    expect(await ready(doorA)).toMatchObject({ abradeRequired: false, nextStep: 'Coat at 40 µm dry', nextWindowClosesAt: null });
+    expect(await ready(doorA)).toMatchObject({ abradeRequired: false, nextStep: 'Coat 3 of 3 at 40 µm dry', nextStepKind: 'coat', nextStepDryFilmUm: 40, nextWindowClosesAt: null });
     const last = await coat([doorA], topcoatId, '2027-03-05T11:00:00Z', 3).expect(201);
     expect(last.body.coat.warnings.map((w: { code: string }) => w.code)).not.toContain('recoat-window-missed');
     // Door B had no scuff after its window closed: the same coat on it is a stop.

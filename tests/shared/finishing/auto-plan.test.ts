@@ -58,6 +58,15 @@ describe('autoPlan', () => {
     expect(plan.jobs[0]).toMatchObject({ dueDateMet: true, finishesAt: at('2027-01-04T20:50:00Z') });
   });
 
+  it('numbers each planned coat among the coat steps and names the denib due before it', () => {
+    const fine: PlanStep = { position: 1, kind: 'abrade', grit: 'P400' };
+    const sessions = autoPlan(input({ jobs: [job({ steps: [primer, fine, topcoat] })] })).sessions;
+    expect(sessions.map((s) => [s.coatNumber, s.coatsTotal, s.denibBeforeGrit])).toEqual([
+      [1, 2, null],
+      [2, 2, 'P400'],
+    ]);
+  });
+
   it('works around booked time and opening hours', () => {
     const plan = autoPlan(input({ now: at('2027-01-08T16:00:00Z'), busy: [] }));
     // Friday 16:00 + 65 min runs past 17:00, so the first coat goes on Monday 11 January at 07:00.
@@ -135,6 +144,7 @@ describe('autoPlan, starting from what is on record and booked', () => {
     const plan = autoPlan(input({ jobs: [job({ steps: [primer, topcoat], parts: [part(1, [missed]), part(2, [missed])] })] }));
     // The first free slot (08:00) is after the 07:00 close, so the 30 min denib comes first: 08:30.
     expect(slots(plan)).toEqual([[2, '2027-01-04T08:30:00.000Z', '2027-01-04T09:35:00.000Z']]);
+    expect(plan.sessions[0]).toMatchObject({ coatNumber: 2, coatsTotal: 2, denibBeforeGrit: 'P320' });
     expect(plan.jobs[0].notes[0]).toMatch(/^Coat 2 of 2 \(Topcoat\): no booth time before the recoat window closes \(Mon 4 Jan, 07:00\); the plan adds a denib with P320 first/);
   });
 

@@ -1,5 +1,6 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import { formatShopDateTime } from '../../../lib/shop-time';
+import { coatPlaceWords } from '../../../../shared/words';
 import { warningWords } from './coat-log-format';
 
 type Cell = string | number | null;
@@ -23,12 +24,14 @@ const columns: [string, (coat: Coat, timeZone: string) => Cell][] = [
   ['Sprayed (shop time)', (c, tz) => formatShopDateTime(c.sprayedAt, tz)],
   ['Sprayed (ISO)', (c) => c.sprayedAt],
   ['Spray session', (c) => c.spraySessionId],
+  ['Job', (c) => c.jobReference],
   ['Parts', (c) => c.partIds.length],
+  ['Part labels', (c) => c.partLabels.join(' | ')],
   ['Part ids', (c) => c.partIds.join(' ')],
   ['Product', (c) => c.productName],
   ['Lot id', (c) => c.lotId],
   ['Mix id', (c) => c.mixId],
-  ['Step', (c) => (c.stepPosition === null ? null : c.stepPosition + 1)],
+  ['Coat of finish system', (c) => coatPlaceWords(c)],
   ['Thinning %', (c) => c.thinningPct],
   ['Wet film µm', (c) => c.wetFilmUm],
   ['Dry film µm', (c) => c.dryFilmUm],

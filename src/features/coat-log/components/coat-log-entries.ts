@@ -1,6 +1,6 @@
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { Denib } from '../../../../shared/schemas/denib';
-import { denibWords, partsWords, upperFirst } from '../../../../shared/words';
+import { denibWords, partsWords, shopMomentWords, upperFirst, type ShopFormat } from '../../../../shared/words';
 
 type LogEntry = { kind: 'coat'; at: string; coat: Coat } | { kind: 'denib'; at: string; denib: Denib };
 
@@ -12,3 +12,6 @@ export function logEntries(coats: Coat[], denibs: Denib[]): LogEntry[] {
 }
 
 export const denibEntryWords = (denib: Denib) => `${upperFirst(denibWords(denib.grit))} · ${partsWords(denib.partIds.length)}`;
+
+/** A denib row as people name it: "Denib with P320, 2 parts, Tue 3 Mar, 10:40". */
+export const denibRowWords = (denib: Denib, shop: ShopFormat) => `${upperFirst(denibWords(denib.grit))}, ${partsWords(denib.partIds.length)}, ${shopMomentWords(new Date(denib.abradedAt), shop)}`;

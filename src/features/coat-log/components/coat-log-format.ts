@@ -2,7 +2,7 @@ import { TZDate } from '@date-fns/tz';
 import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { formatQuantity } from '../../../../shared/units';
-import { shopMomentWords, type ShopFormat } from '../../../../shared/words';
+import { coatPlaceWords, partLabelsWords, shopMomentWords, type ShopFormat } from '../../../../shared/words';
 
 /** The instant a shop day (YYYY-MM-DD) starts, on the shop's clock; `plusDays` 1 gives the end of that day. */
 export function shopDayStart(date: string, timeZone: string, plusDays = 0): string | undefined {
@@ -11,9 +11,15 @@ export function shopDayStart(date: string, timeZone: string, plusDays = 0): stri
   return new TZDate(Number(match[1]), Number(match[2]) - 1, Number(match[3]) + plusDays, timeZone).toISOString();
 }
 
-export const partsWords = (coat: Coat) => (coat.partIds.length === 1 ? '1 part' : `${coat.partIds.length} parts`);
+/** A coat log row as people name it: "Door 1 and Door 2, LJ-26-105, coat 1 of 3, Tue 3 Mar, 09:15". */
+export function coatRowWords(coat: Coat, shop: ShopFormat): string {
+  const job = coat.jobReference ?? 'no job';
+  const which = coatPlaceWords(coat);
+  return `${partLabelsWords(coat.partLabels)}, ${job}, ${which.charAt(0).toLowerCase()}${which.slice(1)}, ${shopMomentWords(new Date(coat.sprayedAt), shop)}`;
+}
 
-export const stepWords = (coat: Coat) => (coat.stepPosition === null ? '—' : `Step ${coat.stepPosition + 1}`);
+/** A replaced version names the version that corrects it (always the next one). */
+export const correctedByWords = (coat: Coat) => `Corrected by v${coat.version + 1}`;
 
 export function filmWords(coat: Coat, units: UnitSystem): string {
   const film = (um: number | null) => (um === null ? '—' : formatQuantity(um, 'filmThickness', units));

@@ -96,7 +96,7 @@ export function CoatLogPage({ filters, page, onChange, canCorrect, units, timeZo
           <Pagination page={page} pageSize={pageSize} total={coats.data.total} noun={filters.history ? 'coat versions' : 'coats'} onPage={(next) => onChange(filters, next)} />
         </>
       )}
-      <Dialog open={correcting !== null} onClose={() => setCorrecting(null)} wide title={`Correct coat ${correcting?.id ?? ''}`} description="Change what was recorded wrongly. Figures are entered in metric units, as they are stored.">
+      <Dialog open={correcting !== null} onClose={() => setCorrecting(null)} wide title={correcting ? `Correct ${coatNameWords(correcting, shop)}` : 'Correct a coat'} description="Change what was recorded wrongly. Figures are entered in metric units, as they are stored.">
         {correcting && <CorrectionForm coat={correcting} onDone={() => setCorrecting(null)} />}
       </Dialog>
       <Dialog open={photoFor !== null} onClose={() => setPhotoFor(null)} title={photoFor ? `Add a photo to ${coatNameWords(photoFor, shop)}` : 'Add a photo'} description="A defect, a sample board or the finish as sprayed. The photo is kept as its own record; the coat is not changed.">

@@ -10,14 +10,16 @@ interface CoatPhotosProps {
   onOpen: (photo: CoatPhoto, coat: Coat) => void;
   /** Left out for someone who may not add photos. */
   onAdd?: (coat: Coat) => void;
+  /** In a table row: no space above, a narrower button. */
+  compact?: boolean;
 }
 
 /** Thumbnails of a coat's photos (and those of the versions it corrects); each opens full size. */
-export function CoatPhotos({ coat, photos, onOpen, onAdd }: CoatPhotosProps) {
+export function CoatPhotos({ coat, photos, onOpen, onAdd, compact = false }: CoatPhotosProps) {
   const name = coatNameWords(coat, useShopFormat());
   if (photos.length === 0 && !onAdd) return null;
   return (
-    <div className="mt-2">
+    <div className={compact ? '' : 'mt-2'}>
       {photos.length > 0 && (
         <ul aria-label={`Photos of ${name}`} className="flex flex-wrap gap-2">
           {photos.map((photo) => (
@@ -35,7 +37,7 @@ export function CoatPhotos({ coat, photos, onOpen, onAdd }: CoatPhotosProps) {
         </ul>
       )}
       {onAdd && (
-        <Button variant="quiet" className="mt-1" onClick={() => onAdd(coat)} aria-label={`Add a photo to ${name}`}>
+        <Button variant="quiet" className={compact ? 'px-2!' : 'mt-1'} onClick={() => onAdd(coat)} aria-label={`Add a photo to ${name}`}>
           Add photo
         </Button>
       )}

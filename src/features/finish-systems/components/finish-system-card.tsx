@@ -2,6 +2,7 @@ import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { FinishSystem } from '../../../../shared/schemas/finish-system';
 import { Button } from '../../../components/ui/button';
 import { formatQuantity } from '../../../lib/units-display';
+import { coatAtStepWords, terms, upperFirst } from '../../../../shared/words';
 import { SystemTotals } from './system-totals';
 import type { ProductsById } from './system-maths';
 
@@ -22,11 +23,11 @@ function StepList({ system, units }: { system: FinishSystem; units: UnitSystem }
           <span className="inline-flex h-7 w-7 shrink-0 items-center justify-center rounded-full bg-maple-200 text-sm font-semibold">{index + 1}</span>
           {step.kind === 'coat' ? (
             <span>
-              <span className="font-semibold">Coat:</span> {step.productName}, {formatQuantity('filmThickness', step.dryFilmUm, units)} dry
+              <span className="font-semibold">{upperFirst(coatAtStepWords(system.steps, step.position) ?? terms.coat)}:</span> {step.productName}, {formatQuantity('filmThickness', step.dryFilmUm, units)} dry
             </span>
           ) : (
             <span>
-              <span className="font-semibold">Abrade:</span> denib with {step.grit}
+              <span className="font-semibold">{upperFirst(terms.denib)}</span> with {step.grit}
             </span>
           )}
         </li>

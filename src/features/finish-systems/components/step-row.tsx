@@ -10,6 +10,8 @@ export type FinishSystemFormInput = z.input<typeof createFinishSystemSchema>;
 interface StepRowProps {
   index: number;
   kind: 'coat' | 'abrade';
+  /** What the step is, in words: "Step 3: coat 2 of 3", "Step 2: denib". */
+  heading: string;
   count: number;
   fieldId: string;
   products: Product[];
@@ -54,14 +56,12 @@ function AbradeFields({ index }: { index: number }) {
 }
 
 /** One step of the system; Up and Down move it by keyboard, the grip moves it by dragging. */
-export function StepRow({ index, kind, count, fieldId, products, onMove, onRemove }: StepRowProps) {
+export function StepRow({ index, kind, heading, count, fieldId, products, onMove, onRemove }: StepRowProps) {
   const n = index + 1;
   return (
     <div className="min-w-0 flex-1 space-y-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <p className="font-semibold">
-          Step {n}: {kind === 'coat' ? 'coat' : 'abrade (denib)'}
-        </p>
+        <p className="font-semibold">{heading}</p>
         <div className="flex flex-wrap gap-2">
           <Button id={`${fieldId}-up`} variant="secondary" disabled={index === 0} onClick={() => onMove(index, index - 1)} aria-label={`Move step ${n} up`}>
             Up

@@ -2,12 +2,19 @@ import { useEffect, useRef, useState, type DragEvent } from 'react';
 import { useFieldArray, useFormContext } from 'react-hook-form';
 import type { Product } from '../../../../shared/schemas/product';
 import { Button } from '../../../components/ui/button';
+import { coatAtStepWords, terms } from '../../../../shared/words';
 import { StepRow, type FinishSystemFormInput } from './step-row';
 
 const maxSteps = 30;
 // A coat starts with no product chosen (0 shows "Choose a product…"); the schema asks for one on save.
 const newCoat = { kind: 'coat' as const, productId: 0, dryFilmUm: undefined as unknown as number };
 const newAbrade = { kind: 'abrade' as const, grit: 'P320' };
+
+/** "Step 3: coat 2 of 3" or "Step 2: denib": the stored kind 'abrade' is a denib in the shop's words. */
+function stepHeading(steps: { kind: 'coat' | 'abrade' }[], index: number): string {
+  const which = coatAtStepWords(steps.map((step, position) => ({ position, kind: step.kind })), index);
+  return `Step ${index + 1}: ${which ?? terms.denib}`;
+}
 
 /** Drag state: which step is being dragged and where it would land. Dragging starts only from the grip. */
 function useStepDrag(move: (from: number, to: number) => void) {
@@ -88,7 +95,7 @@ export function StepsEditor({ products }: { products: Product[] }) {
             >
               ⠿
             </span>
-            <StepRow index={index} kind={field.kind} count={fields.length} fieldId={field.id} products={products} onMove={moveStep} onRemove={remove} />
+            <StepRow index={index} kind={field.kind} heading={stepHeading(fields, index)} count={fields.length} fieldId={field.id} products={products} onMove={moveStep} onRemove={remove} />
           </li>
         ))}
       </ol>
@@ -99,7 +106,7 @@ export function StepsEditor({ products }: { products: Product[] }) {
           Add coat
         </Button>
         <Button variant="secondary" onClick={() => append(newAbrade)} disabled={fields.length >= maxSteps}>
-          Add abrade step
+          Add denib step
         </Button>
       </div>
       <p aria-live="polite" className="sr-only">

@@ -1,4 +1,6 @@
+import { missedWindowScuffGrit } from '../../../../shared/finishing/readiness';
 import type { SystemStepTime } from '../../../../shared/finishing/system-time';
+import { denibWords, upperFirst } from '../../../../shared/words';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import { litresToUsGallons, squareFeetToSquareMetres } from '../../../../shared/units';
 import { dryingMethodWords, formatMinutes } from '../../../lib/durations';
@@ -19,8 +21,9 @@ function materialWords(litresPerM2: number, units: UnitSystem): string {
 
 function stepWords(step: SystemStepTime, draft: StepDraft, products: ProductsById): string {
   if (draft.kind === 'abrade') {
-    if (step.waitsFor === 'not-counted') return `Abrade ${draft.grit ?? ''}: outside first coat to packed, not counted`;
-    return `Abrade ${draft.grit ?? ''}: ${formatMinutes(step.minutes)} allowed for the denib (common practice, not from a data sheet)`;
+    const denib = upperFirst(denibWords(draft.grit ?? missedWindowScuffGrit));
+    if (step.waitsFor === 'not-counted') return `${denib}: outside first coat to packed, not counted`;
+    return `${denib}: ${formatMinutes(step.minutes)} allowed (common practice, not from a data sheet)`;
   }
   const name = products.get(draft.productId ?? 0)?.name ?? 'Coat';
   const what = step.waitsFor === 'pack' ? 'last coat, until it can be packed' : 'until the next coat may go on';

@@ -32,7 +32,7 @@ export function partNowLines(history: PartHistory, now: Date, timeZone: string, 
   }
   const nextStep = history.steps.filter((step) => step.kind === 'coat')[r.coatsDone];
   const next = `${coatOfWords(r.coatsDone + 1, r.coatsTotal)}${nextStep?.kind === 'coat' ? ` (${nextStep.productName})` : ''}`;
-  const grit = /^Abrade (.+)$/.exec(r.nextStep ?? '')?.[1];
+  const grit = r.nextStepKind === 'denib' ? r.nextStepGrit : null;
   const headline = r.abradeRequired ? `Next: ${grit ? denibWords(grit) : 'denib'}, then ${next}` : `Next: ${next}`;
   const temp = formatQuantity(history.dryingTempC, 'temperature', units);
   const estimate = r.expectedHandleAt && r.expectedPackAt

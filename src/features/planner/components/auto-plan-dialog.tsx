@@ -8,6 +8,8 @@ import { errorMessage } from '../../../lib/error-messages';
 import { useAcceptPlan } from '../../../api/planner/accept-plan';
 import { usePlannableJobs } from '../api/get-plannable-jobs';
 import { useProposePlan } from '../../../api/planner/propose-plan';
+import { calendarDateWords } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 import { AutoPlanProposal } from './auto-plan-proposal';
 
 interface AutoPlanDialogProps {
@@ -22,6 +24,7 @@ interface AutoPlanDialogProps {
 /** Choose jobs, see where their remaining coats would go, and book them all at once. */
 export function AutoPlanDialog({ open, onClose, timeZone, boothNames, siteId }: AutoPlanDialogProps) {
   const jobs = usePlannableJobs(open);
+  const { locale } = useShopFormat();
   const [chosen, setChosen] = useState<number[]>([]);
   const [plan, setPlan] = useState<Plan | null>(null);
   const propose = useProposePlan(siteId);
@@ -56,7 +59,7 @@ export function AutoPlanDialog({ open, onClose, timeZone, boothNames, siteId }: 
               <label key={job.id} className="flex min-h-touch items-center gap-2 rounded border border-maple-200 bg-white px-3">
                 <input type="checkbox" checked={chosen.includes(job.id)} onChange={() => toggle(job.id)} className="size-5 shrink-0" />
                 <span>
-                  <strong>{job.reference}</strong> {job.customer} <span className="text-sm text-maple-600">due {job.dueDate}</span>
+                  <strong>{job.reference}</strong> {job.customer} <span className="text-sm text-maple-600">due {calendarDateWords(job.dueDate, locale)}</span>
                 </span>
               </label>
             ))}

@@ -1,5 +1,6 @@
-import type { Plan } from '../../../../shared/schemas/planner';
-import { calendarDateIn, wallClockIn } from '../../../../shared/time';
+import type { Plan, PlannedSession } from '../../../../shared/schemas/planner';
+import { calendarDateWords, coatOfWords, denibWords, partsWords, shopMomentWords, shopSpanWords, upperFirst, type ShopFormat } from '../../../../shared/words';
+import { useShopFormat } from '../../../api/settings/use-shop-format';
 
 interface AutoPlanProposalProps {
   plan: Plan;
@@ -7,12 +8,23 @@ interface AutoPlanProposalProps {
   boothNames: Map<number, string>;
 }
 
-const when = (start: string, end: string, timeZone: string) =>
-  `${calendarDateIn(new Date(start), timeZone)} ${wallClockIn(new Date(start), timeZone).time}–${wallClockIn(new Date(end), timeZone).time}`;
+/** "Coat 2 of 3: Kestrel 2K PU Topcoat Satin", with the denib due before it on a line of its own. */
+function CoatCell({ session }: { session: PlannedSession }) {
+  return (
+    <>
+      <span className="font-semibold">{session.coatsTotal > 0 ? upperFirst(coatOfWords(session.coatNumber, session.coatsTotal)) : 'Coat'}</span>: {session.productName}
+      {session.denibBeforeGrit && <span className="block text-maple-700">After a {denibWords(session.denibBeforeGrit)}</span>}
+    </>
+  );
+}
+
+const dueWords = (job: Plan['jobs'][number], shop: ShopFormat) =>
+  `due ${calendarDateWords(job.dueDate, shop.locale)}${job.finishesAt ? `, ready to pack ${shopMomentWords(new Date(job.finishesAt), shop)}` : ''}`;
 
 /** The proposed sessions, and for each job whether its due date is met and why not. */
 export function AutoPlanProposal({ plan, timeZone, boothNames }: AutoPlanProposalProps) {
   const reference = new Map(plan.jobs.map((j) => [j.jobId, j.reference]));
+  const shop = { ...useShopFormat(), timeZone };
   return (
     <div className="space-y-4">
       <ul className="space-y-2" aria-label="Jobs in the proposal">
@@ -20,11 +32,7 @@ export function AutoPlanProposal({ plan, timeZone, boothNames }: AutoPlanProposa
           <li key={job.jobId} className="rounded-panel border border-maple-200 bg-white p-3">
             <p className="font-semibold">
               {job.reference}: {job.dueDateMet ? 'due date met' : 'due date NOT met'}
-              <span className="font-normal text-maple-700">
-                {' '}
-                (due {job.dueDate}
-                {job.finishesAt ? `, ready to pack ${calendarDateIn(new Date(job.finishesAt), timeZone)} ${wallClockIn(new Date(job.finishesAt), timeZone).time}` : ''})
-              </span>
+              <span className="font-normal text-maple-700"> ({dueWords(job, shop)})</span>
             </p>
             {job.notes.map((note) => (
               <p key={note} className="text-sm text-verdict-caution">
@@ -54,12 +62,12 @@ export function AutoPlanProposal({ plan, timeZone, boothNames }: AutoPlanProposa
                 <tr key={`${s.jobId}-${s.stepPosition}`} className="border-b border-maple-200">
                   <td className="p-2">{reference.get(s.jobId)}</td>
                   <td className="p-2">
-                    Step {s.stepPosition + 1}: {s.productName}
+                    <CoatCell session={s} />
                   </td>
-                  <td className="p-2">{boothNames.get(s.boothId) ?? `Booth ${s.boothId}`}</td>
-                  <td className="p-2">{when(s.start, s.end, timeZone)}</td>
+                  <td className="p-2">{boothNames.get(s.boothId) ?? '—'}</td>
+                  <td className="p-2">{shopSpanWords(new Date(s.start), new Date(s.end), shop)}</td>
                   <td className="p-2">
-                    {s.partIds.length} {s.partIds.length === 1 ? 'part' : 'parts'}, {s.areaM2.toFixed(1)} m²
+                    {partsWords(s.partIds.length)}, {s.areaM2.toLocaleString(shop.locale, { maximumFractionDigits: 1, minimumFractionDigits: 1 })} m²
                   </td>
                 </tr>
               ))}

@@ -1,3 +1,4 @@
+import { ProductDurationField } from './product-duration-field';
 import { ProductNumberField } from './product-number-field';
 import { ProductSection } from './product-section';
 
@@ -8,8 +9,8 @@ export function ProductMixFields() {
       <ProductNumberField name="mixHardenerParts" label="Hardener parts" />
       <ProductNumberField name="thinnerMinPct" label="Thinner, least" unit="%" hint="Leave both thinner boxes empty if the data sheet gives no range; thinning is then not checked." optional />
       <ProductNumberField name="thinnerMaxPct" label="Thinner, most" unit="%" hint="0 to 0 means the data sheet says do not thin." optional />
-      <ProductNumberField name="inductionMin" label="Induction time" unit="min" hint="Stand time after mixing, before spraying." />
-      <ProductNumberField name="potLifeMin" label="Pot life" unit="min" hint="Empty if the product has none (one-component)." optional />
+      <ProductDurationField name="inductionMin" label="Induction time" hint="Stand time after mixing, before spraying." />
+      <ProductDurationField name="potLifeMin" label="Pot life" hint="Empty if the product has none (one-component)." optional />
     </ProductSection>
   );
 }

@@ -11,9 +11,9 @@ export function coatWords(part: BoardPart): string {
   return `${part.coatsDone} of ${part.coatsTotal} coats on`;
 }
 
-/** The server names an abrade step "Abrade P320"; in the shop between coats that is a denib. */
-function denibNeeded(nextStep: string | null): string {
-  return denibNeededWords(/^Abrade (.+)$/.exec(nextStep ?? '')?.[1] ?? missedWindowScuffGrit);
+/** "Denib with P320 needed": the grit of the denib step next, or the scuff grit after a missed window. */
+function denibNeeded(part: BoardPart): string {
+  return denibNeededWords((part.nextStepKind === 'denib' ? part.nextStepGrit : null) ?? missedWindowScuffGrit);
 }
 
 const ahead = (iso: string | null, now: Date): iso is string => iso !== null && Date.parse(iso) > now.getTime();
@@ -32,7 +32,7 @@ const nextCoat = (part: BoardPart) => coatOfWords(Math.min(part.coatsDone + 1, p
 
 /** What a part between coats needs next, as its headline: never a handle time while coats remain. */
 function nextWords(part: BoardPart): string {
-  if (part.windowMissed || part.abradeRequired) return `${part.windowMissed ? denibNeededWords(missedWindowScuffGrit) : denibNeeded(part.nextStep)}, then ${nextCoat(part)}`;
+  if (part.windowMissed || part.abradeRequired) return `${part.windowMissed ? denibNeededWords(missedWindowScuffGrit) : denibNeeded(part)}, then ${nextCoat(part)}`;
   return `${upperFirst(nextCoat(part))} next`;
 }
 
@@ -72,7 +72,7 @@ export function partLines(part: BoardPart, now: Date, timeZone: string): { headl
   switch (part.shownState) {
     case 'waiting':
       if (part.coatsTotal === 0) return { headline: 'Not sprayed yet', details: [] };
-      return { headline: 'Not sprayed yet', details: present([part.abradeRequired ? `First: ${denibNeeded(part.nextStep).toLowerCase()}` : `First: ${nextCoat(part)}`, expectedLine(part, now, timeZone)]) };
+      return { headline: 'Not sprayed yet', details: present([part.abradeRequired ? `First: ${denibNeeded(part).toLowerCase()}` : `First: ${nextCoat(part)}`, expectedLine(part, now, timeZone)]) };
     case 'in-finish':
       return { headline: nextWords(part), details: present([...windowLines(part, now, timeZone), movableLine(part, now, timeZone), expectedLine(part, now, timeZone)]) };
     case 'drying':

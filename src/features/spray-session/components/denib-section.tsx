@@ -7,7 +7,7 @@ import { fromPart, type PickedPart } from '../utils/picked-part';
 import { DenibForm } from './denib-form';
 import { denibNeededWords } from '../../../../shared/words';
 
-const gritOf = (part: ReadyPart | undefined) => /^Abrade (P\d+)$/.exec(part?.nextStep ?? '')?.[1] ?? missedWindowScuffGrit;
+const gritOf = (part: ReadyPart | undefined) => part?.nextStepGrit ?? missedWindowScuffGrit;
 
 function progress(part: ReadyPart | undefined): string | undefined {
   if (!part) return undefined;

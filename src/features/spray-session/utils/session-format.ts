@@ -48,13 +48,12 @@ export function remainingMinutesWords(ms: number): string {
 
 /**
  * In the booth's words, as the denib section and the ready board say it: "denib with P320, then
- * coat 2 of 3", or "coat 2 of 3 (40 µm dry)". The server names the step ("Abrade P320", "Coat at 40 µm dry").
+ * coat 2 of 3", or "coat 2 of 3 (40 µm dry)", from the server's structured next step.
  */
-export function nextStepWords(part: Pick<ReadyPart, 'nextStep' | 'abradeRequired' | 'coatsDone' | 'coatsTotal'>): string {
+export function nextStepWords(part: Pick<ReadyPart, 'nextStepKind' | 'nextStepGrit' | 'nextStepDryFilmUm' | 'abradeRequired' | 'coatsDone' | 'coatsTotal'>): string {
   const coat = coatOfWords(Math.min(part.coatsDone + 1, part.coatsTotal), part.coatsTotal);
-  const grit = /^Abrade (.+)$/.exec(part.nextStep ?? '')?.[1];
-  if (grit) return `${denibWords(grit)}, then ${coat}`;
-  const film = /^Coat at (.+)$/.exec(part.nextStep ?? '')?.[1];
+  if (part.nextStepKind === 'denib') return `${denibWords(part.nextStepGrit ?? missedWindowScuffGrit)}, then ${coat}`;
+  const film = part.nextStepKind === 'coat' && part.nextStepDryFilmUm !== null ? `${part.nextStepDryFilmUm} µm dry` : null;
   const words = film ? `${coat} (${film})` : coat;
   return part.abradeRequired ? `${denibWords(missedWindowScuffGrit)} first (the window was missed), then ${words}` : words;
 }

@@ -21,6 +21,9 @@ function part(fields: Partial<ReadyPart>): ReadyPart {
     coatsDone: 3,
     coatsTotal: 3,
     nextStep: null,
+    nextStepKind: null,
+    nextStepGrit: null,
+    nextStepDryFilmUm: null,
     nextWindowOpensAt: null,
     nextWindowClosesAt: null,
     abradeRequired: false,
@@ -74,7 +77,9 @@ describe('partLines', () => {
       state: 'in-finish',
       coatsDone: 1,
       coatsRemaining: 2,
-      nextStep: 'Abrade P320',
+      nextStep: 'Denib P400',
+      nextStepKind: 'denib',
+      nextStepGrit: 'P400',
       abradeRequired: true,
       nextWindowOpensAt: '2026-12-02T11:00:00Z',
       nextWindowClosesAt: '2026-12-02T20:00:00Z',
@@ -84,7 +89,7 @@ describe('partLines', () => {
     const now = at('2026-12-02T10:30:00Z');
     const lines = partLines(toBoardPart(between, now), now, zone);
     expect(lines).toEqual({
-      headline: 'Denib with P320 needed, then coat 2 of 3',
+      headline: 'Denib with P400 needed, then coat 2 of 3',
       details: ['Window opens 11:00 (in 30 min)', 'Can be moved between racks from 12:00', 'Ready to handle from about tomorrow 09:15 (estimate, 2 coats to go)'],
     });
     expect([lines.headline, ...lines.details].join(' ')).not.toMatch(/Handle in/);
@@ -92,7 +97,7 @@ describe('partLines', () => {
     expect(partLines(toBoardPart(between, late), late, zone)).toMatchObject({ headline: 'Denib with P320 needed, then coat 2 of 3', details: expect.arrayContaining(['Recoat window closed at 20:00']) });
   });
   it('names the next coat once the denib is on record, with a window that no longer closes', () => {
-    const denibbed = part({ state: 'in-finish', coatsDone: 1, coatsRemaining: 2, nextStep: 'Coat at 40 µm dry', nextWindowOpensAt: '2026-12-02T11:00:00Z', denibbedAt: '2026-12-02T11:05:00Z', handleAt: null, expectedHandleAt: null });
+    const denibbed = part({ state: 'in-finish', coatsDone: 1, coatsRemaining: 2, nextStep: 'Coat 2 of 3 at 40 µm dry', nextStepKind: 'coat', nextStepDryFilmUm: 40, nextWindowOpensAt: '2026-12-02T11:00:00Z', denibbedAt: '2026-12-02T11:05:00Z', handleAt: null, expectedHandleAt: null });
     const now = at('2026-12-02T11:10:00Z');
     expect(partLines(toBoardPart(denibbed, now), now, zone)).toEqual({ headline: 'Coat 2 of 3 next', details: ['Denibbed at 11:05', 'Window open, no closing time'] });
     expect(coatWords(toBoardPart(denibbed, now))).toBe('1 of 3 coats on');
