@@ -14,7 +14,7 @@ export async function tap(target: Locator) {
 export const box = (scope: Page | Locator, label: string) => scope.getByRole('textbox', { name: new RegExp(`^${label}`) });
 
 export const coatForm = (page: Page) => page.getByRole('region', { name: 'Record a coat' });
-export const coatCards = (page: Page) => page.getByRole('article', { name: /^Coat \d+$/ });
+export const coatCards = (page: Page) => page.getByRole('article', { name: /^Coat \d+ of \d+, / });
 
 /** The pre-spray checks for a water-borne coat: extraction, filters, mask, conditions; then spraying starts. */
 export async function runChecklist(page: Page) {

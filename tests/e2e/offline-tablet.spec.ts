@@ -91,7 +91,7 @@ test.describe('booth tablet offline', () => {
       await tablet.setOffline(false);
       await expect(banner(page)).toHaveCount(0);
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(0, { timeout: 20_000 });
-      await expect(page.getByRole('article', { name: /^Coat \d+$/ })).toHaveCount(2);
+      await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(2);
       const onServer = await coatsOnServer(api, sessionId);
       expect(onServer.total).toBe(2);
       const coated = onServer.items.map((coat) => coat.partIds.length);

@@ -114,7 +114,7 @@ test('a coat logged on the sprayer’s tablet shows on the lead’s open coat lo
   await expect(coatForm.getByRole('button', { name: `Remove ${stage.part.label}` })).toBeVisible();
   await coatForm.getByRole('textbox', { name: /^Wet film reading/ }).fill('140');
   await coatForm.getByRole('button', { name: 'Record coat' }).click();
-  await expect(page.getByRole('article', { name: /^Coat \d+$/ })).toHaveCount(1);
+  await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(1);
   const [coat] = (await stage.coatsOf()).items;
 
   // The lead's coat log and the assembler's board follow the change stream; neither reloads.

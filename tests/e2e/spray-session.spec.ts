@@ -110,9 +110,9 @@ test.describe('spray session', () => {
     await expect(coatForm.getByText(/Dry film\s*57 µm\s*against a target of 60 µm/)).toBeVisible();
     await expect(coatForm.getByText('On target')).toBeVisible();
     await coatForm.getByRole('button', { name: 'Record coat' }).click();
-    await expect(page.getByRole('article', { name: /^Coat \d+$/ })).toHaveCount(1);
+    await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(1);
     const [first] = (await api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`)).items;
-    const latest = page.getByRole('article', { name: `Coat ${first.id}` });
+    const latest = page.getByRole('article', { name: /^Coat 1 of 3, LJ-26-105, / });
     await expect(latest).toContainText('dry film 57 µm');
     await expect(latest.getByText('Handle from').locator('..')).toContainText(clock(first.handleAt));
     await expect(latest).toContainText(/Flash-off until \d{2}:\d{2}/);
@@ -139,7 +139,7 @@ test.describe('spray session', () => {
     await context.setOffline(false);
     await expect(page.getByRole('status').filter({ hasText: 'This tablet is offline.' })).toHaveCount(0);
     await expect(page.getByText('Pending — not yet on the server')).toBeHidden({ timeout: 20_000 });
-    await expect(page.getByRole('article', { name: /^Coat \d+$/ })).toHaveCount(2);
+    await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(2);
     const sent = await api.get<List<Coat>>(`/api/coats?spraySessionId=${sessionId}`);
     expect(sent.total).toBe(2);
     expect(sent.items[0].warnings).toContainEqual(expect.objectContaining({ code: 'recoat-too-soon', acknowledgedReason: 'Second pass on the edges while the first is wet' }));
@@ -285,7 +285,7 @@ test.describe('between coats', () => {
     await expect(page.getByText('Denib with P320 recorded on 2 parts.')).toBeVisible();
     await expect(denibs).toContainText('No planned part needs a denib right now.');
     await expect(coatForm.getByRole('note')).toHaveCount(0);
-    const denibCard = page.getByRole('article', { name: /^Denib \d+$/ });
+    const denibCard = page.getByRole('article', { name: /^Denib with P\d+, / });
     await expect(denibCard).toContainText('P320');
     await expect(denibCard).toContainText('by Mina Castell');
     await expect(denibCard).toContainText('Faces and edges, tack rag after');

@@ -2,6 +2,7 @@ import type { Coat } from '../../../../shared/schemas/coat';
 import type { UnitSystem } from '../../../../shared/schemas/common';
 import type { ReadyPart } from '../../../../shared/schemas/ready';
 import { formatQuantity } from '../../../../shared/units';
+import { coatPlaceWords } from '../../../../shared/words';
 import { useNow } from '../../../lib/use-now';
 import { nextStepWords, shopWhen } from '../utils/session-format';
 import { CoatTimes } from './coat-times';
@@ -35,12 +36,13 @@ export function CoatCard({ coat, partLabel, next, latest, units, timeZone }: Coa
   const temp = (c: number) => formatQuantity(c, 'temperature', units);
   const flashing = Date.parse(coat.flashOffEndsAt) > now.getTime();
   const parts = coat.partIds.map(partLabel);
+  const place = coatPlaceWords(coat);
+  const name = [place, coat.jobReference, shopWhen(coat.sprayedAt, timeZone, now)].filter(Boolean).join(', ');
   return (
-    <article aria-label={`Coat ${coat.id}`} className={`rounded-panel border-2 bg-white p-4 ${latest ? 'border-lacquer-700' : 'border-maple-300'}`}>
+    <article aria-label={name} className={`rounded-panel border-2 bg-white p-4 ${latest ? 'border-lacquer-700' : 'border-maple-300'}`}>
       <h3 className="text-lg font-bold">
         {latest && <span className="mr-2 rounded-panel bg-lacquer-700 px-2 py-0.5 text-sm text-white">Latest</span>}
-        Coat {coat.id} · {shopWhen(coat.sprayedAt, timeZone, now)} · {coat.productName}
-        {coat.stepPosition !== null && ` · step ${coat.stepPosition + 1}`}
+        {place} · {shopWhen(coat.sprayedAt, timeZone, now)} · {coat.productName}
       </h3>
       <p className="text-maple-800">
         {parts.length === 1 ? parts[0] : `${parts.length} parts: ${parts.slice(0, 6).join(', ')}${parts.length > 6 ? '…' : ''}`} · by {coat.recordedByName}
@@ -52,7 +54,7 @@ export function CoatCard({ coat, partLabel, next, latest, units, timeZone }: Coa
         {flashing ? (
           <>
             <span>Flash-off until {shopWhen(coat.flashOffEndsAt, timeZone, now)}:</span>
-            <Countdown label={`Coat ${coat.id} flash-off`} until={coat.flashOffEndsAt} now={now} overText="over" />
+            <Countdown label={`${name} flash-off`} until={coat.flashOffEndsAt} now={now} overText="over" />
           </>
         ) : (
           <span>Flash-off over at {shopWhen(coat.flashOffEndsAt, timeZone, now)}</span>

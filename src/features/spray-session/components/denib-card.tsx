@@ -1,4 +1,5 @@
 import type { Denib } from '../../../../shared/schemas/denib';
+import { denibWords, partLabelsWords, upperFirst } from '../../../../shared/words';
 import { useNow } from '../../../lib/use-now';
 import { shopWhen } from '../utils/session-format';
 
@@ -6,11 +7,12 @@ import { shopWhen } from '../utils/session-format';
 export function DenibCard({ denib, partLabel, timeZone }: { denib: Denib; partLabel: (id: number) => string; timeZone: string }) {
   const now = useNow(60_000);
   const parts = denib.partIds.map(partLabel);
+  const when = shopWhen(denib.abradedAt, timeZone, now);
   return (
-    <article aria-label={`Denib ${denib.id}`} className="rounded-panel border-2 border-dashed border-maple-500 bg-maple-50 p-4">
+    <article aria-label={`${upperFirst(denibWords(denib.grit))}, ${partLabelsWords(parts)}, ${when}`} className="rounded-panel border-2 border-dashed border-maple-500 bg-maple-50 p-4">
       <h3 className="text-lg font-bold">
         <span className="mr-2 rounded-panel bg-maple-700 px-2 py-0.5 text-sm text-white">Denib</span>
-        {denib.grit} · {shopWhen(denib.abradedAt, timeZone, now)}
+        {denib.grit} · {when}
       </h3>
       <p className="text-maple-800">
         {parts.length === 1 ? parts[0] : `${parts.length} parts: ${parts.slice(0, 6).join(', ')}${parts.length > 6 ? '…' : ''}`} · by {denib.recordedByName}
