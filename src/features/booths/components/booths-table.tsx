@@ -39,7 +39,7 @@ export function BoothsTable({ booths, units, siteNames, onEdit }: BoothsTablePro
       column.accessor((booth) => boothKindLabels[booth.kind], { id: 'kind', header: 'Kind' }),
       column.accessor('volumeM3', { header: 'Volume', cell: (info) => <Nowrap>{formatQuantity('roomVolume', info.getValue(), units)}</Nowrap> }),
       column.accessor('extractionM3PerH', { header: 'Extraction', cell: (info) => <Nowrap>{formatQuantity('airflow', info.getValue(), units)}</Nowrap> }),
-      column.accessor('mixingFactorK', { header: 'K', cell: (info) => formatNumber(info.getValue()) }),
+      column.accessor('mixingFactorK', { header: () => <abbr title="Mixing factor: how evenly the booth's air mixes">Mixing K</abbr>, cell: (info) => formatNumber(info.getValue()) }),
       column.accessor('clearanceMin', {
         header: 'Clearance time',
         cell: ({ row }) => (
@@ -78,5 +78,13 @@ export function BoothsTable({ booths, units, siteNames, onEdit }: BoothsTablePro
     getSortedRowModel: getSortedRowModel(),
   });
 
-  return <DataTable table={table} caption="Booths" />;
+  return (
+    <>
+      <DataTable table={table} caption="Booths" />
+      <p className="mt-2 text-sm text-maple-800">
+        Mixing K says how evenly the booth's air mixes, from 1 (perfect mixing) to 10 (poor, with dead corners). The clearance time is K × volume ÷ extraction × ln 100: the time
+        for the vapour to fall to 1 % after spraying stops, unless a measured time is set.
+      </p>
+    </>
+  );
 }
