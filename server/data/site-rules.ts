@@ -18,9 +18,15 @@ export interface SiteRule<E> {
 
 const boothsOfSite = 'SELECT sb.id FROM booths sb WHERE sb.site_id = :scopeSiteId';
 const racksOfSite = 'SELECT sr.id FROM racks sr WHERE sr.site_id = :scopeSiteId';
-const spraySessionsOfSite = `SELECT ss.id FROM spray_sessions ss WHERE ss.booth_id IN (${boothsOfSite})`;
-const coatsOfSite = `SELECT sc.id FROM coats sc WHERE sc.spray_session_id IN (${spraySessionsOfSite})`;
-const denibsOfSite = `SELECT sd.id FROM denibs sd WHERE sd.spray_session_id IN (${spraySessionsOfSite})`;
+
+// Rows reached through a spray session are checked row by row (a correlated EXISTS on primary keys)
+// rather than against the list of the site's sessions or coats: with a million coats, SQLite would
+// otherwise build that whole list, or walk it, for a query about one coat. The inner aliases are
+// unlike any outer alias, since `a` is used inside the subquery.
+const sessionOnSite = (sessionId: string) =>
+  `EXISTS (SELECT 1 FROM spray_sessions scope_ss JOIN booths scope_sb ON scope_sb.id = scope_ss.booth_id WHERE scope_ss.id = ${sessionId} AND scope_sb.site_id = :scopeSiteId)`;
+const throughSession = (table: string, id: string) =>
+  `EXISTS (SELECT 1 FROM ${table} scope_row JOIN spray_sessions scope_ss ON scope_ss.id = scope_row.spray_session_id JOIN booths scope_sb ON scope_sb.id = scope_ss.booth_id WHERE scope_row.id = ${id} AND scope_sb.site_id = :scopeSiteId)`;
 
 /** The site of the row with this id, by one of the lookups below; none when there is no such row. */
 async function siteOf(manager: EntityManager, lookup: (id: string) => string, id: number | null | undefined): Promise<number[]> {
@@ -51,17 +57,17 @@ export const byBooth: SiteRule<{ boothId: number }> = {
 };
 
 export const bySpraySession: SiteRule<{ spraySessionId: number }> = {
-  where: (a) => `${a}.spray_session_id IN (${spraySessionsOfSite})`,
+  where: (a) => sessionOnSite(`${a}.spray_session_id`),
   sitesOf: (row, manager) => siteOf(manager, spraySessionSites, row.spraySessionId),
 };
 
 export const byCoat: SiteRule<{ coatId: number }> = {
-  where: (a) => `${a}.coat_id IN (${coatsOfSite})`,
+  where: (a) => throughSession('coats', `${a}.coat_id`),
   sitesOf: (row, manager) => siteOf(manager, coatSites, row.coatId),
 };
 
 export const byDenib: SiteRule<{ denibId: number }> = {
-  where: (a) => `${a}.denib_id IN (${denibsOfSite})`,
+  where: (a) => throughSession('denibs', `${a}.denib_id`),
   sitesOf: (row, manager) => siteOf(manager, denibSites, row.denibId),
 };
 
