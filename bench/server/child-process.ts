@@ -49,7 +49,9 @@ export const builtServer = path.join('dist-server', 'index.js');
 /** The built server (`npm run build`) under plain Node with the probe, as `npm run serve` runs it. */
 export function spawnBuiltServer(env: NodeJS.ProcessEnv): { child: ChildProcess; stderr: () => string } {
   if (!fs.existsSync(builtServer)) throw new Error(`${builtServer} is missing: run npm run build first`);
-  return withStderr(spawn(process.execPath, ['--max-old-space-size=256', '--import', probe, builtServer], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+  // BENCH_NODE_FLAGS adds flags Node refuses in NODE_OPTIONS, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof" to profile.
+  const extra = (process.env.BENCH_NODE_FLAGS ?? '').split(' ').filter(Boolean);
+  return withStderr(spawn(process.execPath, ['--max-old-space-size=256', ...extra, '--import', probe, builtServer], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
 }
 
 function withStderr(child: ChildProcess): { child: ChildProcess; stderr: () => string } {

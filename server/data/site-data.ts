@@ -28,6 +28,7 @@ import { FilterBankEntity } from '../db/entities/filter-bank.entity';
 import { FilterChangeEntity } from '../db/entities/filter-change.entity';
 import { FilterGaugeReadingEntity } from '../db/entities/filter-gauge-reading.entity';
 import { FireInspectionEntity } from '../db/entities/fire-inspection.entity';
+import { numberedPlaceholders } from '../db/fast-read';
 import { inTransaction } from '../db/transaction';
 import { everySite, type SiteScope } from '../lib/site-scope';
 import { ScopedRepository } from './scoped-repository';
@@ -39,6 +40,15 @@ export type Dialect = 'sqlite' | 'postgres';
 export interface RawSql {
   readonly dialect: Dialect;
   query<T = Record<string, unknown>>(text: string, params?: unknown[]): Promise<T[]>;
+  /** The same with `?` placeholders on either database (numbered for PostgreSQL). */
+  select<T = Record<string, unknown>>(text: string, params: unknown[]): Promise<T[]>;
+  /** "One of these ids" as a sub-select on ONE bound parameter (see `idList`), so the statement's text never changes with the list. */
+  readonly idList: string;
+}
+
+/** The parameter for `RawSql.idList`: a JSON array for SQLite's json_each, an int array for PostgreSQL. */
+export function idListParam(dialect: Dialect, ids: readonly number[]): unknown {
+  return dialect === 'postgres' ? [...ids] : JSON.stringify(ids);
 }
 
 /**
@@ -127,7 +137,12 @@ function build(dataSource: DataSource, manager: EntityManager, scope: SiteScope)
     fireInspections: repo(FireInspectionEntity, byBooth),
     crewRecords: repo(CrewRecordEntity, byUser),
     coatPhotos: repo(CoatPhotoEntity, byCoat),
-    sql: { dialect, query: (text, params) => manager.query(text, params) },
+    sql: {
+      dialect,
+      query: (text, params) => manager.query(text, params),
+      select: (text, params) => manager.query(dialect === 'postgres' ? numberedPlaceholders(text) : text, params),
+      idList: dialect === 'postgres' ? 'SELECT unnest(CAST(? AS int[]))' : 'SELECT value FROM json_each(?)',
+    },
     transaction: (work) => inTransaction(dataSource, (tx) => work(build(dataSource, tx, scope))),
     get acrossSites() {
       return build(dataSource, manager, everySite);

@@ -35,7 +35,12 @@ export class Gate {
     this.holder = owner;
     return () => {
       this.holder = null;
-      open();
+      // better-sqlite3 answers synchronously, so a queue of waiting requests would otherwise run
+      // one after another on microtasks alone, never letting the event loop read a new request or
+      // accept a connection: under load the server served only the connections it already had,
+      // and the event loop stalled for as long as the queue lasted. Handing over on the next
+      // turn of the loop lets waiting I/O in between holders.
+      setImmediate(open);
     };
   }
 }

@@ -1,7 +1,9 @@
-/** One cached answer: its JSON bytes and their strong ETag. */
+/** One cached answer: its JSON bytes and their strong ETag, and once asked for, the same gzipped. */
 export interface CachedAnswer {
   body: Buffer;
   etag: string;
+  /** Compressed once, off the event loop, the first time a client that accepts gzip asks. */
+  gzipped?: Promise<Buffer>;
 }
 
 /** Whose changes clear an entry: one site's (and group-wide ones), or a change on any site. */

@@ -1,4 +1,6 @@
 import { createHash } from 'node:crypto';
+import { promisify } from 'node:util';
+import { gzip } from 'node:zlib';
 import type { Request, Response } from 'express';
 import type { SiteScope } from '../lib/site-scope';
 import type { CachedAnswer, ClearedBy } from '../lib/response-cache';
@@ -26,15 +28,37 @@ export function toCachedAnswer(answer: unknown): CachedAnswer {
   return { body, etag: `"${createHash('sha1').update(body).digest('base64url')}"` };
 }
 
+// Below about one network packet compressing saves nothing worth the work.
+const gzipFromBytes = 1400;
+const gzipAsync = promisify(gzip);
+
+/** The gzipped bytes, made once per answer (in libuv's thread pool, so a big board never holds the event loop). */
+function gzippedOf(answer: CachedAnswer): Promise<Buffer> {
+  answer.gzipped ??= gzipAsync(answer.body, { level: 6 });
+  return answer.gzipped;
+}
+
 /**
- * Sends the answer with its ETag. Express answers 304 without the body when the request's
- * If-None-Match names it (req.fresh), whether or not the answer came from the cache.
+ * Sends the answer with its ETag, gzipped when it is big and the client accepts gzip (every
+ * browser does). The compressed bytes are kept with a cached answer, so a wall screen's board is
+ * compressed once per change, not once per request. Each encoding has its own strong ETag, as
+ * HTTP asks. Express answers 304 without the body when the request's If-None-Match names it
+ * (req.fresh), whether or not the answer came from the cache.
  */
-export function sendAnswer(res: Response, status: number, answer: CachedAnswer): void {
+export async function sendAnswer(req: Request, res: Response, status: number, answer: CachedAnswer): Promise<void> {
   // Browsers keep it but ask again each time, sending the ETag: a signed-in answer is never shared.
   res.setHeader('Cache-Control', 'private, no-cache');
-  res.setHeader('ETag', answer.etag);
-  res.status(status).type('json').send(answer.body);
+  res.setHeader('Vary', 'Accept-Encoding');
+  // With no Accept-Encoding at all the client is not assumed to unpack anything.
+  const wantsGzip = Boolean(req.headers['accept-encoding']) && req.acceptsEncodings('gzip', 'identity') === 'gzip';
+  if (answer.body.length < gzipFromBytes || !wantsGzip) {
+    res.setHeader('ETag', answer.etag);
+    return void res.status(status).type('json').send(answer.body);
+  }
+  const body = await gzippedOf(answer);
+  res.setHeader('ETag', `${answer.etag.slice(0, -1)}-gz"`);
+  res.setHeader('Content-Encoding', 'gzip');
+  res.status(status).type('json').send(body);
 }
 
 /** The cache key: who is asking (site scope, role, and the user when the answer is theirs) and the address. */

@@ -105,7 +105,7 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
     const ctx: RouteContext = { ...contextOf(req, query, deps), res };
     const key = policy ? answerKey(policy, req, ctx) : '';
     const held = policy ? deps.answers.get(key) : undefined;
-    if (held) return sendAnswer(res, 200, held);
+    if (held) return sendAnswer(req, res, 200, held);
     const stamp = deps.answers.stamp();
     const result = await run(route, req, ctx, { params, query, body, form }, deps);
     if (result === answered) return;
@@ -118,7 +118,7 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
     if (!policy) return void res.status(status).json(answer);
     const cached = toCachedAnswer(answer);
     if (status === 200) deps.answers.set(key, cached, clearedByOf(policy, ctx.scope), keepUntil(policy, answer, nowMs()), stamp);
-    sendAnswer(res, status, cached);
+    await sendAnswer(req, res, status, cached);
   };
 }
 

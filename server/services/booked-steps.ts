@@ -2,10 +2,9 @@ import { In } from 'typeorm';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { SpraySessionState } from '../../shared/schemas/spray-session';
 import type { SiteData } from '../data/site-data';
-import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
-import { nextCoatStep } from './part-coats';
+import { nextCoatStep, type CoatTimes } from './part-coats';
 
 /** One step of one part booked in a live session. */
 export interface BookedPartStep {
@@ -35,7 +34,7 @@ export function isLiveBooking(session: Pick<SpraySessionEntity, 'state' | 'endAt
 export async function bookedStepsOf(
   data: SiteData,
   parts: PartEntity[],
-  context: { coats: Map<number, CoatEntity[]>; steps: Map<number, FinishStep[]>; now: Date },
+  context: { coats: Map<number, CoatTimes[]>; steps: Map<number, FinishStep[]>; now: Date },
 ): Promise<BookedPartStep[]> {
   if (parts.length === 0) return [];
   const items = await data.spraySessionItems.find({ where: { partId: In(parts.map((p) => p.id)) } });

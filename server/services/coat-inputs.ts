@@ -6,10 +6,9 @@ import type { FinishStep } from '../../shared/finishing/readiness';
 import type { CreateCoatInput } from '../../shared/schemas/coat';
 import { calendarDateIn } from '../../shared/time';
 import type { SiteData } from '../data/site-data';
-import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 import { AppError } from '../lib/app-error';
-import { currentCoatsByPart, denibTimesByPart, nextCoatStep, stepsByJob } from './part-coats';
+import { currentCoatsByPart, denibTimesByPart, nextCoatStep, stepsByJob, type CoatTimes } from './part-coats';
 import { partsSeenBy } from './part-sites';
 
 export type CoatFields = Omit<Required<CreateCoatInput>, 'idempotencyKey'>;
@@ -62,7 +61,7 @@ async function mixWarnings(tx: SiteData, fields: CoatFields): Promise<CoatWarnin
  * It is on record when every part was denibbed since that coat; a planned abrade step counts too
  * for a coat logged without its denib record.
  */
-function previousWindow(latest: CoatEntity, system: FinishStep[], stepPosition: number | null, denibbed: boolean) {
+function previousWindow(latest: CoatTimes, system: FinishStep[], stepPosition: number | null, denibbed: boolean) {
   const planned = latest.stepPosition !== null && stepPosition !== null && system.slice(latest.stepPosition + 1, stepPosition).some((s) => s.kind === 'abrade');
   const abraded = planned || denibbed;
   return { opensAt: new Date(latest.recoatOpensAt), closesAt: latest.recoatClosesAt && !abraded ? new Date(latest.recoatClosesAt) : null };

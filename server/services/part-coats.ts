@@ -1,31 +1,33 @@
 import { In } from 'typeorm';
 import type { FinishStep, PartCoat, ReadinessInput } from '../../shared/finishing/readiness';
-import type { SiteData } from '../data/site-data';
+import { idListParam, type SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 
+/** What a part's coat says about its timing: the columns the readiness maths and the planner read. */
+export type CoatTimes = Pick<CoatEntity, 'id' | 'spraySessionId' | 'stepPosition' | 'sprayedAt' | 'flashOffEndsAt' | 'recoatOpensAt' | 'recoatClosesAt' | 'touchDryAt' | 'handleAt' | 'packAt' | 'fullCureAt'>;
+
+// Only the timing columns: a whole coat row is 33 values, and building thousands of them (a week's
+// calendar, the ready board) cost ten times the query itself.
+const coatTimesSql = (idList: string) => `
+  SELECT cp.part_id AS "partId", c.id, c.spray_session_id AS "spraySessionId", c.step_position AS "stepPosition",
+         c.sprayed_at AS "sprayedAt", c.flash_off_ends_at AS "flashOffEndsAt", c.recoat_opens_at AS "recoatOpensAt",
+         c.recoat_closes_at AS "recoatClosesAt", c.touch_dry_at AS "touchDryAt", c.handle_at AS "handleAt",
+         c.pack_at AS "packAt", c.full_cure_at AS "fullCureAt"
+  FROM coat_parts cp JOIN coats c ON c.id = cp.coat_id
+  WHERE cp.part_id IN (${idList}) AND NOT EXISTS (SELECT 1 FROM coats n WHERE n.replaces_id = c.id)`;
+
 /**
- * Current coat versions (not yet corrected) that covered any of the parts, by part id, as the
- * data's scope sees them. A part's next step and readiness come from its whole history: pass
- * `data.acrossSites` for those.
+ * Current coat versions (not yet corrected) that covered any of the parts, by part id, whichever
+ * site sprayed them: a part's next step and readiness come from its whole history. Callers show
+ * what follows from them only for parts their own scope sees.
  */
-export async function currentCoatsByPart(data: SiteData, partIds: number[]): Promise<Map<number, CoatEntity[]>> {
-  const byPart = new Map<number, CoatEntity[]>(partIds.map((id) => [id, []]));
+export async function currentCoatsByPart(data: SiteData, partIds: number[]): Promise<Map<number, CoatTimes[]>> {
+  const byPart = new Map<number, CoatTimes[]>(partIds.map((id) => [id, []]));
   if (partIds.length === 0) return byPart;
-  const links = await data.coatParts.find({ where: { partId: In(partIds) } });
-  const coatIds = [...new Set(links.map((l) => l.coatId))];
-  if (coatIds.length === 0) return byPart;
-  const coats = await data.coats
-    .select('c')
-    .leftJoin('coats', 'n', 'n.replaces_id = c.id')
-    .where('c.id IN (:...coatIds)', { coatIds })
-    .andWhere('n.id IS NULL')
-    .getMany();
-  const byId = new Map(coats.map((c) => [c.id, c]));
-  for (const link of links) {
-    const coat = byId.get(link.coatId);
-    if (coat) byPart.get(link.partId)?.push(coat);
-  }
+  const { sql } = data;
+  const rows = await sql.select<CoatTimes & { partId: number }>(coatTimesSql(sql.idList), [idListParam(sql.dialect, partIds)]);
+  for (const { partId, ...coat } of rows) byPart.get(Number(partId))?.push({ ...coat, id: Number(coat.id), spraySessionId: Number(coat.spraySessionId) });
   return byPart;
 }
 
@@ -65,7 +67,7 @@ export async function stepsByJob(data: SiteData, parts: Pick<PartEntity, 'jobId'
 }
 
 /** Coats as the readiness maths reads them; coats logged outside the finish system are left out. */
-function coatInstants(c: CoatEntity): Omit<PartCoat, 'stepIndex'> {
+function coatInstants(c: CoatTimes): Omit<PartCoat, 'stepIndex'> {
   return {
     sprayedAt: new Date(c.sprayedAt),
     flashOffEndsAt: new Date(c.flashOffEndsAt),
@@ -78,21 +80,21 @@ function coatInstants(c: CoatEntity): Omit<PartCoat, 'stepIndex'> {
   };
 }
 
-export function toPartCoats(coats: CoatEntity[], steps: FinishStep[]): PartCoat[] {
+export function toPartCoats(coats: CoatTimes[], steps: FinishStep[]): PartCoat[] {
   return coats
     .filter((c) => c.stepPosition !== null && steps[c.stepPosition]?.kind === 'coat')
     .map((c) => ({ stepIndex: c.stepPosition!, ...coatInstants(c) }));
 }
 
 /** Coats that match no coat step of the system: a part with no finish system is dried from these. */
-export function unplannedPartCoats(coats: CoatEntity[], steps: FinishStep[]): NonNullable<ReadinessInput['unplannedCoats']> {
+export function unplannedPartCoats(coats: CoatTimes[], steps: FinishStep[]): NonNullable<ReadinessInput['unplannedCoats']> {
   return coats
     .filter((c) => c.stepPosition === null || steps[c.stepPosition]?.kind !== 'coat')
     .map(coatInstants);
 }
 
 /** The first coat step of the system not yet done on the part, or null when all are done. */
-export function nextCoatStep(steps: FinishStep[], coats: CoatEntity[]): number | null {
+export function nextCoatStep(steps: FinishStep[], coats: Pick<CoatEntity, 'stepPosition'>[]): number | null {
   const done = new Set(coats.map((c) => c.stepPosition));
   const index = steps.findIndex((step, i) => step.kind === 'coat' && !done.has(i));
   return index === -1 ? null : index;

@@ -5,9 +5,20 @@ import { notFound } from '../lib/app-error';
 import { systemClock, type Clock } from '../lib/clock';
 import { toCoatDtos } from './coat-dto';
 import { loadFinishSystems } from './finish-systems';
-import { currentCoatsByPart } from './part-coats';
 import { readyPartsOf } from './ready';
 import type { SettingsService } from './settings';
+
+/** The part's current coat versions (not yet corrected) that `data`'s scope sees, as whole records. */
+async function currentCoatsOf(data: SiteData, partId: number): Promise<CoatEntity[]> {
+  const links = await data.coatParts.find({ where: { partId } });
+  if (links.length === 0) return [];
+  return data.coats
+    .select('c')
+    .leftJoin('coats', 'n', 'n.replaces_id = c.id')
+    .where('c.id IN (:...coatIds)', { coatIds: links.map((l) => l.coatId) })
+    .andWhere('n.id IS NULL')
+    .getMany();
+}
 
 /** Coats that re-sprayed a step the part already had, counted over its whole history. */
 function reworkIds(coats: CoatEntity[]): Set<number> {
@@ -26,8 +37,8 @@ function reworkIds(coats: CoatEntity[]): Set<number> {
  * re-spray is judged from the part's whole history.
  */
 async function coatEntries(data: SiteData, partId: number): Promise<PartHistoryEntry[]> {
-  const everyCoat = (await currentCoatsByPart(data.acrossSites, [partId])).get(partId) ?? [];
-  const coats = (await currentCoatsByPart(data, [partId])).get(partId) ?? [];
+  const everyCoat = await currentCoatsOf(data.acrossSites, partId);
+  const coats = await currentCoatsOf(data, partId);
   const rework = reworkIds(everyCoat);
   const dtos = await toCoatDtos(data, coats);
   return dtos.map((coat) => ({

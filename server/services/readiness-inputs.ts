@@ -1,14 +1,12 @@
-import { In, Not } from 'typeorm';
 import type { PartBooking } from '../../shared/finishing/job-ready-time';
 import { partReadiness, type FinishStep, type PartReadiness, type ReadinessInput } from '../../shared/finishing/readiness';
-import type { SiteData } from '../data/site-data';
-import type { CoatEntity } from '../db/entities/coat.entity';
+import { idListParam, type SiteData } from '../data/site-data';
 import type { PartEntity } from '../db/entities/part.entity';
-import { currentCoatsByPart, denibTimesByPart, stepsByJob, toPartCoats, unplannedPartCoats } from './part-coats';
+import { currentCoatsByPart, denibTimesByPart, stepsByJob, toPartCoats, unplannedPartCoats, type CoatTimes } from './part-coats';
 
 export interface PartFacts {
   steps: FinishStep[];
-  coats: CoatEntity[];
+  coats: CoatTimes[];
   input: ReadinessInput;
 }
 
@@ -41,6 +39,12 @@ export async function readinessOf(data: SiteData, parts: PartEntity[], now: Date
   return new Map([...facts].map(([id, fact]) => [id, partReadiness(fact.input)]));
 }
 
+const liveBookingsSql = (idList: string) => `
+  SELECT i.part_id AS "partId", i.step_position AS "stepPosition", s.start_at AS "startAt"
+  FROM spray_session_items i JOIN spray_sessions s ON s.id = i.spray_session_id
+  WHERE i.part_id IN (${idList}) AND s.state NOT IN ('done', 'cancelled', 'clearing')
+  ORDER BY i.id`;
+
 /**
  * Spray sessions still to run (or running) that plan each part, as the ready-time maths reads
  * them: only their start and step, whichever site booked them, so a part's expected time is the
@@ -49,14 +53,13 @@ export async function readinessOf(data: SiteData, parts: PartEntity[], now: Date
 export async function bookingsByPart(data: SiteData, partIds: number[]): Promise<Map<number, PartBooking[]>> {
   const byPart = new Map<number, PartBooking[]>();
   if (partIds.length === 0) return byPart;
-  const whole = data.acrossSites;
-  const items = await whole.spraySessionItems.find({ where: { partId: In(partIds) } });
-  const sessionIds = [...new Set(items.map((i) => i.spraySessionId))];
-  const sessions = sessionIds.length ? await whole.spraySessions.find({ where: { id: In(sessionIds), state: Not(In(['done', 'cancelled', 'clearing'])) } }) : [];
-  const startById = new Map(sessions.map((s) => [s.id, new Date(s.startAt)]));
-  for (const item of items) {
-    const startAt = startById.get(item.spraySessionId);
-    if (startAt) byPart.set(item.partId, [...(byPart.get(item.partId) ?? []), { startAt, stepIndex: item.stepPosition }]);
+  const { sql } = data.acrossSites;
+  const rows = await sql.select<{ partId: number; stepPosition: number | null; startAt: string }>(liveBookingsSql(sql.idList), [idListParam(sql.dialect, partIds)]);
+  for (const row of rows) {
+    const booking = { startAt: new Date(row.startAt), stepIndex: row.stepPosition === null ? null : Number(row.stepPosition) };
+    const booked = byPart.get(Number(row.partId));
+    if (booked) booked.push(booking);
+    else byPart.set(Number(row.partId), [booking]);
   }
   return byPart;
 }

@@ -56,8 +56,14 @@ export async function readyJobsOf(data: SiteData, jobIds: number[], tempC: numbe
   const facts = await partFactsOf(whole, parts, now);
   const bookings = await bookingsByPart(whole, parts.map((p) => p.id));
   const tables = await dryingTables(whole, [...facts.values()].map((f) => f.steps));
+  const partsByJob = new Map<number, PartEntity[]>();
+  for (const part of parts) {
+    const own = partsByJob.get(part.jobId);
+    if (own) own.push(part);
+    else partsByJob.set(part.jobId, [part]);
+  }
   return jobs.map((job) => {
-    const own = parts.filter((p) => p.jobId === job.id);
+    const own = partsByJob.get(job.id) ?? [];
     const time = jobReadyTime(own.map((p) => ({ ...facts.get(p.id)!.input, bookings: bookings.get(p.id) })), { tables, tempC });
     return {
       jobId: job.id,

@@ -3,14 +3,13 @@ import { projectedRecoatWindow, sharedRecoatWindow } from '../../shared/finishin
 import type { FinishStep, RecoatWindow } from '../../shared/finishing/readiness';
 import { emptySessionWork, type SessionCoat, type SessionItemDto, type SessionWork } from '../../shared/schemas/spray-session';
 import type { SiteData } from '../data/site-data';
-import type { CoatEntity } from '../db/entities/coat.entity';
 import type { JobEntity } from '../db/entities/job.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 import type { ProductEntity } from '../db/entities/product.entity';
 import type { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { bookedStepsOf, type BookedPartStep } from './booked-steps';
-import { currentCoatsByPart, nextCoatStep, stepsByJob } from './part-coats';
+import { currentCoatsByPart, nextCoatStep, stepsByJob, type CoatTimes } from './part-coats';
 import type { SprayedPart } from './sprayed-unplanned';
 
 export interface WorkContext {
@@ -24,7 +23,7 @@ interface Known {
   jobs: Map<number, JobEntity>;
   steps: Map<number, FinishStep[]>;
   products: Map<number, ProductEntity>;
-  coats: Map<number, CoatEntity[]>;
+  coats: Map<number, CoatTimes[]>;
   /** Live bookings by part and step. */
   booked: Map<string, BookedPartStep[]>;
   planningTempC: number;

@@ -1,5 +1,4 @@
-import { In } from 'typeorm';
-import type { SiteData } from '../data/site-data';
+import { idListParam, type SiteData } from '../data/site-data';
 
 /** A part sprayed in a session without being on its plan: it still belongs to what the session did. */
 export interface SprayedPart {
@@ -8,22 +7,20 @@ export interface SprayedPart {
   stepPosition: number | null;
 }
 
-/** Parts with a current coat recorded in each session, read once for a whole list of sessions. */
+const sprayedSql = (idList: string) => `
+  SELECT c.spray_session_id AS "spraySessionId", cp.part_id AS "partId", c.step_position AS "stepPosition"
+  FROM coats c JOIN coat_parts cp ON cp.coat_id = c.id
+  WHERE c.spray_session_id IN (${idList}) AND NOT EXISTS (SELECT 1 FROM coats n WHERE n.replaces_id = c.id)`;
+
+/**
+ * Parts with a current coat recorded in each session, read once for a whole list of sessions. The
+ * sessions are ones the caller read through its own scope, so their coats are the scope's too.
+ */
 export async function sprayedPartsOf(data: SiteData, sessionIds: number[]): Promise<SprayedPart[]> {
   if (sessionIds.length === 0) return [];
-  const coats = await data.coats
-    .select('c')
-    .leftJoin('coats', 'n', 'n.replaces_id = c.id')
-    .where('c.spray_session_id IN (:...sessionIds)', { sessionIds })
-    .andWhere('n.id IS NULL')
-    .getMany();
-  if (coats.length === 0) return [];
-  const byId = new Map(coats.map((c) => [c.id, c]));
-  const links = await data.coatParts.find({ where: { coatId: In([...byId.keys()]) } });
-  return links.map((link) => {
-    const coat = byId.get(link.coatId)!;
-    return { spraySessionId: coat.spraySessionId, partId: link.partId, stepPosition: coat.stepPosition };
-  });
+  const { sql } = data;
+  const rows = await sql.select<SprayedPart>(sprayedSql(sql.idList), [idListParam(sql.dialect, sessionIds)]);
+  return rows.map((r) => ({ spraySessionId: Number(r.spraySessionId), partId: Number(r.partId), stepPosition: r.stepPosition === null ? null : Number(r.stepPosition) }));
 }
 
 /** The sprayed parts that are not on their session's plan, once per part and step. */

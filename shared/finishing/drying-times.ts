@@ -39,7 +39,19 @@ export function adjustDryingTimes(
   return { times, method, warnings: dryingWarnings(table, tempC, method, opts) };
 }
 
+// A board works out hundreds of parts from the same few products' tables: each table is checked
+// and sorted once. Keyed by the array itself, so a changed product (a new array) is checked again.
+const parsedTables = new WeakMap<DryingRow[], DryingRow[]>();
+
 function parseTable(rows: DryingRow[]): DryingRow[] {
+  const known = parsedTables.get(rows);
+  if (known) return known;
+  const table = checkedTable(rows);
+  parsedTables.set(rows, table);
+  return table;
+}
+
+function checkedTable(rows: DryingRow[]): DryingRow[] {
   const parsed = dryingTableSchema.safeParse(rows);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];

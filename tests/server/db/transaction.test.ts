@@ -20,6 +20,23 @@ afterAll(async () => {
 const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 describe('inTransaction', () => {
+  it('lets the event loop in between queued transactions, so new requests and connections are not held until the queue empties', async () => {
+    const order: string[] = [];
+    const work = (i: number) =>
+      runAsOwnWork(() =>
+        inTransaction(dataSource, async (manager) => {
+          await manager.query('SELECT 1');
+          order.push(`transaction ${i}`);
+        }),
+      );
+    const queue = Promise.all(Array.from({ length: 10 }, (_, i) => work(i)));
+    // What a new connection or request body would be: I/O waiting for the next turn of the loop.
+    setImmediate(() => order.push('waiting I/O'));
+    await queue;
+    expect(order.indexOf('waiting I/O')).toBeGreaterThan(-1);
+    expect(order.indexOf('waiting I/O')).toBeLessThan(order.length - 1);
+  });
+
   it('keeps overlapping transactions apart: each commits or rolls back on its own', async () => {
     const work = (i: number) =>
       inTransaction(dataSource, async (manager) => {
