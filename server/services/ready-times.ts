@@ -1,5 +1,5 @@
 import { In, IsNull } from 'typeorm';
-import { jobReadyTime, partReadyTime, type PartReadyTime } from '../../shared/finishing/job-ready-time';
+import { jobReadyTimeOf, partReadyTime, type PartReadyTime } from '../../shared/finishing/job-ready-time';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { ProductDryingTable } from '../../shared/finishing/system-time';
 import type { ReadyJob } from '../../shared/schemas/ready';
@@ -45,26 +45,25 @@ async function collectedCounts(data: SiteData, jobIds: number[]): Promise<Map<nu
 
 /**
  * Every job's ready-to-handle and ready-to-pack time, from all its parts still on the racks. A job
- * is the group's, so its time counts its parts at every site.
+ * is the group's, so its time counts its parts at every site. Parts whose ready time is `known`
+ * already (the board's own) are not worked out again.
  */
-export async function readyJobsOf(data: SiteData, jobIds: number[], tempC: number, now: Date): Promise<ReadyJob[]> {
+export async function readyJobsOf(data: SiteData, jobIds: number[], tempC: number, now: Date, known: Map<number, PartReadyTime> = new Map()): Promise<ReadyJob[]> {
   if (jobIds.length === 0) return [];
   const whole = data.acrossSites;
   const jobs = await whole.jobs.findBy({ id: In(jobIds) });
   const parts = await whole.parts.findBy({ jobId: In(jobIds), collectedAt: IsNull() });
   const collectedByJob = await collectedCounts(whole, jobIds);
-  const facts = await partFactsOf(whole, parts, now);
-  const bookings = await bookingsByPart(whole, parts.map((p) => p.id));
-  const tables = await dryingTables(whole, [...facts.values()].map((f) => f.steps));
-  const partsByJob = new Map<number, PartEntity[]>();
+  const { times } = await readyTimesOf(whole, parts.filter((p) => !known.has(p.id)), tempC, now);
+  const partsByJob = new Map<number, PartReadyTime[]>();
   for (const part of parts) {
+    const time = known.get(part.id) ?? times.get(part.id)!;
     const own = partsByJob.get(part.jobId);
-    if (own) own.push(part);
-    else partsByJob.set(part.jobId, [part]);
+    if (own) own.push(time);
+    else partsByJob.set(part.jobId, [time]);
   }
   return jobs.map((job) => {
-    const own = partsByJob.get(job.id) ?? [];
-    const time = jobReadyTime(own.map((p) => ({ ...facts.get(p.id)!.input, bookings: bookings.get(p.id) })), { tables, tempC });
+    const time = jobReadyTimeOf(partsByJob.get(job.id) ?? []);
     return {
       jobId: job.id,
       jobReference: job.reference,

@@ -104,12 +104,16 @@ function toReadyPart(part: PartEntity, fact: PartFacts, time: PartReadyTime, { j
  * The times come from each part's whole history; a rack place is given only on the scope's racks.
  */
 export async function readyPartsOf(data: SiteData, parts: PartEntity[], tempC: number, now: Date): Promise<ReadyPart[]> {
+  return (await readyPartsAndTimes(data, parts, tempC, now)).items;
+}
+
+async function readyPartsAndTimes(data: SiteData, parts: PartEntity[], tempC: number, now: Date): Promise<{ items: ReadyPart[]; times: Map<number, PartReadyTime> }> {
   const rackIds = [...new Set(parts.flatMap((p) => [p.rackId, p.collectedFromRackId]).filter((id): id is number => id !== null))];
   const { facts, times } = await readyTimesOf(data, parts, tempC, now);
   const jobs = await data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) });
   const racks = rackIds.length ? await data.racks.findBy({ id: In(rackIds) }) : [];
   const lookups = { jobs: new Map(jobs.map((j) => [j.id, j])), racks: new Map(racks.map((r) => [r.id, r])) };
-  return parts.map((part) => toReadyPart(part, facts.get(part.id)!, times.get(part.id)!, lookups));
+  return { items: parts.map((part) => toReadyPart(part, facts.get(part.id)!, times.get(part.id)!, lookups)), times };
 }
 
 /** The ready board: the parts the scope sees, with each of their jobs' expected ready times. */
@@ -119,8 +123,9 @@ export function createReadyService(data: SiteData, settings: SettingsService, cl
       const now = clock.now();
       const { planningDryingTempC } = await settings.get();
       const parts = await boardParts(data, query, now);
-      const items = await readyPartsOf(data, parts, planningDryingTempC, now);
-      const jobs = await readyJobsOf(data, [...new Set(parts.map((p) => p.jobId))], planningDryingTempC, now);
+      const { items, times } = await readyPartsAndTimes(data, parts, planningDryingTempC, now);
+      // The board's parts are worked out once: their jobs' times reuse them and add only the jobs' other parts.
+      const jobs = await readyJobsOf(data, [...new Set(parts.map((p) => p.jobId))], planningDryingTempC, now, times);
       return { items: query.state ? items.filter((i) => i.state === query.state) : items, jobs };
     },
   };

@@ -116,7 +116,11 @@ export type JobReadyTime = {
 
 /** The job is ready to handle (or pack) when its last part is: the latest of its parts' times. */
 export function jobReadyTime(parts: PartReadyInput[], options: ReadyTimeOptions): JobReadyTime {
-  const times = parts.map((part) => partReadyTime(part, options));
+  return jobReadyTimeOf(parts.map((part) => partReadyTime(part, options)));
+}
+
+/** The same from each part's ready time already worked out (the board has them for its own parts). */
+export function jobReadyTimeOf(times: PartReadyTime[]): JobReadyTime {
   const live = times.map((time, index) => ({ time, index })).filter(({ time }) => time.readiness.state !== 'collected');
   const unknown = live.filter(({ time }) => time.unknown).length;
   const latest = (pick: (t: PartReadyTime) => Date | null) =>
