@@ -1,7 +1,6 @@
-import { In } from 'typeorm';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { SpraySessionState } from '../../shared/schemas/spray-session';
-import type { SiteData } from '../data/site-data';
+import { idListParam, type SiteData } from '../data/site-data';
 import type { PartEntity } from '../db/entities/part.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { nextCoatStep, type CoatTimes } from './part-coats';
@@ -26,6 +25,32 @@ export function isLiveBooking(session: Pick<SpraySessionEntity, 'state' | 'endAt
   return underWay.includes(session.state) || (session.state === 'planned' && session.endAt > now.toISOString());
 }
 
+// Live as `isLiveBooking` says, in SQL: under way whatever the clock says, or planned and not yet over.
+const liveItemsSql = (idList: string, oneSite: boolean) => `
+  SELECT i.part_id AS "partId", i.step_position AS "stepPosition", s.id AS "sessionId", s.start_at AS "startAt", s.end_at AS "endAt", s.state
+  FROM spray_session_items i JOIN spray_sessions s ON s.id = i.spray_session_id
+  WHERE i.part_id IN (${idList})
+    AND (s.state IN ('checking', 'spraying', 'clearing') OR (s.state = 'planned' AND s.end_at > ?))
+    ${oneSite ? 'AND s.booth_id IN (SELECT b.id FROM booths b WHERE b.site_id = ?)' : ''}
+  ORDER BY i.id`;
+
+interface LiveItem {
+  partId: number;
+  stepPosition: number | null;
+  sessionId: number;
+  startAt: string;
+  endAt: string;
+  state: SpraySessionState;
+}
+
+/** Items of live sessions on these parts, in the sessions `data`'s scope sees. */
+function liveItemsOf(data: SiteData, partIds: number[], now: Date): Promise<LiveItem[]> {
+  const { sql, scope } = data;
+  const params: unknown[] = [idListParam(sql.dialect, partIds), now.toISOString()];
+  if (scope.siteId !== null) params.push(scope.siteId);
+  return sql.select<LiveItem>(liveItemsSql(sql.idList, scope.siteId !== null), params);
+}
+
 /**
  * The steps live sessions plan on these parts and have not sprayed yet, in the sessions `data`
  * sees (pass `data.acrossSites` when a booking anywhere counts). An item without a step means the
@@ -37,18 +62,16 @@ export async function bookedStepsOf(
   context: { coats: Map<number, CoatTimes[]>; steps: Map<number, FinishStep[]>; now: Date },
 ): Promise<BookedPartStep[]> {
   if (parts.length === 0) return [];
-  const items = await data.spraySessionItems.find({ where: { partId: In(parts.map((p) => p.id)) } });
-  const sessionIds = [...new Set(items.map((i) => i.spraySessionId))];
-  const sessions = sessionIds.length ? await data.spraySessions.findBy({ id: In(sessionIds) }) : [];
-  const live = new Map(sessions.filter((s) => isLiveBooking(s, context.now)).map((s) => [s.id, s]));
+  const items = await liveItemsOf(data, parts.map((p) => p.id), context.now);
   const jobOf = new Map(parts.map((p) => [p.id, p.jobId]));
   return items.flatMap((item) => {
-    const session = live.get(item.spraySessionId);
-    const coats = context.coats.get(item.partId) ?? [];
+    const partId = Number(item.partId);
+    const sessionId = Number(item.sessionId);
+    const coats = context.coats.get(partId) ?? [];
     // Sprayed in this very session: the booking is spent, whatever step it named.
-    if (!session || coats.some((c) => c.spraySessionId === session.id)) return [];
-    const stepPosition = item.stepPosition ?? nextCoatStep(context.steps.get(jobOf.get(item.partId)!) ?? [], coats);
+    if (coats.some((c) => c.spraySessionId === sessionId)) return [];
+    const stepPosition = item.stepPosition ?? nextCoatStep(context.steps.get(jobOf.get(partId)!) ?? [], coats);
     if (stepPosition === null) return [];
-    return [{ sessionId: session.id, partId: item.partId, stepPosition, start: new Date(session.startAt), end: new Date(session.endAt), state: session.state }];
+    return [{ sessionId, partId, stepPosition: Number(stepPosition), start: new Date(item.startAt), end: new Date(item.endAt), state: item.state }];
   });
 }

@@ -3,7 +3,7 @@ import type { SpraySession } from '../../shared/schemas/spray-session';
 import type { SiteData } from '../data/site-data';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { sessionsWork, type WorkContext } from './spray-session-work';
-import { sprayedPartsOf, unplannedOf } from './sprayed-unplanned';
+import { sprayedOffPlanOf, unplannedOf } from './sprayed-unplanned';
 
 /** Sessions as the API sends them, field by field, with what each sprays and what is sprayed already. */
 export async function toSpraySessionDtos(data: SiteData, sessions: SpraySessionEntity[], context: WorkContext): Promise<SpraySession[]> {
@@ -14,7 +14,7 @@ export async function toSpraySessionDtos(data: SiteData, sessions: SpraySessionE
     ids.length ? data.spraySessionItems.find({ where: { spraySessionId: In(ids) }, order: { id: 'ASC' } }) : [],
     boothIds.length ? data.booths.find({ where: { id: In(boothIds) }, select: { id: true, name: true } }) : [],
     userIds.length ? data.users.find({ where: { id: In(userIds) }, select: { id: true, name: true } }) : [],
-    sprayedPartsOf(data, ids),
+    sprayedOffPlanOf(data, ids),
   ]);
   const boothName = new Map(booths.map((b) => [b.id, b.name]));
   const userName = new Map(users.map((u) => [u.id, u.name]));
