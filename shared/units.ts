@@ -154,6 +154,14 @@ export function displayDigits(quantity: Quantity, system: UnitSystem): number {
   return quantityUnits[quantity][system].digits;
 }
 
+// Building an Intl.NumberFormat costs far more than using one: one per number of digits, kept.
+const numberFormats = new Map<number, Intl.NumberFormat>();
+function numberFormat(digits: number): Intl.NumberFormat {
+  let format = numberFormats.get(digits);
+  if (!format) numberFormats.set(digits, (format = new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits })));
+  return format;
+}
+
 /** A stored (SI) value as text in the user's units, e.g. "68.0 °F" or "176 µm". */
 export function formatQuantity(
   siValue: number,
@@ -164,9 +172,6 @@ export function formatQuantity(
   const shown = toDisplay(siValue, quantity, system);
   // Rounding a tiny negative to zero must not print "-0.0".
   const cleaned = Math.abs(shown) < 0.5 * 10 ** -digits ? 0 : shown;
-  const number = new Intl.NumberFormat('en-GB', {
-    minimumFractionDigits: digits,
-    maximumFractionDigits: digits,
-  }).format(cleaned);
+  const number = numberFormat(digits).format(cleaned);
   return `${number} ${unitSymbol(quantity, system)}`;
 }
