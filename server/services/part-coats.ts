@@ -1,6 +1,7 @@
 import { In } from 'typeorm';
 import type { FinishStep, PartCoat, ReadinessInput } from '../../shared/finishing/readiness';
 import { idListParam, type SiteData } from '../data/site-data';
+import { mapInSlices } from '../lib/in-slices';
 import type { CoatEntity } from '../db/entities/coat.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 
@@ -26,8 +27,10 @@ export async function currentCoatsByPart(data: SiteData, partIds: number[]): Pro
   const byPart = new Map<number, CoatTimes[]>(partIds.map((id) => [id, []]));
   if (partIds.length === 0) return byPart;
   const { sql } = data;
-  const rows = await sql.select<CoatTimes & { partId: number }>(coatTimesSql(sql.idList), [idListParam(sql.dialect, partIds)]);
-  for (const { partId, ...coat } of rows) byPart.get(Number(partId))?.push({ ...coat, id: Number(coat.id), spraySessionId: Number(coat.spraySessionId) });
+  const text = coatTimesSql(sql.idList);
+  const rows = await mapInSlices(partIds, (slice) => sql.select<CoatTimes & { partId: number }>(text, [idListParam(sql.dialect, slice)]));
+  // Both drivers give integer columns as numbers; the row is kept as it comes (its partId too), not copied.
+  for (const row of rows) byPart.get(row.partId)?.push(row);
   return byPart;
 }
 

@@ -1,6 +1,7 @@
 import type { PartBooking } from '../../shared/finishing/job-ready-time';
 import { partReadiness, type FinishStep, type PartReadiness, type ReadinessInput } from '../../shared/finishing/readiness';
 import { idListParam, type SiteData } from '../data/site-data';
+import { mapInSlices } from '../lib/in-slices';
 import type { PartEntity } from '../db/entities/part.entity';
 import { currentCoatsByPart, denibTimesByPart, stepsByJob, toPartCoats, unplannedPartCoats, type CoatTimes } from './part-coats';
 
@@ -22,8 +23,8 @@ export async function partFactsOf(data: SiteData, parts: PartEntity[], now: Date
   const coats = await currentCoatsByPart(whole, ids);
   const denibs = await denibTimesByPart(whole, ids);
   const steps = await stepsByJob(whole, parts);
-  return new Map(
-    parts.map((part) => {
+  const facts = await mapInSlices(parts, (slice) =>
+    slice.map((part): [number, PartFacts] => {
       const system = steps.get(part.jobId) ?? [];
       const partCoats = coats.get(part.id) ?? [];
       const collectedAt = part.collectedAt ? new Date(part.collectedAt) : null;
@@ -31,6 +32,7 @@ export async function partFactsOf(data: SiteData, parts: PartEntity[], now: Date
       return [part.id, { steps: system, coats: partCoats, input }];
     }),
   );
+  return new Map(facts);
 }
 
 /** Readiness of each part at `now`, from its current coats, its denibs and its job's finish system. */

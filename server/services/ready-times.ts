@@ -4,6 +4,7 @@ import type { FinishStep } from '../../shared/finishing/readiness';
 import type { ProductDryingTable } from '../../shared/finishing/system-time';
 import type { ReadyJob } from '../../shared/schemas/ready';
 import type { SiteData } from '../data/site-data';
+import { mapInSlices } from '../lib/in-slices';
 import type { PartEntity } from '../db/entities/part.entity';
 import { bookingsByPart, partFactsOf, type PartFacts } from './readiness-inputs';
 
@@ -26,7 +27,7 @@ export async function readyTimesOf(data: SiteData, parts: PartEntity[], tempC: n
   const facts = await partFactsOf(data, parts, now);
   const bookings = await bookingsByPart(data, parts.map((p) => p.id));
   const tables = await dryingTables(data, [...facts.values()].map((f) => f.steps));
-  const times = new Map([...facts].map(([id, fact]) => [id, partReadyTime({ ...fact.input, bookings: bookings.get(id) }, { tables, tempC })]));
+  const times = new Map(await mapInSlices([...facts], (slice) => slice.map(([id, fact]): [number, PartReadyTime] => [id, partReadyTime({ ...fact.input, bookings: bookings.get(id) }, { tables, tempC })])));
   return { facts, times };
 }
 

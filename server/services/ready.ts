@@ -9,6 +9,7 @@ import type { RackEntity } from '../db/entities/rack.entity';
 import { systemClock, type Clock } from '../lib/clock';
 import { partsSeenBy } from './part-sites';
 import type { PartFacts } from './readiness-inputs';
+import { mapInSlices } from '../lib/in-slices';
 import { readyJobsOf, readyTimesOf } from './ready-times';
 import type { SettingsService } from './settings';
 import { stepLineWords } from '../../shared/words';
@@ -113,7 +114,8 @@ async function readyPartsAndTimes(data: SiteData, parts: PartEntity[], tempC: nu
   const jobs = await data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) });
   const racks = rackIds.length ? await data.racks.findBy({ id: In(rackIds) }) : [];
   const lookups = { jobs: new Map(jobs.map((j) => [j.id, j])), racks: new Map(racks.map((r) => [r.id, r])) };
-  return { items: parts.map((part) => toReadyPart(part, facts.get(part.id)!, times.get(part.id)!, lookups)), times };
+  const items = await mapInSlices(parts, (slice) => slice.map((part) => toReadyPart(part, facts.get(part.id)!, times.get(part.id)!, lookups)));
+  return { items, times };
 }
 
 /** The ready board: the parts the scope sees, with each of their jobs' expected ready times. */
