@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import { Link } from 'react-router-dom';
 import type { ReadySummary, ReadySummaryPart } from '../../../../shared/schemas/ready';
 import { formatShopClock, formatShopDate } from '../../../lib/shop-time';
@@ -42,12 +43,32 @@ function WallJobs({ summary }: { summary: ReadySummary }) {
   );
 }
 
+// The server's answer is cached until its change instant, so asking again this often costs it little.
+const behindRetryMs = 5_000;
+
+/**
+ * An answer whose next change has already passed on this device came from a server clock that
+ * runs behind it: ask again shortly, rather than show the old counts until the next slow poll.
+ */
+function useAskAgainWhileBehind(nextChangeAt: string | null, updatedAt: number, refetch: () => void) {
+  const refetchRef = useRef(refetch);
+  useEffect(() => {
+    refetchRef.current = refetch;
+  });
+  useEffect(() => {
+    if (nextChangeAt === null || Date.parse(nextChangeAt) > Date.now()) return;
+    const timer = window.setTimeout(() => refetchRef.current(), behindRetryMs);
+    return () => window.clearTimeout(timer);
+  }, [nextChangeAt, updatedAt]);
+}
+
 /** The ready board for a screen on the workshop wall: no controls, large type, keeps itself current. */
 export function WallBoard({ timeZone }: { timeZone: string }) {
   const ready = useReadySummary(wallFits);
   const summary = ready.data?.summary;
   // The counts change by themselves only at the answer's next change: ask the server again then.
   const now = useBoardClock(summary?.nextChangeAt ? [summary.nextChangeAt] : [], () => void ready.refetch());
+  useAskAgainWhileBehind(summary?.nextChangeAt ?? null, ready.dataUpdatedAt, () => void ready.refetch());
   return (
     <div className="min-h-dvh bg-maple-50 p-4 text-maple-900 sm:p-8">
       <header className="mb-6 flex flex-wrap items-end justify-between gap-4 border-b-4 border-maple-900 pb-4">
