@@ -1,4 +1,4 @@
-import { readyListSchema, readyQuerySchema } from '../../shared/schemas/ready';
+import { readyListSchema, readyQuerySchema, readySummaryQuerySchema, readySummaryResponseSchema } from '../../shared/schemas/ready';
 import { defineRoute, type ApiRoute } from '../registry/route';
 
 export const readyRoutes: ApiRoute[] = [
@@ -14,5 +14,18 @@ export const readyRoutes: ApiRoute[] = [
     // Parts are seen from several sites, and their states change as drying time passes.
     cache: { clearedBy: 'any', clock: true },
     handler: ({ query }, { services }) => services.ready.list(query),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/ready/summary',
+    summary:
+      'The ready board in brief for a wall screen: jobs with parts to collect counted per state (busiest first, ?jobs= of them), jobs waiting for a first coat, the ?next= parts soonest ready to handle, and the next instant a count changes by itself',
+    access: 'ready:read',
+    sites: 'site',
+    query: readySummaryQuerySchema,
+    response: { status: 200, schema: readySummaryResponseSchema },
+    // Counted at the server's clock: the answer carries each instant a count changes, and is kept until the first.
+    cache: { clearedBy: 'any', clock: true },
+    handler: async ({ query }, { services }) => ({ summary: await services.ready.summary(query) }),
   }),
 ];

@@ -1,7 +1,8 @@
 import { In, IsNull, MoreThan, Not } from 'typeorm';
 import type { PartReadyTime } from '../../shared/finishing/job-ready-time';
 import type { FinishStep } from '../../shared/finishing/readiness';
-import type { ReadyJob, ReadyPart, ReadyQuery } from '../../shared/schemas/ready';
+import { summariseForWall } from '../../shared/finishing/wall-summary';
+import type { ReadyJob, ReadyPart, ReadyQuery, ReadySummary, ReadySummaryQuery } from '../../shared/schemas/ready';
 import type { SiteData } from '../data/site-data';
 import type { JobEntity } from '../db/entities/job.entity';
 import type { PartEntity } from '../db/entities/part.entity';
@@ -36,6 +37,9 @@ export function nextStepFields(steps: FinishStep[], step: FinishStep | null, ind
 // Collected parts stay on the board for a week unless asked for longer (to show them, and to undo
 // a wrong "collected"); older ones are history, seen on their job. A shop's whole past must not load on every refresh.
 const boardLimit = 5000;
+// The summary counts what the board shows by default; a wall line names this many waiting jobs at most.
+const summaryCollectedDays = 7;
+const summaryWaitingShown = 12;
 
 /** The board's parts the scope sees: on its site's racks, last coated there, or not yet begun. */
 async function boardParts(data: SiteData, query: ReadyQuery, now: Date): Promise<PartEntity[]> {
@@ -129,6 +133,15 @@ export function createReadyService(data: SiteData, settings: SettingsService, cl
       // The board's parts are worked out once: their jobs' times reuse them and add only the jobs' other parts.
       const jobs = await readyJobsOf(data, [...new Set(parts.map((p) => p.jobId))], planningDryingTempC, now, times);
       return { items: query.state ? items.filter((i) => i.state === query.state) : items, jobs };
+    },
+
+    /** The board in brief (the wall screen): the same parts and readiness, counted at the clock's now, never sent part by part. */
+    async summary(query: ReadySummaryQuery): Promise<ReadySummary> {
+      const now = clock.now();
+      const { planningDryingTempC } = await settings.get();
+      const parts = await boardParts(data, { collectedDays: summaryCollectedDays }, now);
+      const items = await readyPartsOf(data, parts, planningDryingTempC, now);
+      return summariseForWall(items, now, { jobs: query.jobs, next: query.next, waiting: summaryWaitingShown, collectedForMs: summaryCollectedDays * dayMs });
     },
   };
 }

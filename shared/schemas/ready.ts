@@ -73,3 +73,59 @@ export const readyJobSchema = z.object({
 export type ReadyJob = z.infer<typeof readyJobSchema>;
 
 export const readyListSchema = z.object({ items: z.array(readyPartSchema), jobs: z.array(readyJobSchema).default([]) });
+
+/** What a wall screen asks for: how many job cards and next-ready parts it has room for. */
+export const readySummaryQuerySchema = z.object({
+  ...siteFilterFields,
+  jobs: queryIntSchema(1, 24).default(6),
+  next: queryIntSchema(1, 24).default(6),
+});
+export type ReadySummaryQuery = z.infer<typeof readySummaryQuerySchema>;
+
+const stateCountsSchema = z.partialRecord(z.enum(readinessStates), z.number().int());
+
+/** A job with parts still to collect, counted per state at the answer's moment. */
+export const readySummaryJobSchema = z.object({
+  jobId: z.number().int(),
+  jobReference: z.string(),
+  customer: z.string(),
+  counts: stateCountsSchema,
+  /** Parts on the board not yet collected. */
+  partsLeft: z.number().int(),
+  /** The next instant at which one of the job's counts changes with no write (a part dries on, a collected part leaves the board); null when none will. */
+  nextChangeAt: z.string().nullable(),
+});
+
+/** A part drying after its last coat, soonest ready to handle first. */
+export const readySummaryPartSchema = z.object({
+  id: z.number().int(),
+  label: z.string(),
+  jobReference: z.string(),
+  handleAt: z.string().nullable(),
+  rack: rackPlaceSchema.nullable(),
+});
+
+/**
+ * The board in brief, for a wall screen: a few KB whatever the shop's size. Counts are worked out
+ * at `asOf`; they change by themselves next at `nextChangeAt`, so a screen asks again then.
+ */
+export const readySummarySchema = z.object({
+  /** Jobs with parts still to collect and at least one coat on, the most to pick up first; at most `?jobs=`. */
+  jobs: z.array(readySummaryJobSchema),
+  /** How many such jobs there are in all. */
+  jobsInFinish: z.number().int(),
+  /** Jobs whose parts all wait for a first coat, by reference; at most `waitingShown`. */
+  waitingJobs: z.array(z.object({ jobReference: z.string(), parts: z.number().int() })),
+  waitingJobsCount: z.number().int(),
+  /** At most `?next=` parts. */
+  nextReady: z.array(readySummaryPartSchema),
+  /** Every part on the board, per state. */
+  totals: stateCountsSchema,
+  nextChangeAt: z.string().nullable(),
+  asOf: z.string(),
+});
+export type ReadySummary = z.infer<typeof readySummarySchema>;
+export type ReadySummaryJob = z.infer<typeof readySummaryJobSchema>;
+export type ReadySummaryPart = z.infer<typeof readySummaryPartSchema>;
+
+export const readySummaryResponseSchema = z.object({ summary: readySummarySchema });

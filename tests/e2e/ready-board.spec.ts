@@ -219,6 +219,9 @@ test.describe('ready board', () => {
   test('the wall screen shows each job in large type, without the app’s navigation', async ({ page }) => {
     await page.setViewportSize({ width: 1920, height: 1080 });
     await signIn(page, 'assembler', '/');
+    // A wall screen polls all day: it must read the small summary, never the whole board.
+    const asked: string[] = [];
+    page.on('request', (req) => asked.push(new URL(req.url()).pathname));
     await page.goto('/ready/wall');
     await expect(page.getByRole('heading', { name: 'Ready board', level: 1 })).toBeVisible();
     await expect(page.getByRole('navigation', { name: 'Main' })).toHaveCount(0);
@@ -228,6 +231,13 @@ test.describe('ready board', () => {
     expect(size).toBeGreaterThanOrEqual(36);
     const jobCard = page.getByRole('region', { name: job.reference });
     await expect(jobCard).toContainText(/In finish\s*\d+/);
+    // The card counts every part of the job still on the board, as the full board lists them.
+    const board = await lead.get<{ items: ReadyItem[] }>(`/api/ready?jobId=${job.id}`);
+    const left = board.items.filter((p) => p.state !== 'collected').length;
+    const counted = (await jobCard.getByRole('listitem').allTextContents()).map((text) => Number(/\d+/.exec(text)?.[0] ?? 0));
+    expect(counted.reduce((sum, n) => sum + n, 0)).toBe(left);
+    expect(asked).toContain('/api/ready/summary');
+    expect(asked).not.toContain('/api/ready');
     await expect(page.getByRole('heading', { name: 'Next ready to handle', level: 2 })).toBeVisible();
     await expect(page.getByText(/^Live: changes show as they happen/)).toBeVisible();
     await page.screenshot({ path: `${shotsDir}/ready-wall-1920.png` });

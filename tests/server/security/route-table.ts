@@ -137,6 +137,7 @@ export const routeTable: RouteRow[] = [
   row('GET', '/api/coats/:id', s(401, 200, 200, 200, 403), async (fx) => ({ url: `/api/coats/${await fx.anyCoat()}` })),
   row('POST', '/api/coats/:id/corrections', s(401, 201, 201, 201, 403), async (fx) => ({ url: `/api/coats/${await fx.newCoat()}/corrections`, body: { reason: 'Wrong notes', notes: 'Corrected' } })),
   row('GET', '/api/ready', s(401, 200, 200, 200, 200), get('/api/ready')),
+  row('GET', '/api/ready/summary', s(401, 200, 200, 200, 200), get('/api/ready/summary')),
   row('POST', '/api/denibs', s(401, 201, 201, 201, 403), (fx) => ({ url: '/api/denibs', body: { spraySessionId: fx.spraySessionId, partIds: [fx.partId], grit: 'P320', abradedAt: new Date(Date.now() - 60_000).toISOString() } })),
   row('GET', '/api/denibs', s(401, 200, 200, 200, 403), get('/api/denibs')),
   row('GET', '/api/readings', s(401, 200, 200, 200, 200), get('/api/readings')),

@@ -206,6 +206,11 @@ export const siteTable: SiteRow[] = [
     ...b.items.filter((p: Body) => onFirstRack(p.collectedFrom, first)).map((p: Body) => `part ${p.id} collected from rack ${p.collectedFrom.name}`),
     ...b.items.filter((p: Body) => p.id === fx.first.placedPartId).map(() => 'the part on the first site’s rack'),
   ])),
+  row('GET', '/api/ready/summary', get('/api/ready/summary'), filtered(() => ({ url: '/api/ready/summary?siteId=1&jobs=24&next=24' }), (b, fx, first) => [
+    ...b.summary.nextReady.filter((p: Body) => onFirstRack(p.rack, first) || p.id === fx.first.placedPartId).map((p: Body) => `part ${p.id} of the first site`),
+    ...b.summary.jobs.filter((j: Body) => j.jobId === fx.today.denibJobId).map(() => 'the job whose only part is on the first site'),
+    ...b.summary.waitingJobs.filter((j: Body) => j.jobReference === 'SITE-MATRIX-DENIB').map(() => 'the first site’s job in the waiting line'),
+  ])),
   row('POST', '/api/denibs', (fx) => ({ url: '/api/denibs', body: denibOn(fx.second.spraySessionId, [fx.second.placedPartId]) }), refused((fx) => [
     { url: '/api/denibs', body: denibOn(fx.first.spraySessionId, [fx.first.placedPartId]), fields: ['spraySessionId'] },
     { url: '/api/denibs', body: denibOn(fx.second.spraySessionId, [fx.first.placedPartId]), fields: ['partIds'] },

@@ -1,14 +1,14 @@
 import { boardOrder, stateLabels } from './readiness';
 import { ReadyStateBadge } from './ready-state-badge';
-import type { WallJob } from './wall-summary';
+import type { ReadySummaryJob } from '../../../../shared/schemas/ready';
 
 /** One job on the wall: its reference large enough to read across the shop, and its parts per state. */
-export function WallJobCard({ job }: { job: WallJob }) {
+export function WallJobCard({ job }: { job: ReadySummaryJob }) {
   const states = boardOrder.filter((state) => state !== 'collected' && (job.counts[state] ?? 0) > 0);
   return (
     <section aria-labelledby={`wall-job-${job.jobId}`} className="rounded-panel border-4 border-maple-900 bg-white p-5">
       <h2 id={`wall-job-${job.jobId}`} className="text-4xl font-bold leading-tight text-maple-900 xl:text-5xl">
-        {job.reference}
+        {job.jobReference}
       </h2>
       <p className="mb-4 truncate text-2xl font-medium text-maple-800">{job.customer}</p>
       <ul className="space-y-3">

@@ -1,8 +1,8 @@
-import type { BoardPart } from './readiness';
+import type { ReadySummaryPart } from '../../../../shared/schemas/ready';
 import { shopMoment, timeUntil } from './readiness-words';
 
 /** The parts that will be ready to handle soonest, with the time and where they sit. */
-export function WallNextReady({ parts, now, timeZone }: { parts: BoardPart[]; now: Date; timeZone: string }) {
+export function WallNextReady({ parts, now, timeZone }: { parts: ReadySummaryPart[]; now: Date; timeZone: string }) {
   return (
     <section aria-labelledby="wall-next" className="rounded-panel border-4 border-maple-900 bg-white p-5">
       <h2 id="wall-next" className="mb-3 text-3xl font-bold text-maple-900">

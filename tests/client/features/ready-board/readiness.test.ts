@@ -5,7 +5,6 @@ import { stateAt, toBoardPart } from '../../../../src/features/ready-board/compo
 import { coatWords, partLines, timeUntil } from '../../../../src/features/ready-board/components/readiness-words';
 import { groupByRack } from '../../../../src/features/ready-board/components/board-groups';
 import { jobReadyLines } from '../../../../src/lib/ready-time-words';
-import { summariseForWall } from '../../../../src/features/ready-board/components/wall-summary';
 
 const zone = 'Europe/London';
 const at = (iso: string) => new Date(iso);
@@ -121,14 +120,7 @@ describe('grouping', () => {
     const groups = groupByJob(parts);
     expect(groups.map((g) => g.title)).toEqual(['LJ-26-105', 'LJ-26-101']);
     expect(groups[0].parts.map((p) => p.label)).toEqual(['Door 10', 'Door 2']);
-  });
-  it('gives the wall the active jobs as cards and the waiting ones in a line', () => {
-    const summary = summariseForWall(parts, 5);
-    expect(summary.activeJobs.map((j) => [j.reference, j.counts])).toEqual([['LJ-26-105', { 'ready-to-handle': 1, drying: 1 }]]);
-    expect(summary.waitingJobs).toEqual([{ reference: 'LJ-26-101', parts: 1 }]);
-    expect(summary.nextReady.map((p) => p.label)).toEqual(['Door 2']);
-  });
-});
+  });});
 
 describe('jobReadyLines', () => {
   const job = { jobId: 5, jobReference: 'LJ-26-105', handleAt: '2026-12-03T09:15:00Z', packAt: '2026-12-03T17:00:00Z', coatsRemaining: 4, partsCounted: 2, partsCollected: 0, partsUnknown: 0, projected: true, dryingTempC: 20 };
