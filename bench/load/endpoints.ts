@@ -26,6 +26,7 @@ export function readTargets(shop: SyntheticShop, auth: SignedIn): Target[] {
   return [
     { name: "calendar, this week", method: 'GET', path: `/api/spray-sessions?from=${week.from}&to=${week.to}&pageSize=1000`, headers },
     { name: 'ready board', method: 'GET', path: '/api/ready', headers },
+    { name: 'ready board, wall summary', method: 'GET', path: '/api/ready/summary', headers },
     { name: 'coat log p1, one job', method: 'GET', path: `/api/coats?jobId=${jobInFinish(shop)}&history=false&page=1&pageSize=25`, headers },
     { name: 'report: booth use, 4 weeks', method: 'GET', path: `${reportPath}?from=${isoDate(now.getTime() - 28 * 86_400_000)}&to=${isoDate(now.getTime())}`, headers },
   ];
