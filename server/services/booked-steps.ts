@@ -58,7 +58,7 @@ function liveItemsOf(data: SiteData, partIds: number[], now: Date): Promise<Live
  */
 export async function bookedStepsOf(
   data: SiteData,
-  parts: PartEntity[],
+  parts: Pick<PartEntity, 'id' | 'jobId'>[],
   context: { coats: Map<number, CoatTimes[]>; steps: Map<number, FinishStep[]>; now: Date },
 ): Promise<BookedPartStep[]> {
   if (parts.length === 0) return [];

@@ -2,7 +2,7 @@ import { In } from 'typeorm';
 import { projectedRecoatWindow, sharedRecoatWindow } from '../../shared/finishing/recoat-window';
 import type { FinishStep, RecoatWindow } from '../../shared/finishing/readiness';
 import { emptySessionWork, type SessionCoat, type SessionItemDto, type SessionWork } from '../../shared/schemas/spray-session';
-import type { SiteData } from '../data/site-data';
+import { idListParam, type SiteData } from '../data/site-data';
 import type { JobEntity } from '../db/entities/job.entity';
 import type { PartEntity } from '../db/entities/part.entity';
 import type { ProductEntity } from '../db/entities/product.entity';
@@ -19,7 +19,7 @@ export interface WorkContext {
 
 /** Everything about the sessions' parts, read once for a whole list of sessions. */
 interface Known {
-  parts: Map<number, PartEntity>;
+  parts: Map<number, PartJob>;
   jobs: Map<number, JobEntity>;
   steps: Map<number, FinishStep[]>;
   products: Map<number, ProductEntity>;
@@ -41,10 +41,19 @@ function byPartAndStep(booked: BookedPartStep[]): Map<string, BookedPartStep[]> 
   return map;
 }
 
+type PartJob = Pick<PartEntity, 'id' | 'jobId'>;
+
+/** Which job each part belongs to: parts are the group's, every site reads them. */
+async function jobsOfParts(data: SiteData, partIds: number[]): Promise<PartJob[]> {
+  const { sql } = data;
+  const rows = await sql.select<PartJob>(`SELECT id, job_id AS "jobId" FROM parts WHERE id IN (${sql.idList})`, [idListParam(sql.dialect, partIds)]);
+  return rows.map((r) => ({ id: Number(r.id), jobId: Number(r.jobId) }));
+}
+
 /** A part's coats and bookings are facts of the part, whichever site they were at: they decide what is sprayed and the window. */
 async function readKnown(data: SiteData, partIds: number[], context: WorkContext): Promise<Known> {
   const whole = data.acrossSites;
-  const parts = await data.parts.findBy({ id: In(partIds) });
+  const parts = await jobsOfParts(data, partIds);
   const [jobs, steps, coats] = await Promise.all([data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }), stepsByJob(data, parts), currentCoatsByPart(whole, partIds)]);
   const productIds = [...new Set([...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : [])))];
   const [products, booked] = await Promise.all([
