@@ -52,9 +52,7 @@ export async function bookSprayerNow(api: LeadApi, items: { partId: number; step
   const span = { start: new Date(now - 5 * 60_000).toISOString(), end: new Date(now + 2 * 3_600_000).toISOString() };
   const booth = (await api.get<{ items: { id: number; name: string }[] }>('/api/booths')).items.find((b) => b.name === demoBooth)!;
   const sprayer = (await api.get<{ items: { id: number; name: string }[] }>(`/api/sprayers?boothId=${booth.id}`)).items.find((s) => s.name === demoSprayer)!;
-  const around = `from=${encodeURIComponent(span.start)}&to=${encodeURIComponent(span.end)}`;
-  const { items: booked } = await api.get<{ items: { id: number; state: string; boothId: number; sprayerId: number | null }[] }>(`/api/spray-sessions?${around}`);
-  for (const old of booked) if (old.state !== 'cancelled' && (old.sprayerId === sprayer.id || old.boothId === booth.id)) await api.send('PATCH', `/api/spray-sessions/${old.id}`, { state: 'cancelled' });
+  await clearSpan(api, span, { boothIds: [booth.id], sprayerId: sprayer.id });
   const { spraySession } = await api.send<{ spraySession: { id: number } }>('POST', '/api/spray-sessions', { boothId: booth.id, sprayerId: sprayer.id, ...span, items, override: { reason } });
   const cancel = async () => {
     const res = await api.context.fetch(`/api/spray-sessions/${spraySession.id}`, { method: 'PATCH', headers: { 'x-csrf-token': api.csrf }, data: { state: 'cancelled' } });
@@ -62,4 +60,23 @@ export async function bookSprayerNow(api: LeadApi, items: { partId: number; step
     if (!res.ok()) console.warn(`Could not cancel spray session ${spraySession.id}: ${res.status()}`);
   };
   return { id: spraySession.id, cancel };
+}
+
+/** The demo booths' and Mina's ids, found by name. */
+export async function demoShop(api: LeadApi): Promise<{ boothIds: number[]; sprayerId: number }> {
+  const booths = (await api.get<{ items: { id: number }[] }>('/api/booths')).items;
+  const sprayer = (await api.get<{ items: { id: number; name: string }[] }>('/api/sprayers')).items.find((s) => s.name === demoSprayer)!;
+  return { boothIds: booths.map((b) => b.id), sprayerId: sprayer.id };
+}
+
+/**
+ * Makes room in a busy shop: cancels every session in `boothIds`, or given to `sprayerId`, that
+ * overlaps the span (the demo week books the booths through the working day).
+ */
+export async function clearSpan(api: LeadApi, span: { start: string; end: string }, whose: { boothIds: number[]; sprayerId: number }): Promise<void> {
+  const around = `from=${encodeURIComponent(span.start)}&to=${encodeURIComponent(span.end)}`;
+  const { items } = await api.get<{ items: { id: number; state: string; boothId: number; sprayerId: number | null }[] }>(`/api/spray-sessions?${around}`);
+  for (const old of items) {
+    if (old.state !== 'cancelled' && (old.sprayerId === whose.sprayerId || whose.boothIds.includes(old.boothId))) await api.send('PATCH', `/api/spray-sessions/${old.id}`, { state: 'cancelled' });
+  }
 }
