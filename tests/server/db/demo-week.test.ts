@@ -88,7 +88,7 @@ describe('the demo week', () => {
     expect(mornings).toEqual(['2027-03-29T07:00:00.000Z', '2027-03-30T07:00:00.000Z', '2027-03-31T07:00:00.000Z', '2027-04-01T07:00:00.000Z', '2027-04-02T07:00:00.000Z']);
   }, 60_000);
 
-  it('plans each job’s coats in the order of its finish system, one working day apart', async () => {
+  it('plans each job’s coats in the order of its finish system, the whole of a short job within the week', async () => {
     const week = await seededWeek(new Date('2027-03-27T12:00:00Z'));
     const stepsByPart = new Map<number, number[]>();
     for (const session of week.sessions) {
