@@ -5,6 +5,7 @@ import { createFileStorage } from '../services/file-storage';
 import { backupShop, restoreShop, type Shop } from './backup';
 import { openDataSource } from './data-source';
 import { seedDemoHistory } from './demo-history';
+import { seedDemoWeek } from './demo-week';
 import { demoSignInLines, seedDemoShop } from './seed';
 
 async function generate(name: string | undefined): Promise<void> {
@@ -59,6 +60,8 @@ async function run(command: string | undefined, arg: string | undefined): Promis
     } else if (command === 'seed') {
       const { seeded } = await seedDemoShop(dataSource, { uploadDir: config.uploadDir, storage: createFileStorage(config) });
       if (seeded) await seedDemoHistory(dataSource);
+      // `seed --quiet-week` leaves the coming days unbooked (a database for tests that book them).
+      if (seeded && arg !== '--quiet-week') console.log(`Booked ${(await seedDemoWeek(dataSource)).sessions} spray sessions for this working week.`);
       console.log(seeded ? `Seeded the demo shop. Sign-ins:\n${demoSignInLines().join('\n')}` : 'The database already has users; the demo shop was not seeded.');
     } else {
       throw new Error(`Unknown command "${command}": use migrate, seed or generate`);

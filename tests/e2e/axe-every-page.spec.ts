@@ -1,6 +1,6 @@
 import type { Page } from '@playwright/test';
 import { routes } from '../../src/app/router';
-import { cancelSession, demoIds, routePatterns, seriousFindings, settle, type DemoIds } from './axe-walk';
+import { demoIds, routePatterns, seriousFindings, settle, type DemoIds } from './axe-walk';
 import { expect, test } from './fixtures';
 import { signIn, type DemoRole } from './helpers';
 import { leadApi } from './lead-api';
@@ -108,7 +108,8 @@ for (const role of ['signed-out', 'admin', 'lead', 'sprayer', 'assembler'] as co
       }
     } finally {
       // Even when a step fails: a session left spraying would keep its sprayer busy for the tests after this one.
-      await cancelSession(api, ids.session);
+      await ids.cancel();
+      await api.context.dispose();
     }
     expect(findings).toEqual([]);
   });

@@ -1,6 +1,7 @@
 import type { Browser, Page } from '@playwright/test';
 import { expect, shotsDir, test } from './fixtures';
 import { mainNav, signIn } from './helpers';
+import { clearSpan, demoShop, leadApi } from './lead-api';
 import { addDataSheet, addFinishSystem, addJob, bookByDraggingNow, type DryingRow } from './day-journey-lead';
 import { coatCards, coatForm, latestCoatTime, recordCoat, recordDenib, recordMix, runChecklist, stopSpraying, tap } from './day-journey-sprayer';
 
@@ -31,7 +32,7 @@ async function openScreens(browser: Browser): Promise<[Page, Page, Page]> {
   return [await lead.newPage(), await sprayer.newPage(), await assembler.newPage()];
 }
 
-test('a lead plans, a sprayer sprays and an assembler collects a job in one day, each on their own screen', async ({ browser }) => {
+test('a lead plans, a sprayer sprays and an assembler collects a job in one day, each on their own screen', async ({ browser, baseURL }) => {
   test.setTimeout(240_000);
   const [lead, sprayer, assembler] = await openScreens(browser);
 
@@ -43,6 +44,10 @@ test('a lead plans, a sprayer sprays and an assembler collects a job in one day,
   await addJob(lead, { reference, customer, dueDate, system, colour: 'Chalk white' }, parts);
 
   // The primer by dragging across free booth time now in the week view, the topcoat by auto-plan.
+  // The demo week keeps the booths and Mina busy through working hours: the lead makes room first.
+  const api = await leadApi(baseURL!);
+  await clearSpan(api, { start: new Date(Date.now() - 20 * 60_000).toISOString(), end: new Date(Date.now() + 2 * 3_600_000).toISOString() }, await demoShop(api));
+  await api.context.dispose();
   await mainNav(lead).getByRole('link', { name: 'Booth planner' }).click();
   await expect(lead.getByRole('button', { name: 'Week', pressed: true })).toBeVisible();
   const booth = await bookByDraggingNow(lead, shopZone, ['Booth 1 (cross-draft)', 'Back spray room'], { reference, customer });

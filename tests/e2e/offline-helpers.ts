@@ -6,7 +6,9 @@ import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import type { SpraySession } from '../../shared/schemas/spray-session';
-import type { LeadApi } from './lead-api';
+import { expect } from './fixtures';
+import { mainNav, signIn } from './helpers';
+import { bookSprayerNow, type LeadApi } from './lead-api';
 
 /** Chromium as the browser tests run it, but with a profile on disk, so closing it is a real browser restart. */
 export function launchTablet(userDataDir: string, baseURL: string): Promise<BrowserContext> {
@@ -25,6 +27,45 @@ export function launchTablet(userDataDir: string, baseURL: string): Promise<Brow
     // The other browser tests block workers (playwright.config.ts); this one is about the worker.
     serviceWorkers: 'allow',
   });
+}
+
+async function openPage(context: BrowserContext): Promise<Page> {
+  return context.pages()[0] ?? context.newPage();
+}
+
+/** A tablet browser with its console watched: what it reports wrong is added to `problems`. */
+export interface Tablet {
+  context: BrowserContext;
+  page: Page;
+  problems: string[];
+}
+
+/** The start of a shift: the tablet browser launched, Mina signed in, the service worker in charge, My sessions open. */
+export async function startShift(profile: string, baseURL: string, expected: RegExp[]): Promise<Tablet> {
+  const context = await launchTablet(profile, baseURL);
+  const problems = guardContext(context, expected);
+  const page = await openPage(context);
+  await signIn(page, 'sprayer');
+  await expect
+    .poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null), { timeout: 30_000 })
+    .toBe(true);
+  await mainNav(page).getByRole('link', { name: 'Spray sessions' }).click();
+  return { context, page, problems };
+}
+
+/** The same tablet after a browser restart with no network, opening the session again. */
+export async function restartOffline(
+  profile: string,
+  baseURL: string,
+  expected: RegExp[],
+  sessionId: number,
+): Promise<Tablet> {
+  const context = await launchTablet(profile, baseURL);
+  const problems = guardContext(context, expected);
+  await context.setOffline(true);
+  const page = await openPage(context);
+  await page.goto(`/spray-sessions/${sessionId}`);
+  return { context, page, problems };
 }
 
 /**
@@ -53,7 +94,9 @@ export function guardContext(context: BrowserContext, expected: RegExp[]): strin
  * Two fresh doors on a job of their own with the demo vanity job's system (2K PU primer first),
  * booked now in Booth 1 for Mina, the demo sprayer. Other tests count the demo job's parts.
  */
-export async function bookTwoDoors(api: LeadApi): Promise<{ sessionId: number; doors: string[] }> {
+export async function bookTwoDoors(
+  api: LeadApi,
+): Promise<{ sessionId: number; cancel: () => Promise<void>; doors: string[] }> {
   const now = Date.now();
   const vanity = (await api.get<List<Job>>('/api/jobs?q=LJ-26-105')).items[0];
   const dueDate = new Date(now + 14 * 86_400_000).toISOString().slice(0, 10);
@@ -76,23 +119,11 @@ export async function bookTwoDoors(api: LeadApi): Promise<{ sessionId: number; d
         })
       ).part,
     );
-  // Earlier runs on the same database may have left the sprayer or the booth booked now.
-  const around = { from: new Date(now - 3 * 3_600_000).toISOString(), to: new Date(now + 3 * 3_600_000).toISOString() };
-  const { items } = await api.get<List<SpraySession>>(
-    `/api/spray-sessions?from=${encodeURIComponent(around.from)}&to=${encodeURIComponent(around.to)}`,
+  const booked = await bookSprayerNow(
+    api,
+    parts.map((part) => ({ partId: part.id, stepPosition: 0 })),
   );
-  for (const old of items)
-    if (old.state !== 'cancelled' && (old.sprayerId === 3 || old.boothId === 1))
-      await api.send('PATCH', `/api/spray-sessions/${old.id}`, { state: 'cancelled' });
-  const { spraySession } = await api.send<{ spraySession: SpraySession }>('POST', '/api/spray-sessions', {
-    boothId: 1,
-    start: new Date(now - 5 * 60_000).toISOString(),
-    end: new Date(now + 2 * 3_600_000).toISOString(),
-    sprayerId: 3,
-    items: parts.map((part) => ({ partId: part.id, stepPosition: 0 })),
-    override: { reason: 'Browser test: booked whatever the hour' },
-  });
-  return { sessionId: spraySession.id, doors };
+  return { sessionId: booked.id, cancel: booked.cancel, doors };
 }
 
 export async function coatsOnServer(api: LeadApi, sessionId: number): Promise<List<Coat>> {

@@ -1,11 +1,16 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import type { BrowserContext, Page } from '@playwright/test';
 import { expect, shotsDir, test } from './fixtures';
-import { mainNav, signIn } from './helpers';
 import { leadApi } from './lead-api';
-import { bookTwoDoors, coatsOnServer, guardContext, launchTablet, recordsOnServer } from './offline-helpers';
+import {
+  bookTwoDoors,
+  coatsOnServer,
+  recordsOnServer,
+  restartOffline,
+  startShift,
+  type Tablet,
+} from './offline-helpers';
 import {
   banner,
   checkAndStart,
@@ -19,8 +24,20 @@ import {
 
 const offlineSave = 'Record coat on this tablet';
 
-async function openPage(context: BrowserContext): Promise<Page> {
-  return context.pages()[0] ?? context.newPage();
+/** Two doors booked now, a fresh browser profile, and what the tablet's console may say without it being a problem. */
+async function prepare(baseURL: string, expectedConsoleError: RegExp) {
+  const api = await leadApi(baseURL);
+  const booked = await bookTwoDoors(api);
+  const profile = await mkdtemp(path.join(os.tmpdir(), 'boothwright-tablet-'));
+  const expected = [/^Failed to load resource: the server responded with a status of 4\d\d/, expectedConsoleError];
+  /** Closes whatever is still open, gives the sprayer back and removes the profile, even when a step failed. */
+  const cleanUp = async (tablet: Tablet | undefined) => {
+    await tablet?.context.close();
+    await booked.cancel();
+    await api.context.dispose();
+    await rm(profile, { recursive: true, force: true });
+  };
+  return { api, ...booked, profile, expected, cleanUp };
 }
 
 test.describe('booth tablet offline', () => {
@@ -34,22 +51,14 @@ test.describe('booth tablet offline', () => {
     expectedConsoleError,
   }) => {
     test.setTimeout(120_000);
-    const api = await leadApi(baseURL!);
-    const { sessionId, doors } = await bookTwoDoors(api);
-    const profile = await mkdtemp(path.join(os.tmpdir(), 'boothwright-tablet-'));
-    const expected = [/^Failed to load resource: the server responded with a status of 4\d\d/, expectedConsoleError!];
+    const { api, sessionId, doors, profile, expected, cleanUp } = await prepare(baseURL!, expectedConsoleError!);
     const problems: string[] = [];
+    let tablet: Tablet | undefined;
 
     try {
       // Online: sign in, let the service worker take over the page, open the session from the list and start spraying.
-      let tablet = await launchTablet(profile, baseURL!);
-      const firstRun = guardContext(tablet, expected);
-      let page = await openPage(tablet);
-      await signIn(page, 'sprayer');
-      await expect
-        .poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null), { timeout: 30_000 })
-        .toBe(true);
-      await mainNav(page).getByRole('link', { name: 'Spray sessions' }).click();
+      tablet = await startShift(profile, baseURL!, expected);
+      let page = tablet.page;
       await page.locator(`a[href="/spray-sessions/${sessionId}"]`).click();
       await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
       await checkAndStart(page);
@@ -59,7 +68,7 @@ test.describe('booth tablet offline', () => {
       ).toBeVisible();
 
       // No network, and the page reloaded: it opens from the tablet, says it is offline and how old its copy is.
-      await tablet.setOffline(true);
+      await tablet.context.setOffline(true);
       await page.reload();
       await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
       await expect(banner(page)).toContainText('Offline — nothing waiting to send');
@@ -75,20 +84,17 @@ test.describe('booth tablet offline', () => {
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(2);
       await page.screenshot({ path: path.join(shotsDir, 'offline-tablet-two-waiting.png'), fullPage: true });
       expect((await coatsOnServer(api, sessionId)).total).toBe(0);
-      await tablet.close();
-      problems.push(...firstRun);
+      await tablet.context.close();
+      problems.push(...tablet.problems);
 
       // The browser restarted, still with no network: the session and both waiting coats are still there.
-      tablet = await launchTablet(profile, baseURL!);
-      const secondRun = guardContext(tablet, expected);
-      await tablet.setOffline(true);
-      page = await openPage(tablet);
-      await page.goto(`/spray-sessions/${sessionId}`);
+      tablet = await restartOffline(profile, baseURL!, expected, sessionId);
+      page = tablet.page;
       await expect(banner(page)).toContainText('Offline — 2 coats waiting to send');
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(2);
 
       // Back online: the queue drains by itself, each coat once.
-      await tablet.setOffline(false);
+      await tablet.context.setOffline(false);
       await expect(banner(page)).toHaveCount(0);
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(0, { timeout: 20_000 });
       await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(2);
@@ -97,11 +103,11 @@ test.describe('booth tablet offline', () => {
       const coated = onServer.items.map((coat) => coat.partIds.length);
       expect(coated).toEqual([1, 1]);
       expect(new Set(onServer.items.flatMap((coat) => coat.partIds)).size).toBe(2);
-      await tablet.close();
-      problems.push(...secondRun);
+      await tablet.context.close();
+      problems.push(...tablet.problems);
+      tablet = undefined;
     } finally {
-      await api.context.dispose();
-      await rm(profile, { recursive: true, force: true });
+      await cleanUp(tablet);
     }
     expect(problems, 'the tablet browser reported problems').toEqual([]);
   });
@@ -111,28 +117,20 @@ test.describe('booth tablet offline', () => {
     expectedConsoleError,
   }) => {
     test.setTimeout(150_000);
-    const api = await leadApi(baseURL!);
-    const { sessionId, doors } = await bookTwoDoors(api);
-    const profile = await mkdtemp(path.join(os.tmpdir(), 'boothwright-tablet-'));
-    const expected = [/^Failed to load resource: the server responded with a status of 4\d\d/, expectedConsoleError!];
+    const { api, sessionId, doors, profile, expected, cleanUp } = await prepare(baseURL!, expectedConsoleError!);
     const problems: string[] = [];
+    let tablet: Tablet | undefined;
 
     try {
       // Online at the start of the shift: sign in and open My sessions, which reads today's sessions ahead.
-      let tablet = await launchTablet(profile, baseURL!);
-      const firstRun = guardContext(tablet, expected);
-      let page = await openPage(tablet);
-      await signIn(page, 'sprayer');
-      await expect
-        .poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null), { timeout: 30_000 })
-        .toBe(true);
-      await mainNav(page).getByRole('link', { name: 'Spray sessions' }).click();
+      tablet = await startShift(profile, baseURL!, expected);
+      let page = tablet.page;
       const row = page.locator(`a[href="/spray-sessions/${sessionId}"]`);
       await expect(row).toBeVisible();
       await expect.poll(() => notKeptForSession(page, sessionId), { timeout: 20_000 }).toEqual([]);
 
       // The network goes; the sprayer opens the session for the first time on this tablet and runs it.
-      await tablet.setOffline(true);
+      await tablet.context.setOffline(true);
       await row.click();
       await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
       await expect(banner(page)).toContainText('Offline — nothing waiting to send');
@@ -150,20 +148,17 @@ test.describe('booth tablet offline', () => {
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(6);
       await page.screenshot({ path: path.join(shotsDir, 'offline-tablet-whole-session.png'), fullPage: true });
       expect((await recordsOnServer(api, sessionId)).spraySession.state).toBe('planned');
-      await tablet.close();
-      problems.push(...firstRun);
+      await tablet.context.close();
+      problems.push(...tablet.problems);
 
       // The browser restarts with no network: all of it is still there, the session still shown as clearing.
-      tablet = await launchTablet(profile, baseURL!);
-      const secondRun = guardContext(tablet, expected);
-      await tablet.setOffline(true);
-      page = await openPage(tablet);
-      await page.goto(`/spray-sessions/${sessionId}`);
+      tablet = await restartOffline(profile, baseURL!, expected, sessionId);
+      page = tablet.page;
       await expect(banner(page)).toContainText(waiting);
       await expect(page.getByRole('heading', { name: 'Clearing the air' })).toBeVisible();
 
       // Back online: sent by themselves, in order, each once.
-      await tablet.setOffline(false);
+      await tablet.context.setOffline(false);
       await expect(page.getByText('Pending — not yet on the server')).toHaveCount(0, { timeout: 30_000 });
       await expect(page.getByRole('heading', { name: 'Clearing the air' })).toBeVisible();
       const onServer = await recordsOnServer(api, sessionId);
@@ -184,11 +179,11 @@ test.describe('booth tablet offline', () => {
       expect(Date.parse(onServer.spraySession.clearingStartedAt!)).toBeGreaterThanOrEqual(
         Date.parse(onServer.denibs[0].abradedAt),
       );
-      await tablet.close();
-      problems.push(...secondRun);
+      await tablet.context.close();
+      problems.push(...tablet.problems);
+      tablet = undefined;
     } finally {
-      await api.context.dispose();
-      await rm(profile, { recursive: true, force: true });
+      await cleanUp(tablet);
     }
     expect(problems, 'the tablet browser reported problems').toEqual([]);
   });

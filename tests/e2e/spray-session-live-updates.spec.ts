@@ -3,9 +3,9 @@ import type { Coat } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
-import type { SpraySession } from '../../shared/schemas/spray-session';
 import { expect, shotsDir, test } from './fixtures';
 import { demo, demoPassword, signIn, type DemoRole } from './helpers';
+import { bookSprayerNow } from './lead-api';
 
 /** The lead's API session, only to set the stage: a new job's door on a rack and a session booked now for the sprayer. */
 async function setStage(baseURL: string) {
@@ -43,29 +43,18 @@ async function setStage(baseURL: string) {
     rackId: 1,
     shelf: 5,
   });
-  // Earlier tests on the same database may have left the sprayer or the booth booked now.
-  const around = new URLSearchParams({
-    from: new Date(now - 3 * 3_600_000).toISOString(),
-    to: new Date(now + 3 * 3_600_000).toISOString(),
-  });
-  for (const old of (await get<List<SpraySession>>(`/api/spray-sessions?${around}`)).items) {
-    if (old.state !== 'cancelled' && (old.sprayerId === 3 || old.boothId === 1))
-      await send('PATCH', `/api/spray-sessions/${old.id}`, { state: 'cancelled' });
-  }
-  const { spraySession } = await send<{ spraySession: SpraySession }>('POST', '/api/spray-sessions', {
-    boothId: 1,
-    start: new Date(now - 5 * 60_000).toISOString(),
-    end: new Date(now + 2 * 3_600_000).toISOString(),
-    sprayerId: 3,
-    items: [{ partId: part.id, stepPosition: 0 }],
-    override: { reason: 'Browser test of live updates' },
-  });
+  const booked = await bookSprayerNow(
+    { context: api, csrf, get, send },
+    [{ partId: part.id, stepPosition: 0 }],
+    'Browser test of live updates',
+  );
   return {
     api,
     job,
     part,
-    sessionId: spraySession.id,
-    coatsOf: () => get<List<Coat>>(`/api/coats?spraySessionId=${spraySession.id}`),
+    sessionId: booked.id,
+    cancel: booked.cancel,
+    coatsOf: () => get<List<Coat>>(`/api/coats?spraySessionId=${booked.id}`),
   };
 }
 
@@ -91,45 +80,51 @@ test('a coat logged on the sprayer’s tablet shows on the lead’s open coat lo
 }) => {
   test.setTimeout(120_000);
   const stage = await setStage(baseURL!);
+  try {
+    const lead = await personAt(browser, 'lead', `/coat-log?job=${stage.job.id}`);
+    await expect(lead.getByRole('heading', { name: 'Coat log', level: 1 })).toBeVisible();
+    const assembler = await personAt(browser, 'assembler', `/ready?job=${stage.job.id}`);
+    const card = assembler.getByRole('listitem', { name: new RegExp(`^${stage.part.label}, `) });
+    await expect(card).toContainText('Waiting for finish');
+    await expect(card).toContainText('No coats yet (3 to go)');
 
-  const lead = await personAt(browser, 'lead', `/coat-log?job=${stage.job.id}`);
-  await expect(lead.getByRole('heading', { name: 'Coat log', level: 1 })).toBeVisible();
-  const assembler = await personAt(browser, 'assembler', `/ready?job=${stage.job.id}`);
-  const card = assembler.getByRole('listitem', { name: new RegExp(`^${stage.part.label}, `) });
-  await expect(card).toContainText('Waiting for finish');
-  await expect(card).toContainText('No coats yet (3 to go)');
+    // The sprayer runs the session on the tablet: the checks, then the planned door's primer coat.
+    await signIn(page, 'sprayer', `/spray-sessions/${stage.sessionId}`);
+    for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/])
+      await page.getByRole('switch', { name: check }).click();
+    const box = (label: string) => page.getByRole('textbox', { name: new RegExp(`^${label}`) });
+    await box('Face velocity measured').fill('0.55');
+    await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
+    await box('Air temperature').fill('20');
+    await box('Relative humidity').fill('50');
+    await box('Surface temperature').fill('19');
+    await page.getByRole('button', { name: 'Start spraying' }).click();
+    const coatForm = page.getByRole('region', { name: 'Record a coat' });
+    await expect(coatForm.getByRole('button', { name: `Remove ${stage.part.label}` })).toBeVisible();
+    await coatForm.getByRole('textbox', { name: /^Wet film reading/ }).fill('140');
+    await coatForm.getByRole('button', { name: 'Record coat' }).click();
+    await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(1);
+    const [coat] = (await stage.coatsOf()).items;
 
-  // The sprayer runs the session on the tablet: the checks, then the planned door's primer coat.
-  await signIn(page, 'sprayer', `/spray-sessions/${stage.sessionId}`);
-  for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/])
-    await page.getByRole('switch', { name: check }).click();
-  const box = (label: string) => page.getByRole('textbox', { name: new RegExp(`^${label}`) });
-  await box('Face velocity measured').fill('0.55');
-  await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-  await box('Air temperature').fill('20');
-  await box('Relative humidity').fill('50');
-  await box('Surface temperature').fill('19');
-  await page.getByRole('button', { name: 'Start spraying' }).click();
-  const coatForm = page.getByRole('region', { name: 'Record a coat' });
-  await expect(coatForm.getByRole('button', { name: `Remove ${stage.part.label}` })).toBeVisible();
-  await coatForm.getByRole('textbox', { name: /^Wet film reading/ }).fill('140');
-  await coatForm.getByRole('button', { name: 'Record coat' }).click();
-  await expect(page.getByRole('article', { name: /^Coat \d+ of \d+, / })).toHaveCount(1);
-  const [coat] = (await stage.coatsOf()).items;
+    // The lead's coat log and the assembler's board follow the change stream; neither reloads.
+    const row = lead.getByRole('row', {
+      name: `${coat.partLabels.join(' and ')}, ${coat.jobReference}, coat 1 of 3`,
+      exact: false,
+    });
+    await expect(row).toBeVisible({ timeout: 5_000 });
+    await expect(row).toContainText('Kestrel 2K PU Primer White');
+    await expect(row).toContainText('Mina Castell');
+    await expect(card).toContainText('1 of 3 coats on', { timeout: 5_000 });
+    await expect(card).toContainText('In finish');
+    expect(await notReloaded(lead)).toBe(true);
+    expect(await notReloaded(assembler)).toBe(true);
+    await lead.screenshot({ path: `${shotsDir}/live-coat-log.png`, fullPage: true });
+    await assembler.screenshot({ path: `${shotsDir}/live-ready-board.png`, fullPage: true });
 
-  // The lead's coat log and the assembler's board follow the change stream; neither reloads.
-  const row = lead.getByRole('row', { name: `${coat.partLabels.join(' and ')}, ${coat.jobReference}, coat 1 of 3`, exact: false });
-  await expect(row).toBeVisible({ timeout: 5_000 });
-  await expect(row).toContainText('Kestrel 2K PU Primer White');
-  await expect(row).toContainText('Mina Castell');
-  await expect(card).toContainText('1 of 3 coats on', { timeout: 5_000 });
-  await expect(card).toContainText('In finish');
-  expect(await notReloaded(lead)).toBe(true);
-  expect(await notReloaded(assembler)).toBe(true);
-  await lead.screenshot({ path: `${shotsDir}/live-coat-log.png`, fullPage: true });
-  await assembler.screenshot({ path: `${shotsDir}/live-ready-board.png`, fullPage: true });
-
-  await lead.context().close();
-  await assembler.context().close();
-  await stage.api.dispose();
+    await lead.context().close();
+    await assembler.context().close();
+  } finally {
+    await stage.cancel();
+    await stage.api.dispose();
+  }
 });

@@ -1,4 +1,4 @@
-import { cancelSession, demoIds } from './axe-walk';
+import { demoIds } from './axe-walk';
 import { expect, test } from './fixtures';
 import { signIn } from './helpers';
 import { leadApi } from './lead-api';
@@ -19,31 +19,35 @@ for (const viewport of tablets) {
     test('every control of a spray session is big enough for a gloved finger, from the checklist to the coat form', async ({ page, baseURL }) => {
       test.setTimeout(120_000);
       const api = await leadApi(baseURL!);
-      const { session } = await demoIds(api, true);
-      await signIn(page, 'sprayer', `/spray-sessions/${session}`);
-      await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
-      expect(await smallTargets(page), 'the pre-spray checklist').toEqual([]);
+      const { session, cancel } = await demoIds(api, true);
+      try {
+        await signIn(page, 'sprayer', `/spray-sessions/${session}`);
+        await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
+        expect(await smallTargets(page), 'the pre-spray checklist').toEqual([]);
 
-      for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await page.getByRole('switch', { name: check }).click();
-      await box(page, 'Face velocity measured').fill('0.55');
-      await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-      await box(page, 'Air temperature').fill('20');
-      await box(page, 'Relative humidity').fill('50');
-      await box(page, 'Surface temperature').fill('19');
-      await page.getByRole('button', { name: 'Start spraying' }).click();
-      await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
+        for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await page.getByRole('switch', { name: check }).click();
+        await box(page, 'Face velocity measured').fill('0.55');
+        await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
+        await box(page, 'Air temperature').fill('20');
+        await box(page, 'Relative humidity').fill('50');
+        await box(page, 'Surface temperature').fill('19');
+        await page.getByRole('button', { name: 'Start spraying' }).click();
+        await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
 
-      await page.getByRole('button', { name: 'Record a mix' }).click();
-      await expect(box(page, 'Amount to mix')).toBeVisible();
-      expect(await smallTargets(page), 'the mix form').toEqual([]);
-      await box(page, 'Amount to mix').fill('3');
-      await page.getByRole('button', { name: 'Record mix' }).click();
+        await page.getByRole('button', { name: 'Record a mix' }).click();
+        await expect(box(page, 'Amount to mix')).toBeVisible();
+        expect(await smallTargets(page), 'the mix form').toEqual([]);
+        await box(page, 'Amount to mix').fill('3');
+        await page.getByRole('button', { name: 'Record mix' }).click();
 
-      const coatForm = page.getByRole('region', { name: 'Record a coat' });
-      await coatForm.getByRole('button', { name: 'Planned parts' }).click();
-      await expect(coatForm.getByRole('checkbox').first()).toBeVisible();
-      expect(await smallTargets(page), 'the coat form with its planned parts').toEqual([]);
-      await cancelSession(api, session);
+        const coatForm = page.getByRole('region', { name: 'Record a coat' });
+        await coatForm.getByRole('button', { name: 'Planned parts' }).click();
+        await expect(coatForm.getByRole('checkbox').first()).toBeVisible();
+        expect(await smallTargets(page), 'the coat form with its planned parts').toEqual([]);
+      } finally {
+        await cancel();
+        await api.context.dispose();
+      }
     });
 
     test('every control of the auto-plan dialog is big enough to tap', async ({ page }) => {

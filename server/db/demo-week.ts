@@ -1,0 +1,105 @@
+import { TZDate } from '@date-fns/tz';
+import { addDays } from 'date-fns';
+import type { DataSource } from 'typeorm';
+import { openingHoursProblem } from '../../shared/finishing/opening-hours';
+import { calendarDateIn } from '../../shared/time';
+import { openSiteData } from '../data/site-data';
+import { everySite } from '../lib/site-scope';
+import { systemActor } from '../services/audit';
+import { createCoatService } from '../services/coats';
+import { EventBus } from '../services/events';
+import { createJobService } from '../services/jobs';
+import { createMixService } from '../services/mixes';
+import { createPartService } from '../services/parts';
+import { createSettingsService } from '../services/settings';
+import { createSpraySessionService } from '../services/spray-sessions';
+import { BoothEntity } from './entities/booth.entity';
+import { FinishStepEntity } from './entities/finish-step.entity';
+import { FinishSystemEntity } from './entities/finish-system.entity';
+import { ProductEntity } from './entities/product.entity';
+import { UserEntity } from './entities/user.entity';
+import { runSessionSoFar, type RunContext, type WeekSession } from './demo-week-run';
+import { weekLanes, type WeekJob } from './demo-week-jobs';
+
+const dayMs = 86_400_000;
+
+/** A job of the week with its coat steps still to book, in order. */
+interface QueuedJob {
+  partIds: number[];
+  steps: { position: number; productId: number; dryFilmUm: number }[];
+}
+
+/** Today (if the booths open today) and the next working days, as shop-zone midnights. */
+export function workingDays(now: Date, timeZone: string, openWeekdays: Set<number>, count: number): TZDate[] {
+  const days: TZDate[] = [];
+  const today = new TZDate(now.getTime(), timeZone);
+  for (let offset = 0; days.length < count && offset < 14; offset++) {
+    const day = addDays(new TZDate(today.getFullYear(), today.getMonth(), today.getDate(), timeZone), offset);
+    if (openWeekdays.has(day.getDay())) days.push(day);
+  }
+  return days;
+}
+
+async function createWeekJobs(dataSource: DataSource, jobs: WeekJob[], now: Date, timeZone: string): Promise<QueuedJob[]> {
+  const jobService = createJobService(openSiteData(dataSource, everySite));
+  const partService = createPartService(openSiteData(dataSource, everySite));
+  const systems = new Map((await dataSource.getRepository(FinishSystemEntity).find()).map((s) => [s.name, s.id]));
+  const queued: QueuedJob[] = [];
+  for (const { dueInDays, finishSystem, parts, ...fields } of jobs) {
+    const finishSystemId = systems.get(finishSystem);
+    if (!finishSystemId) continue;
+    const job = await jobService.create({ ...fields, dueDate: calendarDateIn(new Date(now.getTime() + dueInDays * dayMs), timeZone), finishSystemId }, systemActor);
+    const created = await partService.createMany(job.id, parts, systemActor);
+    const coatSteps = await dataSource.getRepository(FinishStepEntity).find({ where: { finishSystemId, kind: 'coat' }, order: { position: 'ASC' } });
+    queued.push({ partIds: created.map((p) => p.id), steps: coatSteps.map((s) => ({ position: s.position, productId: s.productId!, dryFilmUm: s.dryFilmUm! })) });
+  }
+  return queued;
+}
+
+/** Every coat of a line's jobs, in the order the line sprays them: one a working day. */
+function coatsInOrder(jobs: QueuedJob[]): { partIds: number[]; step: QueuedJob['steps'][number] }[] {
+  return jobs.flatMap((job) => job.steps.map((step) => ({ partIds: job.partIds, step })));
+}
+
+/**
+ * Booked spray sessions for today (when the booths open today) and the next working days, made
+ * through the services the API uses, so every booking meets the same rules (booth open, no
+ * overlap, an active sprayer of the booth's site). On today, a session whose time has come is run
+ * as far as the clock allows: checks, a pot and its coats for one that is over, checks and spraying
+ * for one under way. `now` is the moment the seed runs.
+ */
+export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date; days?: number } = {}): Promise<{ sessions: number }> {
+  const now = options.now ?? new Date();
+  const clock = { at: now, now() { return this.at; } };
+  const data = openSiteData(dataSource, everySite);
+  const settings = createSettingsService(data, clock);
+  const events = new EventBus();
+  const { timezone } = await settings.get();
+  const booths = await dataSource.getRepository(BoothEntity).find({ order: { id: 'ASC' } });
+  const users = await dataSource.getRepository(UserEntity).find();
+  const openWeekdays = new Set(booths.flatMap((b) => b.openingHours.map((span) => span.weekday % 7)));
+  const days = workingDays(now, timezone, openWeekdays, options.days ?? 5);
+  const run: RunContext = { clock, now, sessions: createSpraySessionService(data, settings, events, clock), mixes: createMixService(data, clock), coats: createCoatService(data, settings, events, clock),
+    products: new Map((await dataSource.getRepository(ProductEntity).find()).map((p) => [p.id, p])),
+  };
+  let sessions = 0;
+  for (const lane of weekLanes) {
+    const booth = booths.find((b) => b.name === lane.booth);
+    const sprayer = users.find((u) => u.email === lane.sprayerEmail && !u.disabled);
+    if (!booth || !sprayer) continue;
+    const queue = coatsInOrder(await createWeekJobs(dataSource, lane.jobs, now, timezone));
+    for (const day of days) {
+      const start = new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), ...lane.from, timezone);
+      const end = new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), ...lane.to, timezone);
+      if (openingHoursProblem(start, end, booth.openingHours, timezone)) continue;
+      const coat = queue.shift();
+      if (!coat) break;
+      clock.at = now;
+      const booked = await run.sessions.create({ boothId: booth.id, start: start.toISOString(), end: end.toISOString(), sprayerId: sprayer.id, items: coat.partIds.map((partId) => ({ partId, stepPosition: coat.step.position })) }, systemActor);
+      const session: WeekSession = { id: booked.id, booth, start, end, partIds: coat.partIds, step: coat.step, sprayer: { id: sprayer.id, name: sprayer.name, mayOverride: sprayer.role !== 'sprayer' } };
+      await runSessionSoFar(run, session);
+      sessions++;
+    }
+  }
+  return { sessions };
+}
