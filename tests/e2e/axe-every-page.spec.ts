@@ -1,6 +1,7 @@
 import type { Page } from '@playwright/test';
 import { routes } from '../../src/app/router';
 import { demoIds, routePatterns, seriousFindings, settle, type DemoIds } from './axe-walk';
+import { box, fillPreSprayChecks } from './booth-steps';
 import { expect, test } from './fixtures';
 import { signIn, type DemoRole } from './helpers';
 import { leadApi } from './lead-api';
@@ -20,16 +21,10 @@ async function saveUnits(page: Page, units: RegExp) {
 const spraying: Visit['then'] = {
   label: 'while spraying, with a mix recorded',
   act: async (page) => {
-    const box = (label: string) => page.getByRole('textbox', { name: new RegExp(`^${label}`) });
-    for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await page.getByRole('switch', { name: check }).click();
-    await box('Face velocity measured').fill('0.55');
-    await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-    await box('Air temperature').fill('20');
-    await box('Relative humidity').fill('50');
-    await box('Surface temperature').fill('19');
+    await fillPreSprayChecks(page);
     await page.getByRole('button', { name: 'Start spraying' }).click();
     await page.getByRole('button', { name: 'Record a mix' }).click();
-    await box('Amount to mix').fill('3');
+    await box(page, 'Amount to mix').fill('3');
     await page.getByRole('button', { name: 'Record mix' }).click();
     await expect(page.getByRole('article', { name: /^Mix: / })).toBeVisible();
   },

@@ -1,4 +1,5 @@
 import type { Locator, Page } from '@playwright/test';
+import { box, fillPreSprayChecks } from './booth-steps';
 import { expect } from './fixtures';
 
 /** Touch targets on the booth tablet: at least 44 px each way, so a gloved finger hits them. */
@@ -10,20 +11,12 @@ export async function tap(target: Locator) {
   await target.tap();
 }
 
-/** A number box by its label; the − and + buttons beside it name the field too. */
-export const box = (scope: Page | Locator, label: string) => scope.getByRole('textbox', { name: new RegExp(`^${label}`) });
-
 export const coatForm = (page: Page) => page.getByRole('region', { name: 'Record a coat' });
 export const coatCards = (page: Page) => page.getByRole('article', { name: /^Coat \d+ of \d+, / });
 
 /** The pre-spray checks for a water-borne coat: extraction, filters, mask, conditions; then spraying starts. */
 export async function runChecklist(page: Page) {
-  for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await tap(page.getByRole('switch', { name: check }));
-  await box(page, 'Face velocity measured').fill('0.55');
-  await page.getByRole('radio', { name: /vapour and particulate filters/ }).check();
-  await box(page, 'Air temperature').fill('20');
-  await box(page, 'Relative humidity').fill('50');
-  await box(page, 'Surface temperature').fill('19');
+  await fillPreSprayChecks(page, /vapour and particulate filters/, tap);
   await expect(page.getByText('Go: fit to spray')).toBeVisible();
   await tap(page.getByRole('button', { name: 'Start spraying' }));
   await expect(page.getByText('Spraying', { exact: true })).toBeVisible();

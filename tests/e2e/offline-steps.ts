@@ -1,23 +1,9 @@
-import type { Locator, Page } from '@playwright/test';
+import type { Page } from '@playwright/test';
+import { box, checkAndStart } from './booth-steps';
 import { expect } from './fixtures';
 
-/** A number box by its label; the − and + buttons beside it name the field too. */
-export const box = (scope: Page | Locator, label: string) =>
-  scope.getByRole('textbox', { name: new RegExp(`^${label}`) });
+export { checkAndStart };
 export const banner = (page: Page) => page.getByRole('status').filter({ hasText: 'This tablet is offline.' });
-
-/** The pre-spray checks, as the sprayer ticks and types them, then "Start spraying". */
-export async function checkAndStart(page: Page) {
-  for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/])
-    await page.getByRole('switch', { name: check }).click();
-  await box(page, 'Face velocity measured').fill('0.55');
-  await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-  await box(page, 'Air temperature').fill('20');
-  await box(page, 'Relative humidity').fill('50');
-  await box(page, 'Surface temperature').fill('19');
-  await page.getByRole('button', { name: 'Start spraying' }).click();
-  await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
-}
 
 /** Three litres of the primer, the first product offered. */
 export async function recordMix(page: Page) {

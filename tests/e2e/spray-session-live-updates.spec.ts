@@ -3,6 +3,7 @@ import type { Coat } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
+import { fillPreSprayChecks } from './booth-steps';
 import { expect, shotsDir, test } from './fixtures';
 import { demo, demoPassword, signIn, type DemoRole } from './helpers';
 import { bookSprayerNow } from './lead-api';
@@ -90,14 +91,7 @@ test('a coat logged on the sprayer’s tablet shows on the lead’s open coat lo
 
     // The sprayer runs the session on the tablet: the checks, then the planned door's primer coat.
     await signIn(page, 'sprayer', `/spray-sessions/${stage.sessionId}`);
-    for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/])
-      await page.getByRole('switch', { name: check }).click();
-    const box = (label: string) => page.getByRole('textbox', { name: new RegExp(`^${label}`) });
-    await box('Face velocity measured').fill('0.55');
-    await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-    await box('Air temperature').fill('20');
-    await box('Relative humidity').fill('50');
-    await box('Surface temperature').fill('19');
+    await fillPreSprayChecks(page);
     await page.getByRole('button', { name: 'Start spraying' }).click();
     const coatForm = page.getByRole('region', { name: 'Record a coat' });
     await expect(coatForm.getByRole('button', { name: `Remove ${stage.part.label}` })).toBeVisible();

@@ -1,8 +1,9 @@
-import type { Locator, Page } from '@playwright/test';
+import type { Page } from '@playwright/test';
 import type { Coat } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
 import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
+import { box, fillPreSprayChecks } from './booth-steps';
 import { expect, shotsDir, test } from './fixtures';
 import { signIn } from './helpers';
 import { bookSprayerNow, leadApi, type LeadApi } from './lead-api';
@@ -24,17 +25,6 @@ async function bookSession(api: LeadApi): Promise<{ sessionId: number; cancel: (
 const escaped = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 const coatRows = (page: Page, parts: string, coat: string) => page.getByRole('row', { name: new RegExp(`^${escaped(parts)}, LJ-26-105, ${coat}, `) });
 
-/** A number box by its label; the − and + buttons beside it name the field too. */
-const box = (scope: Page | Locator, label: string) => scope.getByRole('textbox', { name: new RegExp(`^${label}`) });
-
-async function fillChecklist(page: Page, mask: RegExp) {
-  for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await page.getByRole('switch', { name: check }).click();
-  await box(page, 'Face velocity measured').fill('0.55');
-  await page.getByRole('radio', { name: mask }).check();
-  await box(page, 'Air temperature').fill('20');
-  await box(page, 'Relative humidity').fill('50');
-  await box(page, 'Surface temperature').fill('19');
-}
 
 test.describe('spray session', () => {
   // Taking the tablet off line makes the browser report the requests it could not send.
@@ -54,7 +44,7 @@ test.describe('spray session', () => {
       await expect(cautions).toContainText('Follow each product’s safety data sheet, your local regulations and the advice of a competent person');
 
       // The wrong mask for an isocyanate primer: stop, and spraying cannot start.
-      await fillChecklist(page, /vapour and particulate filters/);
+      await fillPreSprayChecks(page, /vapour and particulate filters/);
       await expect(page.getByText('Stop: do not spray')).toBeVisible();
       await expect(page.getByText('These products need air-fed protection; a respirator with vapour and particulate filters is not enough.')).toBeVisible();
       await expect(page.getByText(/Dew point\s*9\.3 °C/)).toBeVisible();
@@ -182,7 +172,7 @@ test.describe('spray session', () => {
     const { sessionId, cancel } = await bookSession(api);
     try {
       await signIn(page, 'lead', `/spray-sessions/${sessionId}`);
-      await fillChecklist(page, /Air-fed hood or visor/);
+      await fillPreSprayChecks(page, /Air-fed hood or visor/);
       await box(page, 'Relative humidity').fill('90');
       await expect(page.getByText('Stop: do not spray')).toBeVisible();
       await expect(page.getByText(/Humidity 90 % is above this product's maximum of 80 %/)).toBeVisible();
@@ -240,7 +230,7 @@ test.describe('between coats', () => {
       await signIn(page, 'sprayer', `/spray-sessions/${sessionId}`);
 
       // The checklist: a part colder than the dew point is said to be below it.
-      await fillChecklist(page, /Air-fed hood or visor/);
+      await fillPreSprayChecks(page, /Air-fed hood or visor/);
       await box(page, 'Relative humidity').fill('90');
       await box(page, 'Surface temperature').fill('14');
       await expect(page.getByText(/Surface\s*4\.3 °C below the dew point/)).toBeVisible();

@@ -1,4 +1,5 @@
 import { demoIds } from './axe-walk';
+import { box, checkAndStart } from './booth-steps';
 import { expect, test } from './fixtures';
 import { signIn } from './helpers';
 import { leadApi } from './lead-api';
@@ -10,7 +11,6 @@ const tablets = [
   { width: 768, height: 1024 },
 ];
 
-const box = (page: import('@playwright/test').Page, label: string) => page.getByRole('textbox', { name: new RegExp(`^${label}`) });
 
 for (const viewport of tablets) {
   test.describe(`on a ${viewport.width} × ${viewport.height} tablet`, () => {
@@ -25,14 +25,7 @@ for (const viewport of tablets) {
         await expect(page.getByRole('heading', { name: 'Booth 1 (cross-draft)', level: 1 })).toBeVisible();
         expect(await smallTargets(page), 'the pre-spray checklist').toEqual([]);
 
-        for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await page.getByRole('switch', { name: check }).click();
-        await box(page, 'Face velocity measured').fill('0.55');
-        await page.getByRole('radio', { name: /Air-fed hood or visor/ }).check();
-        await box(page, 'Air temperature').fill('20');
-        await box(page, 'Relative humidity').fill('50');
-        await box(page, 'Surface temperature').fill('19');
-        await page.getByRole('button', { name: 'Start spraying' }).click();
-        await expect(page.getByText('Spraying', { exact: true })).toBeVisible();
+        await checkAndStart(page);
 
         await page.getByRole('button', { name: 'Record a mix' }).click();
         await expect(box(page, 'Amount to mix')).toBeVisible();

@@ -1,4 +1,5 @@
 import { request, type APIRequestContext, type Page } from '@playwright/test';
+import { fillPreSprayChecks } from './booth-steps';
 import { expect, test } from './fixtures';
 import { demo, demoPassword, mainNav, signIn } from './helpers';
 
@@ -178,12 +179,7 @@ test.describe('booth upkeep and crew records', () => {
     const { spraySession } = await lead.send<{ spraySession: { id: number } }>('POST', '/api/spray-sessions', { boothId: 2, start, end, sprayerId: user.id, items: [{ partId: part.id, stepPosition: 0 }], override: { reason: 'Browser test: booked whatever the hour' } });
 
     await signIn(page, 'lead', `/spray-sessions/${spraySession.id}`);
-    for (const check of [/Extraction is running/, /Filters checked/, /Respirator fitted/]) await page.getByRole('switch', { name: check }).click();
-    await page.getByRole('textbox', { name: /^Face velocity measured/ }).fill('0.55');
-    await page.getByRole('radio', { name: /vapour and particulate filters/ }).check();
-    await page.getByRole('textbox', { name: /^Air temperature/ }).fill('20');
-    await page.getByRole('textbox', { name: /^Relative humidity/ }).fill('50');
-    await page.getByRole('textbox', { name: /^Surface temperature/ }).fill('19');
+    await fillPreSprayChecks(page, /vapour and particulate filters/);
 
     const fitness = page.getByRole('region', { name: 'Fit to spray' });
     await expect(fitness).toContainText('Not fit to spray');

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { compareForBoard, stateAt, summariseForWall, type WallLimits } from '../../../shared/finishing/wall-summary';
 import type { ReadyPart } from '../../../shared/schemas/ready';
+import { readyPart } from '../ready-part-fixture';
 
 // The summary is the board's own bookkeeping (counting, ordering, limits), not trade maths: every
 // expected value below is worked out by hand from the parts listed in each test.
@@ -9,37 +10,8 @@ const dayMs = 86_400_000;
 const limits: WallLimits = { jobs: 6, next: 6, waiting: 12, collectedForMs: 7 * dayMs };
 const now = new Date('2026-12-02T11:00:00Z');
 
-function part(fields: Partial<ReadyPart>): ReadyPart {
-  return {
-    id: 1,
-    label: 'Door 1',
-    jobId: 5,
-    jobReference: 'LJ-26-105',
-    customer: 'Ardent Bathrooms',
-    state: 'drying',
-    coatsDone: 3,
-    coatsTotal: 3,
-    nextStep: null,
-    nextStepKind: null,
-    nextStepGrit: null,
-    nextStepDryFilmUm: null,
-    nextWindowOpensAt: null,
-    nextWindowClosesAt: null,
-    abradeRequired: false,
-    handleAt: '2026-12-02T10:42:00.000Z',
-    packAt: '2026-12-02T16:00:00.000Z',
-    fullCureAt: '2026-12-09T10:00:00.000Z',
-    rack: { id: 1, name: 'Rack A', shelf: 3 },
-    coatsRemaining: 0,
-    nextCoatAt: null,
-    expectedHandleAt: null,
-    expectedPackAt: null,
-    denibbedAt: null,
-    collectedAt: null,
-    collectedFrom: null,
-    ...fields,
-  };
-}
+// Expected times are the board's estimates while coats remain; the wall reads only the recorded ones.
+const part = (fields: Partial<ReadyPart>): ReadyPart => readyPart({ expectedHandleAt: null, expectedPackAt: null, ...fields });
 
 const waiting = { state: 'waiting', handleAt: null, packAt: null, fullCureAt: null, coatsDone: 0, rack: null } as const;
 const between = { state: 'in-finish', coatsDone: 1, handleAt: '2026-12-02T12:30:00.000Z', packAt: null, fullCureAt: null } as const;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { ReadyPart } from '../../../../shared/schemas/ready';
+import { readyPart } from '../../../shared/ready-part-fixture';
 import { groupByJob } from '../../../../src/features/ready-board/components/board-groups';
 import { stateAt, toBoardPart } from '../../../../src/features/ready-board/components/readiness';
 import { coatWords, partLines, timeUntil } from '../../../../src/features/ready-board/components/readiness-words';
@@ -9,37 +9,7 @@ import { jobReadyLines } from '../../../../src/lib/ready-time-words';
 const zone = 'Europe/London';
 const at = (iso: string) => new Date(iso);
 
-function part(fields: Partial<ReadyPart>): ReadyPart {
-  return {
-    id: 1,
-    label: 'Door 1',
-    jobId: 5,
-    jobReference: 'LJ-26-105',
-    customer: 'Ardent Bathrooms',
-    state: 'drying',
-    coatsDone: 3,
-    coatsTotal: 3,
-    nextStep: null,
-    nextStepKind: null,
-    nextStepGrit: null,
-    nextStepDryFilmUm: null,
-    nextWindowOpensAt: null,
-    nextWindowClosesAt: null,
-    abradeRequired: false,
-    handleAt: '2026-12-02T10:42:00.000Z',
-    packAt: '2026-12-02T16:00:00.000Z',
-    fullCureAt: '2026-12-09T10:00:00.000Z',
-    rack: { id: 1, name: 'Rack A', shelf: 3 },
-    coatsRemaining: 0,
-    nextCoatAt: null,
-    expectedHandleAt: '2026-12-02T10:42:00.000Z',
-    expectedPackAt: '2026-12-02T16:00:00.000Z',
-    denibbedAt: null,
-    collectedAt: null,
-    collectedFrom: null,
-    ...fields,
-  };
-}
+const part = readyPart;
 
 describe('stateAt', () => {
   it('turns a drying part ready to handle at its handle time, not before', () => {
