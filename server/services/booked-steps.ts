@@ -2,7 +2,6 @@ import type { FinishStep } from '../../shared/finishing/readiness';
 import type { SpraySessionState } from '../../shared/schemas/spray-session';
 import { idListParam, type SiteData } from '../data/site-data';
 import type { PartEntity } from '../db/entities/part.entity';
-import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { nextCoatStep, type CoatTimes } from './part-coats';
 
 /** One step of one part booked in a live session. */
@@ -15,17 +14,11 @@ export interface BookedPartStep {
   state: SpraySessionState;
 }
 
-const underWay: SpraySessionState[] = ['checking', 'spraying', 'clearing'];
-
-/**
- * A booking still to be sprayed: planned and not yet over, or under way whatever the clock says
- * (a session running late still holds its parts). Done, cancelled and planned-but-past are not.
+/*
+ * A live booking is one still to be sprayed: planned and not yet over, or under way whatever the
+ * clock says (a session running late still holds its parts). Done, cancelled and planned-but-past
+ * are not.
  */
-export function isLiveBooking(session: Pick<SpraySessionEntity, 'state' | 'endAt'>, now: Date): boolean {
-  return underWay.includes(session.state) || (session.state === 'planned' && session.endAt > now.toISOString());
-}
-
-// Live as `isLiveBooking` says, in SQL: under way whatever the clock says, or planned and not yet over.
 const liveItemsSql = (idList: string, oneSite: boolean) => `
   SELECT i.part_id AS "partId", i.step_position AS "stepPosition", s.id AS "sessionId", s.start_at AS "startAt", s.end_at AS "endAt", s.state
   FROM spray_session_items i JOIN spray_sessions s ON s.id = i.spray_session_id
