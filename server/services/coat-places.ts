@@ -1,4 +1,5 @@
 import { In } from 'typeorm';
+import { groupBy } from '../../shared/group-by';
 import type { Coat } from '../../shared/schemas/coat';
 import type { SiteData } from '../data/site-data';
 import type { CoatEntity } from '../db/entities/coat.entity';
@@ -12,8 +13,7 @@ function coatNumberAt(kinds: string[], position: number | null): number | null {
 }
 
 function partIdsByCoat(links: { coatId: number; partId: number }[]): Map<number, number[]> {
-  const byCoat = new Map<number, number[]>();
-  for (const link of links) byCoat.set(link.coatId, [...(byCoat.get(link.coatId) ?? []), link.partId]);
+  const byCoat = groupBy(links, (link) => link.coatId, (link) => link.partId);
   for (const ids of byCoat.values()) ids.sort((a, b) => a - b);
   return byCoat;
 }

@@ -1,4 +1,5 @@
 import type { PartBooking } from '../../shared/finishing/job-ready-time';
+import { groupBy } from '../../shared/group-by';
 import { partReadiness, type FinishStep, type PartReadiness, type ReadinessInput } from '../../shared/finishing/readiness';
 import { idListParam, type SiteData } from '../data/site-data';
 import { mapInSlices } from '../lib/in-slices';
@@ -53,15 +54,12 @@ const liveBookingsSql = (idList: string) => `
  * same wherever it is read.
  */
 export async function bookingsByPart(data: SiteData, partIds: number[]): Promise<Map<number, PartBooking[]>> {
-  const byPart = new Map<number, PartBooking[]>();
-  if (partIds.length === 0) return byPart;
+  if (partIds.length === 0) return new Map();
   const { sql } = data.acrossSites;
   const rows = await sql.select<{ partId: number; stepPosition: number | null; startAt: string }>(liveBookingsSql(sql.idList), [idListParam(sql.dialect, partIds)]);
-  for (const row of rows) {
-    const booking = { startAt: new Date(row.startAt), stepIndex: row.stepPosition === null ? null : Number(row.stepPosition) };
-    const booked = byPart.get(Number(row.partId));
-    if (booked) booked.push(booking);
-    else byPart.set(Number(row.partId), [booking]);
-  }
-  return byPart;
+  return groupBy(
+    rows,
+    (row) => Number(row.partId),
+    (row): PartBooking => ({ startAt: new Date(row.startAt), stepIndex: row.stepPosition === null ? null : Number(row.stepPosition) }),
+  );
 }

@@ -1,4 +1,5 @@
 import { In, IsNull } from 'typeorm';
+import { groupBy } from '../../shared/group-by';
 import { jobReadyTimeOf, partReadyTime, type PartReadyTime } from '../../shared/finishing/job-ready-time';
 import type { FinishStep } from '../../shared/finishing/readiness';
 import type { ProductDryingTable } from '../../shared/finishing/system-time';
@@ -56,13 +57,7 @@ export async function readyJobsOf(data: SiteData, jobIds: number[], tempC: numbe
   const parts = await whole.parts.findBy({ jobId: In(jobIds), collectedAt: IsNull() });
   const collectedByJob = await collectedCounts(whole, jobIds);
   const { times } = await readyTimesOf(whole, parts.filter((p) => !known.has(p.id)), tempC, now);
-  const partsByJob = new Map<number, PartReadyTime[]>();
-  for (const part of parts) {
-    const time = known.get(part.id) ?? times.get(part.id)!;
-    const own = partsByJob.get(part.jobId);
-    if (own) own.push(time);
-    else partsByJob.set(part.jobId, [time]);
-  }
+  const partsByJob = groupBy(parts, (p) => p.jobId, (p) => known.get(p.id) ?? times.get(p.id)!);
   return jobs.map((job) => {
     const time = jobReadyTimeOf(partsByJob.get(job.id) ?? []);
     return {

@@ -1,4 +1,5 @@
 import type { ReadyPart, ReadySummary, ReadySummaryJob } from '../schemas/ready';
+import { groupBy } from '../group-by';
 import { readinessMovedOn, type ReadinessState } from './readiness';
 
 export type StateCounts = Partial<Record<ReadinessState, number>>;
@@ -74,12 +75,6 @@ function jobOf(parts: Shown[], now: Date, limits: WallLimits): ReadySummaryJob &
   return { jobId, jobReference, customer, counts, partsLeft: parts.length - (counts.collected ?? 0), nextChangeAt: isoOrNull(nextChange), urgency: urgencyOf(counts) };
 }
 
-function byJob(parts: Shown[]): Shown[][] {
-  const jobs = new Map<number, Shown[]>();
-  for (const part of parts) jobs.set(part.jobId, [...(jobs.get(part.jobId) ?? []), part]);
-  return [...jobs.values()];
-}
-
 const byReference = (a: { jobReference: string }, b: { jobReference: string }) => byLabel.compare(a.jobReference, b.jobReference);
 
 /**
@@ -89,7 +84,7 @@ const byReference = (a: { jobReference: string }, b: { jobReference: string }) =
  */
 export function summariseForWall(items: readonly ReadyPart[], now: Date, limits: WallLimits): ReadySummary {
   const parts: Shown[] = items.map((part) => ({ ...part, shownState: stateAt(part, now) }));
-  const everyJob = byJob(parts).map((jobParts) => jobOf(jobParts, now, limits));
+  const everyJob = [...groupBy(parts, (p) => p.jobId).values()].map((jobParts) => jobOf(jobParts, now, limits));
   const jobs = everyJob.filter((job) => job.partsLeft > 0);
   const waiting = jobs.filter((job) => (job.counts.waiting ?? 0) === job.partsLeft).sort(byReference);
   const active = jobs.filter((job) => (job.counts.waiting ?? 0) !== job.partsLeft).sort((a, b) => b.urgency - a.urgency || byReference(a, b));
