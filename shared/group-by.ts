@@ -3,7 +3,11 @@
  * item. One pass, each item pushed once (copying the list on every item was quadratic for a big
  * board's parts).
  */
-export function groupBy<T, K, V = T>(items: Iterable<T>, keyOf: (item: T) => K, valueOf: (item: T) => V = (item) => item as unknown as V): Map<K, V[]> {
+export function groupBy<T, K, V = T>(
+  items: Iterable<T>,
+  keyOf: (item: T) => K,
+  valueOf: (item: T) => V = (item) => item as unknown as V,
+): Map<K, V[]> {
   const groups = new Map<K, V[]>();
   for (const item of items) {
     const key = keyOf(item);

@@ -17,7 +17,18 @@ describe('groupBy', () => {
   });
 
   it('keeps what `valueOf` picks of each item, and gives an empty map for no items', () => {
-    expect(groupBy(parts, (p) => p.jobId, (p) => p.id)).toEqual(new Map([[7, [1, 3]], [9, [2]]]));
+    expect(
+      groupBy(
+        parts,
+        (p) => p.jobId,
+        (p) => p.id,
+      ),
+    ).toEqual(
+      new Map([
+        [7, [1, 3]],
+        [9, [2]],
+      ]),
+    );
     expect(groupBy([], () => 0).size).toBe(0);
   });
 });
