@@ -12,6 +12,7 @@ import { signInLimits } from '../middleware/sign-in-limits';
 import { singleUpload } from '../middleware/upload';
 import { createServiceSet, type ServiceDeps } from '../services/service-set';
 import type { ResponseCache } from '../lib/response-cache';
+import type { AnswerShortcuts } from './answer-shortcuts';
 import { answerKey, clearedByOf, keepUntil, sendAnswer, staleSiteOf, toCachedAnswer } from './cached-answers';
 import { answered, Reply, type Access, type ApiRoute, type RouteContext } from './route';
 
@@ -22,6 +23,8 @@ export interface RegistryDeps {
   auth: passport.PassportStatic;
   /** GET answers of the routes that declare `cache`; cleared through the change feed. */
   answers: ResponseCache;
+  /** Repeat reads answered before the sign-in session; told of each cached answer sent. */
+  shortcuts: AnswerShortcuts;
 }
 
 const pass: RequestHandler = (_req, _res, next) => next();
@@ -105,7 +108,10 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
     const ctx: RouteContext = { ...contextOf(req, query, deps), res };
     const key = policy ? answerKey(policy, req, ctx) : '';
     const held = policy ? deps.answers.get(key) : undefined;
-    if (held) return sendAnswer(req, res, 200, held);
+    if (held) {
+      deps.shortcuts.remember(req, key);
+      return sendAnswer(req, res, 200, held);
+    }
     const stamp = deps.answers.stamp();
     const result = await run(route, req, ctx, { params, query, body, form }, deps);
     if (result === answered) return;
@@ -117,7 +123,10 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
     }
     if (!policy) return void res.status(status).json(answer);
     const cached = toCachedAnswer(answer);
-    if (status === 200) deps.answers.set(key, cached, clearedByOf(policy, ctx.scope), keepUntil(policy, answer, nowMs()), stamp);
+    if (status === 200) {
+      deps.answers.set(key, cached, clearedByOf(policy, ctx.scope), keepUntil(policy, answer, nowMs()), stamp);
+      deps.shortcuts.remember(req, key);
+    }
     await sendAnswer(req, res, status, cached);
   };
 }

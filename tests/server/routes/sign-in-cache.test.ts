@@ -111,3 +111,69 @@ describe('signed-in sessions and users held in memory', () => {
     expect(text).not.toContain('sign-in.changed');
   });
 });
+
+// A repeat of the same cached read with the same cookie is answered before the sign-in session is
+// read (server/registry/answer-shortcuts.ts). Such an answer sets no cookie (the full way renews
+// the rolling one), which is how these tests know which way it went.
+describe('repeat reads answered before the sign-in session', () => {
+  const report = '/api/reports/booth-use?from=2025-03-24&to=2025-04-06';
+  const read = (app: Express, cookie: string) => request(app).get(report).set('Cookie', cookie);
+  const shortcutTaken = (res: request.Response) => res.headers['set-cookie'] === undefined;
+
+  /** A fresh lead, signed in on A, whose report read on B has just been answered the short way. */
+  async function leadWithShortcut(email: string): Promise<{ cookie: string; csrf: string; id: number }> {
+    const admin = await signIn(a, demo.admin);
+    await admin.agent.post('/api/users').set('x-csrf-token', admin.csrf).send({ email, name: 'Short Way', role: 'lead', password: 'a-long-password' }).expect(201);
+    const lead = await signInOnA(email, 'a-long-password');
+    const first = await read(b, lead.cookie).expect(200);
+    expect(shortcutTaken(first)).toBe(false);
+    // B's first sight of the session renews its expiry once, after which the session stays as held.
+    expect(shortcutTaken(await read(b, lead.cookie).expect(200))).toBe(false);
+    const again = await read(b, lead.cookie).expect(200);
+    expect(shortcutTaken(again)).toBe(true);
+    expect(again.body).toEqual(first.body);
+    return { ...lead, id: await idOf(email) };
+  }
+
+  async function changeUser(id: number, patch: Record<string, unknown>): Promise<void> {
+    const admin = await signIn(a, demo.admin);
+    await admin.agent.patch(`/api/users/${id}`).set('x-csrf-token', admin.csrf).send(patch).expect(200);
+  }
+
+  it('takes the short way only for the same cookie and address', async () => {
+    const lead = await leadWithShortcut('short-same@larchmere.test');
+    const other = await signInOnA(demo.admin);
+    expect(shortcutTaken(await read(b, other.cookie).expect(200))).toBe(false);
+    const elsewhere = await request(b).get(`${report}&boothId=1`).set('Cookie', lead.cookie);
+    expect(shortcutTaken(elsewhere)).toBe(false);
+    const forged = lead.cookie.replace(/.$/, (last) => (last === 'A' ? 'B' : 'A'));
+    await read(b, forged).expect(401);
+  });
+
+  it('refuses the next repeat read once the role no longer allows it', async () => {
+    const lead = await leadWithShortcut('short-role@larchmere.test');
+    await changeUser(lead.id, { role: 'assembler' });
+    await read(b, lead.cookie).expect(403);
+  });
+
+  it('refuses the next repeat read once the user is disabled, signed out or has a new password', async () => {
+    const disabled = await leadWithShortcut('short-disabled@larchmere.test');
+    await changeUser(disabled.id, { disabled: true });
+    await read(b, disabled.cookie).expect(401);
+
+    const out = await leadWithShortcut('short-out@larchmere.test');
+    await request(a).post('/api/auth/logout').set('Cookie', out.cookie).set('x-csrf-token', out.csrf).expect(204);
+    await read(b, out.cookie).expect(401);
+
+    const reset = await leadWithShortcut('short-reset@larchmere.test');
+    await changeUser(reset.id, { password: 'another-long-password-here' });
+    await read(b, reset.cookie).expect(401);
+  });
+
+  it('answers a write since the last read afresh, never from before it', async () => {
+    const lead = await leadWithShortcut('short-fresh@larchmere.test');
+    bus.publish({ type: 'answers.stale', siteId: null });
+    expect(shortcutTaken(await read(b, lead.cookie).expect(200))).toBe(false);
+  });
+});
+
