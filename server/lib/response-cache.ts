@@ -1,9 +1,11 @@
-/** One cached answer: its JSON bytes and their strong ETag, and once asked for, the same gzipped. */
+/** One cached answer: its JSON bytes and their strong ETag, and once asked for, the same compressed. */
 export interface CachedAnswer {
   body: Buffer;
   etag: string;
   /** Compressed once, off the event loop, the first time a client that accepts gzip asks. */
   gzipped?: Promise<Buffer>;
+  /** The same for brotli. */
+  brotli?: Promise<Buffer>;
 }
 
 /** Whose changes clear an entry: one site's (and group-wide ones), or a change on any site. */

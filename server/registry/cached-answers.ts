@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { promisify } from 'node:util';
-import { gzip } from 'node:zlib';
+import { brotliCompress, constants, gzip } from 'node:zlib';
 import type { Request, Response } from 'express';
 import type { SiteScope } from '../lib/site-scope';
 import type { CachedAnswer, ClearedBy } from '../lib/response-cache';
@@ -29,35 +29,50 @@ export function toCachedAnswer(answer: unknown): CachedAnswer {
 }
 
 // Below about one network packet compressing saves nothing worth the work.
-const gzipFromBytes = 1400;
+const compressFromBytes = 1400;
 const gzipAsync = promisify(gzip);
+const brotliAsync = promisify(brotliCompress);
 
-/** The gzipped bytes, made once per answer (in libuv's thread pool, so a big board never holds the event loop). */
-function gzippedOf(answer: CachedAnswer): Promise<Buffer> {
-  answer.gzipped ??= gzipAsync(answer.body, { level: 6 });
-  return answer.gzipped;
+/**
+ * The two encodings offered, each made once per answer (in libuv's thread pool, so a big board
+ * never holds the event loop). Brotli at quality 6 makes a ready board a third smaller than gzip
+ * does, in about the same time; browsers ask for it over HTTPS, gzip over plain HTTP.
+ */
+const encodings = {
+  br: {
+    etagSuffix: '-br',
+    make: (answer: CachedAnswer) => (answer.brotli ??= brotliAsync(answer.body, { params: { [constants.BROTLI_PARAM_QUALITY]: 6, [constants.BROTLI_PARAM_SIZE_HINT]: answer.body.length } })),
+  },
+  gzip: { etagSuffix: '-gz', make: (answer: CachedAnswer) => (answer.gzipped ??= gzipAsync(answer.body, { level: 6 })) },
+};
+
+/** The encoding to send: brotli when the client takes it, else gzip, else none (no Accept-Encoding at all: nothing assumed). */
+function encodingFor(req: Request): keyof typeof encodings | null {
+  if (!req.headers['accept-encoding']) return null;
+  if (req.acceptsEncodings('br') === 'br') return 'br';
+  return req.acceptsEncodings('gzip', 'identity') === 'gzip' ? 'gzip' : null;
 }
 
 /**
- * Sends the answer with its ETag, gzipped when it is big and the client accepts gzip (every
- * browser does). The compressed bytes are kept with a cached answer, so a wall screen's board is
- * compressed once per change, not once per request. Each encoding has its own strong ETag, as
- * HTTP asks. Express answers 304 without the body when the request's If-None-Match names it
- * (req.fresh), whether or not the answer came from the cache.
+ * Sends the answer with its ETag, compressed when it is big and the client accepts brotli or gzip
+ * (every browser does). The compressed bytes are kept with a cached answer, so a wall screen's
+ * board is compressed once per change, not once per request. Each encoding has its own strong
+ * ETag, as HTTP asks. Express answers 304 without the body when the request's If-None-Match names
+ * it (req.fresh), whether or not the answer came from the cache.
  */
 export async function sendAnswer(req: Request, res: Response, status: number, answer: CachedAnswer): Promise<void> {
   // Browsers keep it but ask again each time, sending the ETag: a signed-in answer is never shared.
   res.setHeader('Cache-Control', 'private, no-cache');
   res.setHeader('Vary', 'Accept-Encoding');
-  // With no Accept-Encoding at all the client is not assumed to unpack anything.
-  const wantsGzip = Boolean(req.headers['accept-encoding']) && req.acceptsEncodings('gzip', 'identity') === 'gzip';
-  if (answer.body.length < gzipFromBytes || !wantsGzip) {
+  const encoding = answer.body.length < compressFromBytes ? null : encodingFor(req);
+  if (!encoding) {
     res.setHeader('ETag', answer.etag);
     return void res.status(status).type('json').send(answer.body);
   }
-  const body = await gzippedOf(answer);
-  res.setHeader('ETag', `${answer.etag.slice(0, -1)}-gz"`);
-  res.setHeader('Content-Encoding', 'gzip');
+  const { etagSuffix, make } = encodings[encoding];
+  const body = await make(answer);
+  res.setHeader('ETag', `${answer.etag.slice(0, -1)}${etagSuffix}"`);
+  res.setHeader('Content-Encoding', encoding);
   res.status(status).type('json').send(body);
 }
 
