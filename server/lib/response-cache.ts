@@ -31,6 +31,8 @@ export class ResponseCache {
   private readonly entries = new Map<string, Entry>();
   private bytes = 0;
   private clears = 0;
+  /** Answers being worked out, by key, with the stamp they began under. */
+  private readonly underWay = new Map<string, { stamp: number; answer: Promise<CachedAnswer | undefined> }>();
 
   constructor(
     readonly maxBytes: number,
@@ -75,6 +77,25 @@ export class ResponseCache {
       if (this.bytes <= this.maxBytes) break;
       this.drop(oldest, entry);
     }
+  }
+
+  /**
+   * The answer for `key` another request is working out, if it began since the last clear. When a
+   * change reaches every screen at once, each asks again within the same moment; they wait for one
+   * answer rather than each work out the same board. It resolves to undefined when that work ends
+   * without an answer to share (an error, another status).
+   */
+  underWayFor(key: string): Promise<CachedAnswer | undefined> | undefined {
+    const work = this.underWay.get(key);
+    return work && work.stamp === this.clears ? work.answer : undefined;
+  }
+
+  /** Says the answer for `key` is being worked out from `stamp` on, until `answer` settles. */
+  workingOn(key: string, stamp: number, answer: Promise<CachedAnswer | undefined>): void {
+    this.underWay.set(key, { stamp, answer });
+    void answer.finally(() => {
+      if (this.underWay.get(key)?.answer === answer) this.underWay.delete(key);
+    });
   }
 
   /** A change on one site clears that site's answers and those reading across sites; null clears everything. */

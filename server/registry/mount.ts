@@ -11,7 +11,7 @@ import { requirePermission, requireSignIn } from '../middleware/permissions';
 import { signInLimits } from '../middleware/sign-in-limits';
 import { singleUpload } from '../middleware/upload';
 import { createServiceSet, type ServiceDeps } from '../services/service-set';
-import type { ResponseCache } from '../lib/response-cache';
+import type { CachedAnswer, ResponseCache } from '../lib/response-cache';
 import type { AnswerShortcuts } from './answer-shortcuts';
 import { answerKey, clearedByOf, keepUntil, sendAnswer, staleSiteOf, toCachedAnswer } from './cached-answers';
 import { answered, Reply, type Access, type ApiRoute, type RouteContext } from './route';
@@ -107,27 +107,35 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
     const form = route.multipart?.fields.parse(req.body ?? {});
     const ctx: RouteContext = { ...contextOf(req, query, deps), res };
     const key = policy ? answerKey(policy, req, ctx) : '';
-    const held = policy ? deps.answers.get(key) : undefined;
+    const held = policy ? (deps.answers.get(key) ?? (await deps.answers.underWayFor(key))) : undefined;
     if (held) {
       deps.shortcuts.remember(req, key);
       return sendAnswer(req, res, 200, held);
     }
     const stamp = deps.answers.stamp();
-    const result = await run(route, req, ctx, { params, query, body, form }, deps);
-    if (result === answered) return;
-    const { status, answer } = result;
-    if (status === 204) return void res.status(204).end();
-    if (checkAnswers && route.response.schema) {
-      const checked = route.response.schema.safeParse(answer);
-      if (!checked.success) throw new Error(`${route.method.toUpperCase()} ${route.path} answered a body its response schema refuses: ${z.prettifyError(checked.error)}`);
+    let share: (answer: CachedAnswer | undefined) => void = () => {};
+    if (policy) deps.answers.workingOn(key, stamp, new Promise((resolve) => (share = resolve)));
+    try {
+      const result = await run(route, req, ctx, { params, query, body, form }, deps);
+      if (result === answered) return;
+      const { status, answer } = result;
+      if (status === 204) return void res.status(204).end();
+      if (checkAnswers && route.response.schema) {
+        const checked = route.response.schema.safeParse(answer);
+        if (!checked.success) throw new Error(`${route.method.toUpperCase()} ${route.path} answered a body its response schema refuses: ${z.prettifyError(checked.error)}`);
+      }
+      if (!policy) return void res.status(status).json(answer);
+      const cached = toCachedAnswer(answer);
+      if (status === 200) {
+        deps.answers.set(key, cached, clearedByOf(policy, ctx.scope), keepUntil(policy, answer, nowMs()), stamp);
+        deps.shortcuts.remember(req, key);
+        share(cached);
+      }
+      await sendAnswer(req, res, status, cached);
+    } finally {
+      // Whoever waited on an answer that never came works it out themselves.
+      share(undefined);
     }
-    if (!policy) return void res.status(status).json(answer);
-    const cached = toCachedAnswer(answer);
-    if (status === 200) {
-      deps.answers.set(key, cached, clearedByOf(policy, ctx.scope), keepUntil(policy, answer, nowMs()), stamp);
-      deps.shortcuts.remember(req, key);
-    }
-    await sendAnswer(req, res, status, cached);
   };
 }
 

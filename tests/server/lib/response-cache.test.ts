@@ -20,6 +20,43 @@ function cacheAt(maxBytes = 1_000_000) {
 }
 
 describe('ResponseCache', () => {
+  it('lets a request wait for the same answer under way, only while no clear has happened since it began', async () => {
+    const { cache } = cacheAt();
+    let finish: (value: ReturnType<typeof answer> | undefined) => void = () => {};
+    const work = new Promise<ReturnType<typeof answer> | undefined>((resolve) => (finish = resolve));
+    cache.workingOn('board', cache.stamp(), work);
+    const waiting = cache.underWayFor('board');
+    expect(waiting).toBe(work);
+    expect(cache.underWayFor('another address')).toBeUndefined();
+    // After a change, the answer under way may be from before it: a new request works it out afresh.
+    cache.clear(null);
+    expect(cache.underWayFor('board')).toBeUndefined();
+    finish(answer('a'));
+    expect((await waiting)?.body.toString()).toBe('{"text":"a"}');
+    expect(cache.underWayFor('board')).toBeUndefined();
+  });
+
+  it('forgets the work once it settles, and keeps a newer one for the same key', async () => {
+    const { cache } = cacheAt();
+    const done = Promise.resolve(answer('a'));
+    cache.workingOn('list', cache.stamp(), done);
+    expect(cache.underWayFor('list')).toBe(done);
+    await done;
+    await Promise.resolve();
+    expect(cache.underWayFor('list')).toBeUndefined();
+
+    let finishOld: (value: undefined) => void = () => {};
+    const old = new Promise<undefined>((resolve) => (finishOld = resolve));
+    cache.workingOn('board', cache.stamp(), old);
+    cache.clear(null);
+    const newer = new Promise<ReturnType<typeof answer>>(() => {});
+    cache.workingOn('board', cache.stamp(), newer);
+    finishOld(undefined);
+    await old;
+    await Promise.resolve();
+    expect(cache.underWayFor('board')).toBe(newer);
+  });
+
   it('serves an entry until its time, then never again', () => {
     const { clock, cache } = cacheAt();
     cache.set('k', answer('a'), 1, t0 + 1000, cache.stamp());

@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { ResponseCache } from '../../../server/lib/response-cache';
 import { cacheBoundMs, clockBoundMs } from '../../../server/registry/cached-answers';
 import { demo, signIn, startTestApp, type SignedIn, type TestContext } from '../../helpers/test-app';
 import { createSiteFixtures, type SiteFixtures } from '../security/site-fixtures';
@@ -85,6 +86,18 @@ describe('the response cache on one instance', () => {
     // Small answers go as they are.
     const small = await lead.agent.get('/api/auth/session').set('Accept-Encoding', 'gzip');
     expect(small.headers['content-encoding']).toBeUndefined();
+  });
+
+  it('works the board out once for screens that all ask again at the same moment after a change', async () => {
+    await patch(lead, `/api/booths/${boothId}`, { name: 'Cache booth' }).expect(200);
+    const workedOut = vi.spyOn(ResponseCache.prototype, 'workingOn');
+    try {
+      const screens = await Promise.all(Array.from({ length: 5 }, () => lead.agent.get('/api/ready').set('Accept-Encoding', 'identity').expect(200)));
+      expect(workedOut).toHaveBeenCalledTimes(1);
+      expect(new Set(screens.map((screen) => screen.headers.etag)).size).toBe(1);
+    } finally {
+      workedOut.mockRestore();
+    }
   });
 
   it('answers 304 on a matching If-None-Match also when the answer was not in the cache', async () => {
