@@ -51,7 +51,7 @@ function litresFor(session: WeekSession, product: ProductEntity): number {
 }
 
 /**
- * Runs today's session as far as `now` allows, at the times it would have happened: the checks ten
+ * Runs a session as far as `now` allows, at the times it would have happened: the checks ten
  * minutes in, spraying from a quarter past, a pot, then the coat half an hour in; a session already
  * over is cleared and done. A session still to come is left planned.
  */

@@ -40,6 +40,14 @@ export function workingDays(now: Date, timeZone: string, openWeekdays: Set<numbe
   return days;
 }
 
+/** This week's working days before today (Monday first), as shop-zone midnights: none on a Monday. */
+export function earlierWorkingDays(now: Date, timeZone: string, openWeekdays: Set<number>): TZDate[] {
+  const today = new TZDate(now.getTime(), timeZone);
+  const midnight = new TZDate(today.getFullYear(), today.getMonth(), today.getDate(), timeZone);
+  const sinceMonday = (midnight.getDay() + 6) % 7;
+  return Array.from({ length: sinceMonday }, (_, i) => addDays(midnight, i - sinceMonday)).filter((day) => openWeekdays.has(day.getDay()));
+}
+
 async function createWeekJobs(dataSource: DataSource, jobs: WeekJob[], now: Date, timeZone: string): Promise<QueuedJob[]> {
   const jobService = createJobService(openSiteData(dataSource, everySite));
   const partService = createPartService(openSiteData(dataSource, everySite));
@@ -62,11 +70,12 @@ function coatsInOrder(jobs: QueuedJob[]): { partIds: number[]; step: QueuedJob['
 }
 
 /**
- * Booked spray sessions for today (when the booths open today) and the next working days, made
- * through the services the API uses, so every booking meets the same rules (booth open, no
- * overlap, an active sprayer of the booth's site). On today, a session whose time has come is run
- * as far as the clock allows: checks, a pot and its coats for one that is over, checks and spraying
- * for one under way. `now` is the moment the seed runs.
+ * Booked spray sessions for this week's earlier working days, today (when the booths open today)
+ * and the next working days, made through the services the API uses, so every booking meets the
+ * same rules (booth open, no overlap, an active sprayer of the booth's site). A session whose time
+ * has come is run as far as the clock allows: checks, a pot and its coats for one that is over,
+ * checks and spraying for one under way. The earlier days work through jobs of their own, so the
+ * days ahead are as full whatever the weekday. `now` is the moment the seed runs.
  */
 export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date; days?: number } = {}): Promise<{ sessions: number }> {
   const now = options.now ?? new Date();
@@ -78,6 +87,7 @@ export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date
   const booths = await dataSource.getRepository(BoothEntity).find({ order: { id: 'ASC' } });
   const users = await dataSource.getRepository(UserEntity).find();
   const openWeekdays = new Set(booths.flatMap((b) => b.openingHours.map((span) => span.weekday % 7)));
+  const earlierDays = earlierWorkingDays(now, timezone, openWeekdays);
   const days = workingDays(now, timezone, openWeekdays, options.days ?? 5);
   const run: RunContext = { clock, now, sessions: createSpraySessionService(data, settings, events, clock), mixes: createMixService(data, clock), coats: createCoatService(data, settings, events, clock),
     products: new Map((await dataSource.getRepository(ProductEntity).find()).map((p) => [p.id, p])),
@@ -87,19 +97,28 @@ export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date
     const booth = booths.find((b) => b.name === lane.booth);
     const sprayer = users.find((u) => u.email === lane.sprayerEmail && !u.disabled);
     if (!booth || !sprayer) continue;
-    const queue = coatsInOrder(await createWeekJobs(dataSource, lane.jobs, now, timezone));
-    for (const day of days) {
-      const start = new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), ...lane.from, timezone);
-      const end = new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), ...lane.to, timezone);
-      if (openingHoursProblem(start, end, booth.openingHours, timezone)) continue;
-      const coat = queue.shift();
-      if (!coat) break;
-      clock.at = now;
-      const booked = await run.sessions.create({ boothId: booth.id, start: start.toISOString(), end: end.toISOString(), sprayerId: sprayer.id, items: coat.partIds.map((partId) => ({ partId, stepPosition: coat.step.position })) }, systemActor);
-      const session: WeekSession = { id: booked.id, booth, start, end, partIds: coat.partIds, step: coat.step, sprayer: { id: sprayer.id, name: sprayer.name, mayOverride: sprayer.role !== 'sprayer' } };
-      await runSessionSoFar(run, session);
-      sessions++;
+    const lineSprayer = { id: sprayer.id, name: sprayer.name, mayOverride: sprayer.role !== 'sprayer' };
+    const earlier = coatsInOrder(await createWeekJobs(dataSource, lane.earlier, now, timezone));
+    const ahead = coatsInOrder(await createWeekJobs(dataSource, lane.jobs, now, timezone));
+    for (const [queue, onDays] of [[earlier, earlierDays], [ahead, days]] as const) {
+      for (const day of onDays) {
+        const start = new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), ...lane.from, timezone);
+        const end = new TZDate(day.getFullYear(), day.getMonth(), day.getDate(), ...lane.to, timezone);
+        if (openingHoursProblem(start, end, booth.openingHours, timezone)) continue;
+        const coat = queue.shift();
+        if (!coat) break;
+        await bookAndRun(run, { booth, start, end, partIds: coat.partIds, step: coat.step, sprayer: lineSprayer });
+        sessions++;
+      }
     }
   }
   return { sessions };
+}
+
+/** Books the session as the lead does (the clock at the seed's moment), then runs it as far as that moment allows. */
+async function bookAndRun(run: RunContext, session: Omit<WeekSession, 'id'>): Promise<void> {
+  run.clock.at = run.now;
+  const { booth, start, end, sprayer, partIds, step } = session;
+  const booked = await run.sessions.create({ boothId: booth.id, start: start.toISOString(), end: end.toISOString(), sprayerId: sprayer.id, items: partIds.map((partId) => ({ partId, stepPosition: step.position })) }, systemActor);
+  await runSessionSoFar(run, { ...session, id: booked.id });
 }

@@ -40,7 +40,7 @@ const demoRacks: CreateRackInput[] = [
 
 /** Seeds the demo shop only into an empty database; existing data is never touched. */
 /** `storage` (when S3 is configured) takes the demo data sheet instead of `uploadDir`. */
-export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string; storage?: FileStorage }): Promise<{ seeded: boolean }> {
+export async function seedDemoShop(dataSource: DataSource, options: { uploadDir: string; storage?: FileStorage; now?: Date }): Promise<{ seeded: boolean }> {
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return { seeded: false };
   // Seeding runs before any server holds a sign-in: nobody listens to its changes.
   const users = createUserService(openSiteData(dataSource, everySite), new EventBus());
@@ -51,7 +51,7 @@ export async function seedDemoShop(dataSource: DataSource, options: { uploadDir:
   const racks = createRackService(openSiteData(dataSource, everySite));
   for (const rack of demoRacks) await racks.create(rack, systemActor);
   await seedMasterData(dataSource, options.storage ?? options.uploadDir, 'Europe/London');
-  await seedDemoUpkeep(dataSource, new Date());
+  await seedDemoUpkeep(dataSource, options.now ?? new Date());
   return { seeded: true };
 }
 

@@ -19,7 +19,8 @@ let dataSource: DataSource | undefined;
 async function seededWeek(now: Date) {
   database = await createTestDatabase();
   dataSource = await openDataSource(database.config, { migrate: true });
-  await seedDemoShop(dataSource, { uploadDir: path.join(database.uploadDir) });
+  // Upkeep and crew records dated back from the same moment, so none has lapsed by then.
+  await seedDemoShop(dataSource, { uploadDir: path.join(database.uploadDir), now });
   await seedDemoWeek(dataSource, { now });
   const sessions = await dataSource.getRepository(SpraySessionEntity).find({ order: { startAt: 'ASC', id: 'ASC' } });
   const booths = await dataSource.getRepository(BoothEntity).find();
@@ -60,31 +61,54 @@ function nextTuesdayAt(from: Date, hour: number, minute: number): Date {
 }
 
 describe('the demo week', () => {
-  it('books today and the next working days; on a Tuesday at 11:00 the first session is done, the next under way, the rest planned', async () => {
+  it('books today and the next working days; on a Tuesday at 11:00 Monday is sprayed, the first session today is done, the next under way, the rest planned', async () => {
     const now = nextTuesdayAt(new Date(), 11, 0);
     const week = await seededWeek(now);
     expectBookable(week);
     const days = [...new Set(week.sessions.map((s) => wall(s.startAt).slice(0, 7)))];
-    // Tuesday to Friday, then Monday: the weekend is skipped.
-    expect(days.map((d) => d.slice(0, 3))).toEqual(['Tue', 'Wed', 'Thu', 'Fri', 'Mon']);
-    const today = week.sessions.filter((s) => wall(s.startAt).startsWith(wall(now.toISOString()).slice(0, 7)));
+    // Monday gone by, then Tuesday to Friday and the next Monday: the weekend is skipped.
+    expect(days.map((d) => d.slice(0, 3))).toEqual(['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Mon']);
+    const onDay = (day: string) => week.sessions.filter((s) => wall(s.startAt).startsWith(day));
+    const today = onDay(wall(now.toISOString()).slice(0, 7));
     expect(today.map((s) => [wall(s.startAt).slice(-5), s.state])).toEqual([['08:00', 'done'], ['10:00', 'spraying'], ['13:00', 'planned']]);
-    // The finished session and the one under way each hold their coat and the checks made before spraying.
-    for (const session of today.slice(0, 2)) {
+    const monday = onDay(days[0]);
+    expect(monday.map((s) => [wall(s.startAt).slice(-5), s.state])).toEqual([['08:00', 'done'], ['10:00', 'done'], ['13:00', 'done']]);
+    // Each session sprayed so far holds its coat and the checks made before spraying.
+    for (const session of [...monday, ...today.slice(0, 2)]) {
       expect(session.checklist?.verdict).not.toBe('stop');
       expect(week.coats.filter((c) => c.spraySessionId === session.id)).toHaveLength(1);
     }
-    expect(week.sessions.filter((s) => s.state === 'planned')).toHaveLength(week.sessions.length - 2);
-    expect(week.coats).toHaveLength(2);
+    expect(week.sessions.filter((s) => s.state === 'planned')).toHaveLength(week.sessions.length - 5);
+    expect(week.coats).toHaveLength(5);
+  }, 60_000);
+
+  it('on a Saturday has the week gone by sprayed on its own jobs and the next week booked', async () => {
+    const now = new Date('2027-03-27T12:00:00Z');
+    const week = await seededWeek(now);
+    expectBookable(week);
+    const past = week.sessions.filter((s) => s.startAt < now.toISOString());
+    const ahead = week.sessions.filter((s) => s.startAt > now.toISOString());
+    expect([...new Set(past.map((s) => wall(s.startAt).slice(0, 3)))]).toEqual(['Mon', 'Tue', 'Wed', 'Thu', 'Fri']);
+    expect(past.every((s) => s.state === 'done')).toBe(true);
+    expect(week.coats).toHaveLength(past.length);
+    // Three lines a day, Monday to Friday, on either side of the weekend; the oak line's two jobs
+    // ahead are two coats each, so it has Friday free.
+    expect(past).toHaveLength(15);
+    expect(ahead).toHaveLength(14);
+    const partsOf = (sessions: SpraySessionEntity[]) => new Set(week.items.filter((i) => sessions.some((s) => s.id === i.spraySessionId)).map((i) => i.partId));
+    const sprayed = partsOf(past);
+    expect([...partsOf(ahead)].some((id) => sprayed.has(id))).toBe(false);
   }, 60_000);
 
   it('books at 08:00 on the shop’s clock across the change to summer time', async () => {
     // Saturday 27 March 2027; the clocks go forward early on Sunday 28 March.
-    const week = await seededWeek(new Date('2027-03-27T12:00:00Z'));
+    const now = new Date('2027-03-27T12:00:00Z');
+    const week = await seededWeek(now);
     expectBookable(week);
-    expect(week.sessions.every((s) => s.state === 'planned')).toBe(true);
+    const ahead = week.sessions.filter((s) => s.startAt > now.toISOString());
+    expect(ahead.every((s) => s.state === 'planned')).toBe(true);
     const booth1 = week.booths.find((b) => b.name === 'Booth 1 (cross-draft)')!;
-    const mornings = week.sessions.filter((s) => s.boothId === booth1.id && wall(s.startAt).endsWith('08:00')).map((s) => s.startAt);
+    const mornings = ahead.filter((s) => s.boothId === booth1.id && wall(s.startAt).endsWith('08:00')).map((s) => s.startAt);
     expect(mornings).toEqual(['2027-03-29T07:00:00.000Z', '2027-03-30T07:00:00.000Z', '2027-03-31T07:00:00.000Z', '2027-04-01T07:00:00.000Z', '2027-04-02T07:00:00.000Z']);
   }, 60_000);
 
