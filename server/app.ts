@@ -42,7 +42,6 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   if (config.trustProxy) app.set('trust proxy', 1);
   app.disable('x-powered-by');
-  // Each request is its own piece of work: on SQLite none of its queries may run inside another request's transaction.
   app.use(securityHeaders(config.trustProxy));
   app.use(requestLog(logger, config.slowRequestMs));
 
@@ -54,6 +53,7 @@ export function createApp(deps: AppDeps): Express {
   const shortcuts = new AnswerShortcuts(signInCache, answers);
   // A repeat read is answered from memory before any of the rest; it touches no database.
   app.use('/api', shortcuts.lane);
+  // Each request is its own piece of work: on SQLite none of its queries may run inside another request's transaction.
   app.use((_req, _res, next) => runAsOwnWork(next));
   const registry: RegistryDeps = { dataSource, config, services, auth, answers, shortcuts };
   app.use('/api', buildBareApiRouter(registry));

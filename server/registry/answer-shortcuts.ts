@@ -30,6 +30,15 @@ function signInCookieOf(req: Request): string | undefined {
   return parts.length === 1 ? parts[0].trim().slice(signInCookieName.length + 1) : undefined;
 }
 
+/** The cookie's value as express-session reads it (percent-decoded), or null when it does not decode. */
+function decoded(cookie: string): string | null {
+  try {
+    return decodeURIComponent(cookie);
+  } catch {
+    return null;
+  }
+}
+
 /** The sign-in a held session names: `{ passport: { user: { id, epoch } } }`. */
 function signInOf(session: HeldSession): { id: number; epoch: number } | undefined {
   const user = (JSON.parse(session.json) as { passport?: { user?: unknown } }).passport?.user;
@@ -65,7 +74,7 @@ export class AnswerShortcuts {
     const sid = req.sessionID;
     const user = req.user;
     if (!cookie || !sid || !user || req.sensorBooth || req.headers.authorization) return;
-    if (!decodeURIComponent(cookie).startsWith(`s:${sid}.`)) return;
+    if (!decoded(cookie)?.startsWith(`s:${sid}.`)) return;
     const session = this.signIns.sessions.get(sid);
     const held = this.signIns.users.get(user.id);
     if (!session || !held || !this.stillTheSame(session, held, user)) return;

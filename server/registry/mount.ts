@@ -93,6 +93,12 @@ async function run(route: ApiRoute, req: Request, ctx: RouteContext, input: Omit
   }
 }
 
+/** In tests, every answer must be what the route's response schema (and so the API document) says. */
+function assertMatchesSchema(route: ApiRoute, answer: unknown): void {
+  const checked = route.response.schema?.safeParse(answer);
+  if (checked && !checked.success) throw new Error(`${route.method.toUpperCase()} ${route.path} answered a body its response schema refuses: ${z.prettifyError(checked.error)}`);
+}
+
 /** The last step of every route: parse, answer from the cache when it may, else hand the scope's services to the handler and send its answer. */
 function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
   const checkAnswers = deps.config.env === 'test';
@@ -120,10 +126,7 @@ function handle(route: ApiRoute, deps: RegistryDeps): RequestHandler {
       if (result === answered) return;
       const { status, answer } = result;
       if (status === 204) return void res.status(204).end();
-      if (checkAnswers && route.response.schema) {
-        const checked = route.response.schema.safeParse(answer);
-        if (!checked.success) throw new Error(`${route.method.toUpperCase()} ${route.path} answered a body its response schema refuses: ${z.prettifyError(checked.error)}`);
-      }
+      if (checkAnswers) assertMatchesSchema(route, answer);
       if (!policy) return void res.status(status).json(answer);
       const cached = toCachedAnswer(answer);
       if (status === 200) {
