@@ -60,7 +60,7 @@ async function run(command: string | undefined, arg: string | undefined): Promis
     } else if (command === 'seed') {
       const { seeded } = await seedDemoShop(dataSource, { uploadDir: config.uploadDir, storage: createFileStorage(config) });
       if (seeded) await seedDemoHistory(dataSource);
-      // `seed --quiet-week` leaves the coming days unbooked (a database for tests that book them).
+      // `seed --quiet-week` books nothing this week or next, neither the days ahead nor this week's days gone by (a database for tests that book them).
       if (seeded && arg !== '--quiet-week') console.log(`Booked ${(await seedDemoWeek(dataSource)).sessions} spray sessions this week and next (the days gone by already sprayed).`);
       console.log(seeded ? `Seeded the demo shop. Sign-ins:\n${demoSignInLines().join('\n')}` : 'The database already has users; the demo shop was not seeded.');
     } else {
