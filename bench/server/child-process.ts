@@ -1,6 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import path from 'node:path';
 import fs from 'node:fs';
+import { build } from 'esbuild';
 
 /** What bench/server/probe.mjs, inside the measured server, answers. */
 export interface ProbeFigures {
@@ -39,21 +40,29 @@ export function readProbe(child: ChildProcess): Promise<ProbeFigures> {
   });
 }
 
-/** Node itself with tsx and the probe loaded (not the tsx wrapper), so the pid we sample and signal is the server. */
-export function spawnTsNode(entry: string, env: NodeJS.ProcessEnv, args: string[] = []): { child: ChildProcess; stderr: () => string } {
-  return withStderr(spawn(process.execPath, ['--import', 'tsx', '--import', probe, entry, ...args], { env: { ...env, TSX_TSCONFIG_PATH: 'tsconfig.server.json' }, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
-}
-
 export const builtServer = path.join('dist-server', 'index.js');
+
+// The same V8 limits as `npm run serve`: a small young generation keeps the resident set down and
+// served cached reads faster here; first reads after a change cost about a tenth more.
+const v8Limits = ['--max-old-space-size=256', '--max-semi-space-size=4'];
 
 /** The built server (`npm run build`) under plain Node with the probe, as `npm run serve` runs it. */
 export function spawnBuiltServer(env: NodeJS.ProcessEnv): { child: ChildProcess; stderr: () => string } {
   if (!fs.existsSync(builtServer)) throw new Error(`${builtServer} is missing: run npm run build first`);
   // BENCH_NODE_FLAGS adds flags Node refuses in NODE_OPTIONS, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof" to profile.
   const extra = (process.env.BENCH_NODE_FLAGS ?? '').split(' ').filter(Boolean);
-  // The same V8 limits as `npm run serve`: a small young generation keeps the resident set down and
-  // served cached reads faster here; first reads after a change cost about a tenth more.
-  return withStderr(spawn(process.execPath, ['--max-old-space-size=256', '--max-semi-space-size=4', ...extra, '--import', probe, builtServer], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+  return withStderr(spawn(process.execPath, [...v8Limits, ...extra, '--import', probe, builtServer], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+}
+
+/**
+ * A bench-only TypeScript entry compiled to plain JavaScript (under node_modules/.cache, so its
+ * imports resolve to the project's packages) and run as the app is: plain Node, the same V8
+ * limits, the probe. A TypeScript loader in the yardstick would add its own ~50 MB and CPU.
+ */
+export async function spawnBuiltScript(entry: string, env: NodeJS.ProcessEnv, args: string[] = []): Promise<{ child: ChildProcess; stderr: () => string }> {
+  const outfile = path.resolve('node_modules', '.cache', 'boothwright-bench', `${path.basename(entry, '.ts')}.mjs`);
+  await build({ entryPoints: [entry], outfile, bundle: true, packages: 'external', platform: 'node', format: 'esm', target: 'node20', logLevel: 'warning' });
+  return withStderr(spawn(process.execPath, [...v8Limits, '--import', probe, outfile, ...args], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
 }
 
 function withStderr(child: ChildProcess): { child: ChildProcess; stderr: () => string } {

@@ -1,5 +1,4 @@
-import { ZxcvbnFactory } from '@zxcvbn-ts/core';
-import { adjacencyGraphs, dictionary } from '@zxcvbn-ts/language-common';
+import type { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import { AppError } from '../lib/app-error';
 
 /**
@@ -8,7 +7,15 @@ import { AppError } from '../lib/app-error';
  * 10^8 to 10^10 guesses: with argon2 and the sign-in limits, well out of reach.
  */
 export const minimumScore = 3;
-const estimator = new ZxcvbnFactory({ dictionary, graphs: adjacencyGraphs });
+
+// Its dictionaries hold about 6 MB of heap; passwords are set rarely, so they load on the first check.
+let estimator: Promise<ZxcvbnFactory> | undefined;
+function loadEstimator(): Promise<ZxcvbnFactory> {
+  estimator ??= Promise.all([import('@zxcvbn-ts/core'), import('@zxcvbn-ts/language-common')]).then(
+    ([core, common]) => new core.ZxcvbnFactory({ dictionary: common.dictionary, graphs: common.adjacencyGraphs }),
+  );
+  return estimator;
+}
 
 // zxcvbn-ts names what it found by key; the words are ours.
 const reasons: Record<string, string> = {
@@ -30,17 +37,17 @@ const reasons: Record<string, string> = {
 };
 
 /** Why `password` is too easy to guess, or null when it is strong enough. `related` are words an attacker would try first. */
-export function passwordWeakness(password: string, related: string[] = []): string | null {
+export async function passwordWeakness(password: string, related: string[] = []): Promise<string | null> {
   // Whole e-mails and names, and their parts ("kit", "arden"), which people build passwords from.
   const words = related.flatMap((text) => [text, ...text.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter((w) => w.length >= 3)]);
-  const result = estimator.check(password, [...words, 'boothwright']);
+  const result = (await loadEstimator()).check(password, [...words, 'boothwright']);
   if (result.score >= minimumScore) return null;
   const why = result.feedback.warning ? reasons[result.feedback.warning] : undefined;
   return `${why ?? 'This password is too easy to guess'}: use a few unrelated words or a longer phrase`;
 }
 
 /** Throws a field-level 400 when the password is too easy to guess. */
-export function assertStrongPassword(password: string, related: string[]): void {
-  const weakness = passwordWeakness(password, related);
+export async function assertStrongPassword(password: string, related: string[]): Promise<void> {
+  const weakness = await passwordWeakness(password, related);
   if (weakness) throw new AppError('validation_failed', 'Choose a password that is harder to guess', { password: weakness });
 }

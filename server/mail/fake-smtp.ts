@@ -11,10 +11,13 @@ const keep = 500;
 /**
  * A real SMTP server on 127.0.0.1 that keeps what it receives in memory, for development and
  * tests when no SMTP_URL is set. Admins read it on the Mailbox page; nothing leaves the machine.
- * Its SMTP server and mail parser are loaded only here, so a shop with a real SMTP_URL never loads them.
+ * Its SMTP server is loaded only here, so a shop with a real SMTP_URL never loads it; the mail
+ * parser (about 7 MB of heap) only when the first message arrives.
  */
 export async function startFakeSmtp(port: number): Promise<FakeSmtp> {
-  const [{ simpleParser }, { SMTPServer }] = await Promise.all([import('mailparser'), import('smtp-server')]);
+  const { SMTPServer } = await import('smtp-server');
+  let parser: Promise<typeof import('mailparser')> | undefined;
+  const simpleParser: (typeof import('mailparser'))['simpleParser'] = (source) => (parser ??= import('mailparser')).then((mod) => mod.simpleParser(source));
   const messages: MailboxMessage[] = [];
   let nextId = 1;
   const server = new SMTPServer({

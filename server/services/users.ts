@@ -34,7 +34,7 @@ export function createUserService(data: SiteData, events: EventBus, clock: Clock
     if (password) {
       const user = await data.users.findOneBy({ id });
       if (!user) throw notFound('User');
-      assertStrongPassword(password, [user.email, fields.name ?? user.name]);
+      await assertStrongPassword(password, [user.email, fields.name ?? user.name]);
     }
     const passwordHash = password ? await hashPassword(password) : undefined;
     const changed = await data.transaction(async (tx) => {
@@ -62,7 +62,7 @@ export function createUserService(data: SiteData, events: EventBus, clock: Clock
     /** Left out of the input, the new user joins the creating admin's own site. */
     async create(input: CreateUserInput, actor: Actor): Promise<User> {
       const { password, siteId: requested, ...fields } = createUserSchema.parse(input);
-      assertStrongPassword(password, [fields.email, fields.name]);
+      await assertStrongPassword(password, [fields.email, fields.name]);
       const siteId = siteForWrite(data.scope, requested);
       const passwordHash = await hashPassword(password);
       const now = clock.now();
