@@ -9,9 +9,10 @@ import { build } from 'esbuild';
 const root = path.resolve(import.meta.dirname, '..');
 const outdir = path.join(root, 'dist-server');
 
-// Pure ES-module packages go into the bundle, shaken down to what the server uses: loaded from
-// node_modules, date-fns alone is some 300 modules whose source Node keeps in memory.
-const bundled = new Set(['date-fns', '@date-fns/tz', 'zod']);
+// date-fns goes into the bundle, shaken down to the few functions the server uses: loaded from
+// node_modules it is some 300 modules whose source Node keeps in memory. (Bundled, zod would bring
+// every locale along, so it stays a package.)
+const bundled = new Set(['date-fns', '@date-fns/tz']);
 const packageOf = (specifier) => specifier.split('/').slice(0, specifier.startsWith('@') ? 2 : 1).join('/');
 const externalExceptBundled = {
   name: 'external-except-bundled',
