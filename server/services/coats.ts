@@ -1,5 +1,6 @@
 import { createCoatSchema, type Coat, type CoatQuery, type CorrectCoatInput, type CreateCoatInput } from '../../shared/schemas/coat';
 import type { List } from '../../shared/schemas/common';
+import { pageOf } from '../data/page-of';
 import type { SiteData } from '../data/site-data';
 import type { CoatEntity, StoredWarning } from '../db/entities/coat.entity';
 import { AppError, notFound } from '../lib/app-error';
@@ -133,7 +134,7 @@ export function createCoatService(data: SiteData, settings: SettingsService, eve
 
     async list(query: CoatQuery): Promise<List<Coat>> {
       const qb = data.coats.select('c');
-      if (!query.history) qb.leftJoin('coats', 'n', 'n.replaces_id = c.id').andWhere('n.id IS NULL');
+      if (!query.history) qb.andWhere('NOT EXISTS (SELECT 1 FROM coats n WHERE n.replaces_id = c.id)');
       if (query.spraySessionId) qb.andWhere('c.spray_session_id = :s', { s: query.spraySessionId });
       if (query.productId) qb.andWhere('c.product_id = :p', { p: query.productId });
       if (query.partId) qb.andWhere('c.id IN (SELECT cp.coat_id FROM coat_parts cp WHERE cp.part_id = :part)', { part: query.partId });
@@ -141,7 +142,7 @@ export function createCoatService(data: SiteData, settings: SettingsService, eve
       if (query.from) qb.andWhere('c.sprayed_at >= :from', { from: new Date(query.from).toISOString() });
       if (query.to) qb.andWhere('c.sprayed_at < :to', { to: new Date(query.to).toISOString() });
       qb.orderBy('c.sprayed_at', 'DESC').addOrderBy('c.id', 'DESC');
-      const [rows, total] = await qb.skip((query.page - 1) * query.pageSize).take(query.pageSize).getManyAndCount();
+      const [rows, total] = await pageOf(qb, query.page, query.pageSize);
       return { items: await toCoatDtos(data, rows), total, page: query.page, pageSize: query.pageSize };
     },
   };

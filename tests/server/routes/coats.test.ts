@@ -132,6 +132,20 @@ describe('corrections and the append-only record', () => {
     await sprayer.agent.post(`/api/coats/${id}/corrections`).set('x-csrf-token', sprayer.csrf).send({ reason: 'Again' }).expect(409);
   });
 
+  it('pages the current coats newest first with the same total on every page, the history counted apart', async () => {
+    const url = (query: string) => `/api/coats?spraySessionId=${sessionId}&${query}`;
+    const whole = (await sprayer.agent.get(url('pageSize=200')).expect(200)).body;
+    expect(whole.total).toBe(whole.items.length);
+    expect(whole.total).toBeGreaterThanOrEqual(3);
+    const pages = [1, 2, 3].map((page) => sprayer.agent.get(url(`pageSize=${whole.total - 1}&page=${page}`)).expect(200));
+    const [first, second, past] = (await Promise.all(pages)).map((res) => res.body);
+    expect([first.total, second.total, past.total]).toEqual([whole.total, whole.total, whole.total]);
+    expect([...first.items, ...second.items].map((c: { id: number }) => c.id)).toEqual(whole.items.map((c: { id: number }) => c.id));
+    expect(past.items).toEqual([]);
+    const history = (await sprayer.agent.get(url('history=true&pageSize=1')).expect(200)).body;
+    expect(history.total).toBeGreaterThan(whole.total);
+  });
+
   it('refuses, in the database itself, to change or delete a coat record', async () => {
     await expect(ctx.dataSource.query('UPDATE coats SET wet_film_um = 1')).rejects.toThrow(/append_only/);
     await expect(ctx.dataSource.query('DELETE FROM coat_parts')).rejects.toThrow(/append_only/);
