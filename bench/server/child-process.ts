@@ -45,13 +45,15 @@ export const builtServer = path.join('dist-server', 'index.js');
 // The same V8 limits as `npm run serve`: a small young generation keeps the resident set down and
 // served cached reads faster here; first reads after a change cost about a tenth more.
 const v8Limits = ['--max-old-space-size=256', '--max-semi-space-size=4'];
+// Also as `npm run serve`: two malloc arenas, not one per thread that compresses or reads (see README, Performance).
+const mallocEnv = (env: NodeJS.ProcessEnv) => ({ MALLOC_ARENA_MAX: '2', ...env });
 
 /** The built server (`npm run build`) under plain Node with the probe, as `npm run serve` runs it. */
 export function spawnBuiltServer(env: NodeJS.ProcessEnv): { child: ChildProcess; stderr: () => string } {
   if (!fs.existsSync(builtServer)) throw new Error(`${builtServer} is missing: run npm run build first`);
   // BENCH_NODE_FLAGS adds flags Node refuses in NODE_OPTIONS, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof" to profile.
   const extra = (process.env.BENCH_NODE_FLAGS ?? '').split(' ').filter(Boolean);
-  return withStderr(spawn(process.execPath, [...v8Limits, ...extra, '--import', probe, builtServer], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+  return withStderr(spawn(process.execPath, [...v8Limits, ...extra, '--import', probe, builtServer], { env: mallocEnv(env), stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
 }
 
 /**
@@ -62,7 +64,7 @@ export function spawnBuiltServer(env: NodeJS.ProcessEnv): { child: ChildProcess;
 export async function spawnBuiltScript(entry: string, env: NodeJS.ProcessEnv, args: string[] = []): Promise<{ child: ChildProcess; stderr: () => string }> {
   const outfile = path.resolve('node_modules', '.cache', 'boothwright-bench', `${path.basename(entry, '.ts')}.mjs`);
   await build({ entryPoints: [entry], outfile, bundle: true, packages: 'external', platform: 'node', format: 'esm', target: 'node20', logLevel: 'warning' });
-  return withStderr(spawn(process.execPath, [...v8Limits, '--import', probe, outfile, ...args], { env, stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
+  return withStderr(spawn(process.execPath, [...v8Limits, '--import', probe, outfile, ...args], { env: mallocEnv(env), stdio: ['ignore', 'ignore', 'pipe', 'ipc'] }));
 }
 
 function withStderr(child: ChildProcess): { child: ChildProcess; stderr: () => string } {

@@ -24,7 +24,7 @@ const env = {
 const seeded = spawnSync(process.execPath, ['dist-server/cli.js', 'seed'], { env, stdio: 'inherit' });
 if (seeded.status !== 0) process.exit(seeded.status ?? 1);
 
-const server = spawn(process.execPath, ['--max-old-space-size=256', '--max-semi-space-size=4', 'dist-server/index.js'], { env, stdio: 'inherit' });
+const server = spawn(process.execPath, ['--max-old-space-size=256', '--max-semi-space-size=4', 'dist-server/index.js'], { env: { MALLOC_ARENA_MAX: '2', ...env }, stdio: 'inherit' });
 const stop = () => {
   server.kill('SIGTERM');
   fs.rmSync(dir, { recursive: true, force: true });
