@@ -17,6 +17,8 @@ export interface RunContext {
   mixes: ReturnType<typeof createMixService>;
   coats: ReturnType<typeof createCoatService>;
   products: Map<number, ProductEntity>;
+  /** Puts parts whose last coat is on onto the drying rack. */
+  shelve: (partIds: number[], actor: SpraySessionActor) => Promise<void>;
 }
 
 export interface WeekSession {
@@ -26,6 +28,8 @@ export interface WeekSession {
   end: TZDate;
   partIds: number[];
   step: { position: number; productId: number; dryFilmUm: number };
+  /** The job's last coat: once on, the parts go to the drying rack. */
+  lastCoat: boolean;
   sprayer: SpraySessionActor;
 }
 
@@ -52,8 +56,8 @@ function litresFor(session: WeekSession, product: ProductEntity): number {
 
 /**
  * Runs a session as far as `now` allows, at the times it would have happened: the checks ten
- * minutes in, spraying from a quarter past, a pot, then the coat half an hour in; a session already
- * over is cleared and done. A session still to come is left planned.
+ * minutes in, spraying from a quarter past, a pot, then the coat half an hour in (after a job's last
+ * coat its parts go onto the drying rack); a session already over is cleared and done. A session still to come is left planned.
  */
 export async function runSessionSoFar(run: RunContext, session: WeekSession): Promise<void> {
   const at = (minutes: number) => new Date(session.start.getTime() + minutes * minute);
@@ -69,6 +73,8 @@ export async function runSessionSoFar(run: RunContext, session: WeekSession): Pr
   run.clock.at = at(35);
   const wetFilmUm = Math.round(wetFilmTargetUm({ volumeSolidsPct: product.volumeSolidsPct, thinningPct: product.thinnerMinPct, dryFilmUm: session.step.dryFilmUm }) / 5) * 5;
   await run.coats.create({ spraySessionId: session.id, partIds: session.partIds, productId: product.id, sprayedAt: at(30).toISOString(), ...conditions, thinningPct: product.thinnerMinPct, wetFilmUm, mixId: mix.id, stepPosition: session.step.position }, session.sprayer);
+  run.clock.at = at(40);
+  if (session.lastCoat) await run.shelve(session.partIds, session.sprayer);
   if (session.end.getTime() > run.now.getTime()) return;
   run.clock.at = new Date(session.end.getTime() - 30 * minute);
   await run.sessions.update(session.id, { state: 'clearing' }, session.sprayer);

@@ -16,9 +16,12 @@ import { createSpraySessionService } from '../services/spray-sessions';
 import { BoothEntity } from './entities/booth.entity';
 import { FinishStepEntity } from './entities/finish-step.entity';
 import { FinishSystemEntity } from './entities/finish-system.entity';
+import { PartEntity } from './entities/part.entity';
 import { ProductEntity } from './entities/product.entity';
+import { RackEntity } from './entities/rack.entity';
 import { UserEntity } from './entities/user.entity';
 import { runSessionSoFar, type RunContext, type WeekSession } from './demo-week-run';
+import { createRackShelver, finishedPartsRack } from './demo-week-racks';
 import { weekLanes, type WeekJob } from './demo-week-jobs';
 
 const dayMs = 86_400_000;
@@ -65,8 +68,8 @@ async function createWeekJobs(dataSource: DataSource, jobs: WeekJob[], now: Date
 }
 
 /** Every coat of a line's jobs, in the order the line sprays them: one a working day. */
-function coatsInOrder(jobs: QueuedJob[]): { partIds: number[]; step: QueuedJob['steps'][number] }[] {
-  return jobs.flatMap((job) => job.steps.map((step) => ({ partIds: job.partIds, step })));
+function coatsInOrder(jobs: QueuedJob[]): { partIds: number[]; step: QueuedJob['steps'][number]; lastCoat: boolean }[] {
+  return jobs.flatMap((job) => job.steps.map((step, i) => ({ partIds: job.partIds, step, lastCoat: i === job.steps.length - 1 })));
 }
 
 /**
@@ -91,6 +94,7 @@ export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date
   const days = workingDays(now, timezone, openWeekdays, options.days ?? 5);
   const run: RunContext = { clock, now, sessions: createSpraySessionService(data, settings, events, clock), mixes: createMixService(data, clock), coats: createCoatService(data, settings, events, clock),
     products: new Map((await dataSource.getRepository(ProductEntity).find()).map((p) => [p.id, p])),
+    shelve: createRackShelver(await dataSource.getRepository(RackEntity).findOneBy({ name: finishedPartsRack }) ?? undefined, createPartService(data, clock, events), (id) => dataSource.getRepository(PartEntity).findOneBy({ id })),
   };
   let sessions = 0;
   for (const lane of weekLanes) {
@@ -107,7 +111,7 @@ export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date
         if (openingHoursProblem(start, end, booth.openingHours, timezone)) continue;
         const coat = queue.shift();
         if (!coat) break;
-        await bookAndRun(run, { booth, start, end, partIds: coat.partIds, step: coat.step, sprayer: lineSprayer });
+        await bookAndRun(run, { booth, start, end, partIds: coat.partIds, step: coat.step, lastCoat: coat.lastCoat, sprayer: lineSprayer });
         sessions++;
       }
     }

@@ -7,6 +7,10 @@ import { openDataSource } from '../../../server/db/data-source';
 import { seedDemoWeek } from '../../../server/db/demo-week';
 import { BoothEntity } from '../../../server/db/entities/booth.entity';
 import { CoatEntity } from '../../../server/db/entities/coat.entity';
+import { FinishStepEntity } from '../../../server/db/entities/finish-step.entity';
+import { JobEntity } from '../../../server/db/entities/job.entity';
+import { PartEntity } from '../../../server/db/entities/part.entity';
+import { RackEntity } from '../../../server/db/entities/rack.entity';
 import { SpraySessionItemEntity } from '../../../server/db/entities/spray-session-item.entity';
 import { SpraySessionEntity } from '../../../server/db/entities/spray-session.entity';
 import { seedDemoShop } from '../../../server/db/seed';
@@ -98,6 +102,32 @@ describe('the demo week', () => {
     const partsOf = (sessions: SpraySessionEntity[]) => new Set(week.items.filter((i) => sessions.some((s) => s.id === i.spraySessionId)).map((i) => i.partId));
     const sprayed = partsOf(past);
     expect([...partsOf(ahead)].some((id) => sprayed.has(id))).toBe(false);
+  }, 60_000);
+
+  it('puts a job’s parts on the drying rack once its last coat is on, no shelf holding more than its area', async () => {
+    const now = new Date('2027-03-27T12:00:00Z');
+    await seededWeek(now);
+    const rack = (await dataSource!.getRepository(RackEntity).findOneByOrFail({ name: 'Rack B (drying room)' }));
+    const parts = await dataSource!.getRepository(PartEntity).find();
+    const jobs = await dataSource!.getRepository(JobEntity).find();
+    const coatSteps = await dataSource!.getRepository(FinishStepEntity).findBy({ kind: 'coat' });
+    // Which step each part has had, from the coat records themselves.
+    const rows: { partId: number; stepPosition: number }[] = await dataSource!.query('SELECT cp.part_id AS "partId", c.step_position AS "stepPosition" FROM coat_parts cp JOIN coats c ON c.id = cp.coat_id');
+    const finished = (part: PartEntity) => {
+      const system = jobs.find((j) => j.id === part.jobId)!.finishSystemId;
+      const last = Math.max(...coatSteps.filter((s) => s.finishSystemId === system).map((s) => s.position));
+      return rows.some((r) => r.partId === part.id && r.stepPosition === last);
+    };
+    const weekParts = parts.filter((p) => rows.some((r) => r.partId === p.id));
+    const done = weekParts.filter(finished);
+    expect(done.length).toBeGreaterThan(10);
+    expect(done.every((p) => p.rackId === rack.id && p.shelf !== null && p.shelf <= rack.shelves)).toBe(true);
+    expect(weekParts.filter((p) => !finished(p)).every((p) => p.rackId === null)).toBe(true);
+    // Laid flat, a shelf holds what its area holds.
+    const loads = new Map<number, number>();
+    for (const p of done) loads.set(p.shelf!, (loads.get(p.shelf!) ?? 0) + (p.lengthMm * p.widthMm * p.quantity) / 1e6);
+    expect(Math.max(...loads.values())).toBeLessThanOrEqual(rack.shelfAreaM2);
+    expect(loads.size).toBeGreaterThan(1);
   }, 60_000);
 
   it('books at 08:00 on the shop’s clock across the change to summer time', async () => {
