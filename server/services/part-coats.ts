@@ -69,31 +69,57 @@ export async function stepsByJob(data: SiteData, parts: Pick<PartEntity, 'jobId'
   );
 }
 
-/** Coats as the readiness maths reads them; coats logged outside the finish system are left out. */
-function coatInstants(c: CoatTimes): Omit<PartCoat, 'stepIndex'> {
-  return {
-    sprayedAt: new Date(c.sprayedAt),
-    flashOffEndsAt: new Date(c.flashOffEndsAt),
-    recoatOpensAt: new Date(c.recoatOpensAt),
-    recoatClosesAt: c.recoatClosesAt ? new Date(c.recoatClosesAt) : null,
-    touchDryAt: new Date(c.touchDryAt),
-    handleAt: new Date(c.handleAt),
-    packAt: new Date(c.packAt),
-    fullCureAt: new Date(c.fullCureAt),
-  };
+/**
+ * A coat as the readiness maths reads it. Its instants become Dates only when read: of a part's
+ * coats the maths reads the spraying time of each but the other instants of the latest one alone,
+ * and a board builds tens of thousands of these.
+ */
+class CoatOnRecord {
+  #sprayedAt?: Date;
+  constructor(private readonly row: CoatTimes) {}
+  get sprayedAt(): Date {
+    return (this.#sprayedAt ??= new Date(this.row.sprayedAt));
+  }
+  get flashOffEndsAt(): Date {
+    return new Date(this.row.flashOffEndsAt);
+  }
+  get recoatOpensAt(): Date {
+    return new Date(this.row.recoatOpensAt);
+  }
+  get recoatClosesAt(): Date | null {
+    return this.row.recoatClosesAt ? new Date(this.row.recoatClosesAt) : null;
+  }
+  get touchDryAt(): Date {
+    return new Date(this.row.touchDryAt);
+  }
+  get handleAt(): Date {
+    return new Date(this.row.handleAt);
+  }
+  get packAt(): Date {
+    return new Date(this.row.packAt);
+  }
+  get fullCureAt(): Date {
+    return new Date(this.row.fullCureAt);
+  }
 }
 
+class PlannedCoatOnRecord extends CoatOnRecord {
+  constructor(
+    row: CoatTimes,
+    readonly stepIndex: number,
+  ) {
+    super(row);
+  }
+}
+
+/** Coats as the readiness maths reads them; coats logged outside the finish system are left out. */
 export function toPartCoats(coats: CoatTimes[], steps: FinishStep[]): PartCoat[] {
-  return coats
-    .filter((c) => c.stepPosition !== null && steps[c.stepPosition]?.kind === 'coat')
-    .map((c) => ({ stepIndex: c.stepPosition!, ...coatInstants(c) }));
+  return coats.filter((c) => c.stepPosition !== null && steps[c.stepPosition]?.kind === 'coat').map((c) => new PlannedCoatOnRecord(c, c.stepPosition!));
 }
 
 /** Coats that match no coat step of the system: a part with no finish system is dried from these. */
 export function unplannedPartCoats(coats: CoatTimes[], steps: FinishStep[]): NonNullable<ReadinessInput['unplannedCoats']> {
-  return coats
-    .filter((c) => c.stepPosition === null || steps[c.stepPosition]?.kind !== 'coat')
-    .map(coatInstants);
+  return coats.filter((c) => c.stepPosition === null || steps[c.stepPosition]?.kind !== 'coat').map((c) => new CoatOnRecord(c));
 }
 
 /** The first coat step of the system not yet done on the part, or null when all are done. */
