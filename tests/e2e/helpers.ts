@@ -25,3 +25,10 @@ export async function signIn(page: Page, role: DemoRole, path = '/') {
 export function mainNav(page: Page) {
   return page.getByRole('navigation', { name: 'Main' });
 }
+
+/**
+ * A shop-clock time as the screens write it: "14:05" today, with "tomorrow " or a day ("Sun 6
+ * Dec ", "Sun 6 Dec, ") in front on another day, as happens to a time a few hours ahead when a
+ * run starts late in the evening. For building a RegExp.
+ */
+export const shopTimePattern = String.raw`(?:tomorrow |\w{3} \d{1,2} \w{3},? )?\d\d:\d\d`;

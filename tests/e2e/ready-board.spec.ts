@@ -1,6 +1,6 @@
 import { request, type APIRequestContext, type Locator, type Page } from '@playwright/test';
 import { expect, shotsDir, test } from './fixtures';
-import { demo, demoPassword, mainNav, signIn, type DemoRole } from './helpers';
+import { demo, demoPassword, mainNav, shopTimePattern, signIn, type DemoRole } from './helpers';
 
 const shopZone = 'Europe/London';
 const shopClock = (iso: string) => new Intl.DateTimeFormat('en-GB', { timeZone: shopZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
@@ -119,7 +119,7 @@ test.describe('ready board', () => {
     await expect(door).toContainText('In finish');
     // Coats remain: the card says what is next, never a handle time.
     await expect(door).toContainText('Denib with P320 needed, then coat 2 of 3');
-    await expect(door).toContainText(/Window opens \d\d:\d\d \(in .+\)|Window open until/);
+    await expect(door).toContainText(new RegExp(`Window opens ${shopTimePattern} \\(in .+\\)|Window open until`));
     await expect(door).toContainText(/Ready to handle from about .+ \(estimate, 2 coats to go\)/);
     await expect(door).not.toContainText(/Handle in/);
     // The whole job's time follows the new coat without a reload.
@@ -154,7 +154,7 @@ test.describe('ready board', () => {
     await expect(door).toContainText(/Pack in \d/);
     // The door from the first test is between coats: past its handle time it may be moved, not picked up.
     const between = card(page, `Live door ${stamp}`);
-    await expect(between).toContainText(/Can be moved between racks since \d\d:\d\d/);
+    await expect(between).toContainText(new RegExp(`Can be moved between racks since ${shopTimePattern}`));
     await expect(between.getByRole('button', { name: /Mark collected/ })).toHaveCount(0);
     await expect(page.getByRole('status').filter({ hasText: 'On the board:' })).toHaveCount(1);
 
@@ -279,7 +279,7 @@ test.describe('ready board', () => {
     await expect(page.getByRole('heading', { name: part.label, level: 1 })).toBeVisible();
     const now = page.getByRole('region', { name: 'Now' });
     await expect(now).toContainText('Next: denib with P320, then coat 2 of 3 (Kestrel 2K PU Topcoat Satin)');
-    await expect(now).toContainText(/Window for the next coat opens \d\d:\d\d \(in .+\)|Window open until/);
+    await expect(now).toContainText(new RegExp(`Window for the next coat opens ${shopTimePattern} \\(in .+\\)|Window open until`));
     await expect(now).toContainText(/Ready to handle from about .+; ready to pack from about .+\. An estimate: 2 coats to go/);
     const steps = page.getByRole('region', { name: 'Finish system' });
     await expect(steps.getByRole('listitem').nth(0)).toContainText('Coat 1 of 3: Kestrel 2K PU Primer White, 60 µm dry');

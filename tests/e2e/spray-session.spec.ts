@@ -5,7 +5,7 @@ import type { Job } from '../../shared/schemas/job';
 import type { Part } from '../../shared/schemas/part';
 import { box, fillPreSprayChecks } from './booth-steps';
 import { expect, shotsDir, test } from './fixtures';
-import { signIn } from './helpers';
+import { shopTimePattern, signIn } from './helpers';
 import { bookSprayerNow, leadApi, type LeadApi } from './lead-api';
 
 const shopZone = 'Europe/London';
@@ -69,7 +69,7 @@ test.describe('spray session', () => {
       await expect(mix).toContainText('Base1.82 L');
       await expect(mix).toContainText('Hardener0.91 L');
       await expect(mix).toContainText('Thinner0.27 L');
-      await expect(mix).toContainText(/Usable until \d{2}:\d{2}/);
+      await expect(mix).toContainText(new RegExp(`Usable until ${shopTimePattern}`));
 
       // The first coat: the planned door, its planned primer step, the new pot.
       const coatForm = page.getByRole('region', { name: 'Record a coat' });
@@ -94,7 +94,7 @@ test.describe('spray session', () => {
       const latest = page.getByRole('article', { name: /^Coat 1 of 3, LJ-26-105, / });
       await expect(latest).toContainText('dry film 57 µm');
       await expect(latest.getByText('Handle from').locator('..')).toContainText(clock(first.handleAt));
-      await expect(latest).toContainText(/Flash-off until \d{2}:\d{2}/);
+      await expect(latest).toContainText(new RegExp(`Flash-off until ${shopTimePattern}`));
       await expect(latest).toContainText(`Next on ${partLabel}: denib with P320, then coat 2 of 3`);
       // The door has just had its planned step: the form does not offer it again by itself.
       await expect(coatForm.getByText('No parts chosen yet.')).toBeVisible();
