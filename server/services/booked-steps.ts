@@ -2,7 +2,7 @@ import type { FinishStep } from '../../shared/finishing/readiness';
 import type { SpraySessionState } from '../../shared/schemas/spray-session';
 import { idListParam, type SiteData } from '../data/site-data';
 import type { PartEntity } from '../db/entities/part.entity';
-import { nextCoatStep, type CoatTimes } from './part-coats';
+import { nextCoatStep, type CoatStep } from './part-coats';
 
 /** One step of one part booked in a live session. */
 export interface BookedPartStep {
@@ -52,7 +52,7 @@ function liveItemsOf(data: SiteData, partIds: number[], now: Date): Promise<Live
 export async function bookedStepsOf(
   data: SiteData,
   parts: Pick<PartEntity, 'id' | 'jobId'>[],
-  context: { coats: Map<number, CoatTimes[]>; steps: Map<number, FinishStep[]>; now: Date },
+  context: { coats: Map<number, Pick<CoatStep, 'spraySessionId' | 'stepPosition'>[]>; steps: Map<number, FinishStep[]>; now: Date },
 ): Promise<BookedPartStep[]> {
   if (parts.length === 0) return [];
   const items = await liveItemsOf(data, parts.map((p) => p.id), context.now);

@@ -8,30 +8,44 @@ import type { PartEntity } from '../db/entities/part.entity';
 /** What a part's coat says about its timing: the columns the readiness maths and the planner read. */
 export type CoatTimes = Pick<CoatEntity, 'id' | 'spraySessionId' | 'stepPosition' | 'sprayedAt' | 'flashOffEndsAt' | 'recoatOpensAt' | 'recoatClosesAt' | 'touchDryAt' | 'handleAt' | 'packAt' | 'fullCureAt'>;
 
-// Only the timing columns: a whole coat row is 33 values, and building thousands of them (a week's
-// calendar, the ready board) cost ten times the query itself.
-const coatTimesSql = (idList: string) => `
-  SELECT cp.part_id AS "partId", c.id, c.spray_session_id AS "spraySessionId", c.step_position AS "stepPosition",
-         c.sprayed_at AS "sprayedAt", c.flash_off_ends_at AS "flashOffEndsAt", c.recoat_opens_at AS "recoatOpensAt",
-         c.recoat_closes_at AS "recoatClosesAt", c.touch_dry_at AS "touchDryAt", c.handle_at AS "handleAt",
-         c.pack_at AS "packAt", c.full_cure_at AS "fullCureAt"
+/** What a part's coat says about its step: what the calendar, the bookings and a part's site read. */
+export type CoatStep = Pick<CoatEntity, 'id' | 'spraySessionId' | 'stepPosition' | 'sprayedAt' | 'recoatOpensAt' | 'recoatClosesAt'>;
+
+// Only the columns asked for: a whole coat row is 33 values, and building thousands of them (a
+// week's calendar, the ready board) cost ten times the query itself; each date column left out is
+// a string fewer per row.
+const stepColumns = `cp.part_id AS "partId", c.id, c.spray_session_id AS "spraySessionId", c.step_position AS "stepPosition",
+         c.sprayed_at AS "sprayedAt", c.recoat_opens_at AS "recoatOpensAt", c.recoat_closes_at AS "recoatClosesAt"`;
+const timeColumns = `${stepColumns}, c.flash_off_ends_at AS "flashOffEndsAt", c.touch_dry_at AS "touchDryAt",
+         c.handle_at AS "handleAt", c.pack_at AS "packAt", c.full_cure_at AS "fullCureAt"`;
+const currentCoatsSql = (columns: string, idList: string) => `
+  SELECT ${columns}
   FROM coat_parts cp JOIN coats c ON c.id = cp.coat_id
   WHERE cp.part_id IN (${idList}) AND NOT EXISTS (SELECT 1 FROM coats n WHERE n.replaces_id = c.id)`;
+
+async function currentCoatRows<T>(data: SiteData, partIds: number[], columns: string): Promise<Map<number, T[]>> {
+  const byPart = new Map<number, T[]>(partIds.map((id) => [id, []]));
+  if (partIds.length === 0) return byPart;
+  const { sql } = data;
+  const text = currentCoatsSql(columns, sql.idList);
+  const rows = await mapInSlices(partIds, (slice) => sql.select<T & { partId: number }>(text, [idListParam(sql.dialect, slice)]));
+  // Both drivers give integer columns as numbers; the row is kept as it comes (its partId too), not copied.
+  for (const row of rows) byPart.get(row.partId)?.push(row);
+  return byPart;
+}
 
 /**
  * Current coat versions (not yet corrected) that covered any of the parts, by part id, whichever
  * site sprayed them: a part's next step and readiness come from its whole history. Callers show
  * what follows from them only for parts their own scope sees.
  */
-export async function currentCoatsByPart(data: SiteData, partIds: number[]): Promise<Map<number, CoatTimes[]>> {
-  const byPart = new Map<number, CoatTimes[]>(partIds.map((id) => [id, []]));
-  if (partIds.length === 0) return byPart;
-  const { sql } = data;
-  const text = coatTimesSql(sql.idList);
-  const rows = await mapInSlices(partIds, (slice) => sql.select<CoatTimes & { partId: number }>(text, [idListParam(sql.dialect, slice)]));
-  // Both drivers give integer columns as numbers; the row is kept as it comes (its partId too), not copied.
-  for (const row of rows) byPart.get(row.partId)?.push(row);
-  return byPart;
+export function currentCoatsByPart(data: SiteData, partIds: number[]): Promise<Map<number, CoatTimes[]>> {
+  return currentCoatRows<CoatTimes>(data, partIds, timeColumns);
+}
+
+/** The same coats with only what says which step they were and the window they left (see `currentCoatsByPart`). */
+export function currentCoatStepsByPart(data: SiteData, partIds: number[]): Promise<Map<number, CoatStep[]>> {
+  return currentCoatRows<CoatStep>(data, partIds, stepColumns);
 }
 
 /**

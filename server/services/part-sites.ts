@@ -1,7 +1,7 @@
 import { In } from 'typeorm';
 import type { SiteData } from '../data/site-data';
 import type { PartEntity } from '../db/entities/part.entity';
-import { currentCoatsByPart } from './part-coats';
+import { currentCoatStepsByPart } from './part-coats';
 
 type PlacedPart = Pick<PartEntity, 'id' | 'rackId'>;
 
@@ -24,7 +24,7 @@ export async function partsSeenBy(data: SiteData, parts: PlacedPart[]): Promise<
 
 /** The spray session of each part's latest current coat, for parts that have one. */
 async function latestSpraySessionOf(data: SiteData, partIds: number[]): Promise<Map<number, number>> {
-  const coats = await currentCoatsByPart(data.acrossSites, partIds);
+  const coats = await currentCoatStepsByPart(data.acrossSites, partIds);
   const latest = new Map<number, number>();
   for (const [partId, list] of coats) {
     const last = [...list].sort((a, b) => b.sprayedAt.localeCompare(a.sprayedAt) || b.id - a.id)[0];

@@ -9,7 +9,7 @@ import type { ProductEntity } from '../db/entities/product.entity';
 import type { SpraySessionItemEntity } from '../db/entities/spray-session-item.entity';
 import type { SpraySessionEntity } from '../db/entities/spray-session.entity';
 import { bookedStepsOf, type BookedPartStep } from './booked-steps';
-import { currentCoatsByPart, nextCoatStep, stepsByJob, type CoatTimes } from './part-coats';
+import { currentCoatStepsByPart, nextCoatStep, stepsByJob, type CoatStep } from './part-coats';
 import type { SprayedPart } from './sprayed-unplanned';
 
 export interface WorkContext {
@@ -23,7 +23,7 @@ interface Known {
   jobs: Map<number, JobEntity>;
   steps: Map<number, FinishStep[]>;
   products: Map<number, ProductEntity>;
-  coats: Map<number, CoatTimes[]>;
+  coats: Map<number, CoatStep[]>;
   /** Live bookings by part and step. */
   booked: Map<string, BookedPartStep[]>;
   planningTempC: number;
@@ -54,7 +54,7 @@ async function jobsOfParts(data: SiteData, partIds: number[]): Promise<PartJob[]
 async function readKnown(data: SiteData, partIds: number[], context: WorkContext): Promise<Known> {
   const whole = data.acrossSites;
   const parts = await jobsOfParts(data, partIds);
-  const [jobs, steps, coats] = await Promise.all([data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }), stepsByJob(data, parts), currentCoatsByPart(whole, partIds)]);
+  const [jobs, steps, coats] = await Promise.all([data.jobs.findBy({ id: In([...new Set(parts.map((p) => p.jobId))]) }), stepsByJob(data, parts), currentCoatStepsByPart(whole, partIds)]);
   const productIds = [...new Set([...steps.values()].flat().flatMap((s) => (s.kind === 'coat' ? [s.productId] : [])))];
   const [products, booked] = await Promise.all([
     productIds.length ? data.products.find({ where: { id: In(productIds) }, select: { id: true, name: true, dryingTimes: true } }) : [],
