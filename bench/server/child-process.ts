@@ -59,7 +59,7 @@ export function spawnBuiltServer(env: NodeJS.ProcessEnv): { child: ChildProcess;
 /**
  * A bench-only TypeScript entry compiled to plain JavaScript (under node_modules/.cache, so its
  * imports resolve to the project's packages) and run as the app is: plain Node, the same V8
- * limits, the probe. A TypeScript loader in the yardstick would add its own ~50 MB and CPU.
+ * limits and malloc arenas, the probe. A TypeScript loader in the yardstick would add its own ~50 MB and CPU.
  */
 export async function spawnBuiltScript(entry: string, env: NodeJS.ProcessEnv, args: string[] = []): Promise<{ child: ChildProcess; stderr: () => string }> {
   const outfile = path.resolve('node_modules', '.cache', 'boothwright-bench', `${path.basename(entry, '.ts')}.mjs`);

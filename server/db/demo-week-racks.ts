@@ -13,18 +13,17 @@ export const finishedPartsRack = 'Rack B (drying room)';
  * no coat of the week dries at the rack's temperature instead of the booth's. A full rack leaves
  * the rest where they are.
  */
-export function createRackShelver(rack: RackEntity | undefined, parts: PartService, partOf: (id: number) => Promise<PartEntity | null>) {
+export function createRackShelver(rack: RackEntity | undefined, parts: PartService, partsOf: (ids: number[]) => Promise<PartEntity[]>) {
   let shelf = 1;
   let usedM2 = 0;
   return async (partIds: number[], actor: Actor): Promise<void> => {
     if (!rack) return;
-    for (const id of partIds) {
-      const part = await partOf(id);
-      if (!part || part.rackId !== null) continue;
+    for (const part of await partsOf(partIds)) {
+      if (part.rackId !== null) continue;
       const areaM2 = footprintM2(part);
       if (usedM2 > 0 && usedM2 + areaM2 > rack.shelfAreaM2) [shelf, usedM2] = [shelf + 1, 0];
       if (shelf > rack.shelves) return;
-      await parts.update(id, { rackId: rack.id, shelf }, actor);
+      await parts.update(part.id, { rackId: rack.id, shelf }, actor);
       usedM2 += areaM2;
     }
   };

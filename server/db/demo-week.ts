@@ -1,6 +1,6 @@
 import { TZDate } from '@date-fns/tz';
 import { addDays } from 'date-fns';
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import { openingHoursProblem } from '../../shared/finishing/opening-hours';
 import { calendarDateIn } from '../../shared/time';
 import { openSiteData } from '../data/site-data';
@@ -94,7 +94,7 @@ export async function seedDemoWeek(dataSource: DataSource, options: { now?: Date
   const days = workingDays(now, timezone, openWeekdays, options.days ?? 5);
   const run: RunContext = { clock, now, sessions: createSpraySessionService(data, settings, events, clock), mixes: createMixService(data, clock), coats: createCoatService(data, settings, events, clock),
     products: new Map((await dataSource.getRepository(ProductEntity).find()).map((p) => [p.id, p])),
-    shelve: createRackShelver(await dataSource.getRepository(RackEntity).findOneBy({ name: finishedPartsRack }) ?? undefined, createPartService(data, clock, events), (id) => dataSource.getRepository(PartEntity).findOneBy({ id })),
+    shelve: createRackShelver(await dataSource.getRepository(RackEntity).findOneBy({ name: finishedPartsRack }) ?? undefined, createPartService(data, clock, events), (ids) => dataSource.getRepository(PartEntity).find({ where: { id: In(ids) }, order: { id: 'ASC' } })),
   };
   let sessions = 0;
   for (const lane of weekLanes) {

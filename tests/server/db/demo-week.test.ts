@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm';
 import { openingHoursProblem } from '../../../shared/finishing/opening-hours';
 import { openDataSource } from '../../../server/db/data-source';
 import { seedDemoWeek } from '../../../server/db/demo-week';
+import { finishedPartsRack } from '../../../server/db/demo-week-racks';
 import { BoothEntity } from '../../../server/db/entities/booth.entity';
 import { CoatEntity } from '../../../server/db/entities/coat.entity';
 import { FinishStepEntity } from '../../../server/db/entities/finish-step.entity';
@@ -107,7 +108,7 @@ describe('the demo week', () => {
   it('puts a job’s parts on the drying rack once its last coat is on, no shelf holding more than its area', async () => {
     const now = new Date('2027-03-27T12:00:00Z');
     await seededWeek(now);
-    const rack = (await dataSource!.getRepository(RackEntity).findOneByOrFail({ name: 'Rack B (drying room)' }));
+    const rack = await dataSource!.getRepository(RackEntity).findOneByOrFail({ name: finishedPartsRack });
     const parts = await dataSource!.getRepository(PartEntity).find();
     const jobs = await dataSource!.getRepository(JobEntity).find();
     const coatSteps = await dataSource!.getRepository(FinishStepEntity).findBy({ kind: 'coat' });
@@ -122,7 +123,10 @@ describe('the demo week', () => {
     const done = weekParts.filter(finished);
     expect(done.length).toBeGreaterThan(10);
     expect(done.every((p) => p.rackId === rack.id && p.shelf !== null && p.shelf <= rack.shelves)).toBe(true);
-    expect(weekParts.filter((p) => !finished(p)).every((p) => p.rackId === null)).toBe(true);
+    // Parts between coats stay off the rack (on a Saturday, the jobs still in finish have some).
+    const between = weekParts.filter((p) => !finished(p));
+    expect(between.length).toBeGreaterThan(0);
+    expect(between.every((p) => p.rackId === null)).toBe(true);
     // Laid flat, a shelf holds what its area holds.
     const loads = new Map<number, number>();
     for (const p of done) loads.set(p.shelf!, (loads.get(p.shelf!) ?? 0) + (p.lengthMm * p.widthMm * p.quantity) / 1e6);
